@@ -1,0 +1,79 @@
+/**
+ * Spectrum as CSV (RFC 4180: CRLF line ends, fields quoted when they hold a comma, quote,
+ * CR or LF, with quotes doubled). The first record is a single-field comment starting with
+ * "#" that states the conventions and the caution; spreadsheet users can delete it, and most
+ * CSV readers accept a `comment: "#"` option.
+ */
+import type { SpectrumResult } from "@/lib/boundary/types";
+import { conventionsLine, exportCaution } from "./caution";
+
+/** Column names of the spectrum CSV, one row per (sector, level). */
+export const spectrumCsvColumns = [
+  "stack_a",
+  "stack_b",
+  "nn",
+  "dd",
+  "nu",
+  "separation",
+  "tachyonic",
+  "supersymmetric",
+  "sector",
+  "level",
+  "alpha_prime_mass_squared",
+  "mass_sqrt_alpha_prime",
+  "states",
+  "with_chan_paton",
+  "note",
+] as const;
+
+export interface SpectrumToCsvOptions {
+  /** Title written into the comment record (e.g. the configuration title). */
+  title?: string;
+}
+
+/**
+ * Renders a spectrum result as CSV.
+ *
+ * @param result - the engine result (exact rationals stay as strings like "-1/2")
+ * @returns CSV text with CRLF line ends and a trailing CRLF
+ * @example
+ * spectrumToCsv(result).split("\r\n")[1] // => "stack_a,stack_b,nn,..."
+ */
+export function spectrumToCsv(result: SpectrumResult, options: SpectrumToCsvOptions = {}): string {
+  const title = options.title ? `${options.title}. ` : "";
+  // The comment must stay one unquoted field so readers with `comment: "#"` skip it.
+  const comment = `# ${title}${conventionsLine(result)} ${exportCaution}`.replace(/[\r\n]+/g, " ").replace(/,/g, ";").replace(/"/g, "'");
+  const records: string[][] = [[comment], [...spectrumCsvColumns]];
+  for (const sector of result.sectors) {
+    for (const row of sector.levels) {
+      records.push([
+        sector.pair[0],
+        sector.pair[1],
+        String(sector.nn),
+        String(sector.dd),
+        String(sector.nu),
+        String(sector.separation),
+        String(sector.tachyonic),
+        String(sector.supersymmetric),
+        row.sector,
+        row.level,
+        row.massSquared,
+        row.mass === null ? "" : String(row.mass),
+        row.states ?? "",
+        row.withChanPaton,
+        row.note ?? "",
+      ]);
+    }
+  }
+  return records.map((record) => record.map(quoteCsvField).join(",")).join("\r\n") + "\r\n";
+}
+
+/**
+ * Quotes one CSV field per RFC 4180 section 2 (rules 5-7).
+ *
+ * @example
+ * quoteCsvField('say "hi", then') // => '"say ""hi"", then"'
+ */
+export function quoteCsvField(value: string): string {
+  return /[",\r\n]/.test(value) ? `"${value.replaceAll('"', '""')}"` : value;
+}

@@ -1,0 +1,267 @@
+/**
+ * Differences between two configuration documents and between two spectrum results,
+ * for the history page ("what changed between revision 3 and revision 7?").
+ *
+ * Pure: plain documents in, plain descriptions out; inputs are never mutated.
+ * Stacks are matched by their `id`; a stack whose id changed shows as removed + added.
+ */
+import type { Configuration, SpectrumResult, Stack, Sector, SectorKind } from "@/lib/boundary/types";
+
+/** Boundary condition of one stack on one spatial axis. */
+export type Boundary = "N" | "D";
+
+/** A top-level field of the document that changed (title, theory, levels, ...). */
+export interface FieldChange {
+  field: "title" | "description" | "theory" | "dimension" | "stringScaleGeV" | "levels";
+  before: string | number | null;
+  after: string | number | null;
+}
+
+/** One axis whose boundary condition flipped for a stack. */
+export interface BoundaryChange {
+  axis: number;
+  before: Boundary;
+  after: Boundary;
+}
+
+/** One Dirichlet axis (Dirichlet before and after) whose position moved. */
+export interface PositionChange {
+  axis: number;
+  before: number;
+  after: number;
+}
+
+/** A stack present in both documents, with everything that changed about it. */
+export interface StackChange {
+  id: string;
+  label: { before: string; after: string } | null;
+  count: { before: number; after: number } | null;
+  /** Brane/antibrane orientation flip. */
+  anti: { before: boolean; after: boolean } | null;
+  colour: { before: string | null; after: string | null } | null;
+  boundaries: BoundaryChange[];
+  positions: PositionChange[];
+}
+
+export interface ConfigurationDiff {
+  fields: FieldChange[];
+  added: Stack[];
+  removed: Stack[];
+  changed: StackChange[];
+  /** True when nothing differs. */
+  identical: boolean;
+}
+
+/** The lightest surviving state of one sector, as shown in the diff. */
+export interface SectorLightest {
+  sector: SectorKind;
+  level: string;
+  massSquared: string;
+}
+
+/** A sector (pair of stacks) whose headline physics changed. */
+export interface SectorChange {
+  pair: [string, string];
+  lightest: { before: SectorLightest | null; after: SectorLightest | null } | null;
+  tachyonic: { before: boolean; after: boolean } | null;
+  supersymmetric: { before: boolean; after: boolean } | null;
+}
+
+export interface SpectrumDiff {
+  /** Sectors present only in the later result (a stack was added). */
+  addedSectors: Array<[string, string]>;
+  /** Sectors present only in the earlier result (a stack was removed). */
+  removedSectors: Array<[string, string]>;
+  changedSectors: SectorChange[];
+  bps: { before: boolean; after: boolean } | null;
+  supercharges: { before: number | null; after: number | null } | null;
+  gaugeGroup: { before: string; after: string } | null;
+  identical: boolean;
+}
+
+/**
+ * Compares two configuration documents.
+ *
+ * @param before - the earlier document
+ * @param after - the later document
+ * @returns top-level field changes, stacks added/removed (matched by id) and, for stacks in
+ *   both, label/count/orientation/colour changes, per-axis boundary flips (N <-> D) and moved
+ *   Dirichlet positions (a missing position counts as 0, as in the file format).
+ * @example
+ * diffConfigurations(a, { ...a, title: "B" }).fields
+ * // => [{ field: "title", before: "A", after: "B" }]
+ */
+export function diffConfigurations(before: Configuration, after: Configuration): ConfigurationDiff {
+  const fields: FieldChange[] = [];
+  const pushField = (field: FieldChange["field"], b: string | number | null, a: string | number | null) => {
+    if (b !== a) fields.push({ field, before: b, after: a });
+  };
+  pushField("title", before.title, after.title);
+  pushField("description", before.description ?? null, after.description ?? null);
+  pushField("theory", before.theory, after.theory);
+  pushField("dimension", dimensionOf(before), dimensionOf(after));
+  pushField("stringScaleGeV", before.stringScaleGeV, after.stringScaleGeV);
+  pushField("levels", before.levels, after.levels);
+
+  const beforeById = new Map(before.stacks.map((stack) => [stack.id, stack]));
+  const afterById = new Map(after.stacks.map((stack) => [stack.id, stack]));
+  const added = after.stacks.filter((stack) => !beforeById.has(stack.id));
+  const removed = before.stacks.filter((stack) => !afterById.has(stack.id));
+
+  // Compare axes up to the larger dimension so a theory change still lists every flipped axis.
+  const spatialAxes = Math.max(dimensionOf(before), dimensionOf(after)) - 1;
+  const changed: StackChange[] = [];
+  for (const next of after.stacks) {
+    const previous = beforeById.get(next.id);
+    if (!previous) continue;
+    const change = diffStack(previous, next, spatialAxes);
+    if (change) changed.push(change);
+  }
+
+  return {
+    fields,
+    added,
+    removed,
+    changed,
+    identical: fields.length === 0 && added.length === 0 && removed.length === 0 && changed.length === 0,
+  };
+}
+
+/**
+ * Compares two spectrum results sector by sector.
+ *
+ * @param before - the result stored with the earlier revision
+ * @param after - the result stored with the later revision
+ * @returns sectors added/removed, and sectors whose lightest surviving state (alpha' M^2,
+ *   compared numerically so "-1/2" equals "-0.5"), tachyon status or supersymmetry changed;
+ *   plus changes of the configuration-wide BPS flag, supercharge count and gauge group.
+ *   Sectors are matched as unordered pairs of stack ids.
+ * @example
+ * diffSpectra(r, r).identical // => true
+ */
+export function diffSpectra(before: SpectrumResult, after: SpectrumResult): SpectrumDiff {
+  const beforeSectors = new Map(before.sectors.map((sector) => [pairKey(sector.pair), sector]));
+  const afterSectors = new Map(after.sectors.map((sector) => [pairKey(sector.pair), sector]));
+
+  const addedSectors = after.sectors.filter((s) => !beforeSectors.has(pairKey(s.pair))).map((s) => s.pair);
+  const removedSectors = before.sectors.filter((s) => !afterSectors.has(pairKey(s.pair))).map((s) => s.pair);
+
+  const changedSectors: SectorChange[] = [];
+  for (const next of after.sectors) {
+    const previous = beforeSectors.get(pairKey(next.pair));
+    if (!previous) continue;
+    const lightestBefore = lightestOf(previous);
+    const lightestAfter = lightestOf(next);
+    const change: SectorChange = {
+      pair: next.pair,
+      lightest: sameLightest(lightestBefore, lightestAfter) ? null : { before: lightestBefore, after: lightestAfter },
+      tachyonic: previous.tachyonic === next.tachyonic ? null : { before: previous.tachyonic, after: next.tachyonic },
+      supersymmetric:
+        previous.supersymmetric === next.supersymmetric
+          ? null
+          : { before: previous.supersymmetric, after: next.supersymmetric },
+    };
+    if (change.lightest || change.tachyonic || change.supersymmetric) changedSectors.push(change);
+  }
+
+  const bps = before.bps === after.bps ? null : { before: before.bps, after: after.bps };
+  const supercharges =
+    before.supercharges === after.supercharges ? null : { before: before.supercharges, after: after.supercharges };
+  const gaugeGroup =
+    before.gaugeGroup === after.gaugeGroup ? null : { before: before.gaugeGroup, after: after.gaugeGroup };
+
+  return {
+    addedSectors,
+    removedSectors,
+    changedSectors,
+    bps,
+    supercharges,
+    gaugeGroup,
+    identical:
+      addedSectors.length === 0 &&
+      removedSectors.length === 0 &&
+      changedSectors.length === 0 &&
+      !bps &&
+      !supercharges &&
+      !gaugeGroup,
+  };
+}
+
+/**
+ * Parses an exact rational string ("-1/2", "3") or a decimal string ("0.3097") to a number.
+ *
+ * @returns the value, or NaN for anything else
+ * @example
+ * parseRationalString("-1/2") // => -0.5
+ */
+export function parseRationalString(value: string): number {
+  const match = /^\s*(-?\d+)\s*\/\s*(\d+)\s*$/.exec(value);
+  if (match) return Number(match[1]) / Number(match[2]);
+  return /^\s*-?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?\s*$/.test(value) ? Number(value) : Number.NaN;
+}
+
+function dimensionOf(configuration: Configuration): number {
+  return configuration.dimension ?? (configuration.theory === "bosonic" ? 26 : 10);
+}
+
+function boundaryOf(stack: Stack, axis: number): Boundary {
+  return stack.worldvolume.includes(axis) ? "N" : "D";
+}
+
+function diffStack(before: Stack, after: Stack, spatialAxes: number): StackChange | null {
+  const boundaries: BoundaryChange[] = [];
+  const positions: PositionChange[] = [];
+  for (let axis = 1; axis <= spatialAxes; axis += 1) {
+    const b = boundaryOf(before, axis);
+    const a = boundaryOf(after, axis);
+    if (b !== a) {
+      boundaries.push({ axis, before: b, after: a });
+    } else if (b === "D") {
+      const from = before.position[String(axis)] ?? 0;
+      const to = after.position[String(axis)] ?? 0;
+      if (from !== to) positions.push({ axis, before: from, after: to });
+    }
+  }
+  const change: StackChange = {
+    id: after.id,
+    label: before.label === after.label ? null : { before: before.label, after: after.label },
+    count: before.count === after.count ? null : { before: before.count, after: after.count },
+    anti: before.anti === after.anti ? null : { before: before.anti, after: after.anti },
+    colour:
+      (before.colour ?? null) === (after.colour ?? null)
+        ? null
+        : { before: before.colour ?? null, after: after.colour ?? null },
+    boundaries,
+    positions,
+  };
+  const hasChange =
+    change.label || change.count || change.anti || change.colour || boundaries.length > 0 || positions.length > 0;
+  return hasChange ? change : null;
+}
+
+function pairKey(pair: [string, string]): string {
+  return [...pair].sort().join("\u0000");
+}
+
+function lightestOf(sector: Sector): SectorLightest | null {
+  let best: SectorLightest | null = null;
+  let bestValue = Number.POSITIVE_INFINITY;
+  for (const row of sector.levels) {
+    // A row whose states were all projected out is not a state of the spectrum.
+    if (row.withChanPaton === "0") continue;
+    const value = parseRationalString(row.massSquared);
+    if (value < bestValue) {
+      bestValue = value;
+      best = { sector: row.sector, level: row.level, massSquared: row.massSquared };
+    }
+  }
+  return best;
+}
+
+function sameLightest(a: SectorLightest | null, b: SectorLightest | null): boolean {
+  if (a === null || b === null) return a === b;
+  // Relative tolerance: decimal strings of irrational masses are rounded by the engine.
+  const x = parseRationalString(a.massSquared);
+  const y = parseRationalString(b.massSquared);
+  return Math.abs(x - y) <= 1e-9 * Math.max(1, Math.abs(x), Math.abs(y));
+}
