@@ -1,0 +1,93 @@
+/**
+ * Constants and conventions of the spectrum engine.
+ *
+ * Conventions, stated once for the whole engine:
+ * - alpha' = 1; lengths (positions, separations y) in units of sqrt(alpha').
+ * - Masses as alpha' M^2 = (y / 2 pi)^2 + N + a, with N the oscillator level (integer or
+ *   half-integer) and a the zero-point energy of the sector (exact rational).
+ * - Level series use t = q^(1/2): index k of a coefficient array is the level N = k / 2.
+ * - Zero-point energies are regularised with the Riemann and Hurwitz zeta functions:
+ *   sum_{n >= 1} n = zeta(-1) = -1/12 and sum_{n >= 0} (n + 1/2) = zeta(-1, 1/2) = 1/24.
+ */
+
+import type { Moding } from "./types";
+import { rational, type Rational } from "./rational";
+
+/**
+ * Version stamped on every spectrum result; bump the minor version when numbers may change.
+ *
+ * @example
+ * ENGINE_VERSION // => "1.0.0"
+ */
+export const ENGINE_VERSION = "1.0.0";
+
+/**
+ * Critical dimension of the bosonic string (Lorentz invariance of the light-cone quantisation
+ * requires D - 2 = 24 transverse directions; Polchinski vol. 1, section 1.3, from memory).
+ *
+ * @example
+ * bosonicCriticalDimension // => 26
+ */
+export const bosonicCriticalDimension = 26;
+
+/**
+ * Critical dimension of the type II superstrings (8 transverse directions; Polchinski vol. 2,
+ * section 10.2, from memory).
+ *
+ * @example
+ * superstringCriticalDimension // => 10
+ */
+export const superstringCriticalDimension = 10;
+
+/**
+ * Riemann zeta(-1) = -1/12, the regularised value of sum_{n >= 1} n (DLMF 25.6.3 with B_2 = 1/6).
+ *
+ * @example
+ * formatRational(zetaMinusOne) // => "-1/12"
+ */
+export const zetaMinusOne: Rational = rational(-1, 12);
+
+/**
+ * Hurwitz zeta(-1, 1/2) = 1/24, the regularised value of sum_{n >= 0} (n + 1/2):
+ * zeta(-1, x) = -B_2(x) / 2 (DLMF 25.11.14) with B_2(x) = x^2 - x + 1/6 (DLMF 24.2.5),
+ * so zeta(-1, 1/2) = -(1/4 - 1/2 + 1/6) / 2 = 1/24.
+ *
+ * @example
+ * formatRational(hurwitzZetaMinusOneHalf) // => "1/24"
+ */
+export const hurwitzZetaMinusOneHalf: Rational = rational(1, 24);
+
+/**
+ * Zero-point energy contributed by one transverse direction, by field and moding.
+ *
+ * A boson mode of frequency w contributes +w/2 and a fermion mode -w/2, so per direction:
+ * - integer-moded boson: (1/2) zeta(-1) = -1/24
+ * - half-integer-moded boson: (1/2) zeta(-1, 1/2) = +1/48
+ * - integer-moded fermion: -(1/2) zeta(-1) = +1/24
+ * - half-integer-moded fermion: -(1/2) zeta(-1, 1/2) = -1/48
+ * (Polchinski vol. 2, section 13.4, from memory; derived from `zetaMinusOne` and
+ * `hurwitzZetaMinusOneHalf`, and checked against them in `zero-point.test.ts`.)
+ *
+ * @example
+ * formatRational(zeroPointPerDirection.boson.integer) // => "-1/24"
+ */
+export const zeroPointPerDirection: Readonly<Record<"boson" | "fermion", Readonly<Record<Moding, Rational>>>> = {
+  boson: { integer: rational(-1, 24), "half-integer": rational(1, 48) },
+  fermion: { integer: rational(1, 24), "half-integer": rational(-1, 48) },
+};
+
+/**
+ * The conventions paragraph shown with every result and export, with a caution for authors.
+ *
+ * @example
+ * CONVENTIONS_TEXT.startsWith("Conventions: alpha' = 1") // => true
+ */
+export const CONVENTIONS_TEXT =
+  "Conventions: alpha' = 1; lengths (positions and separations y) are in units of sqrt(alpha'), " +
+  "the string length. Masses are given as alpha' M^2 = (y / 2 pi)^2 + N + a, where N is the " +
+  "oscillator level (integer or half-integer) and a the zero-point energy of the sector, from " +
+  "zeta(-1) = -1/12 and zeta(-1, 1/2) = 1/24 (bosonic: a = -(D - 2)/24 + nu/16; NS: a = -1/2 + nu/8; " +
+  "R: a = 0, with nu the number of ND/DN axes), and as M sqrt(alpha'). Degeneracies count " +
+  "light-cone oscillator states after the GSO projection, per oriented string and per Chan-Paton " +
+  "label. Continuous momentum along the common Neumann directions is not included. " +
+  "Caution: these are machine-computed results; anyone publishing them should check them independently.";

@@ -1,0 +1,39 @@
+import { z } from "zod";
+
+const envSchema = z.object({
+  NODE_ENV: z.enum(["development", "test", "production"]).default("development"),
+  DATABASE_URL: z.url({ protocol: /^postgres(ql)?$/, error: "DATABASE_URL must be a postgres:// URL" }),
+  /** Pool size per app instance. */
+  DATABASE_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
+  NEXTAUTH_SECRET: z.string().min(1).optional(),
+  NEXTAUTH_URL: z.url().optional(),
+  SMTP_URL: z.string().min(1).default("smtp://127.0.0.1:1025"),
+  MAIL_FROM: z.string().min(1).default("Mooring <no-reply@mooring.test>"),
+  /** Web address of the local fake mailbox's API; set only when the fake SMTP server is in use. */
+  MAILBOX_URL: z.url().optional(),
+});
+
+/** Server environment, parsed once. */
+export type Env = z.infer<typeof envSchema>;
+
+let parsed: Env | undefined;
+
+/** Parses `process.env` on first use and returns the same object afterwards. Throws on a bad env. */
+export function getEnv(): Env {
+  if (parsed) return parsed;
+  const result = envSchema.safeParse(process.env);
+  if (!result.success) {
+    const problems = result.error.issues.map((issue) => `${issue.path.join(".")}: ${issue.message}`);
+    throw new Error(`Invalid environment:\n  ${problems.join("\n  ")}`);
+  }
+  parsed = result.data;
+  return parsed;
+}
+
+/**
+ * The parsed environment. Parsing is deferred to the first property read so that importing a
+ * module (e.g. while `next build` collects routes) does not require every variable to be set.
+ */
+export const env: Env = new Proxy({} as Env, {
+  get: (_target, key) => getEnv()[key as keyof Env],
+});
