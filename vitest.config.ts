@@ -4,7 +4,13 @@ import { defineConfig } from "vitest/config";
 const root = fileURLToPath(new URL(".", import.meta.url));
 
 export default defineConfig({
-  resolve: { alias: { "@": root } },
+  resolve: {
+    alias: {
+      "@": root,
+      // DAL modules import "server-only"; under vitest it resolves to an empty module.
+      "server-only": `${root}tests/support/empty.ts`,
+    },
+  },
   test: {
     projects: [
       {
@@ -20,6 +26,7 @@ export default defineConfig({
         test: {
           name: "integration",
           include: ["tests/integration/**/*.test.ts"],
+          setupFiles: ["tests/integration/setup.ts"],
           environment: "node",
           // Integration tests share one database; run files one after another.
           fileParallelism: false,
