@@ -1,0 +1,74 @@
+// Steps on the application shared by `npm start` and `npm test`: migrate, seed, build, serve, mail.
+import { mkdirSync } from "node:fs";
+import path from "node:path";
+import { bin, runStep, startService, waitForHttp } from "./processes.mjs";
+import { repoRoot } from "./postgres.mjs";
+import { hasNpmScript } from "./setup.mjs";
+
+/** Environment for the app (build, server, tests) against one database and one mail server. */
+export function appEnv({ databaseUrl, appPort, smtpPort, mailboxPort, secret }) {
+  return {
+    ...process.env,
+    DATABASE_URL: databaseUrl,
+    NEXTAUTH_URL: `http://127.0.0.1:${appPort}`,
+    NEXTAUTH_SECRET: secret,
+    SMTP_URL: process.env.SMTP_URL ?? `smtp://127.0.0.1:${smtpPort}`,
+    MAILBOX_URL: `http://127.0.0.1:${mailboxPort}`,
+    // vitest 4 warns about loading vitest.config.ts through the CommonJS loader; it works as is.
+    VITE_CONFIG_NATIVE_IGNORE_WARNING: "true",
+  };
+}
+
+/**
+ * Runs `npm run <script>` against `env` when package.json defines it; otherwise says so and skips.
+ * Returns { code, output, skipped }.
+ */
+export async function runNpmScriptIfPresent(script, env, what) {
+  if (!hasNpmScript(script)) {
+    console.log(`[mooring] skipping ${what}: package.json has no "${script}" script yet`);
+    return { code: 0, output: "", skipped: true };
+  }
+  const result = await runStep("npm", ["run", "-s", script], { env });
+  return { ...result, skipped: false };
+}
+
+/** `next build` into the default .next folder with the app's environment. */
+export function buildApp(env) {
+  const { NEXT_DIST_DIR: _ignored, ...rest } = env;
+  return runStep(bin("next"), ["build"], { env: rest });
+}
+
+/**
+ * Starts maildev (fake SMTP that keeps every message) on loopback and waits for its REST API.
+ * Messages are kept in `dir` (git-ignored). The handle is pushed on `services` before waiting.
+ */
+export async function startMaildev({ smtpPort, webPort, dir, services }) {
+  mkdirSync(dir, { recursive: true });
+  const handle = startService("maildev", bin("maildev"), [
+    "--smtp", String(smtpPort),
+    "--web", String(webPort),
+    "--ip", "127.0.0.1",
+    "--web-ip", "127.0.0.1",
+    "--mail-directory", dir,
+  ]);
+  services.push(handle);
+  await waitForHttp(`http://127.0.0.1:${webPort}/healthz`, handle, 30_000);
+  return handle;
+}
+
+/** Starts `next start` on 127.0.0.1:port from the default .next build (handle pushed on `services`) and waits until it answers. */
+export async function startApp({ port, env, services, inherit = false }) {
+  const { NEXT_DIST_DIR: _ignored, ...rest } = env;
+  const handle = startService("app", bin("next"), ["start", "-H", "127.0.0.1", "-p", String(port)], {
+    env: { ...rest, NODE_ENV: "production" },
+    inherit,
+  });
+  services.push(handle);
+  await waitForHttp(`http://127.0.0.1:${port}/`, handle);
+  return handle;
+}
+
+/** Folder for the git-ignored runtime files of one run (`.data/<name>`). */
+export function dataDir(name) {
+  return path.join(repoRoot, ".data", name);
+}

@@ -1,0 +1,200 @@
+#!/usr/bin/env node
+// `npm test`: install what is missing, start PostgreSQL, then run the unit tests, the integration tests
+// against a fresh `mooring_test` database, and the browser tests against a production build served on
+// 127.0.0.1:3100 with its own fresh `mooring_e2e` database and fake mail server.
+// `node scripts/test.mjs unit integration` runs only the named parts (unit, integration, e2e).
+import { rmSync } from "node:fs";
+import { appEnv, buildApp, dataDir, runNpmScriptIfPresent, startApp, startMaildev } from "./lib/app.mjs";
+import { findFreePort, freePortNear } from "./lib/net.mjs";
+import {
+  clusterState,
+  createDatabase,
+  databaseUrl,
+  defaultPort,
+  dropDatabase,
+  portHolder,
+  start as startPostgres,
+  stop as stopPostgres,
+} from "./lib/postgres.mjs";
+import { bin, runStep, stopService } from "./lib/processes.mjs";
+import { authSecret, chromiumPath, ensureChromium, ensureNodeModules } from "./lib/setup.mjs";
+
+const parts = ["unit", "integration", "e2e"];
+const requested = process.argv.slice(2);
+for (const part of requested) {
+  if (!parts.includes(part)) {
+    console.error(`usage: node scripts/test.mjs [${parts.join("] [")}]`);
+    process.exit(2);
+  }
+}
+const selected = new Set(requested.length ? requested : parts);
+
+/** @type {{ name: string, code: number, seconds: number, passed: number, failed: number, counted: boolean }[]} */
+const results = [];
+const services = [];
+let startedPostgres = false;
+
+function log(message) {
+  console.log(`\n[test] ${message}`);
+}
+
+/** Pulls "N passed" / "N failed" out of a vitest or Playwright summary. */
+function countTests(output, runner) {
+  if (runner === "vitest") {
+    const line = output.match(/^\s*Tests\s+(.*)$/m)?.[1];
+    if (!line) return null;
+    return {
+      passed: Number(line.match(/(\d+) passed/)?.[1] ?? 0),
+      failed: Number(line.match(/(\d+) failed/)?.[1] ?? 0),
+    };
+  }
+  const passed = output.match(/^\s*(\d+) passed/m)?.[1];
+  const failed = output.match(/^\s*(\d+) failed/m)?.[1];
+  if (passed === undefined && failed === undefined) return null;
+  return { passed: Number(passed ?? 0), failed: Number(failed ?? 0) };
+}
+
+/** Runs one named step, timing it and recording its exit code and test counts. */
+async function step(name, action, runner) {
+  log(`${name}...`);
+  const started = Date.now();
+  let code = 1;
+  let output = "";
+  try {
+    ({ code, output } = await action());
+  } catch (error) {
+    console.error(`[test] ${name}: ${error instanceof Error ? error.message : String(error)}`);
+  }
+  const seconds = (Date.now() - started) / 1000;
+  const counts = runner ? countTests(output, runner) : null;
+  results.push({
+    name,
+    code,
+    seconds,
+    passed: counts?.passed ?? 0,
+    failed: counts?.failed ?? 0,
+    counted: counts !== null,
+  });
+  console.log(`[test] ${name}: ${code === 0 ? "ok" : `FAILED (exit ${code})`} in ${seconds.toFixed(1)}s`);
+  return code === 0;
+}
+
+async function freshDatabase(name, port, env) {
+  dropDatabase(name, { port });
+  createDatabase(name, { port });
+  return runNpmScriptIfPresent("db:migrate", env, `migrations for ${name}`);
+}
+
+/** Picks the cluster port: when another cluster holds the default port, use a free one for this run. */
+async function choosePostgresPort() {
+  if (process.env.MOORING_PG_PORT || clusterState().running) return;
+  const holder = await portHolder(defaultPort);
+  if (!holder) return;
+  const port = await findFreePort(defaultPort + 1);
+  process.env.MOORING_PG_PORT = String(port);
+  log(`port ${defaultPort} is held by another ${holder.kind === "postgres" ? "PostgreSQL cluster" : "program"}; ` +
+    `this run uses MOORING_PG_PORT=${port}`);
+}
+
+async function teardown() {
+  for (const handle of services.reverse()) await stopService(handle);
+  services.length = 0;
+  if (startedPostgres) {
+    stopPostgres();
+    startedPostgres = false;
+    console.log("[test] stopped the PostgreSQL cluster this run started");
+  }
+}
+
+function summary() {
+  console.log("\n[test] summary");
+  for (const r of results) {
+    const counts = r.counted ? ` (${r.passed} passed, ${r.failed} failed)` : "";
+    console.log(`  ${r.code === 0 ? "ok    " : "FAILED"} ${r.name.padEnd(34)} ${r.seconds.toFixed(1).padStart(6)}s${counts}`);
+  }
+  const passed = results.reduce((sum, r) => sum + r.passed, 0);
+  // A failed step without a parsed count (a build, a migration, a crashed runner) counts as one failure.
+  const failed = results.reduce((sum, r) => sum + (r.code !== 0 && r.failed === 0 ? 1 : r.failed), 0);
+  console.log(`${passed} passed, ${failed} failed`);
+  return failed === 0 && results.every((r) => r.code === 0) ? 0 : 1;
+}
+
+async function main() {
+  const t0 = Date.now();
+  for (const signal of ["SIGINT", "SIGTERM"]) {
+    process.on(signal, () => {
+      void teardown().then(() => process.exit(130));
+    });
+  }
+
+  ensureNodeModules();
+  if (selected.has("e2e")) ensureChromium();
+  await choosePostgresPort();
+  const pg = await startPostgres();
+  startedPostgres = pg.started;
+  log(`PostgreSQL on 127.0.0.1:${pg.port}`);
+  const secret = authSecret();
+
+  const testEnv = appEnv({
+    databaseUrl: databaseUrl("mooring_test", pg.port),
+    appPort: 3100,
+    smtpPort: 1026,
+    mailboxPort: 1081,
+    secret,
+  });
+
+  if (selected.has("unit")) {
+    await step("unit tests", () => runStep(bin("vitest"), ["run", "--project", "unit", "--passWithNoTests"], { env: testEnv }), "vitest");
+  }
+
+  if (selected.has("integration")) {
+    const ready = await step("fresh database mooring_test", () => freshDatabase("mooring_test", pg.port, testEnv));
+    if (ready) {
+      await step(
+        "integration tests",
+        () => runStep(bin("vitest"), ["run", "--project", "integration", "--passWithNoTests"], { env: testEnv }),
+        "vitest",
+      );
+    }
+  }
+
+  if (selected.has("e2e")) {
+    const appPort = await freePortNear(3100);
+    const smtpPort = await freePortNear(1026);
+    const mailboxPort = await freePortNear(smtpPort === 1081 ? 1082 : 1081);
+    const e2eEnv = appEnv({ databaseUrl: databaseUrl("mooring_e2e", pg.port), appPort, smtpPort, mailboxPort, secret });
+    const ready =
+      (await step("fresh database mooring_e2e", () => freshDatabase("mooring_e2e", pg.port, e2eEnv))) &&
+      (await step("seed demo data into mooring_e2e", () => runNpmScriptIfPresent("db:seed", e2eEnv, "demo data"))) &&
+      (await step("next build", () => buildApp(e2eEnv)));
+    if (ready) {
+      const mailDir = dataDir("maildev-e2e");
+      rmSync(mailDir, { recursive: true, force: true });
+      const serving = await step("start maildev and next start", async () => {
+        await startMaildev({ smtpPort, webPort: mailboxPort, dir: mailDir, services });
+        await startApp({ port: appPort, env: e2eEnv, services });
+        console.log(`[test] app on ${e2eEnv.NEXTAUTH_URL}, mailbox on ${e2eEnv.MAILBOX_URL}, browser ${chromiumPath}`);
+        return { code: 0, output: "" };
+      });
+      if (serving) {
+        await step(
+          "browser tests (playwright)",
+          () => runStep(bin("playwright"), ["test"], { env: { ...e2eEnv, E2E_BASE_URL: e2eEnv.NEXTAUTH_URL } }),
+          "playwright",
+        );
+      }
+    }
+  }
+
+  await teardown();
+  const code = summary();
+  console.log(`[test] total ${((Date.now() - t0) / 1000).toFixed(1)}s`);
+  process.exit(code);
+}
+
+main().catch(async (error) => {
+  console.error(`[test] ${error instanceof Error ? error.message : String(error)}`);
+  await teardown().catch(() => {});
+  summary();
+  process.exit(1);
+});
