@@ -1,0 +1,105 @@
+/**
+ * Mode expansions of the open string on each spatial axis (physics.md, "Mode expansions").
+ *
+ * The string runs over sigma in [0, pi] from stack a (sigma = 0) to stack b (sigma = pi).
+ * In the LaTeX, alpha' is kept as the symbol \alpha' so the formulas read as in the literature;
+ * its value is 1 in the engine's units, and the substituted endpoint positions are numbers in
+ * units of sqrt(alpha'). The four forms are the standard ones (Polchinski vol. 1, section 8.6 and
+ * vol. 2, section 13.4, from memory):
+ * - NN: X = x + 2 alpha' p tau + i sqrt(2 alpha') sum_{n != 0} (alpha_n / n) e^{-i n tau} cos(n sigma)
+ * - DD: X = x_a + (x_b - x_a) sigma / pi + sqrt(2 alpha') sum_{n != 0} (alpha_n / n) e^{-i n tau} sin(n sigma)
+ * - ND: X = x_b + i sqrt(2 alpha') sum_{r in Z + 1/2} (alpha_r / r) e^{-i r tau} cos(r sigma)
+ * - DN: X = x_a + sqrt(2 alpha') sum_{r in Z + 1/2} (alpha_r / r) e^{-i r tau} sin(r sigma)
+ */
+
+import type { AxisClassification, PairClassification } from "./classify";
+import { formatDecimal } from "./format";
+import type { AxisExpansion, AxisType, Moding, Theory } from "./types";
+
+/**
+ * Moding of the boson X on an axis: integer on NN and DD, half-integer on ND and DN.
+ *
+ * @param type - The axis type of the ordered pair.
+ * @returns "integer" or "half-integer".
+ * @example
+ * bosonModing("ND") // => "half-integer"
+ */
+export function bosonModing(type: AxisType): Moding {
+  return type === "NN" || type === "DD" ? "integer" : "half-integer";
+}
+
+/**
+ * Moding of the worldsheet fermion psi on an axis, per sector: on NN and DD axes half-integer
+ * in NS and integer in R; on ND and DN axes the two swap.
+ *
+ * @param type - The axis type of the ordered pair.
+ * @returns The moding in the NS and in the R sector.
+ * @example
+ * fermionModing("DD") // => { NS: "half-integer", R: "integer" }
+ * fermionModing("DN") // => { NS: "integer", R: "half-integer" }
+ */
+export function fermionModing(type: AxisType): { NS: Moding; R: Moding } {
+  return bosonModing(type) === "integer" ? { NS: "half-integer", R: "integer" } : { NS: "integer", R: "half-integer" };
+}
+
+/**
+ * Mode expansion of one spatial axis of an ordered pair, with the endpoint positions substituted.
+ *
+ * @param axis - The classified axis (from `classifyPair`); positions in units of sqrt(alpha').
+ * @param theory - Fermion modings and fermion zero modes are given for IIA/IIB only.
+ * @returns Axis type, boson moding, fermion moding per sector (type II), the zero modes present
+ *   ("x" and "p" on NN axes; for type II also the fermion zero modes "psi_0 (R)" on NN/DD axes or
+ *   "psi_0 (NS)" on ND/DN axes), and X^axis(tau, sigma) as LaTeX. Positions print compactly
+ *   (12 significant digits, trailing zeros trimmed; negative ones in parentheses when subtracted).
+ * @example
+ * expandAxis({ axis: 5, type: "DD", positionA: 0, positionB: 3.5 }, "bosonic").latex
+ * // => "X^{5}(\\tau,\\sigma) = 0 + (3.5 - 0)\\frac{\\sigma}{\\pi} + \\sqrt{2\\alpha'}\\sum_{n\\neq0}\\frac{\\alpha_n}{n}e^{-in\\tau}\\sin n\\sigma"
+ */
+export function expandAxis(axis: AxisClassification, theory: Theory): AxisExpansion {
+  const { type } = axis;
+  const superstring = theory !== "bosonic";
+  const zeroModes = type === "NN" ? ["x", "p"] : [];
+  if (superstring) zeroModes.push(bosonModing(type) === "integer" ? "psi_0 (R)" : "psi_0 (NS)");
+  const expansion: AxisExpansion = {
+    axis: axis.axis,
+    type,
+    bosonModing: bosonModing(type),
+    zeroModes,
+    latex: expansionLatex(axis),
+  };
+  if (superstring) expansion.fermionModing = fermionModing(type);
+  return expansion;
+}
+
+/**
+ * Mode expansions of every spatial axis of a classified pair, in axis order.
+ *
+ * @param classification - From `classifyPair(a, b, D)`.
+ * @param theory - The configuration's theory.
+ * @returns One `AxisExpansion` per spatial axis 1..D-1.
+ * @example
+ * expandPair(classifyPair(a, a, 10), "IIB").length // => 9
+ */
+export function expandPair(classification: Pick<PairClassification, "axes">, theory: Theory): AxisExpansion[] {
+  return classification.axes.map((axis) => expandAxis(axis, theory));
+}
+
+function expansionLatex(axis: AxisClassification): string {
+  const lhs = `X^{${axis.axis}}(\\tau,\\sigma)`;
+  const xa = formatDecimal(axis.positionA ?? 0);
+  const xb = formatDecimal(axis.positionB ?? 0);
+  switch (axis.type) {
+    case "NN":
+      return `${lhs} = x^{${axis.axis}} + 2\\alpha' p^{${axis.axis}}\\tau + i\\sqrt{2\\alpha'}\\sum_{n\\neq0}\\frac{\\alpha_n}{n}e^{-in\\tau}\\cos n\\sigma`;
+    case "DD":
+      return `${lhs} = ${xa} + (${xb} - ${parenthesiseNegative(xa)})\\frac{\\sigma}{\\pi} + \\sqrt{2\\alpha'}\\sum_{n\\neq0}\\frac{\\alpha_n}{n}e^{-in\\tau}\\sin n\\sigma`;
+    case "ND":
+      return `${lhs} = ${xb} + i\\sqrt{2\\alpha'}\\sum_{r\\in\\mathbb{Z}+1/2}\\frac{\\alpha_r}{r}e^{-ir\\tau}\\cos r\\sigma`;
+    case "DN":
+      return `${lhs} = ${xa} + \\sqrt{2\\alpha'}\\sum_{r\\in\\mathbb{Z}+1/2}\\frac{\\alpha_r}{r}e^{-ir\\tau}\\sin r\\sigma`;
+  }
+}
+
+function parenthesiseNegative(text: string): string {
+  return text.startsWith("-") ? `(${text})` : text;
+}
