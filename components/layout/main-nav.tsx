@@ -1,0 +1,38 @@
+"use client";
+
+import Link from "next/link";
+import { usePathname } from "next/navigation";
+import { cn } from "@/lib/utils";
+
+export interface NavItem {
+  href: string;
+  label: string;
+}
+
+export interface MainNavProps {
+  items: readonly NavItem[];
+}
+
+export function MainNav({ items }: MainNavProps) {
+  const pathname = usePathname();
+  return (
+    <nav aria-label="Main" className="flex items-center gap-1 overflow-x-auto">
+      {items.map((item) => {
+        const active = pathname === item.href || pathname.startsWith(`${item.href}/`);
+        return (
+          <Link
+            key={item.href}
+            href={item.href}
+            aria-current={active ? "page" : undefined}
+            className={cn(
+              "rounded-md px-2.5 py-1.5 text-sm whitespace-nowrap transition-colors",
+              active ? "bg-surface-muted font-medium text-foreground" : "text-muted-foreground hover:text-foreground",
+            )}
+          >
+            {item.label}
+          </Link>
+        );
+      })}
+    </nav>
+  );
+}

@@ -1,0 +1,54 @@
+import Link from "next/link";
+import { AccountMenu, type AccountMenuUser } from "@/components/layout/account-menu";
+import { MainNav, type NavItem } from "@/components/layout/main-nav";
+import { MooringMark } from "@/components/layout/mooring-mark";
+import { ThemeToggle } from "@/components/layout/theme-toggle";
+import { ButtonLink } from "@/components/ui/button";
+
+export interface SiteHeaderProps {
+  user: AccountMenuUser | null;
+  showMailbox?: boolean;
+}
+
+const workspaceNav: readonly NavItem[] = [
+  { href: "/dashboard", label: "Dashboard" },
+  { href: "/configurations", label: "Configurations" },
+  { href: "/groups", label: "Groups" },
+];
+
+const adminNav: readonly NavItem[] = [{ href: "/admin", label: "Admin" }];
+
+export function SiteHeader({ user, showMailbox = false }: SiteHeaderProps) {
+  return (
+    <header className="sticky top-0 z-40 border-b border-border bg-background/85 backdrop-blur supports-[backdrop-filter]:bg-background/70">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:top-2 focus:left-2 focus:z-50 focus:rounded-md focus:bg-surface focus:px-3 focus:py-2 focus:text-sm focus:shadow-overlay"
+      >
+        Skip to content
+      </a>
+      <div className="mx-auto flex h-14 max-w-7xl items-center gap-4 px-4 sm:px-6">
+        <Link href={user ? "/dashboard" : "/"} className="flex items-center gap-2 rounded-md font-semibold tracking-tight">
+          <MooringMark />
+          <span>Mooring</span>
+        </Link>
+        {user ? <MainNav items={user.siteRole === "admin" ? [...workspaceNav, ...adminNav] : workspaceNav} /> : null}
+        <div className="ml-auto flex items-center gap-1.5">
+          <ThemeToggle />
+          {user ? (
+            <AccountMenu user={user} showMailbox={showMailbox} />
+          ) : (
+            <>
+              <ButtonLink href="/sign-in" variant="ghost" size="sm">
+                Sign in
+              </ButtonLink>
+              <ButtonLink href="/sign-up" size="sm">
+                Create account
+              </ButtonLink>
+            </>
+          )}
+        </div>
+      </div>
+    </header>
+  );
+}
