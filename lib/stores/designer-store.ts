@@ -124,31 +124,9 @@ export const useDesignerStore = create<DesignerState>()((set, get) => ({
 
   endGesture: () => set({ lastGesture: null }),
 
-  undo: () => {
-    const state = get();
-    const history = undoHistory(state.history);
-    if (history === state.history) return;
-    set({
-      history,
-      dirty: true,
-      lastGesture: null,
-      selection: pruneSelection(state.selection, history.present),
-      displayAxes: normaliseDisplayAxes(state.displayAxes, history.present),
-    });
-  },
+  undo: () => set((state) => stepTo(state, undoHistory(state.history))),
 
-  redo: () => {
-    const state = get();
-    const history = redoHistory(state.history);
-    if (history === state.history) return;
-    set({
-      history,
-      dirty: true,
-      lastGesture: null,
-      selection: pruneSelection(state.selection, history.present),
-      displayAxes: normaliseDisplayAxes(state.displayAxes, history.present),
-    });
-  },
+  redo: () => set((state) => stepTo(state, redoHistory(state.history))),
 
   select: (ids, mode = "replace") => {
     const existing = new Set(get().history.present.stacks.map((s) => s.id));
@@ -192,6 +170,18 @@ export function selectCanUndo(state: DesignerState): boolean {
 }
 export function selectCanRedo(state: DesignerState): boolean {
   return state.history.future.length > 0;
+}
+
+/** The state change for moving to another point of the history (undo/redo); none when it did not move. */
+function stepTo(state: DesignerState, history: History<Configuration>): Partial<DesignerState> {
+  if (history === state.history) return {};
+  return {
+    history,
+    dirty: true,
+    lastGesture: null,
+    selection: pruneSelection(state.selection, history.present),
+    displayAxes: normaliseDisplayAxes(state.displayAxes, history.present),
+  };
 }
 
 function pruneSelection(selection: string[], document: Configuration): string[] {
