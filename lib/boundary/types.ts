@@ -100,7 +100,10 @@ export interface MasslessContent {
   /** Human-readable field content, e.g. "vector (8 polarisations)", "2 scalars", "16 fermions". */
   description: string;
   sector: SectorKind;
+  /** States per Chan-Paton index pair: of one oriented string, or summed over both orientations where they differ. */
   states: string;
+  /** Total over both orientations and all Chan-Paton labels (as `LevelRow.withChanPaton`). */
+  withChanPaton?: string;
 }
 
 export interface Sector {
