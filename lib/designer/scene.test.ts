@@ -1,0 +1,71 @@
+import { describe, expect, it } from "vitest";
+import type { Configuration, SpectrumResult } from "@/lib/boundary/types";
+import { createViewport } from "@/lib/canvas/viewport";
+import { buildScene } from "./scene";
+
+const document: Configuration = {
+  format: 1,
+  title: "Three stacks",
+  theory: "IIA",
+  stringScaleGeV: null,
+  levels: 2,
+  stacks: [
+    { id: "w", label: "wall", count: 1, anti: false, worldvolume: [1, 2, 3, 4, 5, 6, 7, 8], position: { "9": 0 } },
+    { id: "p", label: "probe", count: 2, anti: false, worldvolume: [1, 2, 3, 4], position: { "9": 2 } },
+    { id: "q", label: "", count: 1, anti: true, worldvolume: [1, 2, 3, 4], position: { "8": 1, "9": -1 } },
+  ],
+};
+
+const result = {
+  sectors: [
+    {
+      pair: ["p", "q"],
+      tachyonic: true,
+      criticalSeparation: 4.44,
+      separation: 3.16,
+      supersymmetric: false,
+      nu: 0,
+      levels: [{ sector: "NS", level: "0", massSquared: "-0.2467", mass: null, states: "1", withChanPaton: "4" }],
+    },
+  ],
+} as unknown as SpectrumResult;
+
+const viewport = createViewport(400, 300, 40);
+const scene = buildScene({ document, result, axes: { horizontal: 8, vertical: 9 }, viewport, width: 400, height: 300, selection: ["p"], gridStep: 1 });
+
+describe("buildScene", () => {
+  it("projects each stack: the wall as a horizontal line, the probes as points", () => {
+    expect(scene.stacks.map((s) => s.shape.kind)).toEqual(["horizontal-line", "point", "point"]);
+    expect(scene.stacks[1]!.screen).toEqual({ x: 200, y: 70 });
+    expect(scene.stacks[2]!.screen).toEqual({ x: 240, y: 190 });
+  });
+
+  it("labels stacks with name, Dp and N, using the id when the label is empty", () => {
+    expect(scene.stacks[0]!.label).toBe("wall \u00b7 D8 \u00b7 N=1");
+    expect(scene.stacks[2]!.label).toBe("q \u00b7 anti-D4 \u00b7 N=1");
+  });
+
+  it("marks the selection", () => {
+    expect(scene.stacks.map((s) => s.selected)).toEqual([false, true, false]);
+  });
+
+  it("draws one curve per pair of distinct stacks, tachyonic ones labelled in words", () => {
+    expect(scene.curves.map((c) => c.key)).toEqual(["p|w", "q|w", "p|q"]);
+    const pq = scene.curves[2]!;
+    expect(pq.tachyonic).toBe(true);
+    expect(pq.label).toBe("\u03b1\u2032M\u00b2 = \u22120.2467  tachyon");
+    expect(pq.points.slice(0, 2)).toEqual([200, 70]);
+    expect(pq.points.slice(6, 8)).toEqual([240, 190]);
+  });
+
+  it("has no curve labels without a result", () => {
+    const bare = buildScene({ document, result: null, axes: { horizontal: 8, vertical: 9 }, viewport, width: 400, height: 300, selection: [], gridStep: 1 });
+    expect(bare.curves.every((c) => c.label === "" && !c.tachyonic)).toBe(true);
+  });
+
+  it("lists grid lines across the view with the origin flagged", () => {
+    // 400 px at 40 px per unit shows x in [-5, 5]: 11 lines at step 1.
+    expect(scene.verticalLines).toHaveLength(11);
+    expect(scene.verticalLines.filter((l) => l.origin)).toEqual([{ x: 200, origin: true }]);
+  });
+});

@@ -1,0 +1,166 @@
+/**
+ * Builds what the canvas draws (in screen pixels) from the document, the live result and the
+ * view. Pure, so the drawing component only maps items to shapes.
+ */
+import type { Configuration, SpectrumResult } from "@/lib/boundary/types";
+import { assignLanes, curveAnchors, curveBetween, curveMidpoint, curveToPoints } from "@/lib/canvas/curves";
+import type { ShapeEntry } from "@/lib/canvas/hit-test";
+import { estimateTextWidth, placeLabels, stackLabelAnchor } from "@/lib/canvas/labels";
+import { projectStack, type DisplayAxes, type ProjectedShape } from "@/lib/canvas/projection";
+import { gridLines } from "@/lib/canvas/snap";
+import { toScreen, toWorld, visibleWorldRect, type Point, type Viewport } from "@/lib/canvas/viewport";
+import { formatMassSquared, lightestBySector, pairKey, stackKind } from "./spectrum-summary";
+
+/** Font size of canvas labels in pixels. */
+export const sceneFontSize = 12;
+
+export interface SceneStack {
+  id: string;
+  shape: ProjectedShape;
+  /** Screen geometry: centre for points, the line coordinate for lines. */
+  screen: Point;
+  colour: string;
+  anti: boolean;
+  selected: boolean;
+  count: number;
+  label: string;
+  labelAt: Point;
+}
+
+export interface SceneCurve {
+  key: string;
+  pair: [string, string];
+  /** Cubic Bezier control polygon [x0, y0, c1x, c1y, c2x, c2y, x1, y1]. */
+  points: number[];
+  tachyonic: boolean;
+  label: string;
+  labelAt: Point;
+}
+
+export interface Scene {
+  stacks: SceneStack[];
+  curves: SceneCurve[];
+  /** Screen x of vertical grid lines and y of horizontal ones, with the origin lines flagged. */
+  verticalLines: Array<{ x: number; origin: boolean }>;
+  horizontalLines: Array<{ y: number; origin: boolean }>;
+  /** Hit-test entries in world coordinates. */
+  hitEntries: ShapeEntry[];
+}
+
+/** Inputs of {@link buildScene}. */
+export interface BuildSceneInput {
+  document: Configuration;
+  result: SpectrumResult | null;
+  axes: DisplayAxes;
+  viewport: Viewport;
+  width: number;
+  height: number;
+  selection: readonly string[];
+  gridStep: number;
+}
+
+/** Fallback colour of a stack without one. */
+export const defaultStackColour = "#2f6f9f";
+
+/** Builds the scene. Curves join distinct stacks; self-sectors are listed in the preview. */
+export function buildScene(input: BuildSceneInput): Scene {
+  const { document, result, axes, viewport, width, height, selection, gridStep } = input;
+  const stage = { width, height };
+  const selected = new Set(selection);
+  const view = visibleWorldRect(viewport, width, height);
+  const viewCentre = toWorld({ x: width / 2, y: height / 2 }, viewport);
+
+  const hitEntries: ShapeEntry[] = document.stacks.map((stack) => ({ id: stack.id, shape: projectStack(stack, axes) }));
+  let fillSlot = 0;
+  const anchors = hitEntries.map(({ id, shape }) =>
+    stackLabelAnchor(shape, viewport, stage, shape.kind === "fill" ? fillSlot++ : 0),
+  );
+  const labelTexts = document.stacks.map(
+    (stack) => `${stack.label || stack.id} \u00b7 ${stackKind(stack, document.theory)} \u00b7 N=${stack.count}`,
+  );
+  const placed = placeLabels(
+    document.stacks.map((stack, i) => ({
+      id: stack.id,
+      anchor: anchors[i] ?? { x: 0, y: 0 },
+      width: estimateTextWidth(labelTexts[i] ?? "", sceneFontSize),
+      height: sceneFontSize + 4,
+    })),
+  );
+
+  const stacks: SceneStack[] = document.stacks.map((stack, i) => {
+    const shape = hitEntries[i]!.shape;
+    const screen =
+      shape.kind === "point"
+        ? toScreen({ x: shape.x, y: shape.y }, viewport)
+        : shape.kind === "horizontal-line"
+          ? toScreen({ x: 0, y: shape.y }, viewport)
+          : shape.kind === "vertical-line"
+            ? toScreen({ x: shape.x, y: 0 }, viewport)
+            : { x: 0, y: 0 };
+    return {
+      id: stack.id,
+      shape,
+      screen,
+      colour: stack.colour ?? defaultStackColour,
+      anti: stack.anti && document.theory !== "bosonic",
+      selected: selected.has(stack.id),
+      count: stack.count,
+      label: labelTexts[i] ?? stack.id,
+      labelAt: placed.get(stack.id) ?? { x: 0, y: 0 },
+    };
+  });
+
+  const lightest = result ? lightestBySector(result) : new Map();
+  const pairs: Array<[number, number]> = [];
+  for (let i = 0; i < document.stacks.length; i++) {
+    for (let j = i + 1; j < document.stacks.length; j++) pairs.push([i, j]);
+  }
+  const lanes = assignLanes(pairs.map(([i, j]) => [shapeKey(hitEntries[i]!.shape), shapeKey(hitEntries[j]!.shape)]));
+  const laneSpacing = Math.max(view.width, 1) / 10;
+  const curves: SceneCurve[] = pairs.map(([i, j], k) => {
+    const a = document.stacks[i]!;
+    const b = document.stacks[j]!;
+    const lane = lanes[k] ?? 0;
+    const world = curveAnchors(hitEntries[i]!.shape, hitEntries[j]!.shape, viewCentre, lane, laneSpacing);
+    const curve = curveBetween(toScreen(world.start, viewport), toScreen(world.end, viewport), {
+      bend: lane % 2 === 0 ? 0.22 : -0.22,
+      loopAngle: Math.PI / 4 + (lane * Math.PI) / 5,
+    });
+    const info = lightest.get(pairKey(a.id, b.id));
+    const mid = curveMidpoint(curve);
+    const label = info ? `\u03b1\u2032M\u00b2 = ${formatMassSquared(info.massSquared)}${info.tachyonic ? "  tachyon" : ""}` : "";
+    return {
+      key: pairKey(a.id, b.id),
+      pair: [a.id, b.id],
+      points: curveToPoints(curve),
+      tachyonic: info?.tachyonic ?? false,
+      label,
+      labelAt: { x: mid.x + 4, y: mid.y - sceneFontSize - 2 },
+    };
+  });
+
+  const verticalLines = gridLines(view.x, view.x + view.width, gridStep, 120).map((x) => ({
+    x: toScreen({ x, y: 0 }, viewport).x,
+    origin: x === 0,
+  }));
+  const horizontalLines = gridLines(view.y, view.y + view.height, gridStep, 120).map((y) => ({
+    y: toScreen({ x: 0, y }, viewport).y,
+    origin: y === 0,
+  }));
+
+  return { stacks, curves, verticalLines, horizontalLines, hitEntries };
+}
+
+/** Stacks drawn identically share a key, so their curves fan out into lanes. */
+function shapeKey(shape: ProjectedShape): string {
+  switch (shape.kind) {
+    case "point":
+      return `p:${shape.x},${shape.y}`;
+    case "horizontal-line":
+      return `h:${shape.y}`;
+    case "vertical-line":
+      return `v:${shape.x}`;
+    case "fill":
+      return "f";
+  }
+}
