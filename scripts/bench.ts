@@ -160,6 +160,13 @@ async function main(): Promise<void> {
     cases.push(degeneracy);
   }
   cases.push(yardstick);
+  if (engine.projected) {
+    const projected = engine.projected;
+    cases.push({
+      name: `engine GSO-projected NS sector, nu = 4, to level ${degeneracyLevel} (informational)`,
+      ...measure(() => projected("NS", { nu: 4, sameOrientation: true, maxLevel: degeneracyLevel })),
+    });
+  }
 
   // (d) live preview recompute.
   let preview: CaseResult | undefined;
@@ -261,6 +268,8 @@ interface LoadedEngine {
   computeSpectrum?: (configuration: Configuration) => unknown;
   /** Degeneracies of prod (1 - q^n)^-bosons by integer level 0..maxLevel. */
   degeneracies?: (maxLevel: number, bosons: number) => bigint[];
+  /** GSO-projected counts of a type II sector (informational case). */
+  projected?: (sector: "NS" | "R", options: { nu: number; sameOrientation: boolean; maxLevel: number }) => unknown;
   problems: string[];
 }
 
@@ -277,6 +286,20 @@ async function loadEngine(): Promise<LoadedEngine> {
     loaded.computeSpectrum = (configuration) => (compute as (c: Configuration) => unknown)(configuration);
   } else if (index) {
     problems.push("lib/boundary/index.ts exports no computeSpectrum");
+  }
+  const degeneracy = await loadOptional("lib/boundary/degeneracy.ts", problems);
+  const oscillator = degeneracy?.["oscillatorDegeneracies"];
+  if (typeof oscillator === "function") {
+    const call = oscillator as (sector: "bosonic", options: { dimension: number; nu: number; maxLevel: number }) => bigint[];
+    // The engine indexes by twice the level; keep the integer levels, as the yardstick does.
+    loaded.degeneracies = (maxLevel, bosons) =>
+      call("bosonic", { dimension: bosons + 2, nu: 0, maxLevel }).filter((_, k) => k % 2 === 0);
+  } else if (degeneracy) {
+    problems.push("lib/boundary/degeneracy.ts exports no oscillatorDegeneracies");
+  }
+  const projected = degeneracy?.["projectedDegeneracies"];
+  if (typeof projected === "function") {
+    loaded.projected = projected as LoadedEngine["projected"];
   }
   return loaded;
 }
