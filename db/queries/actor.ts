@@ -1,0 +1,112 @@
+import "server-only";
+import { and, eq, isNull } from "drizzle-orm";
+import { ForbiddenError, NotFoundError, UnauthenticatedError } from "../../lib/errors";
+import { db, type Executor } from "../index";
+import { groups, memberships, users, type GroupRole, type SiteRole } from "../schema";
+
+/** The signed-in user acting on the data, as carried by the session. */
+export interface Actor {
+  id: string;
+  email: string;
+  name: string;
+  siteRole: SiteRole;
+}
+
+/** Group roles from weakest to strongest. */
+const roleRank: Record<GroupRole, number> = { viewer: 1, editor: 2, owner: 3 };
+
+/** True when `role` grants at least what `minimum` grants. */
+export function roleAtLeast(role: GroupRole | null, minimum: GroupRole): boolean {
+  return role !== null && roleRank[role] >= roleRank[minimum];
+}
+
+/** True for a site administrator. */
+export function isSiteAdmin(actor: Actor | null): boolean {
+  return actor?.siteRole === "admin";
+}
+
+/** Returns the actor, or throws UnauthenticatedError when nobody is signed in. */
+export function requireActor(actor: Actor | null): Actor {
+  if (!actor) throw new UnauthenticatedError();
+  return actor;
+}
+
+/** Returns the actor when it is a site admin; otherwise throws (401 without a session, 403 otherwise). */
+export function requireSiteAdmin(actor: Actor | null): Actor {
+  const signedIn = requireActor(actor);
+  if (signedIn.siteRole !== "admin") throw new ForbiddenError("Only site administrators can do this.");
+  return signedIn;
+}
+
+/**
+ * The actor's effective role in a (non-deleted) group, or null when the actor may not see it.
+ * Site admins act as owners of every group; a personal group's user is its owner through
+ * the membership created with the account.
+ */
+export async function getGroupRole(
+  executor: Executor,
+  actor: Actor | null,
+  groupId: string,
+): Promise<GroupRole | null> {
+  if (!actor) return null;
+  const [row] = await executor
+    .select({ role: memberships.role })
+    .from(groups)
+    .leftJoin(memberships, and(eq(memberships.groupId, groups.id), eq(memberships.userId, actor.id)))
+    .where(and(eq(groups.id, groupId), isNull(groups.deletedAt)))
+    .limit(1);
+  if (!row) return null;
+  if (actor.siteRole === "admin") return "owner";
+  return row.role;
+}
+
+/**
+ * Checks that the actor holds at least `minimum` in the group and returns the role held.
+ * Throws UnauthenticatedError without an actor, NotFoundError when the actor is not a member
+ * (so the group's existence does not leak) and ForbiddenError when the role is too weak.
+ */
+export async function requireGroupRole(
+  executor: Executor,
+  actor: Actor | null,
+  groupId: string,
+  minimum: GroupRole,
+  what = "group",
+): Promise<GroupRole> {
+  const signedIn = requireActor(actor);
+  const role = await getGroupRole(executor, signedIn, groupId);
+  if (!role) throw new NotFoundError(`No such ${what}.`);
+  if (!roleAtLeast(role, minimum)) {
+    throw new ForbiddenError(
+      minimum === "owner"
+        ? "Only the group's owners can do this."
+        : "You can view this group but not change it.",
+    );
+  }
+  return role;
+}
+
+/**
+ * Loads the Actor for a user id (e.g. from a session token), or null when the account no
+ * longer exists or was deleted. This is how sessions obtain an actor; it authorizes nothing.
+ */
+export async function getActorById(userId: string): Promise<Actor | null> {
+  if (!isUuid(userId)) return null;
+  const [row] = await db
+    .select({ id: users.id, email: users.email, name: users.name, siteRole: users.siteRole })
+    .from(users)
+    .where(and(eq(users.id, userId), isNull(users.deletedAt)))
+    .limit(1);
+  return row ?? null;
+}
+
+const uuidPattern = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/** True for a syntactically valid UUID; ids that fail this cannot name any row. */
+export function isUuid(value: string): boolean {
+  return uuidPattern.test(value);
+}
+
+/** Throws NotFoundError for a malformed id, so PostgreSQL never sees an invalid uuid. */
+export function assertUuid(value: string, what: string): void {
+  if (!isUuid(value)) throw new NotFoundError(`No such ${what}.`);
+}
