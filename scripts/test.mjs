@@ -31,6 +31,7 @@ const selected = new Set(requested.length ? requested : parts);
 
 /** @type {{ name: string, code: number, seconds: number, passed: number, failed: number, counted: boolean }[]} */
 const results = [];
+const setupTimings = [];
 const services = [];
 let startedPostgres = false;
 
@@ -52,6 +53,14 @@ function countTests(output, runner) {
   const failed = output.match(/^\s*(\d+) failed/m)?.[1];
   if (passed === undefined && failed === undefined) return null;
   return { passed: Number(passed ?? 0), failed: Number(failed ?? 0) };
+}
+
+/** Runs a setup action and records how long it took (shown in the summary). */
+async function timed(name, action) {
+  const started = Date.now();
+  const value = await action();
+  setupTimings.push({ name, seconds: (Date.now() - started) / 1000 });
+  return value;
 }
 
 /** Runs one named step, timing it and recording its exit code and test counts. */
@@ -108,6 +117,7 @@ async function teardown() {
 
 function summary() {
   console.log("\n[test] summary");
+  for (const t of setupTimings) console.log(`  setup  ${t.name.padEnd(34)} ${t.seconds.toFixed(1).padStart(6)}s`);
   for (const r of results) {
     const counts = r.counted ? ` (${r.passed} passed, ${r.failed} failed)` : "";
     console.log(`  ${r.code === 0 ? "ok    " : "FAILED"} ${r.name.padEnd(34)} ${r.seconds.toFixed(1).padStart(6)}s${counts}`);
@@ -127,10 +137,10 @@ async function main() {
     });
   }
 
-  ensureNodeModules();
-  if (selected.has("e2e")) ensureChromium();
+  await timed("npm packages", () => ensureNodeModules());
+  if (selected.has("e2e")) await timed("chromium", () => ensureChromium());
   await choosePostgresPort();
-  const pg = await startPostgres();
+  const pg = await timed("postgresql", () => startPostgres());
   startedPostgres = pg.started;
   log(`PostgreSQL on 127.0.0.1:${pg.port}`);
   const secret = authSecret();
