@@ -7,25 +7,23 @@
  * unchanged, so callers can compare references. States that can be entered but are invalid
  * (the wrong p for IIA/IIB, for example) are allowed here and reported by validation.
  */
+import { configurationLimits, dimensionOf } from "@/lib/boundary";
 import type { Configuration, Stack, Theory } from "@/lib/boundary/types";
 import { cleanNumber } from "@/lib/canvas/snap";
 
-/** Stack ids: letters, digits, "-" and "_", starting with a letter or digit, at most 32 characters. */
-export const stackIdPattern = /^[A-Za-z0-9][A-Za-z0-9_-]{0,31}$/;
+/** Stack ids: letters, digits, "-" and "_", starting with a letter or digit, at most 64 characters. */
+export const stackIdPattern = /^[A-Za-z0-9][A-Za-z0-9_-]{0,63}$/;
 
-/** Largest stack count N the designer accepts. */
-export const maxStackCount = 1000;
+/** Largest stack count N the designer accepts (the engine's limit). */
+export const maxStackCount = configurationLimits.maxCount;
 
-/** Largest number of stacks in one configuration. */
-export const maxStacks = 24;
+/** Largest number of stacks in one configuration (the engine's limit). */
+export const maxStacks = configurationLimits.maxStacks;
 
 /** Palette offered for stack colours (CSS hex). */
 export const stackPalette = ["#2f6f9f", "#b5542c", "#3f8f5a", "#7a4fa3", "#a8832a", "#2a8a8a", "#9c3d63", "#56606b"];
 
-/** Spacetime dimension of a configuration: explicit, else 26 (bosonic) or 10 (type II). */
-export function dimensionOf(config: Pick<Configuration, "theory" | "dimension">): number {
-  return config.dimension ?? (config.theory === "bosonic" ? 26 : 10);
-}
+export { dimensionOf };
 
 /** Spatial axes 1..D-1. */
 export function spatialAxes(config: Pick<Configuration, "theory" | "dimension">): number[] {
@@ -201,7 +199,7 @@ export function setColour(config: Configuration, id: string, colour: string): Co
 /** Why a stack cannot be renamed to `newId`, or null when it can. */
 export function renameProblem(config: Pick<Configuration, "stacks">, id: string, newId: string): string | null {
   if (newId === id) return null;
-  if (!stackIdPattern.test(newId)) return "Use 1-32 letters, digits, '-' or '_', starting with a letter or digit.";
+  if (!stackIdPattern.test(newId)) return "Use 1-64 letters, digits, '-' or '_', starting with a letter or digit.";
   if (config.stacks.some((s) => s.id === newId)) return `Another stack is already called "${newId}".`;
   return null;
 }
