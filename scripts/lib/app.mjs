@@ -1,5 +1,5 @@
 // Steps on the application shared by `npm start` and `npm test`: migrate, seed, build, serve, mail.
-import { mkdirSync } from "node:fs";
+import { existsSync, mkdirSync } from "node:fs";
 import path from "node:path";
 import { bin, runStep, startService, waitForHttp } from "./processes.mjs";
 import { repoRoot } from "./postgres.mjs";
@@ -14,18 +14,29 @@ export function appEnv({ databaseUrl, appPort, smtpPort, mailboxPort, secret }) 
     NEXTAUTH_SECRET: secret,
     SMTP_URL: process.env.SMTP_URL ?? `smtp://127.0.0.1:${smtpPort}`,
     MAILBOX_URL: `http://127.0.0.1:${mailboxPort}`,
+    // No network calls from the build or the server.
+    NEXT_TELEMETRY_DISABLED: "1",
     // vitest 4 warns about loading vitest.config.ts through the CommonJS loader; it works as is.
     VITE_CONFIG_NATIVE_IGNORE_WARNING: "true",
   };
 }
 
+/** The file each database script runs; the step is skipped (with a message) until it exists. */
+const scriptFiles = { "db:migrate": "db/migrate.ts", "db:seed": "db/seed.ts" };
+
 /**
- * Runs `npm run <script>` against `env` when package.json defines it; otherwise says so and skips.
- * Returns { code, output, skipped }.
+ * Runs `npm run <script>` against `env` when package.json defines it (and its file exists); otherwise
+ * says so and skips. Returns { code, output, skipped }.
  */
 export async function runNpmScriptIfPresent(script, env, what) {
-  if (!hasNpmScript(script)) {
-    console.log(`[mooring] skipping ${what}: package.json has no "${script}" script yet`);
+  const file = scriptFiles[script];
+  const missing = !hasNpmScript(script)
+    ? `package.json has no "${script}" script yet`
+    : file && !existsSync(path.join(repoRoot, file))
+      ? `${file} does not exist yet`
+      : null;
+  if (missing) {
+    console.log(`[mooring] skipping ${what}: ${missing}`);
     return { code: 0, output: "", skipped: true };
   }
   const result = await runStep("npm", ["run", "-s", script], { env });
