@@ -1,0 +1,379 @@
+/**
+ * API load benchmark (`npm run bench:api`): autocannon against a running production server
+ * (BENCH_URL, default http://127.0.0.1:3000) with 16 connections, in one run:
+ *   1. GET /api/health (the yardstick: routing plus one database round trip),
+ *   2. POST /api/spectrum (stateless compute of a four-stack configuration),
+ *   3. a configuration read, GET /api/configurations/:id,
+ *   4. a save, PUT /api/configurations/:id with If-Match (revision + result).
+ * Reports p50, p95, p99 (from every response time) and throughput, PASS/MISS against
+ * product.md's targets, and writes bench-results/api.json. Cases whose route is missing, or
+ * that need a sign-in when BENCH_EMAIL/BENCH_PASSWORD are not set, are reported as not measured.
+ *
+ * Environment: BENCH_URL, BENCH_DURATION (seconds per case, default 10), BENCH_CONNECTIONS
+ * (default 16), BENCH_EMAIL and BENCH_PASSWORD (an account that can edit configurations).
+ * Start the server first, e.g. `npm run build && npm run serve`.
+ */
+import { mkdirSync, writeFileSync } from "node:fs";
+import os from "node:os";
+import path from "node:path";
+import autocannon, { type RequestSpec } from "autocannon";
+import { benchPreviewDemo } from "../tests/fixtures/bench-12-stacks";
+
+const baseUrl = (process.env.BENCH_URL ?? "http://127.0.0.1:3000").replace(/\/+$/, "");
+const durationSeconds = positiveNumber(process.env.BENCH_DURATION, 10);
+const connections = positiveNumber(process.env.BENCH_CONNECTIONS, 16);
+const warmupSeconds = Math.min(3, durationSeconds);
+
+interface CaseReport {
+  name: string;
+  method: string;
+  path: string;
+  status: "measured" | "not measured";
+  reason?: string;
+  requests?: number;
+  p50Ms?: number;
+  p95Ms?: number;
+  p99Ms?: number;
+  meanMs?: number;
+  requestsPerSecond?: number;
+  bytesPerSecond?: number;
+  statusCounts?: Record<string, number>;
+  errors?: number;
+  timeouts?: number;
+  p95ToYardstick?: number;
+}
+
+interface TargetReport {
+  target: string;
+  limit: string;
+  measured: string;
+  status: "PASS" | "MISS" | "NOT MEASURED";
+  note?: string;
+}
+
+interface Session {
+  cookie: string;
+}
+
+interface ConfigurationHandle {
+  id: string;
+  version: string;
+  document: unknown;
+  busy: boolean;
+}
+
+async function main(): Promise<void> {
+  const health = await probe("GET", "/api/health");
+  if (health === undefined) {
+    console.error(`No server answers at ${baseUrl}. Start the production server first (npm run build && npm run serve).`);
+    process.exitCode = 1;
+    return;
+  }
+  const session = await signIn();
+  const reports: CaseReport[] = [];
+  const authHeaders: Record<string, string> = session ? { cookie: session.cookie } : {};
+
+  // 1. Health (yardstick).
+  reports.push(
+    health === 404
+      ? notMeasured("health", "GET", "/api/health", "route missing (404)")
+      : await runCase("health", { method: "GET", path: "/api/health" }),
+  );
+
+  // 2. Stateless compute.
+  const spectrumBody = JSON.stringify(benchPreviewDemo);
+  const spectrumHeaders = { "content-type": "application/json", origin: baseUrl, ...authHeaders };
+  const spectrumProbe = await probe("POST", "/api/spectrum", spectrumHeaders, spectrumBody);
+  reports.push(
+    spectrumProbe === 404
+      ? notMeasured("spectrum", "POST", "/api/spectrum", "route missing (404)")
+      : await runCase("spectrum", { method: "POST", path: "/api/spectrum", headers: spectrumHeaders, body: spectrumBody }),
+  );
+
+  // 3 and 4. Configuration read and save (need a session and editable configurations).
+  const handles = session ? await findConfigurations(session) : { handles: [], reason: "set BENCH_EMAIL and BENCH_PASSWORD to sign in" };
+  const first = handles.handles[0];
+  if (!first) {
+    reports.push(notMeasured("configuration read", "GET", "/api/configurations/:id", handles.reason));
+    reports.push(notMeasured("save", "PUT", "/api/configurations/:id", handles.reason));
+  } else {
+    reports.push(
+      await runCase("configuration read", {
+        method: "GET",
+        path: `/api/configurations/${encodeURIComponent(first.id)}`,
+        headers: authHeaders,
+      }),
+    );
+    reports.push(await runCase("save", saveRequest(handles.handles, authHeaders)));
+  }
+
+  const yardstick = reports[0];
+  if (yardstick?.p95Ms) {
+    for (const report of reports) if (report.p95Ms !== undefined) report.p95ToYardstick = report.p95Ms / yardstick.p95Ms;
+  }
+  const targets = [
+    judge(reports, "spectrum", "POST /api/spectrum", 25),
+    judge(reports, "configuration read", "configuration read", 20),
+    judge(reports, "save", "save (revision + result)", 50),
+  ];
+
+  printReport(reports, targets);
+  const out = {
+    generatedAt: new Date().toISOString(),
+    url: baseUrl,
+    connections,
+    durationSeconds,
+    node: process.version,
+    cpu: os.cpus()[0]?.model ?? "unknown",
+    cpus: os.cpus().length,
+    signedIn: session !== undefined,
+    cases: reports,
+    targets,
+  };
+  const dir = path.resolve(process.cwd(), "bench-results");
+  mkdirSync(dir, { recursive: true });
+  writeFileSync(path.join(dir, "api.json"), `${JSON.stringify(out, null, 2)}\n`);
+  console.log(`\nWrote ${path.relative(process.cwd(), path.join(dir, "api.json"))}`);
+}
+
+/** Runs one autocannon case after a warm-up and summarises every response time it saw. */
+async function runCase(name: string, request: RequestSpec): Promise<CaseReport> {
+  const method = request.method ?? "GET";
+  const requestPath = request.path ?? "/";
+  process.stdout.write(`${name}: ${method} ${requestPath} for ${durationSeconds} s with ${connections} connections... `);
+  const times: number[] = [];
+  const statusCounts: Record<string, number> = {};
+  const instance = autocannon({
+    url: baseUrl,
+    connections,
+    duration: durationSeconds,
+    timeout: 30,
+    requests: [request],
+    warmup: { connections, duration: warmupSeconds },
+  });
+  instance.on("response", (_client: unknown, statusCode: number, _bytes: number, responseTime: number) => {
+    times.push(responseTime);
+    statusCounts[String(statusCode)] = (statusCounts[String(statusCode)] ?? 0) + 1;
+  });
+  const result = await instance;
+  times.sort((a, b) => a - b);
+  console.log("done");
+  return {
+    name,
+    method,
+    path: requestPath,
+    status: "measured",
+    requests: times.length,
+    p50Ms: quantile(times, 0.5),
+    p95Ms: quantile(times, 0.95),
+    p99Ms: quantile(times, 0.99),
+    meanMs: times.reduce((s, x) => s + x, 0) / Math.max(1, times.length),
+    requestsPerSecond: result.requests.average,
+    bytesPerSecond: result.throughput.average,
+    statusCounts,
+    errors: result.errors,
+    timeouts: result.timeouts,
+  };
+}
+
+/**
+ * A save request that gives every in-flight request its own configuration and current
+ * version, so that the benchmark measures saves rather than 409 conflicts.
+ */
+function saveRequest(handles: ConfigurationHandle[], authHeaders: Record<string, string>): RequestSpec {
+  return {
+    method: "PUT",
+    path: `/api/configurations/${encodeURIComponent(handles[0]?.id ?? "")}`,
+    setupRequest: (request, context) => {
+      const handle = handles.find((h) => !h.busy) ?? handles[0];
+      if (!handle) return request;
+      handle.busy = true;
+      context["handle"] = handle.id;
+      return {
+        ...request,
+        path: `/api/configurations/${encodeURIComponent(handle.id)}`,
+        headers: { ...authHeaders, "content-type": "application/json", origin: baseUrl, "if-match": handle.version },
+        body: JSON.stringify({ document: handle.document, message: "bench:api save" }),
+      };
+    },
+    onResponse: (status, body, context, headers) => {
+      const handle = handles.find((h) => h.id === context["handle"]);
+      if (!handle) return;
+      handle.busy = false;
+      if (status >= 200 && status < 300) handle.version = readVersion(body, headers) ?? handle.version;
+    },
+  };
+}
+
+/** Signs in with next-auth's credentials flow when BENCH_EMAIL and BENCH_PASSWORD are set. */
+async function signIn(): Promise<Session | undefined> {
+  const email = process.env.BENCH_EMAIL;
+  const password = process.env.BENCH_PASSWORD;
+  if (!email || !password) {
+    console.log("BENCH_EMAIL/BENCH_PASSWORD not set: running the anonymous cases only.");
+    return undefined;
+  }
+  const csrfResponse = await fetch(`${baseUrl}/api/auth/csrf`);
+  const { csrfToken } = (await csrfResponse.json()) as { csrfToken?: string };
+  const csrfCookies = cookiePairs(csrfResponse);
+  if (!csrfToken) throw new Error("next-auth returned no CSRF token");
+  const response = await fetch(`${baseUrl}/api/auth/callback/password`, {
+    method: "POST",
+    redirect: "manual",
+    headers: { "content-type": "application/x-www-form-urlencoded", cookie: csrfCookies.join("; "), origin: baseUrl },
+    body: new URLSearchParams({ csrfToken, email, password, json: "true" }).toString(),
+  });
+  const cookies = [...csrfCookies, ...cookiePairs(response)];
+  if (!cookies.some((c) => c.includes("session-token="))) {
+    console.log(`Sign-in as ${email} failed (status ${response.status}): running the anonymous cases only.`);
+    return undefined;
+  }
+  return { cookie: cookies.join("; ") };
+}
+
+/** Lists the configurations the signed-in account can see and keeps up to `connections` of them. */
+async function findConfigurations(session: Session): Promise<{ handles: ConfigurationHandle[]; reason: string }> {
+  const list = await fetch(`${baseUrl}/api/configurations`, { headers: { cookie: session.cookie } });
+  if (list.status === 404) return { handles: [], reason: "GET /api/configurations is missing (404)" };
+  if (!list.ok) return { handles: [], reason: `GET /api/configurations answered ${list.status}` };
+  const body = (await list.json()) as unknown;
+  const items = Array.isArray(body) ? body : arrayField(body, ["configurations", "items", "data"]);
+  const handles: ConfigurationHandle[] = [];
+  for (const item of items.slice(0, connections)) {
+    const id = stringField(item, "id");
+    if (!id) continue;
+    const detail = await fetch(`${baseUrl}/api/configurations/${encodeURIComponent(id)}`, { headers: { cookie: session.cookie } });
+    if (!detail.ok) continue;
+    const text = await detail.text();
+    const version = readVersion(text, Object.fromEntries(detail.headers.entries()));
+    const parsed = JSON.parse(text) as unknown;
+    const document = objectField(parsed, "document") ?? parsed;
+    if (version) handles.push({ id, version, document, busy: false });
+  }
+  return handles.length > 0
+    ? { handles, reason: "" }
+    : { handles, reason: "the account sees no configuration with a version to read and save" };
+}
+
+/** The version of a configuration from an ETag header or a `version` field of the JSON body. */
+function readVersion(body: string, headers: Record<string, string>): string | undefined {
+  const etag = headers["etag"];
+  if (etag) return etag;
+  try {
+    const parsed = JSON.parse(body) as unknown;
+    const version = objectField(parsed, "version") ?? objectField(objectField(parsed, "configuration"), "version");
+    return typeof version === "number" || typeof version === "string" ? String(version) : undefined;
+  } catch {
+    return undefined;
+  }
+}
+
+/** One request before the load run: the status code, or undefined when nothing answers. */
+async function probe(method: string, route: string, headers?: Record<string, string>, body?: string): Promise<number | undefined> {
+  try {
+    const response = await fetch(`${baseUrl}${route}`, { method, headers, body });
+    await response.arrayBuffer();
+    return response.status;
+  } catch {
+    return undefined;
+  }
+}
+
+function judge(reports: CaseReport[], name: string, target: string, limitMs: number): TargetReport {
+  const report = reports.find((r) => r.name === name);
+  const limit = `p95 < ${limitMs} ms`;
+  if (!report || report.p95Ms === undefined) {
+    return { target, limit, measured: "-", status: "NOT MEASURED", note: report?.reason };
+  }
+  const failures = Object.entries(report.statusCounts ?? {})
+    .filter(([code]) => !code.startsWith("2"))
+    .reduce((sum, [, count]) => sum + count, 0);
+  return {
+    target,
+    limit,
+    measured: `${report.p95Ms.toFixed(1)} ms`,
+    status: report.p95Ms < limitMs && failures === 0 ? "PASS" : "MISS",
+    note: failures > 0 ? `${failures} non-2xx responses (${JSON.stringify(report.statusCounts)})` : undefined,
+  };
+}
+
+function notMeasured(name: string, method: string, route: string, reason: string): CaseReport {
+  return { name, method, path: route, status: "not measured", reason };
+}
+
+function printReport(reports: CaseReport[], targets: TargetReport[]): void {
+  console.log(`\nAPI benchmark, ${baseUrl}, ${connections} connections, ${durationSeconds} s per case`);
+  printRows(
+    ["case", "requests", "p50 ms", "p95 ms", "p99 ms", "req/s", "p95 / health", "statuses"],
+    reports.map((r) =>
+      r.status === "measured"
+        ? [
+            `${r.name} (${r.method} ${r.path})`,
+            String(r.requests ?? 0),
+            fixed(r.p50Ms),
+            fixed(r.p95Ms),
+            fixed(r.p99Ms),
+            fixed(r.requestsPerSecond, 0),
+            r.p95ToYardstick === undefined ? "-" : `${r.p95ToYardstick.toFixed(2)}x`,
+            Object.entries(r.statusCounts ?? {})
+              .map(([code, count]) => `${code}:${count}`)
+              .join(" ") + (r.errors ? ` errors:${r.errors}` : ""),
+          ]
+        : [`${r.name} (${r.method} ${r.path})`, "-", "-", "-", "-", "-", "-", `not measured: ${r.reason ?? ""}`],
+    ),
+  );
+  console.log("\nTargets (product.md, reported not asserted):");
+  printRows(
+    ["target", "limit", "measured", "status"],
+    targets.map((t) => [t.target, t.limit, t.measured, t.status + (t.note ? `: ${t.note}` : "")]),
+  );
+}
+
+function printRows(header: string[], rows: string[][]): void {
+  const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? "").length)));
+  const line = (cells: string[]): string => cells.map((cell, i) => cell.padEnd(widths[i] ?? 0)).join("  ");
+  console.log(line(header));
+  console.log(widths.map((w) => "-".repeat(w)).join("  "));
+  for (const row of rows) console.log(line(row));
+}
+
+function quantile(sorted: number[], q: number): number | undefined {
+  if (sorted.length === 0) return undefined;
+  return sorted[Math.min(sorted.length - 1, Math.max(0, Math.ceil(q * sorted.length) - 1))];
+}
+
+function fixed(value: number | undefined, digits = 1): string {
+  return value === undefined ? "-" : value.toFixed(digits);
+}
+
+function positiveNumber(raw: string | undefined, fallback: number): number {
+  const value = Number(raw);
+  return raw !== undefined && Number.isFinite(value) && value > 0 ? value : fallback;
+}
+
+/** "name=value" pairs of a response's Set-Cookie headers. */
+function cookiePairs(response: Response): string[] {
+  return response.headers.getSetCookie().map((c) => c.split(";")[0] ?? "").filter((c) => c.includes("="));
+}
+
+function objectField(value: unknown, key: string): unknown {
+  return typeof value === "object" && value !== null && key in value ? (value as Record<string, unknown>)[key] : undefined;
+}
+
+function stringField(value: unknown, key: string): string | undefined {
+  const field = objectField(value, key);
+  return typeof field === "string" ? field : typeof field === "number" ? String(field) : undefined;
+}
+
+function arrayField(value: unknown, keys: string[]): unknown[] {
+  for (const key of keys) {
+    const field = objectField(value, key);
+    if (Array.isArray(field)) return field;
+  }
+  return [];
+}
+
+main().catch((error: unknown) => {
+  console.error("bench:api failed:", error);
+  process.exitCode = 1;
+});
