@@ -26,13 +26,13 @@
 
 import { superstringCriticalDimension } from "./constants";
 import {
+  addSeries,
   divideSeriesExactly,
+  maxSeriesIndex,
   modeFactors,
   scaleSeries,
   seriesProduct,
   subtractSeries,
-  addSeries,
-  maxSeriesIndex,
   type Series,
   type SeriesFactor,
 } from "./series";

@@ -180,7 +180,7 @@ export function formatRational(a: Rational): string {
 }
 
 /**
- * Converts a rational to the nearest-ish double (within a few ulps).
+ * Converts a rational to a double (correct to within a few ulps).
  *
  * @param a - The rational.
  * @returns num/den as a JavaScript number; stays finite and accurate even when num and den
