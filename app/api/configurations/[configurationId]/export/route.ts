@@ -1,0 +1,76 @@
+import { z } from "zod";
+import { getConfiguration, getResultForRevision, getRevision } from "@/db/queries/configurations";
+import { contentDisposition } from "@/lib/api/content-disposition";
+import { NotFoundError, toErrorResponse } from "@/lib/errors";
+import { spectrumToCsv } from "@/lib/export/csv";
+import { spectrumToLatexTable } from "@/lib/export/latex-table";
+import { getCurrentUser } from "@/lib/session";
+
+interface ExportRouteContext {
+  params: Promise<{ configurationId: string }>;
+}
+
+const exportQuerySchema = z.object({
+  format: z.enum(["json", "csv", "tex"], { error: "Choose json, csv or tex." }),
+  revision: z.uuid({ error: "Not a valid revision id." }).optional(),
+});
+
+const mediaTypes = {
+  json: "application/json; charset=utf-8",
+  csv: "text/csv; charset=utf-8; header=present",
+  tex: "application/x-tex; charset=utf-8",
+} as const;
+
+/**
+ * GET /api/configurations/[configurationId]/export?format=json|csv|tex[&revision=id]: the
+ * configuration file (JSON, re-importable) or its stored spectrum as CSV or a LaTeX table, of the
+ * current revision unless `revision` names another. Any member. Downloads as an attachment.
+ */
+export async function GET(request: Request, context: ExportRouteContext): Promise<Response> {
+  try {
+    const { configurationId } = await context.params;
+    const actor = await getCurrentUser();
+    const query = exportQuerySchema.parse(Object.fromEntries(new URL(request.url).searchParams));
+    const configuration = await getConfiguration(actor, configurationId);
+    let document = configuration.document;
+    let revision = configuration.currentRevision;
+    if (query.revision) {
+      const picked = await getRevision(actor, query.revision);
+      if (picked.configurationId !== configuration.id) throw new NotFoundError("No such revision.");
+      document = picked.document;
+      revision = { id: picked.id, number: picked.number };
+    }
+    const base = `${fileStem(document.title)}-r${revision?.number ?? 1}`;
+    let body: string;
+    if (query.format === "json") {
+      body = `${JSON.stringify(document, null, 2)}\n`;
+    } else {
+      if (!revision) throw new NotFoundError("This configuration has no saved result yet.");
+      const { result } = await getResultForRevision(actor, revision.id);
+      body =
+        query.format === "csv"
+          ? spectrumToCsv(result, { title: document.title })
+          : spectrumToLatexTable(result, { title: document.title, label: `tab:${fileStem(document.title)}` });
+    }
+    return new Response(body, {
+      headers: {
+        "content-type": mediaTypes[query.format],
+        "content-disposition": contentDisposition("attachment", `${base}.${query.format}`),
+        "cache-control": "private, no-store",
+      },
+    });
+  } catch (error) {
+    return toErrorResponse(error);
+  }
+}
+
+/** A lowercase, hyphenated file name stem from a title ("Probe D4 near a wall" -> "probe-d4-near-a-wall"). */
+function fileStem(title: string): string {
+  return (
+    title
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, "-")
+      .replace(/^-+|-+$/g, "")
+      .slice(0, 60) || "configuration"
+  );
+}

@@ -1,0 +1,49 @@
+import "server-only";
+import { and, desc, eq, lt } from "drizzle-orm";
+import { db } from "../index";
+import { auditLog, users } from "../schema";
+import { assertUuid, requireGroupRole, type Actor } from "./actor";
+
+/** One row of a group's audit log. */
+export interface AuditLogEntryDto {
+  id: string;
+  action: string;
+  entityType: string;
+  entityId: string | null;
+  actorName: string | null;
+  details: Record<string, unknown>;
+  createdAt: Date;
+}
+
+export interface ListAuditLogOptions {
+  /** Page size (1..200, default 100). */
+  limit?: number;
+  /** Only entries strictly older than this (keyset pagination). */
+  before?: Date;
+}
+
+/** A group's audit log, newest first. Owners of the group (and site admins) only. */
+export async function listAuditLog(
+  actor: Actor | null,
+  groupId: string,
+  options: ListAuditLogOptions = {},
+): Promise<AuditLogEntryDto[]> {
+  assertUuid(groupId, "group");
+  await requireGroupRole(db, actor, groupId, "owner");
+  const limit = Math.min(200, Math.max(1, options.limit ?? 100));
+  return db
+    .select({
+      id: auditLog.id,
+      action: auditLog.action,
+      entityType: auditLog.entityType,
+      entityId: auditLog.entityId,
+      actorName: users.name,
+      details: auditLog.details,
+      createdAt: auditLog.createdAt,
+    })
+    .from(auditLog)
+    .leftJoin(users, eq(users.id, auditLog.actorId))
+    .where(and(eq(auditLog.groupId, groupId), options.before ? lt(auditLog.createdAt, options.before) : undefined))
+    .orderBy(desc(auditLog.createdAt))
+    .limit(limit);
+}
