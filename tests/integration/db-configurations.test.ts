@@ -1,0 +1,376 @@
+import { eq, sql } from "drizzle-orm";
+import { describe, expect, it } from "vitest";
+import { db } from "@/db/index";
+import { auditLog, configurations, revisions } from "@/db/schema";
+import {
+  createConfiguration,
+  forkConfiguration,
+  getConfiguration,
+  getResultForRevision,
+  getRevision,
+  getRevisionByNumber,
+  listConfigurationsForGroup,
+  listConfigurationsForUser,
+  listForksOfConfiguration,
+  listRevisions,
+  restoreRevision,
+  setConfigurationStarter,
+  softDeleteConfiguration,
+  undeleteConfiguration,
+  updateConfiguration,
+} from "@/db/queries/configurations";
+import type { Configuration, SpectrumResult } from "@/lib/boundary/types";
+import { braneAntibranePair, twoTwoBraneStacks } from "@/lib/demo-configurations";
+import { ConflictError, ForbiddenError, NotFoundError, UnauthenticatedError } from "@/lib/errors";
+import { makeSector, makeSpectrumResult } from "@/tests/fixtures/spectrum-result-builders";
+import { createTestGroup, createTestUser } from "@/tests/fixtures/users";
+
+/** A hand-made result (shapes only; the engine's physics is tested in lib/boundary). */
+function fixtureResult(lightestMassSquared: string, tachyonic: boolean): SpectrumResult {
+  return makeSpectrumResult([makeSector(["brane", "anti"], { tachyonic })], {
+    engineVersion: "fixture-1",
+    supercharges: tachyonic ? 0 : 16,
+    lightest: [
+      {
+        pair: ["brane", "anti"],
+        sector: "NS",
+        level: "0",
+        massSquared: lightestMassSquared,
+        mass: null,
+        states: "1",
+        withChanPaton: "2",
+      },
+    ],
+  });
+}
+
+function moved(document: Configuration, y: number): Configuration {
+  return {
+    ...document,
+    stacks: document.stacks.map((stack, index) =>
+      index === 1 ? { ...stack, position: { ...stack.position, "9": y } } : stack,
+    ),
+  };
+}
+
+/** A research group with an owner, an editor, a viewer, an outsider and an admin, plus one saved configuration. */
+async function scenario() {
+  const [owner, editor, viewer, outsider, admin] = await Promise.all([
+    createTestUser({ label: "owner" }),
+    createTestUser({ label: "editor" }),
+    createTestUser({ label: "viewer" }),
+    createTestUser({ label: "outsider" }),
+    createTestUser({ label: "admin", siteRole: "admin" }),
+  ]);
+  const group = await createTestGroup(owner.actor, [
+    { actor: editor.actor, role: "editor" },
+    { actor: viewer.actor, role: "viewer" },
+  ]);
+  const configuration = await createConfiguration(
+    editor.actor,
+    group.id,
+    braneAntibranePair,
+    "First sketch",
+    fixtureResult("-0.443", true),
+    1.25,
+  );
+  return { owner, editor, viewer, outsider, admin, group, configuration };
+}
+
+async function countRows(configurationId: string) {
+  const [revisionCount] = await db
+    .select({ n: sql<number>`count(*)::int` })
+    .from(revisions)
+    .where(eq(revisions.configurationId, configurationId));
+  const [auditCount] = await db
+    .select({ n: sql<number>`count(*)::int` })
+    .from(auditLog)
+    .where(eq(auditLog.entityId, configurationId));
+  return { revisions: revisionCount?.n, audit: auditCount?.n };
+}
+
+describe("createConfiguration", () => {
+  it("stores version 1, revision 1 with its result, and the summary columns", async () => {
+    const { editor, group, configuration } = await scenario();
+    expect(configuration).toMatchObject({
+      title: braneAntibranePair.title,
+      theory: "IIA",
+      version: 1,
+      stackCount: 2,
+      lightestMassSquared: -0.443,
+      tachyonic: true,
+      supercharges: 0,
+      role: "editor",
+      canEdit: true,
+      forkedFrom: null,
+      author: { id: editor.actor.id, name: editor.actor.name },
+      group: { id: group.id, slug: group.slug },
+    });
+    expect(configuration.currentRevision?.number).toBe(1);
+    const result = await getResultForRevision(editor.actor, configuration.currentRevision?.id ?? "");
+    expect(result).toMatchObject({ engineVersion: "fixture-1", computeMs: 1.25 });
+    expect(result.result.lightest[0]?.massSquared).toBe("-0.443");
+    const history = await listRevisions(editor.actor, configuration.id);
+    expect(history.map((revision) => [revision.number, revision.message, revision.isCurrent])).toEqual([
+      [1, "First sketch", true],
+    ]);
+  });
+
+  it("refuses viewers (403), outsiders (404) and anonymous callers (401) and writes nothing", async () => {
+    const { viewer, outsider, group } = await scenario();
+    const before = await listConfigurationsForGroup(viewer.actor, group.id);
+    const attempt = (actor: typeof viewer.actor | null) =>
+      createConfiguration(actor, group.id, twoTwoBraneStacks, "", fixtureResult("0", false), 1);
+    await expect(attempt(viewer.actor)).rejects.toBeInstanceOf(ForbiddenError);
+    await expect(attempt(outsider.actor)).rejects.toBeInstanceOf(NotFoundError);
+    await expect(attempt(null)).rejects.toBeInstanceOf(UnauthenticatedError);
+    expect((await listConfigurationsForGroup(viewer.actor, group.id)).total).toBe(before.total);
+  });
+});
+
+describe("getConfiguration", () => {
+  it("lets members read, answers NotFound to outsiders and for malformed ids, and lets admins read", async () => {
+    const { viewer, outsider, admin, configuration } = await scenario();
+    const read = await getConfiguration(viewer.actor, configuration.id);
+    expect(read.document).toEqual(braneAntibranePair);
+    expect(read.canEdit).toBe(false);
+    await expect(getConfiguration(outsider.actor, configuration.id)).rejects.toBeInstanceOf(NotFoundError);
+    await expect(getConfiguration(outsider.actor, "1234")).rejects.toBeInstanceOf(NotFoundError);
+    expect((await getConfiguration(admin.actor, configuration.id)).role).toBe("owner");
+  });
+});
+
+describe("updateConfiguration", () => {
+  it("saves a new revision and result when the version matches", async () => {
+    const { owner, configuration } = await scenario();
+    const saved = await updateConfiguration(owner.actor, configuration.id, {
+      expectedVersion: 1,
+      document: moved(braneAntibranePair, 5),
+      message: "Pulled apart",
+      result: fixtureResult("0.133", false),
+      computeMs: 2,
+    });
+    expect(saved).toMatchObject({ version: 2, tachyonic: false, lightestMassSquared: 0.133 });
+    expect(saved.currentRevision?.number).toBe(2);
+    const second = await getRevisionByNumber(owner.actor, configuration.id, 2);
+    expect(second.document.stacks[1]?.position["9"]).toBe(5);
+    expect(second.message).toBe("Pulled apart");
+    expect((await getRevision(owner.actor, second.id)).number).toBe(2);
+    const first = await getRevisionByNumber(owner.actor, configuration.id, 1);
+    expect(first.document).toEqual(braneAntibranePair);
+    expect(first.isCurrent).toBe(false);
+  });
+
+  it("throws ConflictError with the current version on a stale save and writes nothing", async () => {
+    const { editor, owner, configuration } = await scenario();
+    await updateConfiguration(editor.actor, configuration.id, {
+      expectedVersion: 1,
+      document: moved(braneAntibranePair, 2),
+      message: "Editor's change",
+      result: fixtureResult("-0.1", true),
+      computeMs: 1,
+    });
+    const before = await countRows(configuration.id);
+    const stale = updateConfiguration(owner.actor, configuration.id, {
+      expectedVersion: 1,
+      document: moved(braneAntibranePair, 9),
+      message: "Owner's stale change",
+      result: fixtureResult("1", false),
+      computeMs: 1,
+    });
+    await expect(stale).rejects.toBeInstanceOf(ConflictError);
+    await expect(stale).rejects.toMatchObject({ currentVersion: 2, status: 409 });
+    expect(await countRows(configuration.id)).toEqual(before);
+    const current = await getConfiguration(owner.actor, configuration.id);
+    expect(current.version).toBe(2);
+    expect(current.document.stacks[1]?.position["9"]).toBe(2);
+  });
+
+  it("accepts exactly one of several concurrent saves from the same version", async () => {
+    const { editor, configuration } = await scenario();
+    const attempts = await Promise.allSettled(
+      [1, 2, 3, 4, 5, 6].map((y) =>
+        updateConfiguration(editor.actor, configuration.id, {
+          expectedVersion: 1,
+          document: moved(braneAntibranePair, y),
+          message: `Try ${y}`,
+          result: fixtureResult("0", false),
+          computeMs: 1,
+        }),
+      ),
+    );
+    const accepted = attempts.filter((attempt) => attempt.status === "fulfilled");
+    const rejected = attempts.filter((attempt) => attempt.status === "rejected");
+    expect(accepted).toHaveLength(1);
+    expect(rejected.every((attempt) => attempt.reason instanceof ConflictError)).toBe(true);
+    expect((await listRevisions(editor.actor, configuration.id)).map((revision) => revision.number)).toEqual([2, 1]);
+  });
+
+  it("refuses a viewer with ForbiddenError and an outsider with NotFoundError", async () => {
+    const { viewer, outsider, configuration } = await scenario();
+    const input = {
+      expectedVersion: 1,
+      document: moved(braneAntibranePair, 3),
+      message: "Not allowed",
+      result: fixtureResult("0", false),
+      computeMs: 1,
+    };
+    const before = await countRows(configuration.id);
+    await expect(updateConfiguration(viewer.actor, configuration.id, input)).rejects.toBeInstanceOf(ForbiddenError);
+    await expect(updateConfiguration(outsider.actor, configuration.id, input)).rejects.toBeInstanceOf(NotFoundError);
+    expect(await countRows(configuration.id)).toEqual(before);
+  });
+});
+
+describe("forkConfiguration", () => {
+  it("copies the chosen revision into the actor's space and records where it came from", async () => {
+    const { editor, viewer, configuration } = await scenario();
+    const firstRevisionId = configuration.currentRevision?.id ?? "";
+    await updateConfiguration(editor.actor, configuration.id, {
+      expectedVersion: 1,
+      document: moved(braneAntibranePair, 7),
+      message: "Later change",
+      result: fixtureResult("1", false),
+      computeMs: 1,
+    });
+    const fork = await forkConfiguration(viewer.actor, configuration.id, {
+      targetGroupId: viewer.personalGroupId,
+      revisionId: firstRevisionId,
+    });
+    expect(fork).toMatchObject({
+      version: 1,
+      group: { id: viewer.personalGroupId, kind: "personal" },
+      role: "owner",
+      tachyonic: true,
+      forkedFromConfigurationId: configuration.id,
+      forkedFrom: {
+        configurationId: configuration.id,
+        revisionId: firstRevisionId,
+        revisionNumber: 1,
+        title: braneAntibranePair.title,
+      },
+    });
+    expect(fork.document).toEqual(braneAntibranePair);
+    const [revision] = await listRevisions(viewer.actor, fork.id);
+    expect(revision?.message).toBe(`Forked from "${braneAntibranePair.title}", revision 1`);
+    expect((await getResultForRevision(viewer.actor, revision?.id ?? "")).result.lightest[0]?.massSquared).toBe(
+      "-0.443",
+    );
+  });
+
+  it("needs read access to the source and editor access to the target", async () => {
+    const { viewer, outsider, group, configuration } = await scenario();
+    await expect(
+      forkConfiguration(outsider.actor, configuration.id, { targetGroupId: outsider.personalGroupId }),
+    ).rejects.toBeInstanceOf(NotFoundError);
+    await expect(
+      forkConfiguration(viewer.actor, configuration.id, { targetGroupId: group.id }),
+    ).rejects.toBeInstanceOf(ForbiddenError);
+    await expect(
+      forkConfiguration(viewer.actor, configuration.id, { targetGroupId: outsider.personalGroupId }),
+    ).rejects.toMatchObject({ status: 422, issues: [{ path: ["targetGroupId"] }] });
+  });
+});
+
+describe("restoreRevision", () => {
+  it("restores an old document as a new revision without rewriting history", async () => {
+    const { editor, configuration } = await scenario();
+    const first = configuration.currentRevision?.id ?? "";
+    await updateConfiguration(editor.actor, configuration.id, {
+      expectedVersion: 1,
+      document: moved(braneAntibranePair, 6),
+      message: "Apart",
+      result: fixtureResult("0.5", false),
+      computeMs: 1,
+    });
+    const restored = await restoreRevision(editor.actor, configuration.id, first, { expectedVersion: 2 });
+    expect(restored).toMatchObject({ version: 3, tachyonic: true, lightestMassSquared: -0.443 });
+    expect(restored.document).toEqual(braneAntibranePair);
+    const history = await listRevisions(editor.actor, configuration.id);
+    expect(history.map((revision) => [revision.number, revision.message])).toEqual([
+      [3, "Restored revision 1"],
+      [2, "Apart"],
+      [1, "First sketch"],
+    ]);
+    await expect(
+      restoreRevision(editor.actor, configuration.id, first, { expectedVersion: 2 }),
+    ).rejects.toBeInstanceOf(ConflictError);
+  });
+
+  it("refuses viewers", async () => {
+    const { viewer, configuration } = await scenario();
+    await expect(
+      restoreRevision(viewer.actor, configuration.id, configuration.currentRevision?.id ?? ""),
+    ).rejects.toBeInstanceOf(ForbiddenError);
+  });
+});
+
+describe("soft deletion", () => {
+  it("hides a deleted configuration and can bring it back", async () => {
+    const { editor, viewer, group, configuration } = await scenario();
+    await expect(softDeleteConfiguration(viewer.actor, configuration.id)).rejects.toBeInstanceOf(ForbiddenError);
+    await softDeleteConfiguration(editor.actor, configuration.id);
+    await expect(getConfiguration(editor.actor, configuration.id)).rejects.toBeInstanceOf(NotFoundError);
+    expect((await listConfigurationsForGroup(editor.actor, group.id)).total).toBe(0);
+    const [row] = await db.select().from(configurations).where(eq(configurations.id, configuration.id));
+    expect(row?.deletedAt).toBeInstanceOf(Date);
+    const back = await undeleteConfiguration(editor.actor, configuration.id);
+    expect(back.id).toBe(configuration.id);
+    expect((await listConfigurationsForGroup(editor.actor, group.id)).total).toBe(1);
+  });
+});
+
+describe("lists", () => {
+  it("lists a group's configurations for members only, with search and sorting", async () => {
+    const { editor, viewer, outsider, group } = await scenario();
+    await createConfiguration(editor.actor, group.id, twoTwoBraneStacks, "Second", fixtureResult("1/2", false), 1);
+    const byTitle = await listConfigurationsForGroup(viewer.actor, group.id, { sort: "title" });
+    expect(byTitle.items.map((item) => item.title)).toEqual([braneAntibranePair.title, twoTwoBraneStacks.title]);
+    const byLightest = await listConfigurationsForGroup(viewer.actor, group.id, { sort: "lightest", direction: "asc" });
+    expect(byLightest.items.map((item) => item.lightestMassSquared)).toEqual([-0.443, 0.5]);
+    const searched = await listConfigurationsForGroup(viewer.actor, group.id, { search: "d2 STACK" });
+    expect(searched.items.map((item) => item.title)).toEqual([twoTwoBraneStacks.title]);
+    await expect(listConfigurationsForGroup(outsider.actor, group.id)).rejects.toBeInstanceOf(NotFoundError);
+  });
+
+  it("lists the actor's own configurations, or everything readable", async () => {
+    const { editor, viewer, group } = await scenario();
+    expect((await listConfigurationsForUser(editor.actor)).total).toBe(1);
+    expect((await listConfigurationsForUser(viewer.actor)).total).toBe(0);
+    const readable = await listConfigurationsForUser(viewer.actor, { scope: "accessible" });
+    expect(readable.items.map((item) => item.group.id)).toEqual([group.id]);
+  });
+});
+
+describe("lab starters", () => {
+  it("lets a lab owner publish a starter and see the students' forks", async () => {
+    const instructor = await createTestUser({ label: "instructor" });
+    const student = await createTestUser({ label: "student" });
+    const lab = await createTestGroup(instructor.actor, [{ actor: student.actor, role: "viewer" }], "lab");
+    const starter = await createConfiguration(
+      instructor.actor,
+      lab.id,
+      twoTwoBraneStacks,
+      "Starter",
+      fixtureResult("1/4", false),
+      1,
+      { isStarter: true },
+    );
+    expect(starter.isStarter).toBe(true);
+    const fork = await forkConfiguration(student.actor, starter.id, { targetGroupId: student.personalGroupId });
+    const forks = await listForksOfConfiguration(instructor.actor, starter.id);
+    expect(forks.items.map((item) => [item.id, item.author.id])).toEqual([[fork.id, student.actor.id]]);
+    await expect(listForksOfConfiguration(student.actor, starter.id)).rejects.toBeInstanceOf(ForbiddenError);
+    await expect(setConfigurationStarter(student.actor, starter.id, false)).rejects.toBeInstanceOf(ForbiddenError);
+  });
+
+  it("refuses starters outside lab groups", async () => {
+    const { owner, group } = await scenario();
+    await expect(
+      createConfiguration(owner.actor, group.id, twoTwoBraneStacks, "", fixtureResult("0", false), 1, {
+        isStarter: true,
+      }),
+    ).rejects.toMatchObject({ status: 422, issues: [{ path: ["isStarter"] }] });
+    expect((await listConfigurationsForGroup(owner.actor, group.id)).total).toBe(1);
+  });
+});
