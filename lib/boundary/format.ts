@@ -22,7 +22,16 @@ export interface FormatDecimalOptions {
  */
 export function formatDecimal(value: number, options: FormatDecimalOptions = {}): string {
   if (!Number.isFinite(value)) return String(value);
-  const rounded = Number(value.toPrecision(options.significantDigits ?? 12));
-  // Rounding can produce -0 (e.g. -1e-20 at 12 digits stays tiny, but -0 itself must print as 0).
-  return Object.is(rounded, -0) ? "0" : String(rounded);
+  const text = value.toPrecision(options.significantDigits ?? 12);
+  // Exponent forms (below 1e-6 or beyond the digits) are normalised by a round trip through Number.
+  if (text.includes("e")) return String(Number(text));
+  // Trimming the zeros by hand is several times faster than a Number/String round trip, and this
+  // runs for every level row of every separated pair.
+  let end = text.length;
+  if (text.includes(".")) {
+    while (text.charCodeAt(end - 1) === 48 /* 0 */) end -= 1;
+    if (text.charCodeAt(end - 1) === 46 /* . */) end -= 1;
+  }
+  const trimmed = text.slice(0, end);
+  return trimmed === "-0" ? "0" : trimmed;
 }

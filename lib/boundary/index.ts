@@ -1,0 +1,39 @@
+/**
+ * Public surface of the spectrum engine: everything the interface, the route handlers and the
+ * exports need. The engine is pure TypeScript (no I/O, time or randomness) and runs both in the
+ * browser (live preview) and on the server (authoritative results).
+ *
+ * Conventions: alpha' = 1, lengths in units of sqrt(alpha'); see `CONVENTIONS_TEXT`.
+ */
+
+export type * from "./types";
+
+export { computeSpectrum, computeSector, createSectorContext, type SectorContext } from "./spectrum";
+export {
+  checkConfiguration,
+  configurationWarnings,
+  configurationLimits,
+  dimensionOf,
+  describeStack,
+  ConfigurationError,
+  type ConfigurationProblem,
+} from "./check";
+export {
+  classifyPair,
+  dirichletPosition,
+  type AxisClassification,
+  type PairClassification,
+  type SeparationComponent,
+} from "./classify";
+export { expandAxis, expandPair, bosonModing, fermionModing } from "./expansion";
+export { formatDecimal } from "./format";
+export {
+  ENGINE_VERSION,
+  CONVENTIONS_TEXT,
+  bosonicCriticalDimension,
+  superstringCriticalDimension,
+} from "./constants";
+export { zeroPointEnergy, zeroPointContributions } from "./zero-point";
+export { oscillatorDegeneracies, projectedDegeneracies } from "./degeneracy";
+export { countSupercharges, pairPreservesSupersymmetry } from "./supersymmetry";
+export { parseRational, formatRational, rationalToNumber, compareRational, type Rational } from "./rational";

@@ -1,0 +1,570 @@
+/**
+ * The open-string spectrum of a configuration of parallel brane stacks (physics.md, all sections).
+ *
+ * For every unordered pair of stacks, including each stack with itself, the engine classifies the
+ * axes, takes the zero-point energy a of each sector, counts states level by level (GSO-projected
+ * in type II), adds the stretching energy and the Chan-Paton multiplicity, and reads off massless
+ * content, tachyons and critical separations. It then combines the sectors into the gauge group,
+ * the lightest states and the supercharges preserved by the whole configuration.
+ *
+ * Mass formula: alpha' M^2 = (y / 2 pi)^2 + N + a with alpha' = 1 (physics.md, "Mass formula").
+ * Continuous momentum along the common Neumann directions is not included.
+ *
+ * Determinism: stacks are ordered by id (code-unit order), so neither the order of the stacks in
+ * the document nor anything else outside the configuration changes the result.
+ */
+
+import { ConfigurationError, checkConfiguration, configurationWarnings, describeStack, dimensionOf } from "./check";
+import { classifyPair, type PairClassification } from "./classify";
+import { CONVENTIONS_TEXT, ENGINE_VERSION } from "./constants";
+import { oscillatorDegeneracies, projectedDegeneracies, type OrientedCounts } from "./degeneracy";
+import { expandPair } from "./expansion";
+import { formatDecimal } from "./format";
+import {
+  addRational,
+  compareRational,
+  formatRational,
+  isNegativeRational,
+  isZeroRational,
+  parseRational,
+  rational,
+  rationalToNumber,
+  type Rational,
+} from "./rational";
+import { countSupercharges, pairPreservesSupersymmetry } from "./supersymmetry";
+import type {
+  ComputeSpectrumOptions,
+  Configuration,
+  LevelRow,
+  LightestState,
+  MasslessContent,
+  Sector,
+  SectorKind,
+  SpectrumResult,
+  Stack,
+  ZeroPoint,
+} from "./types";
+import { zeroPointEnergy } from "./zero-point";
+
+/** Default length of `SpectrumResult.lightest`. */
+const defaultLightestCount = 10;
+
+/**
+ * Computes the full spectrum result of a configuration.
+ *
+ * @param configuration - A configuration document (format 1); it is validated first and not mutated.
+ * @param options - `lightestCount`: how many entries `lightest` holds (default 10, a whole number >= 0).
+ * @returns The result of product.md ("The spectrum result"): one sector per unordered pair of
+ *   stacks (each stack with itself included), in id order; exact alpha' M^2 at zero separation
+ *   and 12-significant-digit decimals otherwise; degeneracies as decimal strings.
+ * @throws ConfigurationError (with every problem and its JSON path) when `checkConfiguration`
+ *   finds problems; RangeError for an invalid `lightestCount`.
+ * @example
+ * const result = computeSpectrum({ format: 1, title: "one D25", theory: "bosonic", stringScaleGeV: null,
+ *   levels: 1, stacks: [{ id: "a", label: "", count: 1, anti: false,
+ *   worldvolume: Array.from({ length: 25 }, (_, i) => i + 1), position: {} }] });
+ * result.sectors[0].levels.map((row) => [row.massSquared, row.states]) // => [["-1", "1"], ["0", "24"]]
+ */
+export function computeSpectrum(configuration: Configuration, options: ComputeSpectrumOptions = {}): SpectrumResult {
+  const problems = checkConfiguration(configuration);
+  if (problems.length > 0) throw new ConfigurationError(problems);
+  const lightestCount = options.lightestCount ?? defaultLightestCount;
+  if (!Number.isInteger(lightestCount) || lightestCount < 0) {
+    throw new RangeError(`lightestCount must be a whole number of at least 0, got ${String(lightestCount)}`);
+  }
+
+  const context = createSectorContext(configuration);
+  const stacks = [...configuration.stacks].sort(compareStackIds);
+  const built: BuiltSector[] = [];
+  for (let i = 0; i < stacks.length; i += 1) {
+    for (let j = i; j < stacks.length; j += 1) {
+      built.push(buildSector(stacks[i] as Stack, stacks[j] as Stack, configuration, context));
+    }
+  }
+
+  const superstring = configuration.theory !== "bosonic";
+  const supercharges = superstring ? countSupercharges(stacks) : null;
+  const warnings = configurationWarnings(configuration);
+  if (stacks.length === 0) warnings.push("The configuration has no stacks yet, so there are no open strings.");
+
+  return {
+    engineVersion: ENGINE_VERSION,
+    theory: configuration.theory,
+    dimension: context.dimension,
+    warnings,
+    gaugeGroup: describeGaugeGroup(stacks, configuration.theory, context.dimension),
+    supercharges,
+    bps: supercharges !== null && stacks.length > 0 && supercharges > 0,
+    sectors: built.map((entry) => entry.sector),
+    lightest: collectLightest(built, lightestCount),
+    conventions: CONVENTIONS_TEXT,
+  };
+}
+
+/**
+ * One level of a (sector kind, nu, orientation relation) series, with everything that does not
+ * depend on the particular pair: shared by every sector with the same key.
+ */
+export interface LevelTemplate {
+  kind: SectorKind;
+  /** Twice the oscillator level N. */
+  twiceLevel: number;
+  /** N as an exact rational string. */
+  level: string;
+  /** N + a, exact. */
+  exact: Rational;
+  /** N + a as text ("-1/2"). */
+  exactText: string;
+  /** N + a as a number. */
+  exactValue: number;
+  /** States of the string from stack a to stack b, per Chan-Paton label. */
+  ab: bigint;
+  /** States of the string from stack b to stack a, per Chan-Paton label. */
+  ba: bigint;
+}
+
+/** The counted levels of one sector kind for one nu and orientation relation. */
+export interface SectorSeries {
+  kind: SectorKind;
+  /** Zero-point energy a. */
+  zeroPoint: Rational;
+  /** Levels with surviving states, in increasing order, up to max(levels, 1). */
+  levels: LevelTemplate[];
+  /** The level with the lowest N + a, or null when nothing survives. */
+  lowest: LevelTemplate | null;
+}
+
+/**
+ * Per-call memo of `computeSpectrum`: each distinct (sector kind, nu, orientation relation) is
+ * counted once, however many sectors share it, and pair supersymmetry once per shape.
+ */
+export interface SectorContext {
+  /** Spacetime dimension D. */
+  dimension: number;
+  /** The counted series for (kind, nu, same orientation); the bosonic kind ignores orientation. */
+  series(kind: SectorKind, nu: number, sameOrientation: boolean): SectorSeries;
+  /** Supersymmetry flag of a pair of distinct stacks, memoised by worldvolumes and orientations. */
+  pairSupersymmetric(a: Stack, b: Stack): boolean;
+}
+
+/**
+ * Builds the per-call memo used by `computeSector`.
+ *
+ * @param configuration - A valid configuration (see `checkConfiguration`).
+ * @returns A fresh context; series are counted up to max(levels, 1) so that the lightest state of
+ *   every sector (always at level <= 1) is known even when fewer levels are displayed.
+ * @throws RangeError from the degeneracy and zero-point modules when asked for an nu they do not cover.
+ * @example
+ * createSectorContext(configuration).series("NS", 0, true).levels[0]?.ab // => 8n
+ */
+export function createSectorContext(configuration: Configuration): SectorContext {
+  const dimension = dimensionOf(configuration);
+  const countedLevel = Math.max(configuration.levels, 1);
+  const seriesMemo = new Map<string, SectorSeries>();
+  const susyMemo = new Map<string, boolean>();
+  return {
+    dimension,
+    series(kind, nu, sameOrientation) {
+      const key = `${kind}|${nu}|${kind === "bosonic" || sameOrientation}`;
+      let series = seriesMemo.get(key);
+      if (!series) {
+        const counts =
+          kind === "bosonic"
+            ? bosonicCounts(dimension, nu, countedLevel)
+            : projectedDegeneracies(kind, { nu, sameOrientation, maxLevel: countedLevel });
+        series = buildSeries(kind, zeroPointEnergy(kind, { dimension, nu }), counts);
+        seriesMemo.set(key, series);
+      }
+      return series;
+    },
+    pairSupersymmetric(a, b) {
+      const key = `${a.worldvolume.join(",")}|${a.anti}|${b.worldvolume.join(",")}|${b.anti}`;
+      let preserved = susyMemo.get(key);
+      if (preserved === undefined) {
+        preserved = pairPreservesSupersymmetry(a, b);
+        susyMemo.set(key, preserved);
+      }
+      return preserved;
+    },
+  };
+}
+
+/**
+ * Computes the sector of one ordered pair of stacks (a at sigma = 0, b at sigma = pi).
+ *
+ * `computeSpectrum` calls it with the pair in id order; calling it with (b, a) gives the same
+ * physics (counts, masses, zero points, tachyons) with ND and DN axes swapped and the pair reversed.
+ *
+ * @param a - Stack at sigma = 0.
+ * @param b - Stack at sigma = pi; pass the same object as `a` for the stack with itself.
+ * @param configuration - The (valid) configuration the stacks belong to.
+ * @param context - The per-call memo from `createSectorContext(configuration)`.
+ * @returns The sector: classification, zero points, level rows up to `configuration.levels`,
+ *   massless content, tachyon and critical separation, supersymmetry flag and notes.
+ * @example
+ * const context = createSectorContext(configuration);
+ * computeSector(d3, d3, configuration, context).massless[0].description
+ * // => "vector with 2 polarisations (NN axes 1-3 less one light-cone direction) and 6 scalars (positions on DD axes 4-9)"
+ */
+export function computeSector(a: Stack, b: Stack, configuration: Configuration, context: SectorContext): Sector {
+  return buildSector(a, b, configuration, context).sector;
+}
+
+/** A sector with the numeric alpha' M^2 of each of its level rows (for the lightest states). */
+interface BuiltSector {
+  sector: Sector;
+  /** alpha' M^2 of `sector.levels[i]` as a number. */
+  values: number[];
+}
+
+function buildSector(a: Stack, b: Stack, configuration: Configuration, context: SectorContext): BuiltSector {
+  const { dimension } = context;
+  const theory = configuration.theory;
+  const self = a === b;
+  const classification = classifyPair(a, b, dimension);
+  const { nu } = classification;
+  // Exact zero only when every DD difference is exactly zero (a tiny difference can square to 0).
+  const coincident = classification.separationVector.every((component) => component.delta === 0);
+  const stretch = coincident ? 0 : classification.separationSquared / (4 * Math.PI * Math.PI);
+  const sameOrientation = theory === "bosonic" || a.anti === b.anti;
+  const kinds: SectorKind[] = theory === "bosonic" ? ["bosonic"] : ["NS", "R"];
+  const notes: string[] = [];
+
+  const base = {
+    pair: [a.id, b.id] as [string, string],
+    nn: classification.nn,
+    dd: classification.dd,
+    nu,
+    separation: classification.separation,
+    chanPaton: self ? a.count * a.count : 2 * a.count * b.count,
+    supersymmetric: theory !== "bosonic" && (self || context.pairSupersymmetric(a, b)),
+    axes: expandPair(classification, theory),
+  };
+
+  // Light-cone counting needs a spatial axis that is NN or DD for both stacks.
+  if (nu > dimension - 2) {
+    notes.push(
+      "Every spatial axis is ND for this pair, so the light-cone counting of physics.md does not apply; no levels are listed.",
+    );
+    const sector = { ...base, zeroPoint: {}, tachyonic: false, criticalSeparation: null, levels: [], massless: [], notes };
+    return { sector, values: [] };
+  }
+
+  const zeroPoint: ZeroPoint = {};
+  const levels: LevelRow[] = [];
+  const values: number[] = [];
+  const massless: MasslessContent[] = [];
+  const rowContext: RowContext = {
+    self,
+    a,
+    b,
+    stretch,
+    // Chan-Paton multiplier of the per-orientation count: N_a^2 (one kind of string) or N_a N_b.
+    factor: self ? a.count * a.count : a.count * b.count,
+    stringScaleGeV: configuration.stringScaleGeV,
+  };
+  let lowest: LevelTemplate | null = null;
+  for (const kind of kinds) {
+    const series = context.series(kind, nu, sameOrientation);
+    zeroPoint[kind] = formatRational(series.zeroPoint);
+    if (series.lowest && (lowest === null || compareRational(series.lowest.exact, lowest.exact) < 0)) {
+      lowest = series.lowest;
+    }
+    for (const template of series.levels) {
+      const displayed = template.twiceLevel <= 2 * configuration.levels;
+      const massive = !coincident || !isZeroRational(template.exact);
+      if (!displayed && massive) continue;
+      const row = buildRow(template, rowContext);
+      if (!massive) massless.push(describeMassless(row, template, classification, { self, sameOrientation, a, b }));
+      if (displayed) {
+        levels.push(row);
+        values.push(stretch + template.exactValue);
+      }
+    }
+  }
+
+  const tachyonic =
+    lowest !== null && (coincident ? isNegativeRational(lowest.exact) : stretch + lowest.exactValue < 0);
+  // y_c only means something for two stacks that can be pulled apart along a common DD axis.
+  const criticalSeparation =
+    !self && classification.dd > 0 && lowest !== null && isNegativeRational(lowest.exact)
+      ? 2 * Math.PI * Math.sqrt(-lowest.exactValue)
+      : null;
+
+  notes.push(...sectorNotes({ self, a, b, classification, coincident, sameOrientation, theory, criticalSeparation }));
+  const sector = { ...base, zeroPoint, tachyonic, criticalSeparation, levels, massless, notes };
+  return { sector, values };
+}
+
+interface RowContext {
+  self: boolean;
+  a: Stack;
+  b: Stack;
+  stretch: number;
+  factor: number;
+  stringScaleGeV: number | null;
+}
+
+function buildRow(template: LevelTemplate, context: RowContext): LevelRow {
+  const { self, a, b, stretch, factor, stringScaleGeV } = context;
+  const { ab, ba } = template;
+  const value = stretch + template.exactValue;
+  const negative = stretch === 0 ? isNegativeRational(template.exact) : value < 0;
+  const mass = negative ? null : Math.sqrt(value);
+  const row: LevelRow = {
+    sector: template.kind,
+    level: template.level,
+    massSquared: stretch === 0 ? template.exactText : formatDecimal(value),
+    mass,
+    // A stack with itself has one kind of string; its N^2 labels already hold both orientations.
+    states: self || ab === ba ? ab.toString() : null,
+    withChanPaton: multiplyCount(factor, self ? ab : ab + ba),
+  };
+  if (stringScaleGeV !== null) row.massGeV = mass === null ? null : mass * stringScaleGeV;
+  if (!self && ab !== ba) {
+    const [more, fewer] = ab > ba ? ([[a, b], [b, a]] as const) : ([[b, a], [a, b]] as const);
+    const unpaired =
+      template.twiceLevel === 0 && template.kind === "R"
+        ? " The unpaired R ground state sits in the first of these orientations: which one is a sign convention of the GSO projection, and exactly one orientation holds it."
+        : "";
+    row.note =
+      `Orientations differ: ${plural(ab > ba ? ab : ba, "state")} for strings from "${more[0].id}" to "${more[1].id}", ` +
+      `${(ab > ba ? ba : ab).toString()} from "${fewer[0].id}" to "${fewer[1].id}".${unpaired}`;
+  }
+  return row;
+}
+
+/** factor * count as a decimal string, in doubles while exact and in BigInt beyond 2^53. */
+function multiplyCount(factor: number, count: bigint): string {
+  const product = factor * Number(count);
+  return Number.isSafeInteger(product) ? String(product) : (BigInt(factor) * count).toString();
+}
+
+function buildSeries(kind: SectorKind, zeroPoint: Rational, counts: readonly OrientedCounts[]): SectorSeries {
+  let lowest: LevelTemplate | null = null;
+  const levels = counts.map((count): LevelTemplate => {
+    const level = rational(count.twiceLevel, 2);
+    const exact = addRational(level, zeroPoint);
+    const template: LevelTemplate = {
+      kind,
+      twiceLevel: count.twiceLevel,
+      level: formatRational(level),
+      exact,
+      exactText: formatRational(exact),
+      exactValue: rationalToNumber(exact),
+      ab: count.ab,
+      ba: count.ba,
+    };
+    if (lowest === null || compareRational(exact, lowest.exact) < 0) lowest = template;
+    return template;
+  });
+  return { kind, zeroPoint, levels, lowest };
+}
+
+interface MasslessStacks {
+  self: boolean;
+  sameOrientation: boolean;
+  a: Stack;
+  b: Stack;
+}
+
+function describeMassless(
+  row: LevelRow,
+  counts: Pick<LevelTemplate, "ab" | "ba">,
+  classification: PairClassification,
+  stacks: MasslessStacks,
+): MasslessContent {
+  const { self, sameOrientation, a, b } = stacks;
+  const states = row.states ?? (counts.ab + counts.ba).toString();
+  const content = (description: string): MasslessContent => ({
+    description,
+    sector: row.sector,
+    states,
+    withChanPaton: row.withChanPaton,
+  });
+  const matter = self ? "" : "bifundamental ";
+
+  if (row.sector === "R") {
+    if (self) return content(`${plural(states, "fermion state")} (superpartners of the vector and scalars, adjoint of U(${a.count}))`);
+    if (counts.ab !== counts.ba) {
+      const holder = counts.ab > counts.ba ? `"${a.id}" to "${b.id}"` : `"${b.id}" to "${a.id}"`;
+      return content(`${plural(states, "chiral fermion state")} (strings from ${holder} only)`);
+    }
+    if (classification.nu === 0 && !sameOrientation) {
+      return content(`${plural(states, `${matter}fermion state`)} per orientation, of the opposite chirality to the brane-brane case`);
+    }
+    return content(`${plural(states, `${matter}fermion state`)} per orientation`);
+  }
+
+  // Bosonic alpha_{-1} or NS psi_{-1/2}: one state per transverse axis, as in physics.md.
+  const firstExcited = (row.sector === "bosonic" && row.level === "1") || (row.sector === "NS" && row.level === "1/2");
+  if (classification.nu === 0 && firstExcited) {
+    const nnAxes = axesOfType(classification, "NN");
+    const ddAxes = axesOfType(classification, "DD");
+    const ddList = `DD ${ddAxes.length === 1 ? "axis" : "axes"} ${formatAxisList(ddAxes)}`;
+    if (nnAxes.length === 0) {
+      return content(
+        `${plural(states, "state")} of transverse motion along the ${ddList} (${matter}positions); a 0+1-dimensional ` +
+          "worldvolume carries no vector polarisations, and the light-cone count keeps D - 2 of them",
+      );
+    }
+    const scalars = `${plural(ddAxes.length, `${matter}scalar`)} (positions on ${ddList})`;
+    const vector = `${matter}vector with ${plural(nnAxes.length - 1, "polarisation")} (NN axes ${formatAxisList(nnAxes)} less one light-cone direction)`;
+    const wBoson = self ? "" : "; W-boson-like: massless because the stacks coincide";
+    return content(ddAxes.length > 0 ? `${vector} and ${scalars}${wBoson}` : `${vector}${wBoson}`);
+  }
+  if (self) return content(`${plural(states, "scalar state")} (adjoint of U(${a.count}))`);
+  const hyper = classification.nu === 4 && row.sector === "NS" ? "; hypermultiplet-like together with the R fermions" : "";
+  return content(`${plural(states, `${matter}scalar state`)} per orientation, localised on the common worldvolume${hyper}`);
+}
+
+interface NoteInput {
+  self: boolean;
+  a: Stack;
+  b: Stack;
+  classification: PairClassification;
+  coincident: boolean;
+  sameOrientation: boolean;
+  theory: Configuration["theory"];
+  criticalSeparation: number | null;
+}
+
+function sectorNotes(input: NoteInput): string[] {
+  const { self, a, b, classification, coincident, sameOrientation, theory, criticalSeparation } = input;
+  if (self) return [];
+  const notes: string[] = [];
+  const { nu } = classification;
+  if (nu === 0 && coincident && sameOrientation) {
+    notes.push(`Coincident stacks: U(${a.count}) x U(${b.count}) is enhanced to U(${a.count + b.count}).`);
+  }
+  if (nu === 0 && !coincident && sameOrientation) {
+    notes.push(
+      `Separated by y = ${formatDecimal(classification.separation)}: the lightest stretched strings are W-boson-like with M = y / (2 pi alpha').`,
+    );
+  }
+  if (theory !== "bosonic" && nu === 0 && !sameOrientation) {
+    notes.push("Brane-antibrane pair: the GSO projection keeps the NS tachyon and removes the massless vector.");
+  }
+  if (theory !== "bosonic" && nu === 8) {
+    notes.push(
+      "nu = 8: NS and R agree level by level except for the single R ground state of one orientation, so the force is constant rather than zero.",
+    );
+  }
+  if (theory !== "bosonic" && nu === 4) {
+    notes.push("nu = 4: NS and R agree level by level; the pair feels no force.");
+  }
+  if (criticalSeparation !== null) {
+    notes.push(
+      `Tachyonic below the critical separation y_c = ${formatDecimal(criticalSeparation)} (units of sqrt(alpha')); beyond it the lightest state is massive.`,
+    );
+  }
+  if (classification.dd === 0 && nu > 0) {
+    notes.push(`No axis is Dirichlet for both ${describeStack(a)} and ${describeStack(b)}, so they cannot be pulled apart.`);
+  }
+  return notes;
+}
+
+function describeGaugeGroup(stacks: Stack[], theory: Configuration["theory"], dimension: number): string {
+  if (stacks.length === 0) return "none";
+  // Union-find over stacks that coincide: same worldvolume, same position, same orientation.
+  const parent = stacks.map((_, index) => index);
+  const find = (index: number): number => {
+    let root = index;
+    while (parent[root] !== root) root = parent[root] as number;
+    return root;
+  };
+  for (let i = 0; i < stacks.length; i += 1) {
+    for (let j = i + 1; j < stacks.length; j += 1) {
+      const a = stacks[i] as Stack;
+      const b = stacks[j] as Stack;
+      const classification = classifyPair(a, b, dimension);
+      const coincident =
+        classification.nu === 0 && classification.separationVector.every((component) => component.delta === 0);
+      if (coincident && (theory === "bosonic" || a.anti === b.anti)) parent[find(j)] = find(i);
+    }
+  }
+  const ranks = new Map<number, { rank: number; first: number }>();
+  stacks.forEach((stack, index) => {
+    const root = find(index);
+    const entry = ranks.get(root) ?? { rank: 0, first: index };
+    entry.rank += stack.count;
+    ranks.set(root, entry);
+  });
+  return [...ranks.values()]
+    .sort((x, y) => y.rank - x.rank || x.first - y.first)
+    .map((entry) => `U(${entry.rank})`)
+    .join(" x ");
+}
+
+function collectLightest(built: BuiltSector[], count: number): LightestState[] {
+  const candidates: { value: number; sectorIndex: number; rowIndex: number; state: LightestState }[] = [];
+  built.forEach(({ sector, values }, sectorIndex) => {
+    // Within one sector kind the rows rise in level, hence in mass: only the first `count` can qualify.
+    const taken: Partial<Record<SectorKind, number>> = {};
+    sector.levels.forEach((row, rowIndex) => {
+      const seen = taken[row.sector] ?? 0;
+      if (seen >= count) return;
+      taken[row.sector] = seen + 1;
+      candidates.push({
+        value: values[rowIndex] ?? 0,
+        sectorIndex,
+        rowIndex,
+        state: {
+          pair: sector.pair,
+          sector: row.sector,
+          level: row.level,
+          massSquared: row.massSquared,
+          mass: row.mass,
+          states: row.states,
+          withChanPaton: row.withChanPaton,
+        },
+      });
+    });
+  });
+  // Rows of a sector are ordered by kind then level, so the row index breaks ties deterministically.
+  candidates.sort((x, y) => x.value - y.value || x.sectorIndex - y.sectorIndex || x.rowIndex - y.rowIndex);
+  return candidates.slice(0, count).map((candidate) => candidate.state);
+}
+
+function bosonicCounts(dimension: number, nu: number, maxLevel: number): OrientedCounts[] {
+  const series = oscillatorDegeneracies("bosonic", { dimension, nu, maxLevel });
+  const rows: OrientedCounts[] = [];
+  series.forEach((count, twiceLevel) => {
+    if (count !== 0n) rows.push({ twiceLevel, ab: count, ba: count });
+  });
+  return rows;
+}
+
+function axesOfType(classification: PairClassification, type: "NN" | "DD"): number[] {
+  return classification.axes.filter((axis) => axis.type === type).map((axis) => axis.axis);
+}
+
+/** "1-4, 7, 9" style list of axis numbers (runs of three or more are collapsed). */
+function formatAxisList(axes: number[]): string {
+  const parts: string[] = [];
+  let start = 0;
+  while (start < axes.length) {
+    let end = start;
+    while (end + 1 < axes.length && (axes[end + 1] as number) === (axes[end] as number) + 1) end += 1;
+    parts.push(end - start >= 2 ? `${axes[start]}-${axes[end]}` : axes.slice(start, end + 1).join(", "));
+    start = end + 1;
+  }
+  return parts.join(", ");
+}
+
+/** "1 state", "8 states". */
+function plural(count: number | bigint | string, noun: string): string {
+  return `${String(count)} ${noun}${String(count) === "1" ? "" : "s"}`;
+}
+
+function compareStackIds(x: Stack, y: Stack): number {
+  return x.id < y.id ? -1 : x.id > y.id ? 1 : 0;
+}
+
+function maxBig(x: bigint, y: bigint): bigint {
+  return x > y ? x : y;
+}
+
+function minBig(x: bigint, y: bigint): bigint {
+  return x < y ? x : y;
+}
