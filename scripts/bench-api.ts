@@ -18,6 +18,7 @@ import os from "node:os";
 import path from "node:path";
 import autocannon, { type RequestSpec } from "autocannon";
 import { benchPreviewDemo } from "../tests/fixtures/bench-12-stacks";
+import { printRows, quantile } from "./lib/bench-report";
 
 const baseUrl = (process.env.BENCH_URL ?? "http://127.0.0.1:3000").replace(/\/+$/, "");
 const durationSeconds = positiveNumber(process.env.BENCH_DURATION, 10);
@@ -327,19 +328,6 @@ function printReport(reports: CaseReport[], targets: TargetReport[]): void {
     ["target", "limit", "measured", "status"],
     targets.map((t) => [t.target, t.limit, t.measured, t.status + (t.note ? `: ${t.note}` : "")]),
   );
-}
-
-function printRows(header: string[], rows: string[][]): void {
-  const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? "").length)));
-  const line = (cells: string[]): string => cells.map((cell, i) => cell.padEnd(widths[i] ?? 0)).join("  ");
-  console.log(line(header));
-  console.log(widths.map((w) => "-".repeat(w)).join("  "));
-  for (const row of rows) console.log(line(row));
-}
-
-function quantile(sorted: number[], q: number): number | undefined {
-  if (sorted.length === 0) return undefined;
-  return sorted[Math.min(sorted.length - 1, Math.max(0, Math.ceil(q * sorted.length) - 1))];
 }
 
 function fixed(value: number | undefined, digits = 1): string {

@@ -10,6 +10,7 @@ import path from "node:path";
 import { performance } from "node:perf_hooks";
 import { pathToFileURL } from "node:url";
 import { countSupercharges } from "../lib/boundary/supersymmetry";
+import { printRows, quantile } from "./lib/bench-report";
 import type { Configuration } from "../lib/boundary/types";
 import { benchPreviewDemo, benchTwelveStacks } from "../tests/fixtures/bench-12-stacks";
 
@@ -24,6 +25,9 @@ interface Stats {
   p95Ms: number;
   minMs: number;
   meanMs: number;
+  /** Process CPU time per call (user + system), less sensitive than wall time to other load on the machine. */
+  cpuMedianMs: number;
+  cpuP95Ms: number;
 }
 
 interface CaseResult extends Stats {
@@ -46,7 +50,7 @@ interface MeasureOptions {
   maxSamples: number;
 }
 
-const defaultMeasure: MeasureOptions = { warmupMs: 300, minSamples: 40, minTimeMs: 1500, maxSamples: 2000 };
+const defaultMeasure: MeasureOptions = { warmupMs: 1000, minSamples: 50, minTimeMs: 3000, maxSamples: 5000 };
 
 // Results are kept here so the optimiser cannot drop the timed work.
 const sink: unknown[] = [];
@@ -68,31 +72,31 @@ function measure(fn: () => unknown, options: MeasureOptions = defaultMeasure): S
   }
   const batch = single < 0.1 ? Math.max(1, Math.ceil(0.2 / Math.max(single, 1e-4))) : 1;
   const samples: number[] = [];
+  const cpuSamples: number[] = [];
   const start = performance.now();
   while (
     samples.length < options.maxSamples &&
     (samples.length < options.minSamples || performance.now() - start < options.minTimeMs)
   ) {
+    const cpu0 = process.cpuUsage();
     const t0 = performance.now();
     for (let i = 0; i < batch; i++) sink.push(fn());
     samples.push((performance.now() - t0) / batch);
+    const cpu = process.cpuUsage(cpu0);
+    cpuSamples.push((cpu.user + cpu.system) / 1000 / batch);
     if (sink.length > 64) sink.length = 0;
   }
   samples.sort((a, b) => a - b);
+  cpuSamples.sort((a, b) => a - b);
   return {
     samples: samples.length,
-    medianMs: quantile(samples, 0.5),
-    p95Ms: quantile(samples, 0.95),
+    medianMs: quantile(samples, 0.5) ?? NaN,
+    p95Ms: quantile(samples, 0.95) ?? NaN,
     minMs: samples[0] ?? NaN,
     meanMs: samples.reduce((s, x) => s + x, 0) / samples.length,
+    cpuMedianMs: quantile(cpuSamples, 0.5) ?? NaN,
+    cpuP95Ms: quantile(cpuSamples, 0.95) ?? NaN,
   };
-}
-
-/** Nearest-rank quantile of sorted samples. */
-function quantile(sorted: number[], q: number): number {
-  if (sorted.length === 0) return NaN;
-  const index = Math.min(sorted.length - 1, Math.max(0, Math.ceil(q * sorted.length) - 1));
-  return sorted[index] as number;
 }
 
 /**
@@ -182,10 +186,10 @@ async function main(): Promise<void> {
   const missing = (what: string): string => `${what} is not available yet (${engine.problems.join("; ") || "module missing"})`;
   targets.push(
     full
-      ? judge("12-stack full result", "p95 < 25 ms", full.p95Ms < 25, `${formatMs(full.p95Ms)} ms`)
+      ? judgeLatency("12-stack full result", full, 25)
       : notMeasured("12-stack full result", "p95 < 25 ms", missing("computeSpectrum")),
     degeneracy
-      ? judge("level-200 degeneracies", "p95 < 100 ms", degeneracy.p95Ms < 100, `${formatMs(degeneracy.p95Ms)} ms`)
+      ? judgeLatency("level-200 degeneracies", degeneracy, 100)
       : notMeasured("level-200 degeneracies", "p95 < 100 ms", missing("oscillatorDegeneracies")),
     degeneracy
       ? judge(
@@ -196,7 +200,7 @@ async function main(): Promise<void> {
         )
       : notMeasured("level-200 vs yardstick", "median ratio <= 2", missing("oscillatorDegeneracies")),
     preview
-      ? judge("live preview recompute", "p95 < 4 ms", preview.p95Ms < 4, `${formatMs(preview.p95Ms)} ms`)
+      ? judgeLatency("live preview recompute", preview, 4)
       : notMeasured("live preview recompute", "p95 < 4 ms", missing("computeSpectrum")),
   );
   if (degeneracy?.note?.startsWith("DIFFERS")) {
@@ -217,6 +221,7 @@ async function main(): Promise<void> {
     platform: `${os.platform()} ${os.arch()}`,
     cpu: os.cpus()[0]?.model ?? "unknown",
     cpus: os.cpus().length,
+    loadAverage: os.loadavg(),
     yardstick: { description: yardstick.name, medianMs: yardstick.medianMs },
     cases: cases.map((c) => ({ ...c, ratioToYardstick: c.medianMs / yardstick.medianMs })),
     targets,
@@ -231,18 +236,34 @@ function judge(target: string, limit: string, pass: boolean, measured: string): 
   return { target, limit, measured, status: pass ? "PASS" : "MISS" };
 }
 
+/**
+ * A wall-clock p95 target. The status follows wall time; when only the wall time misses, the
+ * reason says so, since the machine is shared and its load inflates wall time but not CPU time.
+ */
+function judgeLatency(target: string, result: Stats, limitMs: number): TargetResult {
+  const verdict = judge(target, `p95 < ${limitMs} ms`, result.p95Ms < limitMs, `${formatMs(result.p95Ms)} ms`);
+  verdict.measured += ` (CPU ${formatMs(result.cpuP95Ms)} ms)`;
+  if (verdict.status === "MISS" && result.cpuP95Ms < limitMs) {
+    const [load] = os.loadavg();
+    verdict.reason = `CPU time p95 meets the target; wall time inflated by other load (load average ${(load ?? 0).toFixed(1)} on ${os.cpus().length} cores)`;
+  }
+  return verdict;
+}
+
 function notMeasured(target: string, limit: string, reason: string): TargetResult {
   return { target, limit, measured: "-", status: "NOT MEASURED", reason };
 }
 
 function printTable(cases: CaseResult[], yardstick: CaseResult): void {
-  const header = ["case", "samples", "median ms", "p95 ms", "min ms", "x yardstick"];
+  const header = ["case", "samples", "median ms", "p95 ms", "min ms", "CPU median", "CPU p95", "x yardstick"];
   const rows = cases.map((c) => [
     c.name + (c.note ? ` [${c.note}]` : ""),
     String(c.samples),
     formatMs(c.medianMs),
     formatMs(c.p95Ms),
     formatMs(c.minMs),
+    formatMs(c.cpuMedianMs),
+    formatMs(c.cpuP95Ms),
     (c.medianMs / yardstick.medianMs).toPrecision(3),
   ]);
   printRows(header, rows);
@@ -254,14 +275,6 @@ function printTargets(targets: TargetResult[]): void {
     ["target", "limit", "measured", "status"],
     targets.map((t) => [t.target, t.limit, t.measured, t.status + (t.reason ? `: ${t.reason}` : "")]),
   );
-}
-
-function printRows(header: string[], rows: string[][]): void {
-  const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? "").length)));
-  const line = (cells: string[]): string => cells.map((cell, i) => cell.padEnd(widths[i] ?? 0)).join("  ");
-  console.log(line(header));
-  console.log(widths.map((w) => "-".repeat(w)).join("  "));
-  for (const row of rows) console.log(line(row));
 }
 
 interface LoadedEngine {

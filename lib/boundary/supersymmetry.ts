@@ -141,16 +141,13 @@ export function toDenseMatrix(m: MonomialMatrix): GaussianInteger[][] {
  *
  * @param stack - The stack's spatial Neumann axes (any order; the product uses ascending order)
  *   and its orientation.
- * @returns The 32 x 32 matrix.
+ * @returns The 32 x 32 matrix (cached and shared for branes: do not mutate).
  * @throws RangeError when an axis is not an integer in 1..9 or appears twice.
  * @example
  * stackGamma({ worldvolume: [], anti: false }) // Gamma^0 (a D0-brane)
  */
 export function stackGamma(stack: Pick<Stack, "worldvolume" | "anti">): MonomialMatrix {
-  const axes = checkedAxes(stack.worldvolume);
-  const { gammas } = getGammas();
-  let product = gammas[0] as MonomialMatrix;
-  for (const axis of axes) product = multiplyMonomial(product, gammas[axis] as MonomialMatrix);
+  const product = braneProduct(axisMask(stack.worldvolume));
   return stack.anti ? { ...product, phase: product.phase.map((k) => (k + 2) & 3) } : product;
 }
 
@@ -186,7 +183,9 @@ export function countSupercharges(
   const chirality = options?.chirality ?? 1;
   const { weylDiagonal } = getGammas();
   const first = stacks[0] as Pick<Stack, "worldvolume" | "anti">;
-  const firstInverse = invertMonomial(stackGamma(first));
+  // (-A)^{-1} = -(A^{-1}): an antibrane's sign is carried as an extra i^2.
+  const firstInverse = invertMonomial(braneProduct(axisMask(first.worldvolume)));
+  const firstSign = first.anti ? 2 : 0;
 
   const parent = new Int8Array(spinorSize);
   // gain[v]: x_v = i^gain[v] x_parent[v]
@@ -220,11 +219,14 @@ export function countSupercharges(
   };
 
   for (let k = 1; k < stacks.length; k++) {
-    const constraint = multiplyMonomial(firstInverse, stackGamma(stacks[k] as Pick<Stack, "worldvolume" | "anti">));
+    const stack = stacks[k] as Pick<Stack, "worldvolume" | "anti">;
+    const brane = braneProduct(axisMask(stack.worldvolume));
+    const sign = firstSign + (stack.anti ? 2 : 0);
     for (let r = 0; r < spinorSize; r++) {
-      // Row r of (M - 1) x = 0 reads x_r = i^phase[r] x_column[r].
-      const c = constraint.column[r] as number;
-      const w = constraint.phase[r] as number;
+      // Row r of (M - 1) x = 0, M = Gamma_1^{-1} Gamma_k, reads x_r = i^w x_c.
+      const middle = firstInverse.column[r] as number;
+      const c = brane.column[middle] as number;
+      const w = ((firstInverse.phase[r] as number) + (brane.phase[middle] as number) + sign) & 3;
       const ra = find(r);
       const rb = find(c);
       const oa = ra === r ? 0 : (gain[r] as number);
@@ -353,16 +355,34 @@ function powerOfI(k: number): GaussianInteger {
   }
 }
 
-function checkedAxes(worldvolume: readonly number[]): number[] {
-  const axes = [...worldvolume].sort((x, y) => x - y);
-  for (let i = 0; i < axes.length; i++) {
-    const axis = axes[i] as number;
+const braneProducts = new Map<number, MonomialMatrix>();
+
+/**
+ * Gamma^0 Gamma^{i1} ... Gamma^{ip} (ascending axes) for the axis set `mask` (bit i for axis i),
+ * cached: there are at most 512 of them and a configuration reuses few.
+ */
+function braneProduct(mask: number): MonomialMatrix {
+  let product = braneProducts.get(mask);
+  if (product) return product;
+  const { gammas } = getGammas();
+  product = gammas[0] as MonomialMatrix;
+  for (let axis = 1; axis <= 9; axis++) {
+    if (mask & (1 << axis)) product = multiplyMonomial(product, gammas[axis] as MonomialMatrix);
+  }
+  braneProducts.set(mask, product);
+  return product;
+}
+
+/** Bit mask of the worldvolume axes; RangeError for an axis outside 1..9 or a repeated axis. */
+function axisMask(worldvolume: readonly number[]): number {
+  let mask = 0;
+  for (const axis of worldvolume) {
     if (!Number.isInteger(axis) || axis < 1 || axis > 9) {
       throw new RangeError(`worldvolume axis must be an integer from 1 to 9, got ${axis}`);
     }
-    if (i > 0 && axes[i - 1] === axis) {
-      throw new RangeError(`worldvolume axis ${axis} is listed twice`);
-    }
+    const bit = 1 << axis;
+    if (mask & bit) throw new RangeError(`worldvolume axis ${axis} is listed twice`);
+    mask |= bit;
   }
-  return axes;
+  return mask;
 }
