@@ -4,15 +4,15 @@
  * PASS/MISS per target and writes bench-results/engine.json. Targets are reported, not
  * asserted: the exit code is 0 unless the benchmark itself crashes.
  */
-import { existsSync, mkdirSync, writeFileSync } from "node:fs";
+import { mkdirSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { performance } from "node:perf_hooks";
-import { pathToFileURL } from "node:url";
-import { countSupercharges } from "../lib/boundary/supersymmetry";
-import { printRows, quantile } from "./lib/bench-report";
+import { computeSpectrum, countSupercharges, oscillatorDegeneracies, projectedDegeneracies } from "../lib/boundary";
 import type { Configuration } from "../lib/boundary/types";
+import { landingDemoConfiguration } from "../lib/demo-configurations";
 import { benchPreviewDemo, benchTwelveStacks } from "../tests/fixtures/bench-12-stacks";
+import { printRows, quantile } from "./lib/bench-report";
 
 /** Highest oscillator level of the degeneracy case (product.md: "degeneracies to level 200"). */
 const degeneracyLevel = 200;
@@ -39,7 +39,7 @@ interface TargetResult {
   target: string;
   limit: string;
   measured: string;
-  status: "PASS" | "MISS" | "NOT MEASURED";
+  status: "PASS" | "MISS";
   reason?: string;
 }
 
@@ -128,88 +128,64 @@ function sectorCount(configuration: Configuration): number {
 async function main(): Promise<void> {
   const cases: CaseResult[] = [];
   const targets: TargetResult[] = [];
-  const engine = await loadEngine();
 
-  // (a) 12-stack full result.
-  let full: CaseResult | undefined;
-  if (engine.computeSpectrum) {
-    const compute = engine.computeSpectrum;
-    full = {
-      name: `computeSpectrum, 12 stacks (${sectorCount(benchTwelveStacks)} sectors, levels ${benchTwelveStacks.levels})`,
-      ...measure(() => compute(benchTwelveStacks)),
-    };
-    cases.push(full);
-  }
+  // (a) 12-stack full result (sectors, levels, lightest states and the supercharge count).
+  const full: CaseResult = {
+    name: `computeSpectrum, 12 stacks (${sectorCount(benchTwelveStacks)} sectors, levels ${benchTwelveStacks.levels})`,
+    ...measure(() => computeSpectrum(benchTwelveStacks)),
+  };
+  cases.push(full);
   cases.push({
-    name: "countSupercharges, 12 stacks",
+    name: "countSupercharges alone, 12 stacks",
     ...measure(() => countSupercharges(benchTwelveStacks.stacks)),
   });
 
   // (b) engine degeneracies to level 200 and (c) the yardstick computing the same series.
+  // The engine indexes by twice the level; its even entries are the integer levels the yardstick has.
+  const engineSeries = (): bigint[] =>
+    oscillatorDegeneracies("bosonic", { dimension: degeneracyBosons + 2, nu: 0, maxLevel: degeneracyLevel });
   const reference = yardstickSeries(degeneracyLevel, degeneracyBosons);
+  const produced = engineSeries();
+  const agrees = reference.every((c, k) => produced[2 * k] === c) && produced.every((c, k) => k % 2 === 0 || c === 0n);
+  const degeneracy: CaseResult = {
+    name: `engine oscillatorDegeneracies, bosonic nu = 0 sector to level ${degeneracyLevel}`,
+    ...measure(engineSeries),
+    note: agrees ? "equals the yardstick coefficients" : "DIFFERS from the yardstick coefficients",
+  };
   const yardstick: CaseResult = {
     name: `yardstick: hand-written BigInt loop, prod (1-q^n)^-${degeneracyBosons} to level ${degeneracyLevel}`,
     ...measure(() => yardstickSeries(degeneracyLevel, degeneracyBosons)),
   };
-  let degeneracy: CaseResult | undefined;
-  if (engine.degeneracies) {
-    const series = engine.degeneracies;
-    const produced = series(degeneracyLevel, degeneracyBosons);
-    const agrees = produced.length >= reference.length && reference.every((c, k) => produced[k] === c);
-    degeneracy = {
-      name: `engine degeneracies, bosonic nu = 0 sector to level ${degeneracyLevel}`,
-      ...measure(() => series(degeneracyLevel, degeneracyBosons)),
-      note: agrees ? "equals the yardstick coefficients" : "DIFFERS from the yardstick coefficients",
-    };
-    cases.push(degeneracy);
-  }
-  cases.push(yardstick);
-  if (engine.projected) {
-    const projected = engine.projected;
-    cases.push({
-      name: `engine GSO-projected NS sector, nu = 4, to level ${degeneracyLevel} (informational)`,
-      ...measure(() => projected("NS", { nu: 4, sameOrientation: true, maxLevel: degeneracyLevel })),
-    });
-  }
+  cases.push(degeneracy, yardstick);
+  cases.push({
+    name: `engine projectedDegeneracies, NS nu = 4 to level ${degeneracyLevel} (informational)`,
+    ...measure(() => projectedDegeneracies("NS", { nu: 4, sameOrientation: true, maxLevel: degeneracyLevel })),
+  });
 
-  // (d) live preview recompute.
-  let preview: CaseResult | undefined;
-  if (engine.computeSpectrum) {
-    const compute = engine.computeSpectrum;
-    preview = {
-      name: `live preview: computeSpectrum, demo (${benchPreviewDemo.stacks.length} stacks, levels ${benchPreviewDemo.levels})`,
-      ...measure(() => compute(benchPreviewDemo)),
-    };
-    cases.push(preview);
-  }
+  // (d) live preview recompute of the landing page's demo configuration.
+  const preview: CaseResult = {
+    name: `live preview: computeSpectrum, landing demo (${landingDemoConfiguration.stacks.length} stacks, levels ${landingDemoConfiguration.levels})`,
+    ...measure(() => computeSpectrum(landingDemoConfiguration)),
+  };
+  cases.push(preview);
+  cases.push({
+    name: `computeSpectrum, 4-stack bench fixture (levels ${benchPreviewDemo.levels}, informational)`,
+    ...measure(() => computeSpectrum(benchPreviewDemo)),
+  });
 
-  const missing = (what: string): string => `${what} is not available yet (${engine.problems.join("; ") || "module missing"})`;
   targets.push(
-    full
-      ? judgeLatency("12-stack full result", full, 25)
-      : notMeasured("12-stack full result", "p95 < 25 ms", missing("computeSpectrum")),
-    degeneracy
-      ? judgeLatency("level-200 degeneracies", degeneracy, 100)
-      : notMeasured("level-200 degeneracies", "p95 < 100 ms", missing("oscillatorDegeneracies")),
-    degeneracy
-      ? judge(
-          "level-200 vs yardstick",
-          "median ratio <= 2",
-          degeneracy.medianMs <= 2 * yardstick.medianMs,
-          `${(degeneracy.medianMs / yardstick.medianMs).toFixed(2)}x`,
-        )
-      : notMeasured("level-200 vs yardstick", "median ratio <= 2", missing("oscillatorDegeneracies")),
-    preview
-      ? judgeLatency("live preview recompute", preview, 4)
-      : notMeasured("live preview recompute", "p95 < 4 ms", missing("computeSpectrum")),
+    judgeLatency("12-stack full result", full, 25),
+    judgeLatency("level-200 degeneracies", degeneracy, 100),
+    judge(
+      "level-200 vs yardstick",
+      "median ratio <= 2",
+      degeneracy.medianMs <= 2 * yardstick.medianMs,
+      `${(degeneracy.medianMs / yardstick.medianMs).toFixed(2)}x`,
+    ),
+    judgeLatency("live preview recompute", preview, 4),
   );
-  if (degeneracy?.note?.startsWith("DIFFERS")) {
-    targets.push({
-      target: "level-200 correctness",
-      limit: "equal to yardstick",
-      measured: "differs",
-      status: "MISS",
-    });
+  if (!agrees) {
+    targets.push({ target: "level-200 correctness", limit: "equal to yardstick", measured: "differs", status: "MISS" });
   }
 
   printTable(cases, yardstick);
@@ -250,10 +226,6 @@ function judgeLatency(target: string, result: Stats, limitMs: number): TargetRes
   return verdict;
 }
 
-function notMeasured(target: string, limit: string, reason: string): TargetResult {
-  return { target, limit, measured: "-", status: "NOT MEASURED", reason };
-}
-
 function printTable(cases: CaseResult[], yardstick: CaseResult): void {
   const header = ["case", "samples", "median ms", "p95 ms", "min ms", "CPU median", "CPU p95", "x yardstick"];
   const rows = cases.map((c) => [
@@ -275,60 +247,6 @@ function printTargets(targets: TargetResult[]): void {
     ["target", "limit", "measured", "status"],
     targets.map((t) => [t.target, t.limit, t.measured, t.status + (t.reason ? `: ${t.reason}` : "")]),
   );
-}
-
-interface LoadedEngine {
-  computeSpectrum?: (configuration: Configuration) => unknown;
-  /** Degeneracies of prod (1 - q^n)^-bosons by integer level 0..maxLevel. */
-  degeneracies?: (maxLevel: number, bosons: number) => bigint[];
-  /** GSO-projected counts of a type II sector (informational case). */
-  projected?: (sector: "NS" | "R", options: { nu: number; sameOrientation: boolean; maxLevel: number }) => unknown;
-  problems: string[];
-}
-
-/**
- * Loads the engine modules that exist so far (they land while the benchmark is written), so
- * that the benchmark runs with whatever is there and reports the rest as not measured.
- */
-async function loadEngine(): Promise<LoadedEngine> {
-  const problems: string[] = [];
-  const loaded: LoadedEngine = { problems };
-  const index = await loadOptional("lib/boundary/index.ts", problems);
-  const compute = index?.["computeSpectrum"];
-  if (typeof compute === "function") {
-    loaded.computeSpectrum = (configuration) => (compute as (c: Configuration) => unknown)(configuration);
-  } else if (index) {
-    problems.push("lib/boundary/index.ts exports no computeSpectrum");
-  }
-  const degeneracy = await loadOptional("lib/boundary/degeneracy.ts", problems);
-  const oscillator = degeneracy?.["oscillatorDegeneracies"];
-  if (typeof oscillator === "function") {
-    const call = oscillator as (sector: "bosonic", options: { dimension: number; nu: number; maxLevel: number }) => bigint[];
-    // The engine indexes by twice the level; keep the integer levels, as the yardstick does.
-    loaded.degeneracies = (maxLevel, bosons) =>
-      call("bosonic", { dimension: bosons + 2, nu: 0, maxLevel }).filter((_, k) => k % 2 === 0);
-  } else if (degeneracy) {
-    problems.push("lib/boundary/degeneracy.ts exports no oscillatorDegeneracies");
-  }
-  const projected = degeneracy?.["projectedDegeneracies"];
-  if (typeof projected === "function") {
-    loaded.projected = projected as LoadedEngine["projected"];
-  }
-  return loaded;
-}
-
-async function loadOptional(relativePath: string, problems: string[]): Promise<Record<string, unknown> | undefined> {
-  const absolute = path.resolve(process.cwd(), relativePath);
-  if (!existsSync(absolute)) {
-    problems.push(`${relativePath} does not exist`);
-    return undefined;
-  }
-  try {
-    return (await import(pathToFileURL(absolute).href)) as Record<string, unknown>;
-  } catch (error) {
-    problems.push(`${relativePath} failed to load: ${error instanceof Error ? error.message : String(error)}`);
-    return undefined;
-  }
 }
 
 main().catch((error: unknown) => {
