@@ -1,0 +1,181 @@
+/**
+ * react-query factories and fetchers for configurations, revisions and stored results.
+ * The browser reads and writes configurations only through these.
+ */
+import { queryOptions, useMutation, useQueryClient } from "@tanstack/react-query";
+import type {
+  ConfigurationDto,
+  ConfigurationPage,
+  ConfigurationSummaryDto,
+  ResultDto,
+  RevisionDto,
+  RevisionSummaryDto,
+} from "@/db/queries/configurations";
+import type { Configuration } from "@/lib/boundary/types";
+import type { FieldIssue } from "@/lib/errors";
+import type { ListConfigurationsQuery } from "@/lib/validations/configuration-api";
+
+/** A DTO as it arrives over JSON: dates become ISO strings. */
+export type Jsonified<T> = T extends Date
+  ? string
+  : T extends Array<infer U>
+    ? Array<Jsonified<U>>
+    : T extends object
+      ? { [K in keyof T]: Jsonified<T[K]> }
+      : T;
+
+export type ConfigurationJson = Jsonified<ConfigurationDto>;
+export type ConfigurationSummaryJson = Jsonified<ConfigurationSummaryDto>;
+export type RevisionSummaryJson = Jsonified<RevisionSummaryDto>;
+export type RevisionJson = Jsonified<RevisionDto>;
+export type ResultJson = Jsonified<ResultDto>;
+export type ConfigurationPageJson = Jsonified<ConfigurationPage> & { page: number; pageSize: number };
+
+/** Filters of a configuration list, as sent in the query string. */
+export type ConfigurationListParams = Partial<Omit<ListConfigurationsQuery, "starter">> & { starter?: boolean };
+
+/** An error answer of the API, with its status and body fields. */
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly issues: FieldIssue[] = [],
+    readonly currentVersion: number | null = null,
+  ) {
+    super(message);
+    this.name = "ApiError";
+  }
+}
+
+/** Fetches JSON from the API and turns error answers into {@link ApiError}. */
+export async function apiFetch<T>(url: string, init?: RequestInit): Promise<T> {
+  let response: Response;
+  try {
+    response = await fetch(url, { ...init, headers: { accept: "application/json", ...init?.headers } });
+  } catch {
+    throw new ApiError(0, "network", "The server could not be reached. Your draft is kept in this browser.");
+  }
+  if (response.status === 204) return undefined as T;
+  const body: unknown = await response.json().catch(() => null);
+  if (!response.ok) {
+    const data = (typeof body === "object" && body !== null ? body : {}) as Record<string, unknown>;
+    throw new ApiError(
+      response.status,
+      typeof data.error === "string" ? data.error : "error",
+      typeof data.message === "string" ? data.message : `The request failed (${response.status}).`,
+      Array.isArray(data.issues) ? (data.issues as FieldIssue[]) : [],
+      typeof data.currentVersion === "number" ? data.currentVersion : null,
+    );
+  }
+  return body as T;
+}
+
+function toSearch(params: ConfigurationListParams): string {
+  const search = new URLSearchParams();
+  for (const [key, value] of Object.entries(params)) {
+    if (value === undefined || value === null || value === "") continue;
+    search.set(key, String(value));
+  }
+  const text = search.toString();
+  return text ? `?${text}` : "";
+}
+
+/** Query factories: `useQuery(configurationQueries.detail(id))`. */
+export const configurationQueries = {
+  all: () => ["configurations"] as const,
+  lists: () => [...configurationQueries.all(), "list"] as const,
+  list: (params: ConfigurationListParams) =>
+    queryOptions({
+      queryKey: [...configurationQueries.lists(), params] as const,
+      queryFn: () => apiFetch<ConfigurationPageJson>(`/api/configurations${toSearch(params)}`),
+      placeholderData: (previous) => previous,
+    }),
+  detail: (id: string) =>
+    queryOptions({
+      queryKey: [...configurationQueries.all(), "detail", id] as const,
+      queryFn: () => apiFetch<ConfigurationJson>(`/api/configurations/${id}`),
+    }),
+  revisions: (id: string) =>
+    queryOptions({
+      queryKey: [...configurationQueries.all(), "revisions", id] as const,
+      queryFn: () => apiFetch<{ items: RevisionSummaryJson[] }>(`/api/configurations/${id}/revisions`),
+    }),
+  revision: (id: string, revisionId: string) =>
+    queryOptions({
+      queryKey: [...configurationQueries.all(), "revision", id, revisionId] as const,
+      queryFn: () => apiFetch<RevisionJson>(`/api/configurations/${id}/revisions/${revisionId}`),
+      staleTime: Number.POSITIVE_INFINITY,
+    }),
+  result: (id: string, revisionId: string) =>
+    queryOptions({
+      queryKey: [...configurationQueries.all(), "result", id, revisionId] as const,
+      queryFn: () => apiFetch<ResultJson>(`/api/configurations/${id}/revisions/${revisionId}/result`),
+      // Revisions are immutable, and so are their stored results.
+      staleTime: Number.POSITIVE_INFINITY,
+    }),
+};
+
+/** Creates a configuration; invalidates the lists. */
+export function useCreateConfiguration() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (input: { groupId: string; document: Configuration; message?: string }) =>
+      apiFetch<ConfigurationJson>("/api/configurations", {
+        method: "POST",
+        headers: { "content-type": "application/json" },
+        body: JSON.stringify(input),
+      }),
+    onSuccess: (created) => {
+      client.setQueryData(configurationQueries.detail(created.id).queryKey, created);
+      void client.invalidateQueries({ queryKey: configurationQueries.lists() });
+    },
+  });
+}
+
+/** Saves a new revision with a version check (409 -> ApiError with `currentVersion`). */
+export function useUpdateConfiguration(id: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (input: { document: Configuration; message: string; expectedVersion: number }) =>
+      apiFetch<ConfigurationJson>(`/api/configurations/${id}`, {
+        method: "PUT",
+        headers: { "content-type": "application/json", "if-match": `"${input.expectedVersion}"` },
+        body: JSON.stringify({ document: input.document, message: input.message }),
+      }),
+    onSuccess: (updated) => {
+      client.setQueryData(configurationQueries.detail(id).queryKey, updated);
+      void client.invalidateQueries({ queryKey: configurationQueries.revisions(id).queryKey });
+      void client.invalidateQueries({ queryKey: configurationQueries.lists() });
+    },
+  });
+}
+
+/** Forks a configuration (optionally a given revision) into a group. */
+export function useForkConfiguration(id: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (input: { targetGroupId: string; revisionId?: string; title?: string }) =>
+      apiFetch<ConfigurationJson>(`/api/configurations/${id}/fork`, {
+        method: "POST",
+        headers: { "content-type": "application/json" },
+        body: JSON.stringify(input),
+      }),
+    onSuccess: (fork) => {
+      client.setQueryData(configurationQueries.detail(fork.id).queryKey, fork);
+      void client.invalidateQueries({ queryKey: configurationQueries.lists() });
+    },
+  });
+}
+
+/** Soft-deletes a configuration. */
+export function useDeleteConfiguration(id: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: () => apiFetch<void>(`/api/configurations/${id}`, { method: "DELETE" }),
+    onSuccess: () => {
+      client.removeQueries({ queryKey: configurationQueries.detail(id).queryKey });
+      void client.invalidateQueries({ queryKey: configurationQueries.lists() });
+    },
+  });
+}
