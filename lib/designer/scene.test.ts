@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import type { Configuration, SpectrumResult } from "@/lib/boundary/types";
-import { createViewport } from "@/lib/canvas/viewport";
-import { buildScene } from "./scene";
+import { createViewport, toScreen } from "@/lib/canvas/viewport";
+import { buildScene, fitSceneViewport } from "./scene";
 
 const document: Configuration = {
   format: 1,
@@ -67,5 +67,19 @@ describe("buildScene", () => {
     // 400 px at 40 px per unit shows x in [-5, 5]: 11 lines at step 1.
     expect(scene.verticalLines).toHaveLength(11);
     expect(scene.verticalLines.filter((l) => l.origin)).toEqual([{ x: 200, origin: true }]);
+  });
+});
+
+describe("fitSceneViewport", () => {
+  it("keeps the origin and every stack position inside the margin", () => {
+    const vp = fitSceneViewport(document, { horizontal: 8, vertical: 9 }, 400, 300);
+    for (const stack of scene.stacks) {
+      if (stack.shape.kind !== "point") continue;
+      const s = toScreen({ x: stack.shape.x, y: stack.shape.y }, vp);
+      expect(s.x).toBeGreaterThanOrEqual(72 - 1e-9);
+      expect(s.y).toBeGreaterThanOrEqual(72 - 1e-9);
+      expect(s.x).toBeLessThanOrEqual(400 - 72 + 1e-9);
+      expect(s.y).toBeLessThanOrEqual(300 - 72 + 1e-9);
+    }
   });
 });

@@ -6,9 +6,9 @@ import type { Configuration, SpectrumResult } from "@/lib/boundary/types";
 import { assignLanes, curveAnchors, curveBetween, curveMidpoint, curveToPoints } from "@/lib/canvas/curves";
 import type { ShapeEntry } from "@/lib/canvas/hit-test";
 import { estimateTextWidth, placeLabels, stackLabelAnchor } from "@/lib/canvas/labels";
-import { projectStack, type DisplayAxes, type ProjectedShape } from "@/lib/canvas/projection";
+import { isNeumann, positionOn, projectStack, type DisplayAxes, type ProjectedShape } from "@/lib/canvas/projection";
 import { gridLines } from "@/lib/canvas/snap";
-import { toScreen, toWorld, visibleWorldRect, type Point, type Viewport } from "@/lib/canvas/viewport";
+import { fitToPoints, toScreen, toWorld, visibleWorldRect, type Point, type Viewport } from "@/lib/canvas/viewport";
 import { formatMassSquared, lightestBySector, pairKey, stackKind } from "./spectrum-summary";
 
 /** Font size of canvas labels in pixels. */
@@ -149,6 +149,26 @@ export function buildScene(input: BuildSceneInput): Scene {
   }));
 
   return { stacks, curves, verticalLines, horizontalLines, hitEntries };
+}
+
+/**
+ * A viewport that shows the origin and every stack's position on the display axes (0 along
+ * a Neumann axis), with a margin for labels.
+ */
+export function fitSceneViewport(
+  document: Pick<Configuration, "stacks">,
+  axes: DisplayAxes,
+  width: number,
+  height: number,
+): Viewport {
+  const points: Point[] = [{ x: 0, y: 0 }];
+  for (const stack of document.stacks) {
+    points.push({
+      x: isNeumann(stack, axes.horizontal) ? 0 : positionOn(stack, axes.horizontal),
+      y: isNeumann(stack, axes.vertical) ? 0 : positionOn(stack, axes.vertical),
+    });
+  }
+  return fitToPoints(points, width, height, 72);
 }
 
 /** Stacks drawn identically share a key, so their curves fan out into lanes. */

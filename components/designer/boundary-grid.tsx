@@ -1,0 +1,313 @@
+"use client";
+
+import { useState } from "react";
+import type { Configuration, Stack } from "@/lib/boundary/types";
+import {
+  addStack,
+  deleteStacks,
+  duplicateStacks,
+  maxStackCount,
+  renameProblem,
+  renameStack,
+  setAnti,
+  setColour,
+  setCount,
+  setLabel,
+  setPosition,
+  spatialAxes,
+  toggleAxis,
+} from "@/lib/designer/document";
+import { stackKind } from "@/lib/designer/spectrum-summary";
+import type { FieldIssue } from "@/lib/errors";
+import { selectDocument, useDesignerStore } from "@/lib/stores/designer-store";
+import { cn } from "@/lib/utils";
+import { Button } from "@/components/ui/button";
+import { NumberField } from "./number-field";
+
+export interface BoundaryGridProps {
+  /** Problems per stack index (from the same zod schema as the API, and the engine's checks). */
+  issuesByStack: Map<number, FieldIssue[]>;
+  readOnly?: boolean;
+}
+
+/**
+ * The accessible equivalent of the canvas: one row per stack, one column per spatial axis
+ * (N or D, with the position in D cells), and N, brane/antibrane, label and colour. Every
+ * control is a native button or input, so the whole configuration can be built by keyboard.
+ */
+export function BoundaryGrid({ issuesByStack, readOnly = false }: BoundaryGridProps) {
+  const document = useDesignerStore(selectDocument);
+  const selection = useDesignerStore((s) => s.selection);
+  const displayAxes = useDesignerStore((s) => s.displayAxes);
+  const edit = useDesignerStore((s) => s.edit);
+  const select = useDesignerStore((s) => s.select);
+  const axes = spatialAxes(document);
+
+  function addRow() {
+    edit((doc) => addStack(doc));
+  }
+
+  return (
+    <section aria-labelledby="boundary-grid-title" className="flex min-h-0 flex-col gap-2">
+      <div className="flex items-center justify-between gap-2">
+        <h2 id="boundary-grid-title" className="text-sm font-semibold">
+          Boundary grid
+          <span className="ml-2 font-normal text-muted-foreground">
+            N = Neumann (along the brane), D = Dirichlet (fixed position, in units of &radic;&alpha;&prime;)
+          </span>
+        </h2>
+        {!readOnly ? (
+          <Button size="sm" variant="secondary" onClick={addRow}>
+            Add stack
+          </Button>
+        ) : null}
+      </div>
+      {document.stacks.length === 0 ? (
+        <p className="rounded-md border border-dashed border-border-strong px-4 py-6 text-center text-sm text-muted-foreground">
+          No stacks yet. {readOnly ? "" : "Add one with the button above, or press A on the canvas."}
+        </p>
+      ) : (
+        <div className="overflow-x-auto rounded-lg border border-border bg-surface">
+          <table className="w-full border-collapse text-xs" aria-describedby="boundary-grid-help">
+            <caption id="boundary-grid-help" className="sr-only">
+              One row per stack. Each axis cell toggles between Neumann and Dirichlet; Dirichlet cells hold the position.
+            </caption>
+            <thead className="bg-surface-muted/70 text-muted-foreground">
+              <tr>
+                <th scope="col" className="px-2 py-1.5 text-left font-semibold">
+                  <span className="sr-only">Selected</span>
+                </th>
+                <th scope="col" className="px-2 py-1.5 text-left font-semibold">Id</th>
+                <th scope="col" className="px-2 py-1.5 text-left font-semibold">Label</th>
+                <th scope="col" className="px-2 py-1.5 text-left font-semibold">Type</th>
+                <th scope="col" className="px-2 py-1.5 text-left font-semibold">N</th>
+                <th scope="col" className="px-2 py-1.5 text-left font-semibold">Charge</th>
+                {axes.map((axis) => (
+                  <th
+                    key={axis}
+                    scope="col"
+                    className={cn(
+                      "px-1 py-1.5 text-center font-mono font-semibold",
+                      (axis === displayAxes.horizontal || axis === displayAxes.vertical) && "text-accent",
+                    )}
+                    title={axis === displayAxes.horizontal ? "Horizontal on the canvas" : axis === displayAxes.vertical ? "Vertical on the canvas" : undefined}
+                  >
+                    x{axis}
+                  </th>
+                ))}
+                <th scope="col" className="px-2 py-1.5 text-left font-semibold">Colour</th>
+                <th scope="col" className="px-2 py-1.5 text-left font-semibold">
+                  <span className="sr-only">Actions</span>
+                </th>
+              </tr>
+            </thead>
+            <tbody>
+              {document.stacks.map((stack, index) => (
+                <StackRows
+                  key={stack.id}
+                  stack={stack}
+                  index={index}
+                  document={document}
+                  axes={axes}
+                  selected={selection.includes(stack.id)}
+                  issues={issuesByStack.get(index) ?? []}
+                  readOnly={readOnly}
+                  onSelect={(on) => select([stack.id], on ? "add" : "toggle")}
+                  edit={edit}
+                />
+              ))}
+            </tbody>
+          </table>
+        </div>
+      )}
+    </section>
+  );
+}
+
+interface StackRowsProps {
+  stack: Stack;
+  index: number;
+  document: Configuration;
+  axes: number[];
+  selected: boolean;
+  issues: FieldIssue[];
+  readOnly: boolean;
+  onSelect: (on: boolean) => void;
+  edit: (change: (doc: Configuration) => Configuration, options?: { gesture?: string }) => void;
+}
+
+function StackRows({ stack, index, document, axes, selected, issues, readOnly, onSelect, edit }: StackRowsProps) {
+  const [idDraft, setIdDraft] = useState(stack.id);
+  const idProblem = renameProblem(document, stack.id, idDraft.trim());
+  const issueId = `stack-${index}-issues`;
+  const describedBy = issues.length > 0 ? issueId : undefined;
+  const name = stack.label || stack.id;
+
+  function commitId() {
+    const next = idDraft.trim();
+    if (idProblem === null && next !== stack.id) edit((doc) => renameStack(doc, stack.id, next));
+    else setIdDraft(stack.id);
+  }
+
+  return (
+    <>
+      <tr
+        className={cn("border-t border-border", selected && "bg-accent-soft/60", issues.length > 0 && "bg-danger-soft/40")}
+        aria-invalid={issues.length > 0 || undefined}
+      >
+        <td className="px-2 py-1">
+          <input
+            type="checkbox"
+            checked={selected}
+            onChange={(event) => onSelect(event.target.checked)}
+            aria-label={`Select stack ${stack.id}`}
+            className="size-3.5 accent-[var(--accent)]"
+          />
+        </td>
+        <td className="px-2 py-1">
+          <input
+            value={idDraft}
+            disabled={readOnly}
+            onChange={(event) => setIdDraft(event.target.value)}
+            onBlur={commitId}
+            onKeyDown={(event) => {
+              if (event.key === "Enter") commitId();
+              if (event.key === "Escape") setIdDraft(stack.id);
+            }}
+            aria-label={`Id of stack ${stack.id}`}
+            aria-invalid={idProblem !== null || undefined}
+            aria-describedby={idProblem ? `${issueId}-id` : describedBy}
+            className="h-7 w-16 rounded border border-border-strong bg-surface px-1.5 font-mono text-xs aria-invalid:border-danger"
+          />
+          {idProblem ? (
+            <span id={`${issueId}-id`} role="alert" className="mt-0.5 block max-w-40 text-[11px] text-danger-soft-foreground">
+              {idProblem}
+            </span>
+          ) : null}
+        </td>
+        <td className="px-2 py-1">
+          <input
+            value={stack.label}
+            disabled={readOnly}
+            maxLength={64}
+            onChange={(event) => edit((doc) => setLabel(doc, stack.id, event.target.value), { gesture: `label-${stack.id}` })}
+            aria-label={`Label of stack ${stack.id}`}
+            className="h-7 w-24 rounded border border-border-strong bg-surface px-1.5 text-xs"
+          />
+        </td>
+        <td className="px-2 py-1 font-mono whitespace-nowrap" aria-label={`Stack ${stack.id} type`}>
+          <span data-testid={`stack-kind-${stack.id}`}>{stackKind(stack, document.theory)}</span>
+        </td>
+        <td className="px-2 py-1">
+          <NumberField
+            value={stack.count}
+            integer
+            min={1}
+            max={maxStackCount}
+            disabled={readOnly}
+            onCommit={(count) => edit((doc) => setCount(doc, stack.id, count), { gesture: `count-${stack.id}` })}
+            aria-label={`Number of branes N in stack ${stack.id}`}
+            className="w-12"
+          />
+        </td>
+        <td className="px-2 py-1">
+          <button
+            type="button"
+            disabled={readOnly || document.theory === "bosonic"}
+            aria-pressed={stack.anti}
+            aria-label={`Stack ${stack.id} is an antibrane`}
+            title={document.theory === "bosonic" ? "The bosonic theory has no antibranes" : "Switch brane / antibrane"}
+            onClick={() => edit((doc) => setAnti(doc, stack.id, !stack.anti))}
+            className={cn(
+              "h-7 rounded border px-2 text-xs font-medium",
+              stack.anti ? "border-foreground bg-foreground text-background" : "border-border-strong bg-surface text-foreground",
+              "disabled:opacity-50",
+            )}
+          >
+            {stack.anti ? "anti" : "brane"}
+          </button>
+        </td>
+        {axes.map((axis) => {
+          const neumann = stack.worldvolume.includes(axis);
+          const position = stack.position[String(axis)] ?? 0;
+          return (
+            <td key={axis} className={cn("px-1 py-1", neumann ? "bg-surface-muted/60" : "")}>
+              <div className="flex items-center justify-center gap-0.5">
+                <button
+                  type="button"
+                  disabled={readOnly}
+                  aria-label={`Stack ${stack.id}, axis x${axis}: ${neumann ? "Neumann" : "Dirichlet"}`}
+                  title={`Make x${axis} ${neumann ? "Dirichlet" : "Neumann"} for ${name}`}
+                  onClick={() => edit((doc) => toggleAxis(doc, stack.id, axis))}
+                  className={cn(
+                    "h-7 w-6 rounded font-mono text-xs font-semibold",
+                    neumann
+                      ? "bg-foreground text-background"
+                      : "border border-border-strong bg-surface text-foreground",
+                    "focus-visible:outline-2 focus-visible:outline-offset-1 focus-visible:outline-ring disabled:opacity-60",
+                  )}
+                  aria-describedby={describedBy}
+                >
+                  {neumann ? "N" : "D"}
+                </button>
+                {!neumann ? (
+                  <NumberField
+                    value={position}
+                    step={0.5}
+                    disabled={readOnly}
+                    onCommit={(value) => edit((doc) => setPosition(doc, stack.id, axis, value), { gesture: `pos-${stack.id}-${axis}` })}
+                    aria-label={`Position of stack ${stack.id} on x${axis}`}
+                    className="w-11"
+                  />
+                ) : null}
+              </div>
+            </td>
+          );
+        })}
+        <td className="px-2 py-1">
+          <input
+            type="color"
+            value={stack.colour ?? "#2f6f9f"}
+            disabled={readOnly}
+            onChange={(event) => edit((doc) => setColour(doc, stack.id, event.target.value), { gesture: `colour-${stack.id}` })}
+            aria-label={`Colour of stack ${stack.id}`}
+            className="h-7 w-8 cursor-pointer rounded border border-border-strong bg-surface p-0.5"
+          />
+        </td>
+        <td className="px-2 py-1 whitespace-nowrap">
+          {!readOnly ? (
+            <div className="flex gap-1">
+              <button
+                type="button"
+                onClick={() => edit((doc) => duplicateStacks(doc, [stack.id]).config)}
+                aria-label={`Duplicate stack ${stack.id}`}
+                className="h-7 rounded px-1.5 text-xs text-muted-foreground hover:bg-surface-muted hover:text-foreground"
+              >
+                Duplicate
+              </button>
+              <button
+                type="button"
+                onClick={() => edit((doc) => deleteStacks(doc, [stack.id]))}
+                aria-label={`Delete stack ${stack.id}`}
+                className="h-7 rounded px-1.5 text-xs text-danger-soft-foreground hover:bg-danger-soft"
+              >
+                Delete
+              </button>
+            </div>
+          ) : null}
+        </td>
+      </tr>
+      {issues.length > 0 ? (
+        <tr>
+          <td colSpan={axes.length + 8} className="px-3 pb-2">
+            <ul id={issueId} role="alert" className="space-y-0.5 text-xs text-danger-soft-foreground">
+              {issues.map((issue) => (
+                <li key={`${issue.path.join(".")}-${issue.message}`}>{issue.message}</li>
+              ))}
+            </ul>
+          </td>
+        </tr>
+      ) : null}
+    </>
+  );
+}
