@@ -18,8 +18,10 @@ let stopping = false;
 async function shutdown(code) {
   if (stopping) return;
   stopping = true;
-  for (const handle of services.reverse()) await stopService(handle);
-  console.log("[mooring] stopped the app and the mail server; PostgreSQL keeps running (npm run db:stop)");
+  if (services.length > 0) {
+    for (const handle of services.reverse()) await stopService(handle);
+    console.log("[mooring] stopped the app and the mail server; PostgreSQL keeps running (npm run db:stop)");
+  }
   process.exit(code);
 }
 
