@@ -1,0 +1,61 @@
+import { describe, expect, it } from "vitest";
+import { configurationSchema, formatIssues, formatJsonPath, spectrumRequestSchema } from "./configuration";
+
+const valid = {
+  format: 1,
+  title: "Probe D4 near a D8 wall",
+  theory: "IIA",
+  stringScaleGeV: null,
+  levels: 6,
+  stacks: [
+    { id: "w", label: "wall", count: 1, anti: false, worldvolume: [1, 2, 3, 4, 5, 6, 7, 8], position: { "9": 0 } },
+    { id: "p", label: "probe", count: 2, anti: false, worldvolume: [1, 2, 3, 4], position: { "5": 0, "9": 3.5 } },
+  ],
+};
+
+function issuesOf(input: unknown): { path: string; message: string }[] {
+  const parsed = configurationSchema.safeParse(input);
+  return parsed.success ? [] : formatIssues(parsed.error);
+}
+
+describe("configurationSchema", () => {
+  it("accepts the product.md example and keeps it unchanged", () => {
+    const parsed = configurationSchema.parse(valid);
+    expect(parsed).toEqual(valid);
+  });
+
+  it("fills the optional fields with their defaults", () => {
+    const parsed = configurationSchema.parse({ ...valid, stringScaleGeV: undefined, stacks: [{ id: "z", count: 1, worldvolume: [] }] });
+    expect(parsed.stringScaleGeV).toBeNull();
+    expect(parsed.stacks[0]).toEqual({ id: "z", label: "", count: 1, anti: false, worldvolume: [], position: {} });
+  });
+
+  it("adds the engine's domain problems at their JSON paths", () => {
+    const issues = issuesOf({ ...valid, stacks: [valid.stacks[0], { ...valid.stacks[1], worldvolume: [1, 2, 3] }] });
+    expect(issues).toEqual([
+      { path: "stacks[1].worldvolume", message: 'Stack "p" (probe) is a D3 brane, but IIA allows only even p (D0, D2, D4, D6, D8)' },
+    ]);
+  });
+
+  it("reports shape problems with their paths", () => {
+    expect(issuesOf({ ...valid, format: 2 }).map((issue) => issue.path)).toEqual(["format"]);
+    expect(issuesOf({ ...valid, theory: "heterotic" }).map((issue) => issue.path)).toEqual(["theory"]);
+    expect(issuesOf({ ...valid, title: "  " }).map((issue) => issue.path)).toEqual(["title"]);
+    const badColour = { ...valid, stacks: [{ ...valid.stacks[0], colour: "red" }] };
+    expect(issuesOf(badColour).map((issue) => issue.path)).toEqual(["stacks[0].colour"]);
+  });
+
+  it("uses the same rules for the spectrum request body", () => {
+    expect(spectrumRequestSchema.safeParse(valid).success).toBe(true);
+    expect(spectrumRequestSchema.safeParse({ ...valid, levels: 201 }).success).toBe(false);
+  });
+});
+
+describe("formatJsonPath", () => {
+  it("writes indices in brackets and non-identifier keys quoted", () => {
+    expect(formatJsonPath(["stacks", 1, "worldvolume"])).toBe("stacks[1].worldvolume");
+    expect(formatJsonPath(["stacks", 0, "position", "9"])).toBe('stacks[0].position["9"]');
+    expect(formatJsonPath([])).toBe("");
+    expect(formatJsonPath([0])).toBe("[0]");
+  });
+});

@@ -1,0 +1,91 @@
+import { z } from "zod";
+import { checkConfiguration } from "@/lib/boundary/check";
+import type { Configuration, Stack } from "@/lib/boundary/types";
+
+/**
+ * Shapes of a configuration document (format 1, product.md "The configuration file"). The
+ * schema checks types and text lengths; the physics rules (p parity per theory, axis ranges,
+ * limits, unique ids, positions on Dirichlet axes) come from `checkConfiguration`, added as
+ * issues at their JSON paths so that there is one source of truth for them.
+ */
+
+const stackSchema = z.object({
+  id: z.string({ error: "A stack id must be text." }),
+  label: z.string({ error: "A label must be text." }).max(120, "Keep the label under 120 characters.").default(""),
+  count: z.number({ error: "The count must be a number." }),
+  anti: z.boolean({ error: "anti must be true or false." }).default(false),
+  worldvolume: z.array(z.number({ error: "Worldvolume axes must be numbers." }), {
+    error: "The worldvolume must be a list of axis numbers.",
+  }),
+  position: z
+    .record(z.string(), z.number({ error: "Positions must be finite numbers." }), {
+      error: 'Positions must be an object such as { "9": 3.5 }.',
+    })
+    .default({}),
+  colour: z
+    .string()
+    .regex(/^#[0-9a-fA-F]{6}$/, "The colour must be a hex colour such as #1f77b4.")
+    .optional(),
+}) satisfies z.ZodType<Stack>;
+
+const configurationShape = z.object({
+  format: z.literal(1, { error: "Only file format 1 is known." }),
+  title: z
+    .string({ error: "The title must be text." })
+    .trim()
+    .min(1, "Give the configuration a title.")
+    .max(200, "Keep the title under 200 characters."),
+  description: z.string().max(5000, "Keep the description under 5000 characters.").optional(),
+  theory: z.enum(["bosonic", "IIA", "IIB"], { error: 'The theory must be "bosonic", "IIA" or "IIB".' }),
+  dimension: z.number({ error: "The dimension must be a number." }).optional(),
+  stringScaleGeV: z.number({ error: "The string scale must be a number of GeV or null." }).nullable().default(null),
+  levels: z.number({ error: "Levels must be a number." }),
+  stacks: z.array(stackSchema, { error: "Stacks must be a list." }),
+});
+
+/**
+ * A configuration document: shape checks plus every problem `checkConfiguration` finds, each at
+ * its JSON path. `label`, `anti`, `position` and `stringScaleGeV` may be left out (defaults "",
+ * false, {} and null).
+ *
+ * @example
+ * configurationSchema.safeParse(document).success
+ */
+export const configurationSchema = configurationShape.superRefine((configuration, context) => {
+  for (const problem of checkConfiguration(configuration)) {
+    context.addIssue({ code: "custom", path: problem.path, message: problem.message });
+  }
+}) satisfies z.ZodType<Configuration>;
+
+/** Body of `POST /api/spectrum`: the configuration document itself. */
+export const spectrumRequestSchema = configurationSchema;
+
+/** One validation problem with a readable JSON path such as `stacks[1].worldvolume`. */
+export interface FormattedIssue {
+  /** JSON path: `.key` for identifier keys, `["key"]` for others, `[n]` for indices; "" for the root. */
+  path: string;
+  message: string;
+}
+
+/**
+ * Flattens a zod error into `{ path, message }` pairs with JSON paths.
+ *
+ * @example
+ * formatIssues(error) // => [{ path: "stacks[1].worldvolume", message: "..." }]
+ */
+export function formatIssues(error: z.ZodError): FormattedIssue[] {
+  return error.issues.map((issue) => ({ path: formatJsonPath(issue.path), message: issue.message }));
+}
+
+/**
+ * Formats a path as JSON-path text: `["stacks", 0, "position", "9"]` -> `stacks[0].position["9"]`.
+ */
+export function formatJsonPath(path: readonly PropertyKey[]): string {
+  let text = "";
+  for (const key of path) {
+    if (typeof key === "number") text += `[${key}]`;
+    else if (typeof key === "string" && /^[A-Za-z_$][\w$]*$/.test(key)) text += text ? `.${key}` : key;
+    else text += `[${JSON.stringify(String(key))}]`;
+  }
+  return text;
+}
