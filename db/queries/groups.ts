@@ -48,6 +48,15 @@ export interface MemberDto {
   joinedAt: Date;
 }
 
+/** The columns of a MemberDto (memberships joined with users). */
+const memberColumns = {
+  userId: users.id,
+  name: users.name,
+  email: users.email,
+  role: memberships.role,
+  joinedAt: memberships.createdAt,
+};
+
 /** Input of `createGroup`. Personal groups are created only with their account. */
 export interface CreateGroupInput {
   name: string;
@@ -211,13 +220,7 @@ export async function listMembers(actor: Actor | null, groupId: string): Promise
   assertUuid(groupId, "group");
   await requireGroupRole(db, actor, groupId, "viewer");
   return db
-    .select({
-      userId: users.id,
-      name: users.name,
-      email: users.email,
-      role: memberships.role,
-      joinedAt: memberships.createdAt,
-    })
+    .select(memberColumns)
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))
     .where(and(eq(memberships.groupId, groupId), isNull(users.deletedAt)))
@@ -269,13 +272,7 @@ export async function setMemberRole(
       details: { from: current.role, to: role },
     });
     const [member] = await tx
-      .select({
-        userId: users.id,
-        name: users.name,
-        email: users.email,
-        role: memberships.role,
-        joinedAt: memberships.createdAt,
-      })
+      .select(memberColumns)
       .from(memberships)
       .innerJoin(users, eq(users.id, memberships.userId))
       .where(and(eq(memberships.groupId, groupId), eq(memberships.userId, userId)));
