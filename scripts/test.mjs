@@ -4,7 +4,7 @@
 // 127.0.0.1:3100 with its own fresh `mooring_e2e` database and fake mail server.
 // `node scripts/test.mjs unit integration` runs only the named parts (unit, integration, e2e).
 import { rmSync } from "node:fs";
-import { appEnv, buildApp, dataDir, runNpmScriptIfPresent, startApp, startMaildev } from "./lib/app.mjs";
+import { appEnv, buildApp, clearMailbox, dataDir, runNpmScriptIfPresent, startApp, startMaildev } from "./lib/app.mjs";
 import { findFreePort, freePortNear } from "./lib/net.mjs";
 import {
   clusterState,
@@ -145,13 +145,19 @@ async function main() {
   log(`PostgreSQL on 127.0.0.1:${pg.port}`);
   const secret = authSecret();
 
-  const testEnv = appEnv({
-    databaseUrl: databaseUrl("mooring_test", pg.port),
-    appPort: 3100,
-    smtpPort: 1026,
-    mailboxPort: 1081,
-    secret,
-  });
+  // One fake mail server for the integration and browser tests (both may send mail).
+  const appPort = await freePortNear(3100);
+  const smtpPort = await freePortNear(1026);
+  const mailboxPort = await freePortNear(smtpPort === 1081 ? 1082 : 1081);
+  const ports = { appPort, smtpPort, mailboxPort, secret };
+  const testEnv = appEnv({ databaseUrl: databaseUrl("mooring_test", pg.port), ...ports });
+  const e2eEnv = appEnv({ databaseUrl: databaseUrl("mooring_e2e", pg.port), ...ports });
+  if (selected.has("integration") || selected.has("e2e")) {
+    const mailDir = dataDir("maildev-test");
+    rmSync(mailDir, { recursive: true, force: true });
+    await timed("maildev", () => startMaildev({ smtpPort, webPort: mailboxPort, dir: mailDir, services }));
+    log(`fake mail server: SMTP 127.0.0.1:${smtpPort}, API ${testEnv.MAILBOX_URL}`);
+  }
 
   if (selected.has("unit")) {
     await step("unit tests", () => runStep(bin("vitest"), ["run", "--project", "unit", "--passWithNoTests"], { env: testEnv }), "vitest");
@@ -169,20 +175,14 @@ async function main() {
   }
 
   if (selected.has("e2e")) {
-    const appPort = await freePortNear(3100);
-    const smtpPort = await freePortNear(1026);
-    const mailboxPort = await freePortNear(smtpPort === 1081 ? 1082 : 1081);
-    const e2eEnv = appEnv({ databaseUrl: databaseUrl("mooring_e2e", pg.port), appPort, smtpPort, mailboxPort, secret });
     const ready =
       (await step("fresh database mooring_e2e", () => freshDatabase("mooring_e2e", pg.port, e2eEnv))) &&
       (await step("seed demo data into mooring_e2e", () => runNpmScriptIfPresent("db:seed", e2eEnv, "demo data"))) &&
       (await step("next build", () => buildApp(e2eEnv)));
     if (ready) {
-      const mailDir = dataDir("maildev-e2e");
-      rmSync(mailDir, { recursive: true, force: true });
-      const serving = await step("start maildev and next start", async () => {
-        await startMaildev({ smtpPort, webPort: mailboxPort, dir: mailDir, services });
+      const serving = await step("next start", async () => {
         await startApp({ port: appPort, env: e2eEnv, services });
+        await clearMailbox(e2eEnv.MAILBOX_URL);
         console.log(`[test] app on ${e2eEnv.NEXTAUTH_URL}, mailbox on ${e2eEnv.MAILBOX_URL}, browser ${chromiumPath}`);
         return { code: 0, output: "" };
       });

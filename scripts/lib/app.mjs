@@ -67,6 +67,12 @@ export async function startMaildev({ smtpPort, webPort, dir, services }) {
   return handle;
 }
 
+/** Deletes every message the fake mail server holds (so browser tests start from an empty mailbox). */
+export async function clearMailbox(mailboxUrl) {
+  const response = await fetch(`${mailboxUrl}/email/all`, { method: "DELETE" });
+  if (!response.ok) throw new Error(`maildev answered ${response.status} to DELETE /email/all`);
+}
+
 /** Starts `next start` on 127.0.0.1:port from the default .next build (handle pushed on `services`) and waits until it answers. */
 export async function startApp({ port, env, services, inherit = false }) {
   const { NEXT_DIST_DIR: _ignored, ...rest } = env;
