@@ -28,6 +28,10 @@ for (const part of requested) {
   }
 }
 const selected = new Set(requested.length ? requested : parts);
+// Lets two people run the suite in one checkout at once (with different NEXT_DIST_DIR too).
+const dbSuffix = process.env.MOORING_TEST_DB_SUFFIX ? `_${process.env.MOORING_TEST_DB_SUFFIX}` : "";
+const testDb = `mooring_test${dbSuffix}`;
+const e2eDb = `mooring_e2e${dbSuffix}`;
 
 /** @type {{ name: string, code: number, seconds: number, passed: number, failed: number, counted: boolean }[]} */
 const results = [];
@@ -150,10 +154,10 @@ async function main() {
   const smtpPort = await freePortNear(1026);
   const mailboxPort = await freePortNear(smtpPort === 1081 ? 1082 : 1081);
   const ports = { appPort, smtpPort, mailboxPort, secret };
-  const testEnv = appEnv({ databaseUrl: databaseUrl("mooring_test", pg.port), ...ports });
-  const e2eEnv = appEnv({ databaseUrl: databaseUrl("mooring_e2e", pg.port), ...ports });
+  const testEnv = appEnv({ databaseUrl: databaseUrl(testDb, pg.port), ...ports });
+  const e2eEnv = appEnv({ databaseUrl: databaseUrl(e2eDb, pg.port), ...ports });
   if (selected.has("integration") || selected.has("e2e")) {
-    const mailDir = dataDir("maildev-test");
+    const mailDir = dataDir(`maildev-test${dbSuffix}`);
     rmSync(mailDir, { recursive: true, force: true });
     await timed("maildev", () => startMaildev({ smtpPort, webPort: mailboxPort, dir: mailDir, services }));
     log(`fake mail server: SMTP 127.0.0.1:${smtpPort}, API ${testEnv.MAILBOX_URL}`);
@@ -164,7 +168,7 @@ async function main() {
   }
 
   if (selected.has("integration")) {
-    const ready = await step("fresh database mooring_test", () => freshDatabase("mooring_test", pg.port, testEnv));
+    const ready = await step(`fresh database ${testDb}`, () => freshDatabase(testDb, pg.port, testEnv));
     if (ready) {
       await step(
         "integration tests",
@@ -176,8 +180,8 @@ async function main() {
 
   if (selected.has("e2e")) {
     const ready =
-      (await step("fresh database mooring_e2e", () => freshDatabase("mooring_e2e", pg.port, e2eEnv))) &&
-      (await step("seed demo data into mooring_e2e", () => runNpmScriptIfPresent("db:seed", e2eEnv, "demo data"))) &&
+      (await step(`fresh database ${e2eDb}`, () => freshDatabase(e2eDb, pg.port, e2eEnv))) &&
+      (await step(`seed demo data into ${e2eDb}`, () => runNpmScriptIfPresent("db:seed", e2eEnv, "demo data"))) &&
       (await step("next build", () => buildApp(e2eEnv)));
     if (ready) {
       const serving = await step("next start", async () => {

@@ -43,10 +43,9 @@ export async function runNpmScriptIfPresent(script, env, what) {
   return { ...result, skipped: false };
 }
 
-/** `next build` into the default .next folder with the app's environment. */
+/** `next build` with the app's environment, into `.next` (or NEXT_DIST_DIR when set). */
 export function buildApp(env) {
-  const { NEXT_DIST_DIR: _ignored, ...rest } = env;
-  return runStep(bin("next"), ["build"], { env: rest });
+  return runStep(bin("next"), ["build"], { env });
 }
 
 /**
@@ -73,11 +72,13 @@ export async function clearMailbox(mailboxUrl) {
   if (!response.ok) throw new Error(`maildev answered ${response.status} to DELETE /email/all`);
 }
 
-/** Starts `next start` on 127.0.0.1:port from the default .next build (handle pushed on `services`) and waits until it answers. */
+/**
+ * Starts `next start` on 127.0.0.1:port from the build in `.next` (or NEXT_DIST_DIR), pushes its
+ * handle on `services`, and waits until it answers.
+ */
 export async function startApp({ port, env, services, inherit = false }) {
-  const { NEXT_DIST_DIR: _ignored, ...rest } = env;
   const handle = startService("app", bin("next"), ["start", "-H", "127.0.0.1", "-p", String(port)], {
-    env: { ...rest, NODE_ENV: "production" },
+    env: { ...env, NODE_ENV: "production" },
     inherit,
   });
   services.push(handle);
