@@ -179,3 +179,8 @@ export function useDeleteConfiguration(id: string) {
     },
   });
 }
+
+/** Converts a server DTO to the shape the API sends (dates as ISO strings), for server-rendered initial data. */
+export function toJson<T>(value: T): Jsonified<T> {
+  return JSON.parse(JSON.stringify(value)) as Jsonified<T>;
+}

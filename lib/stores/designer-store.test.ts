@@ -91,8 +91,16 @@ describe("select", () => {
 describe("markSaved", () => {
   it("clears the dirty flag and records the new version", () => {
     store().edit((doc) => addStack(doc));
-    store().markSaved(5);
+    store().markSaved(5, selectDocument(store()));
     expect(store()).toMatchObject({ dirty: false, baseVersion: 5, configurationId: "c1" });
+  });
+
+  it("stays dirty when the draft changed while the save was in flight", () => {
+    store().edit((doc) => addStack(doc));
+    const sent = selectDocument(store());
+    store().edit((doc) => setLabel(doc, "a", "edited meanwhile"));
+    store().markSaved(5, sent);
+    expect(store()).toMatchObject({ dirty: true, baseVersion: 5 });
   });
 });
 

@@ -64,7 +64,11 @@ export interface DesignerState {
   setTool: (tool: DesignerTool) => void;
   setViewport: (viewport: Viewport | null) => void;
   setSnapping: (on: boolean) => void;
-  markSaved: (version: number, configurationId?: string) => void;
+  /**
+   * Records a successful save of `savedDocument` as `version`. The draft stays dirty when it
+   * changed while the save was in flight.
+   */
+  markSaved: (version: number, savedDocument: Configuration) => void;
 }
 
 /** Undo steps kept by the designer. */
@@ -150,11 +154,10 @@ export const useDesignerStore = create<DesignerState>()((set, get) => ({
   setTool: (tool) => set({ tool }),
   setViewport: (viewport) => set({ viewport }),
   setSnapping: (on) => set({ snapping: on }),
-  markSaved: (version, configurationId) =>
+  markSaved: (version, savedDocument) =>
     set((state) => ({
       baseVersion: version,
-      dirty: false,
-      configurationId: configurationId ?? state.configurationId,
+      dirty: state.history.present !== savedDocument,
       lastGesture: null,
     })),
 }));

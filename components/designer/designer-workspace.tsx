@@ -1,0 +1,287 @@
+"use client";
+
+import { useQuery, useQueryClient } from "@tanstack/react-query";
+import Link from "next/link";
+import { useRouter } from "next/navigation";
+import { useCallback, useEffect, useState } from "react";
+import { setTitle } from "@/lib/designer/document";
+import { clearDraft, readDraft, writeDraft } from "@/lib/designer/draft-storage";
+import {
+  ApiError,
+  apiFetch,
+  configurationQueries,
+  useForkConfiguration,
+  useUpdateConfiguration,
+  type ConfigurationJson,
+} from "@/lib/queries/configurations";
+import { selectDocument, useDesignerStore } from "@/lib/stores/designer-store";
+import { Alert } from "@/components/ui/alert";
+import { Badge } from "@/components/ui/badge";
+import { Button, ButtonLink } from "@/components/ui/button";
+import { BoundaryGrid } from "./boundary-grid";
+import { ConflictDialog } from "./conflict-dialog";
+import { DesignerCanvas } from "./designer-canvas";
+import { ForkDialog, type WritableGroup } from "./fork-dialog";
+import { ForkedFromNote } from "./forked-from-note";
+import { SaveDialog } from "./save-dialog";
+import { SpectrumPreview } from "./spectrum-preview";
+import { useLivePreview } from "./use-live-preview";
+
+export interface DesignerWorkspaceProps {
+  initial: ConfigurationJson;
+  writableGroups: WritableGroup[];
+}
+
+type ForkMode = "saved" | "draft";
+
+/**
+ * The designer: canvas, boundary grid and live spectrum around one draft, with saving
+ * (version-checked), conflict handling, forks and a local copy of unsaved work.
+ */
+export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspaceProps) {
+  const id = initial.id;
+  const router = useRouter();
+  const queryClient = useQueryClient();
+  const { data: configuration } = useQuery({ ...configurationQueries.detail(id), initialData: initial });
+  const ready = useDesignerStore((s) => s.configurationId === id);
+  const document = useDesignerStore(selectDocument);
+  const dirty = useDesignerStore((s) => s.dirty);
+  const baseVersion = useDesignerStore((s) => s.baseVersion);
+  const { load, markSaved, edit } = useDesignerStore.getState();
+
+  const [recoveredAt, setRecoveredAt] = useState<number | null>(null);
+  const [saveOpen, setSaveOpen] = useState(false);
+  const [saveError, setSaveError] = useState<string | null>(null);
+  const [conflictVersion, setConflictVersion] = useState<number | null>(null);
+  const [forkMode, setForkMode] = useState<ForkMode | null>(null);
+  const [forkError, setForkError] = useState<string | null>(null);
+  const [forkPending, setForkPending] = useState(false);
+  const [storageWarning, setStorageWarning] = useState(false);
+
+  const update = useUpdateConfiguration(id);
+  const fork = useForkConfiguration(id);
+  const canEdit = configuration.canEdit;
+
+  // Load the saved document, or an unsaved draft of it kept in this browser.
+  useEffect(() => {
+    const draft = readDraft(window.localStorage, id);
+    if (draft && JSON.stringify(draft.document) !== JSON.stringify(initial.document)) {
+      load(draft.document, { configurationId: id, baseVersion: draft.baseVersion ?? initial.version, dirty: true });
+      setRecoveredAt(draft.savedAt);
+    } else {
+      if (draft) clearDraft(window.localStorage, id);
+      load(initial.document, { configurationId: id, baseVersion: initial.version });
+    }
+    // Only when the page opens another configuration; later server data arrives through react-query.
+  }, [id]);
+
+  // Keep every unsaved change in localStorage until it is saved.
+  useEffect(() => {
+    if (!ready || !dirty || !canEdit) return;
+    const ok = writeDraft(window.localStorage, id, { document, baseVersion, savedAt: Date.now() });
+    setStorageWarning(!ok);
+  }, [ready, dirty, document, baseVersion, id, canEdit]);
+
+  useEffect(() => {
+    if (!dirty) return;
+    const warn = (event: BeforeUnloadEvent) => event.preventDefault();
+    window.addEventListener("beforeunload", warn);
+    return () => window.removeEventListener("beforeunload", warn);
+  }, [dirty]);
+
+  const preview = useLivePreview(document);
+  const blocked = preview.issues.length > 0;
+
+  const openSave = useCallback(() => {
+    if (!canEdit) return;
+    setSaveError(null);
+    setSaveOpen(true);
+  }, [canEdit]);
+
+  function save(message: string) {
+    const state = useDesignerStore.getState();
+    const sent = state.history.present;
+    if (state.baseVersion === null) return;
+    update.mutate(
+      { document: sent, message, expectedVersion: state.baseVersion },
+      {
+        onSuccess: (updated) => {
+          markSaved(updated.version, sent);
+          if (!useDesignerStore.getState().dirty) clearDraft(window.localStorage, id);
+          setRecoveredAt(null);
+          setSaveOpen(false);
+        },
+        onError: (error) => {
+          if (error instanceof ApiError && error.status === 409) {
+            setSaveOpen(false);
+            setConflictVersion(error.currentVersion);
+          } else {
+            const detail = error instanceof ApiError && error.issues.length > 0 ? ` ${error.issues.map((i) => i.message).join(" ")}` : "";
+            setSaveError(`${error.message}${detail} Your draft is kept in this browser.`);
+          }
+        },
+      },
+    );
+  }
+
+  async function reloadLatest() {
+    const fresh = await queryClient.fetchQuery({ ...configurationQueries.detail(id), staleTime: 0 });
+    clearDraft(window.localStorage, id);
+    load(fresh.document, { configurationId: id, baseVersion: fresh.version });
+    setConflictVersion(null);
+    setRecoveredAt(null);
+  }
+
+  function discardDraft() {
+    clearDraft(window.localStorage, id);
+    load(configuration.document, { configurationId: id, baseVersion: configuration.version });
+    setRecoveredAt(null);
+  }
+
+  async function doFork(input: { targetGroupId: string; title: string }) {
+    setForkError(null);
+    setForkPending(true);
+    try {
+      const state = useDesignerStore.getState();
+      const current = configuration.currentRevision;
+      // A draft forks from the revision it was based on, when that is the one loaded here.
+      const revisionId = forkMode === "draft" && current?.number !== state.baseVersion ? undefined : current?.id;
+      const created = await fork.mutateAsync({ targetGroupId: input.targetGroupId, title: input.title, revisionId });
+      if (forkMode === "draft") {
+        // Keep the draft: save it as the fork's first change.
+        const draft = { ...state.history.present, title: input.title };
+        await apiFetch<ConfigurationJson>(`/api/configurations/${created.id}`, {
+          method: "PUT",
+          headers: { "content-type": "application/json", "if-match": `"${created.version}"` },
+          body: JSON.stringify({ document: draft, message: `Draft saved as a fork of version ${state.baseVersion ?? "?"}` }),
+        });
+        clearDraft(window.localStorage, id);
+      }
+      setForkMode(null);
+      setConflictVersion(null);
+      router.push(`/configurations/${created.id}`);
+    } catch (error) {
+      setForkError(error instanceof Error ? error.message : "The fork failed. Your draft is kept in this browser.");
+    } finally {
+      setForkPending(false);
+    }
+  }
+
+  if (!ready) {
+    return <p className="p-6 text-sm text-muted-foreground">Opening the designer&hellip;</p>;
+  }
+
+  return (
+    <div className="flex flex-col gap-3 px-4 py-3">
+      <header className="flex flex-wrap items-center gap-x-3 gap-y-2">
+        <div className="flex min-w-0 flex-1 flex-col">
+          <div className="flex items-center gap-2 text-xs text-muted-foreground">
+            <span>{configuration.group.kind === "personal" ? "Personal space" : configuration.group.name}</span>
+            <span aria-hidden="true">/</span>
+            <Badge variant="outline">{document.theory}</Badge>
+            <span data-testid="saved-version">version {baseVersion ?? configuration.version}</span>
+            <ForkedFromNote forkedFrom={configuration.forkedFrom} />
+          </div>
+          <label className="sr-only" htmlFor="configuration-title">
+            Title
+          </label>
+          <input
+            id="configuration-title"
+            value={document.title}
+            readOnly={!canEdit}
+            maxLength={120}
+            onChange={(event) => edit((doc) => setTitle(doc, event.target.value), { gesture: "title" })}
+            className="-ml-1 w-full rounded px-1 text-xl font-semibold tracking-tight hover:bg-surface-muted focus:bg-surface focus-visible:outline-2 focus-visible:outline-ring"
+          />
+        </div>
+        <div className="flex flex-wrap items-center gap-2">
+          <span role="status" aria-live="polite" className="text-xs text-muted-foreground" data-testid="save-state">
+            {dirty ? "Unsaved changes" : "All changes saved"}
+          </span>
+          <ButtonLink href={`/configurations/${id}/results`} variant="secondary" size="sm">
+            Results
+          </ButtonLink>
+          <ButtonLink href={`/configurations/${id}/history`} variant="ghost" size="sm">
+            History
+          </ButtonLink>
+          <Button variant="secondary" size="sm" onClick={() => setForkMode("saved")} disabled={writableGroups.length === 0}>
+            Fork
+          </Button>
+          {canEdit ? (
+            <Button size="sm" onClick={openSave} disabled={!dirty || blocked} title={blocked ? "Fix the problems shown in the grid first" : undefined}>
+              Save
+            </Button>
+          ) : null}
+        </div>
+      </header>
+
+      {!canEdit ? (
+        <Alert variant="info">You can view this configuration but not change it. Fork it into your own space to edit.</Alert>
+      ) : null}
+      {recoveredAt !== null ? (
+        <Alert variant="warning" title="Unsaved draft restored">
+          Your changes from {new Date(recoveredAt).toLocaleString()} were kept in this browser and are shown here.{" "}
+          <button type="button" onClick={discardDraft} className="font-medium underline">
+            Discard the draft
+          </button>
+        </Alert>
+      ) : null}
+      {storageWarning ? (
+        <Alert variant="warning">This browser refused to keep a local copy of your draft; save soon to avoid losing work.</Alert>
+      ) : null}
+
+      <div className="grid gap-3 xl:grid-cols-[minmax(0,1fr)_22rem]">
+        <div className="flex min-w-0 flex-col gap-3">
+          <DesignerCanvas result={preview.result} readOnly={!canEdit} onSaveShortcut={openSave} className="h-[min(56vh,560px)]" />
+          <BoundaryGrid issuesByStack={preview.byStack} readOnly={!canEdit} />
+          {preview.document.length > 0 ? (
+            <Alert variant="danger" title="Problems with the configuration">
+              <ul className="list-disc pl-4">
+                {preview.document.map((issue) => (
+                  <li key={`${issue.path.join(".")}-${issue.message}`}>{issue.message}</li>
+                ))}
+              </ul>
+            </Alert>
+          ) : null}
+        </div>
+        <div className="min-w-0 rounded-lg border border-border bg-surface p-3">
+          <SpectrumPreview result={preview.result} issues={preview.issues} elapsedMs={preview.elapsedMs} />
+        </div>
+      </div>
+
+      <SaveDialog open={saveOpen} onOpenChange={setSaveOpen} pending={update.isPending} error={saveError} onSave={save} />
+      <ConflictDialog
+        open={conflictVersion !== null}
+        onOpenChange={(open) => {
+          if (!open) setConflictVersion(null);
+        }}
+        currentVersion={conflictVersion}
+        baseVersion={baseVersion}
+        canFork={writableGroups.length > 0}
+        pending={forkPending}
+        onReload={() => void reloadLatest()}
+        onFork={() => {
+          setConflictVersion(null);
+          setForkMode("draft");
+        }}
+      />
+      {forkMode !== null ? (
+        <ForkDialog
+          open
+          onOpenChange={(open) => {
+            if (!open) setForkMode(null);
+          }}
+          groups={writableGroups}
+          defaultTitle={forkMode === "draft" ? `${document.title} (my version)` : `${configuration.title} (fork)`}
+          sourceLabel={forkMode === "draft" ? `version ${baseVersion ?? "?"} with your unsaved changes` : `version ${configuration.version}`}
+          pending={forkPending}
+          error={forkError}
+          onFork={(input) => void doFork(input)}
+        />
+      ) : null}
+      <p className="text-xs text-muted-foreground">
+        Need the full tables? <Link href={`/configurations/${id}/results`} className="text-accent underline-offset-2 hover:underline">Open the results panel</Link> for the saved revision.
+      </p>
+    </div>
+  );
+}
