@@ -278,14 +278,7 @@ export async function resetPasswordWithToken(
 
 /** The signed-in user's account. */
 export async function getAccount(actor: Actor | null): Promise<AccountDto> {
-  const signedIn = requireActor(actor);
-  const [user] = await db
-    .select()
-    .from(users)
-    .where(and(eq(users.id, signedIn.id), isNull(users.deletedAt)))
-    .limit(1);
-  if (!user) throw new UnauthenticatedError("Your account no longer exists.");
-  return toAccountDto(user);
+  return toAccountDto(await loadOwnAccount(actor));
 }
 
 /** Changes the signed-in user's name and/or password (the current password is required to change it). */
@@ -293,13 +286,7 @@ export async function updateAccount(
   actor: Actor | null,
   input: UpdateAccountInput,
 ): Promise<AccountDto> {
-  const signedIn = requireActor(actor);
-  const [user] = await db
-    .select()
-    .from(users)
-    .where(and(eq(users.id, signedIn.id), isNull(users.deletedAt)))
-    .limit(1);
-  if (!user) throw new UnauthenticatedError("Your account no longer exists.");
+  const user = await loadOwnAccount(actor);
 
   const changes: Partial<typeof users.$inferInsert> = {};
   if (input.name !== undefined) {
@@ -501,6 +488,18 @@ async function consumeToken(
   if (!row) throw ValidationError.at(["token"], "This link is not valid.");
   if (row.usedAt) throw ValidationError.at(["token"], "This link has already been used; request a new one.");
   throw ValidationError.at(["token"], "This link has expired; request a new one.");
+}
+
+/** The actor's own live user row; UnauthenticatedError when signed out or the account is gone. */
+async function loadOwnAccount(actor: Actor | null): Promise<typeof users.$inferSelect> {
+  const signedIn = requireActor(actor);
+  const [user] = await db
+    .select()
+    .from(users)
+    .where(and(eq(users.id, signedIn.id), isNull(users.deletedAt)))
+    .limit(1);
+  if (!user) throw new UnauthenticatedError("Your account no longer exists.");
+  return user;
 }
 
 function toAccountDto(user: typeof users.$inferSelect): AccountDto {
