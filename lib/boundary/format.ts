@@ -25,7 +25,7 @@ export function formatDecimal(value: number, options: FormatDecimalOptions = {})
   const text = value.toPrecision(options.significantDigits ?? 12);
   // Exponent forms (below 1e-6 or beyond the digits) are normalised by a round trip through Number.
   if (text.includes("e")) return String(Number(text));
-  // Trimming the zeros by hand is several times faster than a Number/String round trip, and this
+  // Trimming the zeros by hand is about twice as fast as a Number/String round trip, and this
   // runs for every level row of every separated pair.
   let end = text.length;
   if (text.includes(".")) {

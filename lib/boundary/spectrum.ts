@@ -121,6 +121,8 @@ export interface LevelTemplate {
   ab: bigint;
   /** States of the string from stack b to stack a, per Chan-Paton label. */
   ba: bigint;
+  /** `ab` as text, shared by every row built from this template. */
+  abText: string;
 }
 
 /** The counted levels of one sector kind for one nu and orientation relation. */
@@ -317,7 +319,7 @@ function buildRow(template: LevelTemplate, context: RowContext): LevelRow {
     massSquared: stretch === 0 ? template.exactText : formatDecimal(value),
     mass,
     // A stack with itself has one kind of string; its N^2 labels already hold both orientations.
-    states: self || ab === ba ? ab.toString() : null,
+    states: self || ab === ba ? template.abText : null,
     withChanPaton: multiplyCount(factor, self ? ab : ab + ba),
   };
   if (stringScaleGeV !== null) row.massGeV = mass === null ? null : mass * stringScaleGeV;
@@ -354,6 +356,7 @@ function buildSeries(kind: SectorKind, zeroPoint: Rational, counts: readonly Ori
       exactValue: rationalToNumber(exact),
       ab: count.ab,
       ba: count.ba,
+      abText: count.ab.toString(),
     };
     if (lowest === null || compareRational(exact, lowest.exact) < 0) lowest = template;
     return template;
@@ -497,33 +500,36 @@ function describeGaugeGroup(stacks: Stack[], theory: Configuration["theory"], di
 }
 
 function collectLightest(built: BuiltSector[], count: number): LightestState[] {
-  const candidates: { value: number; sectorIndex: number; rowIndex: number; state: LightestState }[] = [];
+  const candidates: { value: number; sectorIndex: number; rowIndex: number }[] = [];
   built.forEach(({ sector, values }, sectorIndex) => {
     // Within one sector kind the rows rise in level, hence in mass: only the first `count` can qualify.
-    const taken: Partial<Record<SectorKind, number>> = {};
+    let kind: SectorKind | null = null;
+    let taken = 0;
     sector.levels.forEach((row, rowIndex) => {
-      const seen = taken[row.sector] ?? 0;
-      if (seen >= count) return;
-      taken[row.sector] = seen + 1;
-      candidates.push({
-        value: values[rowIndex] ?? 0,
-        sectorIndex,
-        rowIndex,
-        state: {
-          pair: sector.pair,
-          sector: row.sector,
-          level: row.level,
-          massSquared: row.massSquared,
-          mass: row.mass,
-          states: row.states,
-          withChanPaton: row.withChanPaton,
-        },
-      });
+      if (row.sector !== kind) {
+        kind = row.sector;
+        taken = 0;
+      }
+      if (taken >= count) return;
+      taken += 1;
+      candidates.push({ value: values[rowIndex] ?? 0, sectorIndex, rowIndex });
     });
   });
   // Rows of a sector are ordered by kind then level, so the row index breaks ties deterministically.
   candidates.sort((x, y) => x.value - y.value || x.sectorIndex - y.sectorIndex || x.rowIndex - y.rowIndex);
-  return candidates.slice(0, count).map((candidate) => candidate.state);
+  return candidates.slice(0, count).map(({ sectorIndex, rowIndex }) => {
+    const sector = (built[sectorIndex] as BuiltSector).sector;
+    const row = sector.levels[rowIndex] as LevelRow;
+    return {
+      pair: sector.pair,
+      sector: row.sector,
+      level: row.level,
+      massSquared: row.massSquared,
+      mass: row.mass,
+      states: row.states,
+      withChanPaton: row.withChanPaton,
+    };
+  });
 }
 
 function bosonicCounts(dimension: number, nu: number, maxLevel: number): OrientedCounts[] {
