@@ -18,7 +18,11 @@ export type Env = z.infer<typeof envSchema>;
 
 let parsed: Env | undefined;
 
-/** Parses `process.env` on first use and returns the same object afterwards. Throws on a bad env. */
+/**
+ * Parses `process.env` on first use and returns the same object afterwards; throws with every
+ * problem listed when the environment is invalid. Parsing lazily means importing a module (e.g.
+ * while `next build` collects routes) does not by itself require the variables.
+ */
 export function getEnv(): Env {
   if (parsed) return parsed;
   const result = envSchema.safeParse(process.env);
@@ -30,10 +34,3 @@ export function getEnv(): Env {
   return parsed;
 }
 
-/**
- * The parsed environment. Parsing is deferred to the first property read so that importing a
- * module (e.g. while `next build` collects routes) does not require every variable to be set.
- */
-export const env: Env = new Proxy({} as Env, {
-  get: (_target, key) => getEnv()[key as keyof Env],
-});
