@@ -1,15 +1,31 @@
+import "server-only";
+import {
+  deleteRateLimitBucketsBefore,
+  deleteRateLimitBuckets,
+  hitRateLimitBucket,
+  readRateLimitBucket,
+  refundRateLimitBucket,
+} from "@/db/queries/rate-limits";
+import { isDatabaseUnavailable } from "@/lib/errors";
+
 /**
- * Fixed-window rate limiting behind a small async interface, so the store can move into
- * PostgreSQL (shared by every app instance) without touching callers. TODO(#6): move the store
- * into PostgreSQL; this in-memory one is per process.
+ * Fixed-window rate limiting with its counters in PostgreSQL (table `rate_limit_buckets`), so
+ * several app instances behind a load balancer share one count per key. Windows are aligned to
+ * multiples of `windowMs` since the epoch, so every instance agrees on where a window starts.
  */
 
 /** How many requests a key may make per window. */
 export interface RateLimitOptions {
   /** Requests allowed per window (at least 1). */
   limit: number;
-  /** Window length in milliseconds. */
+  /** Window length in milliseconds (at most one day; older windows are swept away). */
   windowMs: number;
+  /**
+   * What to do when PostgreSQL cannot be reached: "refuse" (default) lets the database error
+   * propagate (route handlers answer 503); "allow" lets the request through, for limits that
+   * protect work needing no database (e.g. stateless compute).
+   */
+  whenUnavailable?: "refuse" | "allow";
 }
 
 /** The outcome of one `consumeRateLimit` call. */
@@ -22,14 +38,11 @@ export interface RateLimitResult {
   retryAfterSeconds: number;
 }
 
-interface Window {
-  count: number;
-  resetAt: number;
-}
-
-const windows = new Map<string, Window>();
-/** Past this many keys, expired windows are swept before a new key is added. */
-const sweepThreshold = 10_000;
+/** No limiter uses a longer window; windows older than this are deleted. */
+const maxWindowMs = 24 * 60 * 60 * 1000;
+/** How often one process sweeps expired windows. */
+const sweepIntervalMs = 10 * 60 * 1000;
+let lastSweep = 0;
 
 /**
  * Counts one request for `key` and says whether it is within the limit.
@@ -40,22 +53,49 @@ const sweepThreshold = 10_000;
  */
 export async function consumeRateLimit(key: string, options: RateLimitOptions): Promise<RateLimitResult> {
   const now = Date.now();
-  let window = windows.get(key);
-  if (!window || window.resetAt <= now) {
-    if (!window && windows.size >= sweepThreshold) sweepExpired(now);
-    window = { count: 0, resetAt: now + options.windowMs };
-    windows.set(key, window);
+  const windowStart = windowStartAt(now, options.windowMs);
+  let count: number | null;
+  try {
+    count = await hitRateLimitBucket(key, windowStart, Math.max(1, options.limit));
+  } catch (error) {
+    if (options.whenUnavailable === "allow" && isDatabaseUnavailable(error)) {
+      console.error(`Rate limit "${key}" not checked: the database is unavailable; letting the request through.`);
+      return { ok: true, remaining: 0, retryAfterSeconds: 0 };
+    }
+    throw error;
   }
-  if (window.count >= options.limit) {
-    return { ok: false, remaining: 0, retryAfterSeconds: Math.max(1, Math.ceil((window.resetAt - now) / 1000)) };
+  sweepNowAndThen(now);
+  if (count === null) {
+    const resetAt = windowStart.getTime() + options.windowMs;
+    return { ok: false, remaining: 0, retryAfterSeconds: Math.max(1, Math.ceil((resetAt - now) / 1000)) };
   }
-  window.count += 1;
-  return { ok: true, remaining: options.limit - window.count, retryAfterSeconds: 0 };
+  return { ok: true, remaining: Math.max(0, options.limit - count), retryAfterSeconds: 0 };
 }
 
-/** Forgets every window (tests start from a clean slate with it). */
-export async function resetRateLimits(): Promise<void> {
-  windows.clear();
+/**
+ * Reads where `key` stands without counting anything.
+ *
+ * @returns The same shape as `consumeRateLimit`; `ok` is false when the window is already full.
+ */
+export async function peekRateLimit(key: string, options: RateLimitOptions): Promise<RateLimitResult> {
+  const now = Date.now();
+  const windowStart = windowStartAt(now, options.windowMs);
+  const count = await readRateLimitBucket(key, windowStart);
+  if (count >= options.limit) {
+    const resetAt = windowStart.getTime() + options.windowMs;
+    return { ok: false, remaining: 0, retryAfterSeconds: Math.max(1, Math.ceil((resetAt - now) / 1000)) };
+  }
+  return { ok: true, remaining: options.limit - count, retryAfterSeconds: 0 };
+}
+
+/** Takes back one counted request of `key` in the current window (e.g. after a successful sign-in). */
+export async function refundRateLimit(key: string, options: RateLimitOptions): Promise<void> {
+  await refundRateLimitBucket(key, windowStartAt(Date.now(), options.windowMs));
+}
+
+/** Forgets every window, or those whose key starts with `prefix` (tests start from a clean slate with it). */
+export async function resetRateLimits(prefix = ""): Promise<void> {
+  await deleteRateLimitBuckets(prefix);
 }
 
 /**
@@ -68,8 +108,16 @@ export function clientAddress(request: Request): string {
   return request.headers.get("x-real-ip")?.trim() || "unknown";
 }
 
-function sweepExpired(now: number): void {
-  for (const [key, window] of windows) {
-    if (window.resetAt <= now) windows.delete(key);
-  }
+function windowStartAt(now: number, windowMs: number): Date {
+  const length = Math.min(Math.max(1, Math.floor(windowMs)), maxWindowMs);
+  return new Date(Math.floor(now / length) * length);
+}
+
+/** Deletes long-expired windows at most once per `sweepIntervalMs` per process, off the request path. */
+function sweepNowAndThen(now: number): void {
+  if (now - lastSweep < sweepIntervalMs) return;
+  lastSweep = now;
+  deleteRateLimitBucketsBefore(new Date(now - maxWindowMs)).catch((error: unknown) => {
+    console.error("Sweeping expired rate-limit windows failed:", error);
+  });
 }

@@ -1,0 +1,87 @@
+import { randomUUID } from "node:crypto";
+import { describe, expect, it } from "vitest";
+import { verifyPassword } from "@/db/queries/users";
+import { RateLimitError, ServiceUnavailableError, UnauthenticatedError } from "@/lib/errors";
+import { peekRateLimit } from "@/lib/rate-limit";
+import { limitSignInAttempt, signInAddress, signInLimitPerAddress, signInLimitPerEmail } from "@/lib/sign-in-limit";
+import { createTestUser } from "@/tests/fixtures/users";
+
+const small = {
+  perEmail: { limit: 3, windowMs: 15 * 60_000 },
+  perAddress: { limit: 5, windowMs: 15 * 60_000 },
+};
+
+/** A fresh client address per test, so tests never share a window. */
+const freshAddress = () => `198.51.100.${Math.floor(Math.random() * 250)}-${randomUUID().slice(0, 8)}`;
+const wrong = () => Promise.reject(new UnauthenticatedError("Wrong e-mail or password."));
+
+describe("limitSignInAttempt", () => {
+  it("keeps the per-e-mail limit above the account lockout, so the lockout message shows first", () => {
+    // db/queries/users.ts locks an account after 10 consecutive failures.
+    expect(signInLimitPerEmail.limit).toBeGreaterThan(10);
+    expect(signInLimitPerAddress.limit).toBeGreaterThan(signInLimitPerEmail.limit);
+  });
+
+  it("refuses an e-mail address after its failures with a clear message, whatever the password", async () => {
+    const email = `nobody-${randomUUID()}@test.mooring`;
+    const address = freshAddress();
+    for (let i = 0; i < 3; i += 1) {
+      await expect(limitSignInAttempt(email, address, wrong, small)).rejects.toBeInstanceOf(UnauthenticatedError);
+    }
+    const refused = limitSignInAttempt(email.toUpperCase(), freshAddress(), async () => "signed in", small);
+    await expect(refused).rejects.toBeInstanceOf(RateLimitError);
+    await expect(refused).rejects.toThrow(/Too many failed sign-ins for this e-mail address\. Try again in \d+ minutes?, or reset the password\.$/);
+  });
+
+  it("refuses a client address after failures across many e-mail addresses", async () => {
+    const address = freshAddress();
+    for (let i = 0; i < 5; i += 1) {
+      await expect(limitSignInAttempt(`spray-${i}-${randomUUID()}@test.mooring`, address, wrong, small)).rejects.toBeInstanceOf(
+        UnauthenticatedError,
+      );
+    }
+    const email = `fresh-${randomUUID()}@test.mooring`;
+    await expect(limitSignInAttempt(email, address, wrong, small)).rejects.toThrow(/Too many failed sign-ins from your network/);
+    // The refused attempt did not count against the e-mail address.
+    expect(await peekRateLimit(`sign-in:email:${email}`, small.perEmail)).toMatchObject({ remaining: 3 });
+  });
+
+  it("counts only failures: successful sign-ins and database errors are refunded", async () => {
+    const email = `ok-${randomUUID()}@test.mooring`;
+    const address = freshAddress();
+    for (let i = 0; i < 6; i += 1) expect(await limitSignInAttempt(email, address, async () => i, small)).toBe(i);
+    await expect(
+      limitSignInAttempt(email, address, () => Promise.reject(new ServiceUnavailableError()), small),
+    ).rejects.toBeInstanceOf(ServiceUnavailableError);
+    expect(await peekRateLimit(`sign-in:email:${email}`, small.perEmail)).toMatchObject({ remaining: 3 });
+    expect(await peekRateLimit(`sign-in:ip:${address}`, small.perAddress)).toMatchObject({ remaining: 5 });
+  });
+
+  it("lets at most the limit of simultaneous guesses through", async () => {
+    const email = `burst-${randomUUID()}@test.mooring`;
+    const outcomes = await Promise.allSettled(
+      Array.from({ length: 12 }, () => limitSignInAttempt(email, freshAddress(), wrong, small)),
+    );
+    const reasons = outcomes.map((o) => (o.status === "rejected" ? (o.reason as Error).name : "fulfilled"));
+    expect(reasons.filter((r) => r === "UnauthenticatedError")).toHaveLength(3);
+    expect(reasons.filter((r) => r === "RateLimitError")).toHaveLength(9);
+  });
+
+  it("wraps the real password check: the account lockout still answers for an existing account", async () => {
+    const user = await createTestUser({ label: "limited", password: "correct horse battery" });
+    const address = freshAddress();
+    const attempt = (password: string) =>
+      limitSignInAttempt(user.actor.email, address, () => verifyPassword(null, user.actor.email, password));
+    await expect(attempt("wrong password 1")).rejects.toThrow("Wrong e-mail or password.");
+    expect((await attempt("correct horse battery")).id).toBe(user.actor.id);
+  });
+});
+
+describe("signInAddress", () => {
+  it("reads next-auth's plain header object: x-forwarded-for first, then x-real-ip, then 'unknown'", () => {
+    expect(signInAddress({ "x-forwarded-for": "203.0.113.1, 10.0.0.1" })).toBe("203.0.113.1");
+    expect(signInAddress({ "x-real-ip": "198.51.100.2" })).toBe("198.51.100.2");
+    expect(signInAddress({})).toBe("unknown");
+    expect(signInAddress(undefined)).toBe("unknown");
+  });
+});
