@@ -7,8 +7,11 @@ import { formatIssues, spectrumRequestSchema } from "@/lib/validations/configura
 /** Largest accepted body of `POST /api/spectrum`, in bytes (64 KiB holds 64 verbose stacks). */
 const spectrumBodyLimitBytes = 64 * 1024;
 
-/** Anonymous callers: requests per window per client address. */
-const anonymousSpectrumLimit: RateLimitOptions = { limit: 120, windowMs: 60_000 };
+/**
+ * Anonymous callers: requests per window per client address. Computing needs no database, so
+ * while PostgreSQL (which holds the counters) is down the limit is not enforced.
+ */
+const anonymousSpectrumLimit: RateLimitOptions = { limit: 120, windowMs: 60_000, whenUnavailable: "allow" };
 
 /**
  * POST /api/spectrum: stateless compute of a configuration's spectrum (body: the configuration
