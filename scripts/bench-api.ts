@@ -6,12 +6,16 @@
  *   3. a configuration read, GET /api/configurations/:id,
  *   4. a save, PUT /api/configurations/:id with If-Match (revision + result).
  * Reports p50, p95, p99 (from every response time) and throughput, PASS/MISS against
- * product.md's targets, and writes bench-results/api.json. Cases whose route is missing, or
- * that need a sign-in when BENCH_EMAIL/BENCH_PASSWORD are not set, are reported as not measured.
+ * product.md's targets, and writes bench-results/api.json.
+ *
+ * The read and save cases sign in (next-auth credentials) and work on scratch configurations
+ * created for the run in the account's personal space, one per connection so that saves do not
+ * conflict; they are soft-deleted at the end. Cases whose route is missing are reported as not
+ * measured.
  *
  * Environment: BENCH_URL, BENCH_DURATION (seconds per case, default 10), BENCH_CONNECTIONS
- * (default 16), BENCH_EMAIL and BENCH_PASSWORD (an account that can edit configurations).
- * Start the server first, e.g. `npm run build && npm run serve`.
+ * (default 16), BENCH_EMAIL and BENCH_PASSWORD (default: the seed's demo researcher
+ * ada@mooring.test). Start the production server first, e.g. `npm run build && npm run serve`.
  */
 import { mkdirSync, writeFileSync } from "node:fs";
 import os from "node:os";
@@ -92,12 +96,14 @@ async function main(): Promise<void> {
   );
 
   // 3 and 4. Configuration read and save (need a session and editable configurations).
-  const handles = session ? await findConfigurations(session) : { handles: [], reason: "set BENCH_EMAIL and BENCH_PASSWORD to sign in" };
+  const handles = session ? await createScratchConfigurations(session) : { handles: [], reason: "sign-in failed (set BENCH_EMAIL and BENCH_PASSWORD)" };
   const first = handles.handles[0];
   if (!first) {
     reports.push(notMeasured("configuration read", "GET", "/api/configurations/:id", handles.reason));
     reports.push(notMeasured("save", "PUT", "/api/configurations/:id", handles.reason));
   } else {
+    // One request first, so that a route compiled on demand is ready before timing starts.
+    await probe("GET", `/api/configurations/${encodeURIComponent(first.id)}`, authHeaders);
     reports.push(
       await runCase("configuration read", {
         method: "GET",
@@ -105,8 +111,12 @@ async function main(): Promise<void> {
         headers: authHeaders,
       }),
     );
-    reports.push(await runCase("save", saveRequest(handles.handles, authHeaders)));
+    // autocannon's warm-up would abort saves in flight and leave stale versions behind, so the
+    // save case warms up with one sequential save per scratch configuration instead.
+    await warmUpSaves(handles.handles, authHeaders);
+    reports.push(await runCase("save", saveRequest(handles.handles, authHeaders), { warmup: false }));
   }
+  if (session) await deleteScratchConfigurations(session, handles.handles);
 
   const yardstick = reports[0];
   if (yardstick?.p95Ms) {
@@ -138,9 +148,10 @@ async function main(): Promise<void> {
 }
 
 /** Runs one autocannon case after a warm-up and summarises every response time it saw. */
-async function runCase(name: string, request: RequestSpec): Promise<CaseReport> {
+async function runCase(name: string, request: RequestSpec, options: { warmup?: boolean } = {}): Promise<CaseReport> {
   const method = request.method ?? "GET";
-  const requestPath = request.path ?? "/";
+  // Reported with ":id" in place of the scratch configuration's id.
+  const requestPath = (request.path ?? "/").replace(/\/api\/configurations\/[^/]+/, "/api/configurations/:id");
   process.stdout.write(`${name}: ${method} ${requestPath} for ${durationSeconds} s with ${connections} connections... `);
   const times: number[] = [];
   const statusCounts: Record<string, number> = {};
@@ -150,7 +161,7 @@ async function runCase(name: string, request: RequestSpec): Promise<CaseReport> 
     duration: durationSeconds,
     timeout: 30,
     requests: [request],
-    warmup: { connections, duration: warmupSeconds },
+    ...(options.warmup === false ? {} : { warmup: { connections, duration: warmupSeconds } }),
   });
   instance.on("response", (_client: unknown, statusCode: number, _bytes: number, responseTime: number) => {
     times.push(responseTime);
@@ -202,18 +213,41 @@ function saveRequest(handles: ConfigurationHandle[], authHeaders: Record<string,
       if (!handle) return;
       handle.busy = false;
       if (status >= 200 && status < 300) handle.version = readVersion(body, headers) ?? handle.version;
+      // A 409 names the current version; take it so the next save on this copy succeeds.
+      if (status === 409) handle.version = readCurrentVersion(body) ?? handle.version;
     },
   };
 }
 
-/** Signs in with next-auth's credentials flow when BENCH_EMAIL and BENCH_PASSWORD are set. */
-async function signIn(): Promise<Session | undefined> {
-  const email = process.env.BENCH_EMAIL;
-  const password = process.env.BENCH_PASSWORD;
-  if (!email || !password) {
-    console.log("BENCH_EMAIL/BENCH_PASSWORD not set: running the anonymous cases only.");
+/** One save per scratch configuration, sequentially, updating each version. */
+async function warmUpSaves(handles: ConfigurationHandle[], authHeaders: Record<string, string>): Promise<void> {
+  for (const handle of handles) {
+    const response = await fetch(`${baseUrl}/api/configurations/${encodeURIComponent(handle.id)}`, {
+      method: "PUT",
+      headers: { ...authHeaders, "content-type": "application/json", origin: baseUrl, "if-match": handle.version },
+      body: JSON.stringify({ document: handle.document, message: "bench:api warm-up save" }),
+    });
+    const text = await response.text();
+    const headers = Object.fromEntries(response.headers.entries());
+    handle.version = (response.ok ? readVersion(text, headers) : readCurrentVersion(text)) ?? handle.version;
+  }
+}
+
+/** `currentVersion` of a 409 body, as an If-Match value. */
+function readCurrentVersion(body: string): string | undefined {
+  try {
+    const current = objectField(JSON.parse(body) as unknown, "currentVersion");
+    return typeof current === "number" || typeof current === "string" ? `"${String(current)}"` : undefined;
+  } catch {
     return undefined;
   }
+}
+
+/** Signs in with next-auth's credentials flow when BENCH_EMAIL and BENCH_PASSWORD are set. */
+async function signIn(): Promise<Session | undefined> {
+  // Defaults: a demo account of db/seed.ts (its password is listed in the README).
+  const email = process.env.BENCH_EMAIL ?? "ada@mooring.test";
+  const password = process.env.BENCH_PASSWORD ?? "demo-password-1";
   const csrfResponse = await fetch(`${baseUrl}/api/auth/csrf`);
   const { csrfToken } = (await csrfResponse.json()) as { csrfToken?: string };
   const csrfCookies = cookiePairs(csrfResponse);
@@ -226,34 +260,52 @@ async function signIn(): Promise<Session | undefined> {
   });
   const cookies = [...csrfCookies, ...cookiePairs(response)];
   if (!cookies.some((c) => c.includes("session-token="))) {
-    console.log(`Sign-in as ${email} failed (status ${response.status}): running the anonymous cases only.`);
+    console.log(`Sign-in as ${email} failed (status ${response.status}): measuring the anonymous cases only.`);
     return undefined;
   }
   return { cookie: cookies.join("; ") };
 }
 
-/** Lists the configurations the signed-in account can see and keeps up to `connections` of them. */
-async function findConfigurations(session: Session): Promise<{ handles: ConfigurationHandle[]; reason: string }> {
-  const list = await fetch(`${baseUrl}/api/configurations`, { headers: { cookie: session.cookie } });
-  if (list.status === 404) return { handles: [], reason: "GET /api/configurations is missing (404)" };
-  if (!list.ok) return { handles: [], reason: `GET /api/configurations answered ${list.status}` };
-  const body = (await list.json()) as unknown;
-  const items = Array.isArray(body) ? body : arrayField(body, ["configurations", "items", "data"]);
+/** Creates one scratch configuration per connection in the account's personal space. */
+async function createScratchConfigurations(session: Session): Promise<{ handles: ConfigurationHandle[]; reason: string }> {
+  const headers = { cookie: session.cookie, origin: baseUrl };
+  const groupsResponse = await fetch(`${baseUrl}/api/groups`, { headers });
+  if (groupsResponse.status === 404) return { handles: [], reason: "GET /api/groups is missing (404)" };
+  if (!groupsResponse.ok) return { handles: [], reason: `GET /api/groups answered ${groupsResponse.status}` };
+  const groups = (await groupsResponse.json()) as unknown;
+  const personal = (Array.isArray(groups) ? groups : []).find((g) => stringField(g, "kind") === "personal");
+  const groupId = stringField(personal, "id");
+  if (!groupId) return { handles: [], reason: "the account has no personal space" };
+
   const handles: ConfigurationHandle[] = [];
-  for (const item of items.slice(0, connections)) {
-    const id = stringField(item, "id");
-    if (!id) continue;
-    const detail = await fetch(`${baseUrl}/api/configurations/${encodeURIComponent(id)}`, { headers: { cookie: session.cookie } });
-    if (!detail.ok) continue;
-    const text = await detail.text();
-    const version = readVersion(text, Object.fromEntries(detail.headers.entries()));
-    const parsed = JSON.parse(text) as unknown;
-    const document = objectField(parsed, "document") ?? parsed;
-    if (version) handles.push({ id, version, document, busy: false });
+  for (let i = 0; i < connections; i++) {
+    const document = { ...benchPreviewDemo, title: `bench:api scratch ${i + 1}` };
+    const response = await fetch(`${baseUrl}/api/configurations`, {
+      method: "POST",
+      headers: { ...headers, "content-type": "application/json" },
+      body: JSON.stringify({ groupId, document, message: "bench:api scratch copy" }),
+    });
+    const text = await response.text();
+    if (response.status === 404) return { handles, reason: "POST /api/configurations is missing (404)" };
+    if (!response.ok) return { handles, reason: `POST /api/configurations answered ${response.status}: ${text.slice(0, 200)}` };
+    const id = stringField(JSON.parse(text) as unknown, "id");
+    const version = readVersion(text, Object.fromEntries(response.headers.entries()));
+    if (id && version) handles.push({ id, version, document, busy: false });
   }
-  return handles.length > 0
-    ? { handles, reason: "" }
-    : { handles, reason: "the account sees no configuration with a version to read and save" };
+  return { handles, reason: handles.length === 0 ? "no scratch configuration could be created" : "" };
+}
+
+/** Soft-deletes the scratch configurations of the run. */
+async function deleteScratchConfigurations(session: Session, handles: ConfigurationHandle[]): Promise<void> {
+  let failed = 0;
+  for (const handle of handles) {
+    const response = await fetch(`${baseUrl}/api/configurations/${encodeURIComponent(handle.id)}`, {
+      method: "DELETE",
+      headers: { cookie: session.cookie, origin: baseUrl },
+    });
+    if (!response.ok) failed++;
+  }
+  if (failed > 0) console.log(`Could not delete ${failed} scratch configuration(s) titled "bench:api scratch N".`);
 }
 
 /** The version of a configuration from an ETag header or a `version` field of the JSON body. */
@@ -351,14 +403,6 @@ function objectField(value: unknown, key: string): unknown {
 function stringField(value: unknown, key: string): string | undefined {
   const field = objectField(value, key);
   return typeof field === "string" ? field : typeof field === "number" ? String(field) : undefined;
-}
-
-function arrayField(value: unknown, keys: string[]): unknown[] {
-  for (const key of keys) {
-    const field = objectField(value, key);
-    if (Array.isArray(field)) return field;
-  }
-  return [];
 }
 
 main().catch((error: unknown) => {
