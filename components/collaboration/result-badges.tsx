@@ -1,0 +1,18 @@
+import { Badge } from "@/components/ui/badge";
+
+/** Supersymmetry of a summary row: supercharges for type II, "n/a" for bosonic (null). */
+export function SupersymmetryBadge({ supercharges }: { supercharges: number | null }) {
+  if (supercharges === null) return <span className="text-muted-foreground">n/a</span>;
+  return supercharges > 0 ? <Badge variant="success">{supercharges} supercharges</Badge> : <Badge variant="neutral">none</Badge>;
+}
+
+/** Tachyon status of a summary row. */
+export function TachyonBadge({ tachyonic }: { tachyonic: boolean }) {
+  return tachyonic ? <Badge variant="danger">tachyon</Badge> : <Badge variant="outline">stable</Badge>;
+}
+
+/** alpha' M^2 of the lightest state as stored for sorting (approximate; exact values are on the results page). */
+export function formatMassSquared(value: number | null): string {
+  if (value === null) return "—";
+  return Number.isInteger(value) ? String(value) : value.toPrecision(4).replace(/\.?0+$/, "");
+}

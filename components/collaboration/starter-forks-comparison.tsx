@@ -1,0 +1,73 @@
+import { formatMassSquared, SupersymmetryBadge, TachyonBadge } from "@/components/collaboration/result-badges";
+import { EmptyState } from "@/components/ui/empty-state";
+import { Table, TableBody, TableCaption, TableCell, TableHead, TableHeader, TableRow } from "@/components/ui/table";
+import type { StarterComparisonDto } from "@/db/queries/labs";
+import { formatDateTime } from "@/lib/format-date";
+
+export interface StarterForksComparisonProps {
+  comparison: StarterComparisonDto[];
+}
+
+/** The instructor's view: per starter, each student's fork with its key results side by side. */
+export function StarterForksComparison({ comparison }: StarterForksComparisonProps) {
+  if (comparison.length === 0) {
+    return (
+      <EmptyState
+        title="No starters published"
+        description="Publish a configuration as a starter; students fork it into their own space and their forks appear here."
+      />
+    );
+  }
+  return (
+    <div className="grid gap-6">
+      {comparison.map((starter) => (
+        <section key={starter.starterId} aria-labelledby={`starter-${starter.starterId}`} className="grid gap-2">
+          <h3 id={`starter-${starter.starterId}`} className="text-sm font-semibold">
+            {starter.title}{" "}
+            <span className="font-normal text-muted-foreground">
+              · {starter.forks.length === 1 ? "1 fork" : `${starter.forks.length} forks`}
+            </span>
+          </h3>
+          {starter.forks.length === 0 ? (
+            <p className="text-sm text-muted-foreground">No student has forked this starter yet.</p>
+          ) : (
+            <Table>
+              <TableCaption>
+                Starter: lightest α′M² {formatMassSquared(starter.lightestMassSquared)}, {starter.tachyonic ? "tachyonic" : "stable"}. alpha&apos; = 1.
+              </TableCaption>
+              <TableHeader>
+                <TableRow>
+                  <TableHead>Student</TableHead>
+                  <TableHead>Fork</TableHead>
+                  <TableHead>Supersymmetry</TableHead>
+                  <TableHead>Tachyons</TableHead>
+                  <TableHead className="text-right">Lightest α′M²</TableHead>
+                  <TableHead className="text-right">Revisions</TableHead>
+                  <TableHead>Last change</TableHead>
+                </TableRow>
+              </TableHeader>
+              <TableBody>
+                {starter.forks.map((fork) => (
+                  <TableRow key={fork.configurationId}>
+                    <TableCell className="font-medium">{fork.student.name}</TableCell>
+                    {/* Forks live in the students' own spaces; the instructor sees the summary, not the document. */}
+                    <TableCell>{fork.title}</TableCell>
+                    <TableCell>
+                      <SupersymmetryBadge supercharges={fork.supercharges} />
+                    </TableCell>
+                    <TableCell>
+                      <TachyonBadge tachyonic={fork.tachyonic} />
+                    </TableCell>
+                    <TableCell className="text-right font-mono">{formatMassSquared(fork.lightestMassSquared)}</TableCell>
+                    <TableCell className="text-right">{fork.version}</TableCell>
+                    <TableCell className="text-muted-foreground">{formatDateTime(fork.updatedAt)}</TableCell>
+                  </TableRow>
+                ))}
+              </TableBody>
+            </Table>
+          )}
+        </section>
+      ))}
+    </div>
+  );
+}
