@@ -25,7 +25,7 @@ export interface Stack {
   worldvolume: number[];
   /**
    * Positions along Dirichlet axes, keyed by the axis number as a string.
-   * A Dirichlet axis missing here sits at 0. Keys for Neumann axes are ignored.
+   * A Dirichlet axis missing here sits at 0. Keys for Neumann axes are rejected by `checkConfiguration`.
    */
   position: Record<string, number>;
   /** Optional display colour (CSS hex), interface only. */
@@ -117,7 +117,10 @@ export interface Sector {
   chanPaton: number;
   zeroPoint: ZeroPoint;
   tachyonic: boolean;
-  /** y_c = 2 pi sqrt(-(N + a)) of the lightest surviving state, or null when none is tachyonic at y = 0. */
+  /**
+   * y_c = 2 pi sqrt(-(N + a)) of the lightest surviving state, or null when none is tachyonic at y = 0,
+   * for a stack with itself, and when the stacks share no Dirichlet axis to separate along.
+   */
   criticalSeparation: number | null;
   /** Pair preserves some supersymmetry (type II only; false for bosonic). */
   supersymmetric: boolean;
