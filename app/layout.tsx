@@ -4,6 +4,8 @@ import { plexMono, plexSans } from "@/app/fonts";
 import { Providers } from "@/app/providers";
 import { SiteFooter } from "@/components/layout/site-footer";
 import { SiteHeader } from "@/components/layout/site-header";
+import { getEnv } from "@/lib/env";
+import { getCurrentUser } from "@/lib/session";
 import { themeInitScript } from "@/lib/theme";
 import "./globals.css";
 
@@ -19,7 +21,10 @@ export const viewport: Viewport = {
   ],
 };
 
-export default function RootLayout({ children }: { children: ReactNode }) {
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  const user = await getCurrentUser();
+  const showMailbox = Boolean(getEnv().MAILBOX_URL);
+
   return (
     <html lang="en" className={`${plexSans.variable} ${plexMono.variable}`} suppressHydrationWarning>
       <head>
@@ -27,7 +32,7 @@ export default function RootLayout({ children }: { children: ReactNode }) {
       </head>
       <body className="flex min-h-screen flex-col bg-background font-sans text-foreground">
         <Providers>
-          <SiteHeader user={null} />
+          <SiteHeader user={user} showMailbox={showMailbox} />
           <main id="main" className="flex flex-1 flex-col">
             {children}
           </main>

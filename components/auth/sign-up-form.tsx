@@ -1,0 +1,55 @@
+"use client";
+
+import { signIn } from "next-auth/react";
+import { useActionState } from "react";
+import { signUpAction, type SignUpState } from "@/app/(auth)/actions";
+import { Alert } from "@/components/ui/alert";
+import { Button } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
+import { Input } from "@/components/ui/input";
+import { idleState } from "@/lib/action-state";
+import { useHydrated } from "@/lib/hooks/use-hydrated";
+import { minPasswordLength } from "@/lib/validations/auth";
+
+export function SignUpForm() {
+  const hydrated = useHydrated();
+  const [state, formAction, pending] = useActionState(async (previous: SignUpState, formData: FormData): Promise<SignUpState> => {
+    const result = await signUpAction(previous, formData);
+    if (result.status !== "success") return result;
+    // The account exists now; sign in with the same credentials and open the dashboard.
+    const signedIn = await signIn("password", { email: formData.get("email"), password: formData.get("password"), redirect: false });
+    if (!signedIn?.ok || signedIn.error) {
+      window.location.assign("/sign-in");
+      return result;
+    }
+    window.location.assign("/dashboard");
+    return result;
+  }, idleState());
+
+  const showSummary = state.status === "error" && state.message && Object.keys(state.fieldErrors).length === 0;
+
+  return (
+    <form action={formAction} noValidate className="grid gap-4">
+      {showSummary ? (
+        <Alert variant="danger" title="Could not create the account">
+          {state.message}
+        </Alert>
+      ) : null}
+      <Field id="name" label="Name" error={state.fieldErrors.name}>
+        <Input name="name" autoComplete="name" defaultValue={state.values.name} required autoFocus />
+      </Field>
+      <Field id="email" label="E-mail" error={state.fieldErrors.email}>
+        <Input name="email" type="email" autoComplete="email" defaultValue={state.values.email} required />
+      </Field>
+      <Field id="password" label="Password" hint={`At least ${minPasswordLength} characters.`} error={state.fieldErrors.password}>
+        <Input name="password" type="password" autoComplete="new-password" required minLength={minPasswordLength} />
+      </Field>
+      <Field id="confirmPassword" label="Repeat the password" error={state.fieldErrors.confirmPassword}>
+        <Input name="confirmPassword" type="password" autoComplete="new-password" required />
+      </Field>
+      <Button type="submit" pending={pending} disabled={!hydrated} className="w-full">
+        Create account
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,19 @@
+import type { DefaultSession } from "next-auth";
+import type { SiteRole } from "@/db/schema";
+
+declare module "next-auth" {
+  interface Session {
+    user: DefaultSession["user"] & { id: string; siteRole: SiteRole };
+  }
+
+  interface User {
+    siteRole: SiteRole;
+  }
+}
+
+declare module "next-auth/jwt" {
+  interface JWT {
+    id?: string;
+    siteRole?: SiteRole;
+  }
+}
