@@ -7,7 +7,7 @@ import type { Configuration, SpectrumResult } from "@/lib/boundary/types";
 import { hitTest, rectFromCorners, stacksInRect } from "@/lib/canvas/hit-test";
 import { draggableAxes, type DisplayAxes } from "@/lib/canvas/projection";
 import { panBy, toWorld, zoomAt, type Point, type Viewport } from "@/lib/canvas/viewport";
-import { buildScene, sceneFontSize, type SceneCurve, type SceneStack } from "@/lib/designer/scene";
+import { buildScene, curveLabelWidth, sceneFontSize, type SceneCurve, type SceneStack } from "@/lib/designer/scene";
 import type { SelectionMode } from "@/lib/stores/designer-store";
 import { useCanvasPalette, type CanvasPalette } from "./use-canvas-palette";
 
@@ -293,7 +293,7 @@ function CurveShape({ curve, palette }: CurveShapeProps) {
       {curve.label ? (
         <Group x={curve.labelAt.x} y={curve.labelAt.y}>
           <Rect
-            width={curve.label.length * sceneFontSize * 0.58 + 8}
+            width={curveLabelWidth(curve.label)}
             height={sceneFontSize + 6}
             fill={palette.surface}
             opacity={0.85}

@@ -276,22 +276,29 @@ function StackRows({ stack, index, document, axes, selected, issues, readOnly, o
         </td>
         <td className="px-2 py-1 whitespace-nowrap">
           {!readOnly ? (
-            <div className="flex gap-1">
+            <div className="flex gap-0.5">
               <button
                 type="button"
                 onClick={() => edit((doc) => duplicateStacks(doc, [stack.id]).config)}
                 aria-label={`Duplicate stack ${stack.id}`}
-                className="h-7 rounded px-1.5 text-xs text-muted-foreground hover:bg-surface-muted hover:text-foreground"
+                title="Duplicate"
+                className="grid size-7 place-items-center rounded text-muted-foreground hover:bg-surface-muted hover:text-foreground"
               >
-                Duplicate
+                <svg width="14" height="14" viewBox="0 0 16 16" fill="none" stroke="currentColor" strokeWidth="1.5" aria-hidden="true">
+                  <rect x="5" y="5" width="8.5" height="8.5" rx="1.5" />
+                  <path d="M10.5 5V3.5A1.5 1.5 0 0 0 9 2H3.5A1.5 1.5 0 0 0 2 3.5V9a1.5 1.5 0 0 0 1.5 1.5H5" />
+                </svg>
               </button>
               <button
                 type="button"
                 onClick={() => edit((doc) => deleteStacks(doc, [stack.id]))}
                 aria-label={`Delete stack ${stack.id}`}
-                className="h-7 rounded px-1.5 text-xs text-danger-soft-foreground hover:bg-danger-soft"
+                title="Delete"
+                className="grid size-7 place-items-center rounded text-danger-soft-foreground hover:bg-danger-soft"
               >
-                Delete
+                <svg width="14" height="14" viewBox="0 0 16 16" fill="none" stroke="currentColor" strokeWidth="1.5" aria-hidden="true">
+                  <path d="M2.5 4h11M6 4V2.5h4V4M4 4l.7 9.5h6.6L12 4" />
+                </svg>
               </button>
             </div>
           ) : null}

@@ -230,7 +230,7 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
         <Alert variant="warning">This browser refused to keep a local copy of your draft; save soon to avoid losing work.</Alert>
       ) : null}
 
-      <div className="grid gap-3 xl:grid-cols-[minmax(0,1fr)_22rem]">
+      <div className="grid gap-3 xl:grid-cols-[minmax(0,1fr)_25rem]">
         <div className="flex min-w-0 flex-col gap-3">
           <DesignerCanvas result={preview.result} readOnly={!canEdit} onSaveShortcut={openSave} className="h-[min(56vh,560px)]" />
           <BoundaryGrid issuesByStack={preview.byStack} readOnly={!canEdit} />

@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import type { Configuration, SpectrumResult } from "@/lib/boundary/types";
 import { createViewport, toScreen } from "@/lib/canvas/viewport";
-import { buildScene, fitSceneViewport } from "./scene";
+import { rectsOverlap } from "@/lib/canvas/labels";
+import { buildScene, curveLabelWidth, fitSceneViewport } from "./scene";
 
 const document: Configuration = {
   format: 1,
@@ -80,6 +81,18 @@ describe("fitSceneViewport", () => {
       expect(s.y).toBeGreaterThanOrEqual(72 - 1e-9);
       expect(s.x).toBeLessThanOrEqual(400 - 72 + 1e-9);
       expect(s.y).toBeLessThanOrEqual(300 - 72 + 1e-9);
+    }
+  });
+});
+
+describe("label placement", () => {
+  it("keeps stack and curve labels from overlapping one another", () => {
+    const boxes = [
+      ...scene.stacks.map((s) => ({ ...s.labelAt, width: s.label.length * 12 * 0.6, height: 16 })),
+      ...scene.curves.filter((c) => c.label).map((c) => ({ ...c.labelAt, width: curveLabelWidth(c.label), height: 18 })),
+    ];
+    for (let i = 0; i < boxes.length; i++) {
+      for (let j = i + 1; j < boxes.length; j++) expect(rectsOverlap(boxes[i]!, boxes[j]!)).toBe(false);
     }
   });
 });

@@ -59,6 +59,11 @@ export interface BuildSceneInput {
   gridStep: number;
 }
 
+/** Width in pixels of the boxed label of a curve. */
+export function curveLabelWidth(label: string): number {
+  return estimateTextWidth(label, sceneFontSize - 1) + 8;
+}
+
 /** Fallback colour of a stack without one. */
 export const defaultStackColour = "#2f6f9f";
 
@@ -78,14 +83,12 @@ export function buildScene(input: BuildSceneInput): Scene {
   const labelTexts = document.stacks.map(
     (stack) => `${stack.label || stack.id} \u00b7 ${stackKind(stack, document.theory)} \u00b7 N=${stack.count}`,
   );
-  const placed = placeLabels(
-    document.stacks.map((stack, i) => ({
-      id: stack.id,
-      anchor: anchors[i] ?? { x: 0, y: 0 },
-      width: estimateTextWidth(labelTexts[i] ?? "", sceneFontSize),
-      height: sceneFontSize + 4,
-    })),
-  );
+  const stackLabelRequests = document.stacks.map((stack, i) => ({
+    id: `stack:${stack.id}`,
+    anchor: anchors[i] ?? { x: 0, y: 0 },
+    width: estimateTextWidth(labelTexts[i] ?? "", sceneFontSize),
+    height: sceneFontSize + 4,
+  }));
 
   const stacks: SceneStack[] = document.stacks.map((stack, i) => {
     const shape = hitEntries[i]!.shape;
@@ -106,7 +109,7 @@ export function buildScene(input: BuildSceneInput): Scene {
       selected: selected.has(stack.id),
       count: stack.count,
       label: labelTexts[i] ?? stack.id,
-      labelAt: placed.get(stack.id) ?? { x: 0, y: 0 },
+      labelAt: { x: 0, y: 0 },
     };
   });
 
@@ -138,6 +141,21 @@ export function buildScene(input: BuildSceneInput): Scene {
       labelAt: { x: mid.x + 4, y: mid.y - sceneFontSize - 2 },
     };
   });
+
+  // Stack labels first (they name things), then curve labels, each moved clear of the earlier ones.
+  const placed = placeLabels([
+    ...stackLabelRequests,
+    ...curves
+      .filter((curve) => curve.label !== "")
+      .map((curve) => ({
+        id: `curve:${curve.key}`,
+        anchor: curve.labelAt,
+        width: curveLabelWidth(curve.label),
+        height: sceneFontSize + 6,
+      })),
+  ]);
+  for (const stack of stacks) stack.labelAt = placed.get(`stack:${stack.id}`) ?? stack.labelAt;
+  for (const curve of curves) curve.labelAt = placed.get(`curve:${curve.key}`) ?? curve.labelAt;
 
   const verticalLines = gridLines(view.x, view.x + view.width, gridStep, 120).map((x) => ({
     x: toScreen({ x, y: 0 }, viewport).x,
