@@ -198,7 +198,7 @@ export function createSectorContext(configuration: Configuration): SectorContext
  * physics (counts, masses, zero points, tachyons) with ND and DN axes swapped and the pair reversed.
  *
  * @param a - Stack at sigma = 0.
- * @param b - Stack at sigma = pi; pass the same object as `a` for the stack with itself.
+ * @param b - Stack at sigma = pi; the same stack (same id) as `a` for the stack with itself.
  * @param configuration - The (valid) configuration the stacks belong to.
  * @param context - The per-call memo from `createSectorContext(configuration)`.
  * @returns The sector: classification, zero points, level rows up to `configuration.levels`,
@@ -222,7 +222,8 @@ interface BuiltSector {
 function buildSector(a: Stack, b: Stack, configuration: Configuration, context: SectorContext): BuiltSector {
   const { dimension } = context;
   const theory = configuration.theory;
-  const self = a === b;
+  // Ids are unique within a configuration, so equal ids mean the stack with itself.
+  const self = a.id === b.id;
   const classification = classifyPair(a, b, dimension);
   const { nu } = classification;
   // Exact zero only when every DD difference is exactly zero (a tiny difference can square to 0).
@@ -246,7 +247,7 @@ function buildSector(a: Stack, b: Stack, configuration: Configuration, context: 
   // Light-cone counting needs a spatial axis that is NN or DD for both stacks.
   if (nu > dimension - 2) {
     notes.push(
-      "Every spatial axis is ND for this pair, so the light-cone counting of physics.md does not apply; no levels are listed.",
+      "Every spatial axis is ND for this pair, so the light-cone state counting used here does not apply; no levels are listed.",
     );
     const sector = { ...base, zeroPoint: {}, tachyonic: false, criticalSeparation: null, levels: [], massless: [], notes };
     return { sector, values: [] };
