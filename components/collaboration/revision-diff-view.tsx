@@ -1,0 +1,154 @@
+import type { ReactNode } from "react";
+import { Badge } from "@/components/ui/badge";
+import type { ConfigurationDiff, SpectrumDiff } from "@/lib/revisions/diff";
+
+export interface RevisionDiffViewProps {
+  fromNumber: number;
+  toNumber: number;
+  configurationDiff: ConfigurationDiff;
+  /** Null when either revision has no stored result. */
+  spectrumDiff: SpectrumDiff | null;
+}
+
+const fieldLabels: Record<ConfigurationDiff["fields"][number]["field"], string> = {
+  title: "Title",
+  description: "Description",
+  theory: "Theory",
+  dimension: "Dimension",
+  stringScaleGeV: "String scale (GeV)",
+  levels: "Levels",
+};
+
+/** What changed between two revisions: the document, then the spectrum (alpha' = 1). */
+export function RevisionDiffView({ fromNumber, toNumber, configurationDiff, spectrumDiff }: RevisionDiffViewProps) {
+  return (
+    <div className="grid gap-6 text-sm" aria-live="polite">
+      <section aria-labelledby="document-changes" className="grid gap-2">
+        <h3 id="document-changes" className="font-semibold">
+          Configuration, revision {fromNumber} → {toNumber}
+        </h3>
+        {configurationDiff.identical ? (
+          <p className="text-muted-foreground">The documents are identical.</p>
+        ) : (
+          <ul className="grid gap-1.5">
+            {configurationDiff.fields.map((change) => (
+              <li key={change.field}>
+                {fieldLabels[change.field]}: <Old>{show(change.before)}</Old> → <New>{show(change.after)}</New>
+              </li>
+            ))}
+            {configurationDiff.added.map((stack) => (
+              <li key={`added-${stack.id}`}>
+                <Badge variant="success">added</Badge> stack <code>{stack.id}</code> ({stack.label || "no label"}): D{stack.worldvolume.length}, N = {stack.count}
+                {stack.anti ? ", antibrane" : ""}
+              </li>
+            ))}
+            {configurationDiff.removed.map((stack) => (
+              <li key={`removed-${stack.id}`}>
+                <Badge variant="danger">removed</Badge> stack <code>{stack.id}</code> ({stack.label || "no label"})
+              </li>
+            ))}
+            {configurationDiff.changed.map((change) => (
+              <li key={`changed-${change.id}`} className="grid gap-0.5">
+                <span>
+                  <Badge variant="warning">changed</Badge> stack <code>{change.id}</code>
+                </span>
+                <ul className="ml-6 list-disc text-muted-foreground">
+                  {change.label ? (
+                    <li>
+                      label <Old>{change.label.before}</Old> → <New>{change.label.after}</New>
+                    </li>
+                  ) : null}
+                  {change.count ? (
+                    <li>
+                      count N <Old>{change.count.before}</Old> → <New>{change.count.after}</New>
+                    </li>
+                  ) : null}
+                  {change.anti ? <li>orientation {change.anti.after ? "brane → antibrane" : "antibrane → brane"}</li> : null}
+                  {change.colour ? <li>colour changed</li> : null}
+                  {change.boundaries.map((boundary) => (
+                    <li key={`b-${boundary.axis}`}>
+                      x<sub>{boundary.axis}</sub>: {boundary.before} → {boundary.after}
+                    </li>
+                  ))}
+                  {change.positions.map((position) => (
+                    <li key={`p-${position.axis}`}>
+                      position on x<sub>{position.axis}</sub>: <Old>{position.before}</Old> → <New>{position.after}</New>
+                    </li>
+                  ))}
+                </ul>
+              </li>
+            ))}
+          </ul>
+        )}
+      </section>
+
+      <section aria-labelledby="spectrum-changes" className="grid gap-2">
+        <h3 id="spectrum-changes" className="font-semibold">
+          Spectrum
+        </h3>
+        {!spectrumDiff ? (
+          <p className="text-muted-foreground">One of the revisions has no stored result to compare.</p>
+        ) : spectrumDiff.identical ? (
+          <p className="text-muted-foreground">No sector changed its lightest mass, tachyon status or supersymmetry.</p>
+        ) : (
+          <ul className="grid gap-1.5">
+            {spectrumDiff.gaugeGroup ? (
+              <li>
+                Gauge group <Old>{spectrumDiff.gaugeGroup.before}</Old> → <New>{spectrumDiff.gaugeGroup.after}</New>
+              </li>
+            ) : null}
+            {spectrumDiff.supercharges ? (
+              <li>
+                Supercharges <Old>{show(spectrumDiff.supercharges.before)}</Old> → <New>{show(spectrumDiff.supercharges.after)}</New>
+              </li>
+            ) : null}
+            {spectrumDiff.bps ? <li>All stacks mutually supersymmetric: {spectrumDiff.bps.after ? "now yes" : "no longer"}</li> : null}
+            {spectrumDiff.addedSectors.map((pair) => (
+              <li key={`as-${pair.join("-")}`}>
+                <Badge variant="success">new sector</Badge> {pair.join("–")}
+              </li>
+            ))}
+            {spectrumDiff.removedSectors.map((pair) => (
+              <li key={`rs-${pair.join("-")}`}>
+                <Badge variant="danger">sector gone</Badge> {pair.join("–")}
+              </li>
+            ))}
+            {spectrumDiff.changedSectors.map((sector) => (
+              <li key={`cs-${sector.pair.join("-")}`} className="grid gap-0.5">
+                <span>
+                  Sector <strong>{sector.pair.join("–")}</strong>
+                </span>
+                <ul className="ml-6 list-disc text-muted-foreground">
+                  {sector.lightest ? (
+                    <li>
+                      lightest α′M² <Old>{sector.lightest.before?.massSquared ?? "none"}</Old> →{" "}
+                      <New>{sector.lightest.after?.massSquared ?? "none"}</New>
+                      {sector.lightest.after ? ` (${sector.lightest.after.sector}, level ${sector.lightest.after.level})` : ""}
+                    </li>
+                  ) : null}
+                  {sector.tachyonic ? <li>{sector.tachyonic.after ? "becomes tachyonic" : "no longer tachyonic"}</li> : null}
+                  {sector.supersymmetric ? (
+                    <li>{sector.supersymmetric.after ? "becomes supersymmetric" : "no longer supersymmetric"}</li>
+                  ) : null}
+                </ul>
+              </li>
+            ))}
+          </ul>
+        )}
+        <p className="text-xs text-muted-foreground">Conventions: alpha&apos; = 1, masses as alpha&apos; M². Check published results independently.</p>
+      </section>
+    </div>
+  );
+}
+
+function show(value: string | number | null): string {
+  return value === null || value === "" ? "none" : String(value);
+}
+
+function Old({ children }: { children: ReactNode }) {
+  return <del className="rounded bg-danger-soft px-1 text-danger-soft-foreground no-underline">{children}</del>;
+}
+
+function New({ children }: { children: ReactNode }) {
+  return <ins className="rounded bg-success-soft px-1 text-success-soft-foreground no-underline">{children}</ins>;
+}
