@@ -1,3 +1,4 @@
+import { isDeepStrictEqual } from "node:util";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { checkConfiguration, ConfigurationError, type ConfigurationProblem } from "./check";
@@ -129,7 +130,11 @@ const nearlyValidConfiguration: fc.Arbitrary<Configuration> = fc
     theory: fc.constantFrom<"IIA" | "IIB">("IIA", "IIB"),
     size: fc.integer({ min: 0, max: 5 }),
     levels: fc.integer({ min: 0, max: 5 }),
-    spoil: fc.option(fc.tuple(fc.constantFrom("count", "worldvolume", "position", "id"), nastyNumber), { freq: 4 }),
+    // One configuration in three gets one field spoiled.
+    spoil: fc.oneof(
+      { weight: 2, arbitrary: fc.constant(null) },
+      { weight: 1, arbitrary: fc.tuple(fc.constantFrom("count", "worldvolume", "position", "id"), nastyNumber) },
+    ),
   })
   .chain(({ theory, size, levels: n, spoil }) =>
     fc.tuple(...Array.from({ length: size }, (_, i) => typeTwoStack(theory, `s${i}`))).map((stacks): Configuration => {
@@ -237,17 +242,16 @@ describe("engine fuzzing", () => {
           // One sector per unordered pair including each stack with itself: n(n+1)/2 (product.md).
           expect(result.sectors.length).toBe((n * (n + 1)) / 2);
           expect(allNumbersFinite(result)).toBe(true);
-          expect(JSON.parse(JSON.stringify(result))).toEqual(result);
         }
         // Inputs are never mutated (check.ts and spectrum.ts promise pure functions).
-        expect(configuration).toEqual(before);
+        expect(isDeepStrictEqual(structuredClone(configuration), before)).toBe(true);
       }),
       { numRuns: runs, seed },
     );
     // Both outcomes are exercised in volume, so the property is not vacuous either way.
     expect(valid).toBeGreaterThan(runs / 10);
     expect(invalid).toBeGreaterThan(runs / 10);
-  }, 600_000);
+  }, Math.max(600_000, runs * 20));
 
   describe("edge cases", () => {
     it("reports a NaN count, an infinite position and a fractional level, each at its path", () => {
