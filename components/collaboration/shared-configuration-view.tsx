@@ -1,0 +1,142 @@
+import { SectorLevelsTable } from "@/components/results/sector-levels-table";
+import { ConventionsNote } from "@/components/designer/conventions-note";
+import { Badge } from "@/components/ui/badge";
+import { Card, CardContent, CardDescription, CardHeader, CardTitle } from "@/components/ui/card";
+import { Table, TableBody, TableCaption, TableCell, TableHead, TableHeader, TableRow } from "@/components/ui/table";
+import type { SharedConfigurationDto } from "@/db/queries/share-links";
+import { formatMassSquared, formatNumber, stackKind } from "@/lib/designer/spectrum-summary";
+
+export interface SharedConfigurationViewProps {
+  shared: SharedConfigurationDto;
+}
+
+/** A read-only view of a shared configuration and its stored result. */
+export function SharedConfigurationView({ shared }: SharedConfigurationViewProps) {
+  const { document, result } = shared;
+  const dimension = document.dimension ?? (document.theory === "bosonic" ? 26 : 10);
+  return (
+    <div className="grid gap-6">
+      <Card aria-labelledby="stacks-title">
+        <CardHeader>
+          <CardTitle id="stacks-title">Stacks</CardTitle>
+          <CardDescription>
+            {document.theory}, D = {dimension}; Neumann axes listed, every other spatial axis Dirichlet at the position shown (missing = 0).
+          </CardDescription>
+        </CardHeader>
+        <CardContent>
+          <Table>
+            <TableHeader>
+              <TableRow>
+                <TableHead>Stack</TableHead>
+                <TableHead>Type</TableHead>
+                <TableHead className="text-right">N</TableHead>
+                <TableHead>Neumann axes</TableHead>
+                <TableHead>Dirichlet positions</TableHead>
+              </TableRow>
+            </TableHeader>
+            <TableBody>
+              {document.stacks.map((stack) => (
+                <TableRow key={stack.id}>
+                  <TableCell className="font-medium">
+                    {stack.label || stack.id} <span className="font-mono text-xs text-muted-foreground">({stack.id})</span>
+                  </TableCell>
+                  <TableCell>{stackKind(stack, document.theory)}</TableCell>
+                  <TableCell className="text-right">{stack.count}</TableCell>
+                  <TableCell className="font-mono text-xs">{stack.worldvolume.map((axis) => `x${axis}`).join(" ") || "none"}</TableCell>
+                  <TableCell className="font-mono text-xs">
+                    {Object.entries(stack.position)
+                      .filter(([axis, value]) => !stack.worldvolume.includes(Number(axis)) && value !== 0)
+                      .map(([axis, value]) => `x${axis} = ${value}`)
+                      .join(", ") || "all at 0"}
+                  </TableCell>
+                </TableRow>
+              ))}
+            </TableBody>
+          </Table>
+        </CardContent>
+      </Card>
+
+      {result ? (
+        <>
+          <Card aria-labelledby="summary-title">
+            <CardHeader>
+              <CardTitle id="summary-title">Spectrum summary</CardTitle>
+              <CardDescription>Stored result of revision {shared.revisionNumber}, engine {result.engineVersion}.</CardDescription>
+            </CardHeader>
+            <CardContent className="grid gap-4 text-sm">
+              <div className="flex flex-wrap gap-2">
+                <Badge variant="neutral">Gauge group {result.gaugeGroup}</Badge>
+                {result.supercharges === null ? null : (
+                  <Badge variant={result.supercharges > 0 ? "success" : "neutral"}>{result.supercharges} supercharges</Badge>
+                )}
+                {result.sectors.some((sector) => sector.tachyonic) ? <Badge variant="danger">tachyonic sectors</Badge> : <Badge variant="outline">no tachyons</Badge>}
+              </div>
+              {result.warnings.length > 0 ? (
+                <ul className="list-disc pl-5 text-warning-soft-foreground">
+                  {result.warnings.map((warning) => (
+                    <li key={warning}>{warning}</li>
+                  ))}
+                </ul>
+              ) : null}
+              <Table>
+                <TableCaption>Lightest states over all sectors.</TableCaption>
+                <TableHeader>
+                  <TableRow>
+                    <TableHead>Sector</TableHead>
+                    <TableHead>Kind</TableHead>
+                    <TableHead>Level N</TableHead>
+                    <TableHead className="text-right">α′M²</TableHead>
+                    <TableHead className="text-right">M√α′</TableHead>
+                    <TableHead className="text-right">States (with Chan–Paton)</TableHead>
+                  </TableRow>
+                </TableHeader>
+                <TableBody>
+                  {result.lightest.map((state, index) => (
+                    <TableRow key={`${state.pair.join("-")}-${state.sector}-${state.level}-${index}`}>
+                      <TableCell>{state.pair.join("–")}</TableCell>
+                      <TableCell>{state.sector}</TableCell>
+                      <TableCell className="font-mono">{state.level}</TableCell>
+                      <TableCell className="text-right font-mono">{formatMassSquared(state.massSquared)}</TableCell>
+                      <TableCell className="text-right font-mono">{formatNumber(state.mass)}</TableCell>
+                      <TableCell className="text-right font-mono">{state.withChanPaton}</TableCell>
+                    </TableRow>
+                  ))}
+                </TableBody>
+              </Table>
+            </CardContent>
+          </Card>
+
+          <Card aria-labelledby="sectors-title">
+            <CardHeader>
+              <CardTitle id="sectors-title">Sectors</CardTitle>
+            </CardHeader>
+            <CardContent className="grid gap-5">
+              {result.sectors.map((sector) => (
+                <section key={sector.pair.join("-")} className="grid gap-2">
+                  <h3 className="text-sm font-semibold">
+                    {sector.pair.join("–")}{" "}
+                    <span className="font-normal text-muted-foreground">
+                      ν = {sector.nu}, y = {formatNumber(sector.separation)}, Chan–Paton {sector.chanPaton}
+                      {sector.tachyonic ? ", tachyonic" : ""}
+                      {sector.supersymmetric ? ", supersymmetric" : ""}
+                    </span>
+                  </h3>
+                  <SectorLevelsTable
+                    caption={`Levels of the ${sector.pair.join("–")} sector`}
+                    rows={sector.levels}
+                    kind="all"
+                    maxLevel={document.levels}
+                    showGeV={document.stringScaleGeV !== null}
+                  />
+                </section>
+              ))}
+            </CardContent>
+          </Card>
+        </>
+      ) : (
+        <p className="text-sm text-muted-foreground">No stored result for this revision.</p>
+      )}
+      <ConventionsNote full />
+    </div>
+  );
+}
