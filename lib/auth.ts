@@ -4,6 +4,7 @@ import CredentialsProvider from "next-auth/providers/credentials";
 import type { Actor } from "@/db/queries/actor";
 import { consumeSignInLinkToken, verifyPassword } from "@/db/queries/users";
 import { getAuthSecret } from "@/lib/auth-secret";
+import { limitSignInAttempt, signInAddress } from "@/lib/sign-in-limit";
 import { toDomainError } from "@/lib/errors";
 import { signInLinkSchema, signInSchema } from "@/lib/validations/auth";
 
@@ -30,10 +31,16 @@ export const authOptions: NextAuthOptions = {
         email: { label: "E-mail", type: "email" },
         password: { label: "Password", type: "password" },
       },
-      async authorize(credentials) {
+      async authorize(credentials, req) {
         const parsed = signInSchema.safeParse(credentials);
         if (!parsed.success) throw new Error(parsed.error.issues[0]?.message ?? "Enter your e-mail and password.");
-        return toUser(await authorizeWith(() => verifyPassword(null, parsed.data.email, parsed.data.password)));
+        const { email, password } = parsed.data;
+        // Failed attempts are counted per e-mail and per client address in PostgreSQL (lib/sign-in-limit.ts).
+        return toUser(
+          await authorizeWith(() =>
+            limitSignInAttempt(email, signInAddress(req.headers), () => verifyPassword(null, email, password)),
+          ),
+        );
       },
     }),
     CredentialsProvider({
