@@ -1,8 +1,11 @@
 import { randomUUID } from "node:crypto";
+import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
+import { db } from "@/db/index";
 import { verifyPassword } from "@/db/queries/users";
+import { users } from "@/db/schema";
 import { RateLimitError, ServiceUnavailableError, UnauthenticatedError } from "@/lib/errors";
-import { peekRateLimit } from "@/lib/rate-limit";
+import { consumeRateLimit, peekRateLimit } from "@/lib/rate-limit";
 import { limitSignInAttempt, signInAddress, signInLimitPerAddress, signInLimitPerEmail } from "@/lib/sign-in-limit";
 import { createTestUser } from "@/tests/fixtures/users";
 
@@ -74,6 +77,32 @@ describe("limitSignInAttempt", () => {
       limitSignInAttempt(user.actor.email, address, () => verifyPassword(null, user.actor.email, password));
     await expect(attempt("wrong password 1")).rejects.toThrow("Wrong e-mail or password.");
     expect((await attempt("correct horse battery")).id).toBe(user.actor.id);
+  });
+});
+
+describe("the password sign-in provider (lib/auth.ts)", () => {
+  type Authorize = (credentials: Record<string, string>, req: { headers: Record<string, string> }) => Promise<unknown>;
+
+  it("shows the account lockout after 10 failures, then the per-e-mail limit, and never signs in meanwhile", async () => {
+    const { authOptions } = await import("@/lib/auth");
+    // next-auth v4 keeps the provider's own options (id "password", authorize) under `options`.
+    const providers = authOptions.providers as unknown as { options: { id?: string; authorize: Authorize } }[];
+    const provider = providers.find((candidate) => candidate.options.id === "password");
+    if (!provider) throw new Error("lib/auth.ts has no password provider");
+    const user = await createTestUser({ label: "provider", password: "correct horse battery" });
+    const req = { headers: { "x-forwarded-for": freshAddress() } };
+    const signIn = (password: string) => provider.options.authorize({ email: user.actor.email, password }, req);
+
+    await expect(signIn("wrong 1")).rejects.toThrow("Wrong e-mail or password.");
+    // Eight more failures without paying for eight bcrypt checks; the limiter counts its own.
+    await db.update(users).set({ failedSignIns: 9 }).where(eq(users.id, user.actor.id));
+    for (let i = 2; i < 10; i += 1) await consumeRateLimit(`sign-in:email:${user.actor.email}`, signInLimitPerEmail);
+    // db/queries/users.ts: the 10th consecutive failure locks the account.
+    await expect(signIn("wrong 10")).rejects.toThrow(/This account is locked for 15 more minutes/);
+    for (let i = 11; i <= signInLimitPerEmail.limit; i += 1) {
+      await expect(signIn("correct horse battery")).rejects.toThrow(/This account is locked/);
+    }
+    await expect(signIn("correct horse battery")).rejects.toThrow(/Too many failed sign-ins for this e-mail address/);
   });
 });
 
