@@ -18,11 +18,9 @@ import type { ListConfigurationsQuery } from "@/lib/validations/configuration-ap
 /** A DTO as it arrives over JSON: dates become ISO strings. */
 export type Jsonified<T> = T extends Date
   ? string
-  : T extends Array<infer U>
-    ? Array<Jsonified<U>>
-    : T extends object
-      ? { [K in keyof T]: Jsonified<T[K]> }
-      : T;
+  : T extends object
+    ? { [K in keyof T]: Jsonified<T[K]> }
+    : T;
 
 export type ConfigurationJson = Jsonified<ConfigurationDto>;
 export type ConfigurationSummaryJson = Jsonified<ConfigurationSummaryDto>;

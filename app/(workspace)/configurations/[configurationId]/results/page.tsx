@@ -1,0 +1,48 @@
+import type { Metadata } from "next";
+import { getResultForRevision, listRevisions } from "@/db/queries/configurations";
+import { ResultsView } from "@/components/results/results-view";
+import { EmptyState } from "@/components/ui/empty-state";
+import { ButtonLink } from "@/components/ui/button";
+import { getConfigurationOrNotFound, listWritableGroups } from "@/lib/api/configuration-pages";
+import { toJson } from "@/lib/queries/configurations";
+import { requireUser } from "@/lib/session";
+
+export const metadata: Metadata = { title: "Results" };
+
+interface ResultsPageProps {
+  params: Promise<{ configurationId: string }>;
+  searchParams: Promise<{ revision?: string }>;
+}
+
+export default async function ConfigurationResultsPage({ params, searchParams }: ResultsPageProps) {
+  const [{ configurationId }, { revision: revisionParam }] = await Promise.all([params, searchParams]);
+  const user = await requireUser(`/configurations/${configurationId}/results`);
+  const [configuration, revisions, writableGroups] = await Promise.all([
+    getConfigurationOrNotFound(user, configurationId),
+    listRevisions(user, configurationId),
+    listWritableGroups(user),
+  ]);
+  const revision = revisions.find((r) => r.id === revisionParam) ?? revisions.find((r) => r.isCurrent) ?? revisions[0];
+  if (!revision || !revision.hasResult) {
+    return (
+      <div className="mx-auto max-w-xl px-4 py-12">
+        <EmptyState
+          title="No stored result yet"
+          description="Save the configuration in the designer; the server computes and stores the spectrum of every revision."
+          action={<ButtonLink href={`/configurations/${configurationId}`}>Open the designer</ButtonLink>}
+        />
+      </div>
+    );
+  }
+  const result = await getResultForRevision(user, revision.id);
+  return (
+    <ResultsView
+      key={revision.id}
+      configuration={toJson(configuration)}
+      revisions={toJson(revisions)}
+      revision={toJson(revision)}
+      initialResult={toJson(result)}
+      writableGroups={writableGroups}
+    />
+  );
+}

@@ -1,0 +1,106 @@
+"use client";
+
+import { useMemo } from "react";
+import { CartesianGrid, Legend, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import type { Sector } from "@/lib/boundary/types";
+import { massCurvePoints, massCurves } from "@/lib/designer/plot-data";
+import { formatNumber } from "@/lib/designer/spectrum-summary";
+
+export interface MassPlotProps {
+  sectors: Sector[];
+}
+
+/** Line colours and dash patterns, so curves differ without colour too. */
+const strokes = ["#2f6f9f", "#b5542c", "#3f8f5a", "#7a4fa3", "#a8832a", "#2a8a8a", "#9c3d63", "#56606b"];
+const dashes = ["", "6 3", "2 3", "10 3 2 3", "1 2", "12 4"];
+
+/**
+ * alpha' M^2 of each sector's lightest state against the separation y, with the zero line,
+ * the tachyon crossings y_c and the actual separations marked.
+ */
+export function MassPlot({ sectors }: MassPlotProps) {
+  const curves = useMemo(() => massCurves(sectors.filter((s) => s.pair[0] !== s.pair[1])).slice(0, 12), [sectors]);
+  const { rows, yMax } = useMemo(() => massCurvePoints(curves), [curves]);
+  if (curves.length === 0) {
+    return <p className="text-sm text-muted-foreground">A single stack has no separations to plot.</p>;
+  }
+  return (
+    <figure className="grid gap-2">
+      <div className="h-72 w-full">
+        <ResponsiveContainer width="100%" height="100%">
+          <LineChart data={rows} margin={{ top: 12, right: 24, bottom: 28, left: 8 }}>
+            <CartesianGrid strokeDasharray="2 4" stroke="var(--border)" />
+            <XAxis
+              dataKey="y"
+              type="number"
+              domain={[0, yMax]}
+              tickFormatter={(v: number) => formatNumber(v, 3)}
+              label={{ value: "separation y (\u221a\u03b1\u2032)", position: "insideBottom", offset: -16, fill: "var(--muted-foreground)", fontSize: 12 }}
+              stroke="var(--muted-foreground)"
+              fontSize={11}
+            />
+            <YAxis
+              tickFormatter={(v: number) => formatNumber(v, 3)}
+              label={{ value: "\u03b1\u2032M\u00b2", angle: -90, position: "insideLeft", fill: "var(--muted-foreground)", fontSize: 12 }}
+              stroke="var(--muted-foreground)"
+              fontSize={11}
+            />
+            <Tooltip
+              formatter={(value) => (typeof value === "number" ? formatNumber(value, 4) : String(value))}
+              labelFormatter={(value) => `y = ${typeof value === "number" ? formatNumber(value, 4) : String(value)}`}
+              contentStyle={{ background: "var(--surface-raised)", border: "1px solid var(--border)", fontSize: 12 }}
+            />
+            <Legend verticalAlign="top" height={24} wrapperStyle={{ fontSize: 12 }} />
+            <ReferenceLine y={0} stroke="var(--muted-foreground)" strokeDasharray="4 2" label={{ value: "massless", position: "insideTopRight", fontSize: 11, fill: "var(--muted-foreground)" }} />
+            {curves.map((curve, i) => (
+              <Line
+                key={curve.key}
+                dataKey={curve.key}
+                name={curve.label}
+                type="monotone"
+                dot={false}
+                stroke={strokes[i % strokes.length]}
+                strokeDasharray={dashes[i % dashes.length]}
+                strokeWidth={2}
+                isAnimationActive={false}
+              />
+            ))}
+            {curves.map((curve) =>
+              curve.crossing !== null ? (
+                <ReferenceDot
+                  key={`yc-${curve.key}`}
+                  x={curve.crossing}
+                  y={0}
+                  r={5}
+                  fill="var(--danger)"
+                  stroke="var(--surface)"
+                  label={{ value: `y_c = ${formatNumber(curve.crossing, 4)}`, position: "top", fontSize: 11, fill: "var(--danger)" }}
+                  ifOverflow="extendDomain"
+                />
+              ) : null,
+            )}
+            {curves.map((curve, i) => (
+              <ReferenceDot
+                key={`y-${curve.key}`}
+                x={curve.separation}
+                y={(curve.separation / (2 * Math.PI)) ** 2 + curve.intercept}
+                r={4}
+                fill={strokes[i % strokes.length]}
+                stroke="var(--surface)"
+                ifOverflow="extendDomain"
+              />
+            ))}
+          </LineChart>
+        </ResponsiveContainer>
+      </div>
+      <figcaption className="text-xs text-muted-foreground">
+        Lightest state of each pair of distinct stacks: &alpha;&prime;M&sup2; = (y/2&pi;)&sup2; + N + a. Dots mark the actual separations;
+        red dots mark tachyon crossings y<sub>c</sub> = 2&pi;&radic;(&minus;(N + a)), beyond which the state is massive.
+        {curves
+          .filter((c) => c.crossing !== null)
+          .map((c) => ` ${c.label}: y_c = ${formatNumber(c.crossing, 4)}.`)
+          .join("")}
+      </figcaption>
+    </figure>
+  );
+}

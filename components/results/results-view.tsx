@@ -1,0 +1,332 @@
+"use client";
+
+import { useQuery } from "@tanstack/react-query";
+import dynamic from "next/dynamic";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import type { Sector, SectorKind } from "@/lib/boundary/types";
+import { formatMassSquared, formatNumber, parseRational } from "@/lib/designer/spectrum-summary";
+import {
+  configurationQueries,
+  useForkConfiguration,
+  type ConfigurationJson,
+  type ResultJson,
+  type RevisionSummaryJson,
+} from "@/lib/queries/configurations";
+import { Badge } from "@/components/ui/badge";
+import { Button, ButtonLink } from "@/components/ui/button";
+import { ExportMenu } from "@/components/configurations/export-menu";
+import { ConventionsNote } from "@/components/designer/conventions-note";
+import { ForkDialog, type WritableGroup } from "@/components/designer/fork-dialog";
+import { ForkedFromNote } from "@/components/designer/forked-from-note";
+import { SectorLevelsTable } from "./sector-levels-table";
+
+const ModeExpansions = dynamic(() => import("./mode-expansions").then((m) => m.ModeExpansions), {
+  ssr: false,
+  loading: () => <p className="text-xs text-muted-foreground">Typesetting&hellip;</p>,
+});
+const MassPlot = dynamic(() => import("./mass-plot").then((m) => m.MassPlot), {
+  ssr: false,
+  loading: () => <div className="h-72 animate-pulse rounded-md bg-border/50" />,
+});
+const DegeneracyPlot = dynamic(() => import("./degeneracy-plot").then((m) => m.DegeneracyPlot), {
+  ssr: false,
+  loading: () => <div className="h-64 animate-pulse rounded-md bg-border/50" />,
+});
+
+export interface ResultsViewProps {
+  configuration: ConfigurationJson;
+  revisions: RevisionSummaryJson[];
+  revision: RevisionSummaryJson;
+  initialResult: ResultJson;
+  writableGroups: WritableGroup[];
+}
+
+/**
+ * The results panel of one saved revision: summaries, per-sector tables with mode expansions,
+ * plots, conventions, exports and forking.
+ */
+export function ResultsView({ configuration, revisions, revision, initialResult, writableGroups }: ResultsViewProps) {
+  const router = useRouter();
+  const { data: stored } = useQuery({ ...configurationQueries.result(configuration.id, revision.id), initialData: initialResult });
+  const result = stored.result;
+  const [kind, setKind] = useState<SectorKind | "all">("all");
+  const [maxLevel, setMaxLevel] = useState(() => highestLevel(result.sectors));
+  const [search, setSearch] = useState("");
+  const [onlyTachyonic, setOnlyTachyonic] = useState(false);
+  const [forkOpen, setForkOpen] = useState(false);
+  const fork = useForkConfiguration(configuration.id);
+  const kinds: SectorKind[] = result.theory === "bosonic" ? ["bosonic"] : ["NS", "R"];
+  const tachyonic = result.sectors.filter((s) => s.tachyonic);
+  const visibleSectors = result.sectors.filter(
+    (s) => (!onlyTachyonic || s.tachyonic) && (search.trim() === "" || s.pair.join(" ").toLowerCase().includes(search.trim().toLowerCase())),
+  );
+  const showGeV = result.sectors.some((s) => s.levels.some((l) => l.massGeV !== undefined && l.massGeV !== null));
+
+  return (
+    <div className="mx-auto grid w-full max-w-7xl gap-6 px-4 py-6 sm:px-6">
+      <header className="flex flex-wrap items-end justify-between gap-4 border-b border-border pb-4">
+        <div className="min-w-0">
+          <div className="flex flex-wrap items-center gap-2 text-xs text-muted-foreground">
+            <span>{configuration.group.kind === "personal" ? "Personal space" : configuration.group.name}</span>
+            <Badge variant="outline">{result.theory}</Badge>
+            <span>D = {result.dimension}</span>
+            <ForkedFromNote forkedFrom={configuration.forkedFrom} />
+          </div>
+          <h1 className="text-2xl font-semibold tracking-tight">Results: {configuration.title}</h1>
+          <p className="text-sm text-muted-foreground">
+            Revision {revision.number} by {revision.author.name}, {new Date(revision.createdAt).toLocaleString()}
+            {revision.message ? ` \u2014 \u201c${revision.message}\u201d` : ""}. Engine {stored.engineVersion}, computed in {formatNumber(stored.computeMs, 3)} ms.
+          </p>
+        </div>
+        <div className="flex flex-wrap items-center gap-2">
+          <label className="flex items-center gap-1 text-xs">
+            <span className="text-muted-foreground">Revision</span>
+            <select
+              value={revision.id}
+              onChange={(event) => router.push(`/configurations/${configuration.id}/results?revision=${event.target.value}`)}
+              className="h-8 rounded border border-border-strong bg-surface px-1 text-sm"
+              aria-label="Revision"
+            >
+              {revisions.map((r) => (
+                <option key={r.id} value={r.id}>
+                  {r.number}
+                  {r.isCurrent ? " (current)" : ""}
+                </option>
+              ))}
+            </select>
+          </label>
+          <ButtonLink href={`/configurations/${configuration.id}`} variant="secondary" size="sm">
+            Open in designer
+          </ButtonLink>
+          <Button variant="secondary" size="sm" onClick={() => setForkOpen(true)} disabled={writableGroups.length === 0}>
+            Fork
+          </Button>
+          <ExportMenu configurationId={configuration.id} revisionId={revision.id} />
+        </div>
+      </header>
+
+      <section aria-labelledby="summary-title" className="grid gap-4 md:grid-cols-3">
+        <h2 id="summary-title" className="sr-only">
+          Summary
+        </h2>
+        <div className="rounded-lg border border-border bg-surface p-4">
+          <h3 className="text-xs font-semibold tracking-wide text-muted-foreground uppercase">Supersymmetry</h3>
+          <p className="mt-1 text-lg font-semibold" data-testid="results-supercharges">
+            {result.supercharges === null ? "not applicable" : `${result.supercharges} supercharges`}
+          </p>
+          <p className="text-sm text-muted-foreground">
+            {result.supercharges === null
+              ? "The bosonic string has no spacetime supersymmetry."
+              : result.bps
+                ? "BPS: every pair of stacks is mutually supersymmetric."
+                : "Not BPS: some pairs break all supersymmetry between them."}
+          </p>
+        </div>
+        <div className="rounded-lg border border-border bg-surface p-4">
+          <h3 className="text-xs font-semibold tracking-wide text-muted-foreground uppercase">Stability</h3>
+          <p className="mt-1 text-lg font-semibold" data-testid="results-stability">
+            {tachyonic.length === 0 ? "No tachyons" : `${tachyonic.length} tachyonic sector${tachyonic.length > 1 ? "s" : ""}`}
+          </p>
+          <ul className="text-sm text-muted-foreground">
+            {tachyonic.map((s) => (
+              <li key={s.pair.join("|")}>
+                {s.pair[0]}&ndash;{s.pair[1]} at y = {formatNumber(s.separation)}
+                {s.criticalSeparation !== null ? `; stable beyond y_c = ${formatNumber(s.criticalSeparation)}` : ""}
+              </li>
+            ))}
+          </ul>
+        </div>
+        <div className="rounded-lg border border-border bg-surface p-4">
+          <h3 className="text-xs font-semibold tracking-wide text-muted-foreground uppercase">Gauge group</h3>
+          <p className="mt-1 font-mono text-lg font-semibold">{result.gaugeGroup || "none"}</p>
+          <p className="text-sm text-muted-foreground">{result.sectors.length} sectors</p>
+        </div>
+      </section>
+
+      {result.warnings.length > 0 ? (
+        <ul className="list-disc space-y-1 rounded-md border border-warning/40 bg-warning-soft py-2 pr-3 pl-7 text-sm text-warning-soft-foreground">
+          {result.warnings.map((w) => (
+            <li key={w}>{w}</li>
+          ))}
+        </ul>
+      ) : null}
+
+      <section aria-labelledby="lightest-title" className="grid gap-2">
+        <h2 id="lightest-title" className="text-lg font-semibold">
+          Lightest states
+        </h2>
+        <div className="overflow-x-auto rounded-lg border border-border bg-surface">
+          <table className="w-full border-collapse text-sm" aria-labelledby="lightest-title" data-testid="lightest-table">
+            <thead className="bg-surface-muted/70 text-xs text-muted-foreground">
+              <tr>
+                {["Sector", "NS/R", "Level", "\u03b1\u2032M\u00b2", "M\u221a\u03b1\u2032", "States", "With Chan-Paton"].map((h, i) => (
+                  <th key={h} scope="col" className={i < 2 ? "px-3 py-1.5 text-left font-semibold" : "px-3 py-1.5 text-right font-semibold"}>
+                    {h}
+                  </th>
+                ))}
+              </tr>
+            </thead>
+            <tbody>
+              {result.lightest.map((row, i) => (
+                <tr key={`${row.pair.join("|")}-${row.sector}-${row.level}-${i}`} className="border-t border-border">
+                  <td className="px-3 py-1.5 font-mono">
+                    {row.pair[0]}&ndash;{row.pair[1]}
+                  </td>
+                  <td className="px-3 py-1.5">{row.sector}</td>
+                  <td className="px-3 py-1.5 text-right font-mono">{row.level}</td>
+                  <td className="px-3 py-1.5 text-right font-mono">{formatMassSquared(row.massSquared)}</td>
+                  <td className="px-3 py-1.5 text-right font-mono">{formatNumber(row.mass, 6)}</td>
+                  <td className="px-3 py-1.5 text-right font-mono">{row.states ?? "\u2014"}</td>
+                  <td className="px-3 py-1.5 text-right font-mono">{row.withChanPaton}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      </section>
+
+      <section aria-labelledby="plots-title" className="grid gap-4">
+        <h2 id="plots-title" className="text-lg font-semibold">
+          Plots
+        </h2>
+        <div className="grid gap-4 lg:grid-cols-2">
+          <div className="rounded-lg border border-border bg-surface p-4">
+            <h3 className="mb-2 text-sm font-semibold">&alpha;&prime;M&sup2; against separation</h3>
+            <MassPlot sectors={result.sectors} />
+          </div>
+          <div className="rounded-lg border border-border bg-surface p-4">
+            <h3 className="mb-2 text-sm font-semibold">Degeneracy against level</h3>
+            <DegeneracyPlot sectors={result.sectors} />
+          </div>
+        </div>
+      </section>
+
+      <section aria-labelledby="sectors-title" className="grid gap-3">
+        <div className="flex flex-wrap items-end justify-between gap-3">
+          <h2 id="sectors-title" className="text-lg font-semibold">
+            Sectors
+          </h2>
+          <div role="group" aria-label="Filter the sector tables" className="flex flex-wrap items-center gap-3 text-xs">
+            <label className="flex items-center gap-1">
+              <span className="text-muted-foreground">Stack</span>
+              <input
+                type="search"
+                value={search}
+                onChange={(event) => setSearch(event.target.value)}
+                placeholder="id"
+                className="h-8 w-28 rounded border border-border-strong bg-surface px-2"
+                aria-label="Show sectors of stacks whose id contains"
+              />
+            </label>
+            <label className="flex items-center gap-1">
+              <span className="text-muted-foreground">Kind</span>
+              <select value={kind} onChange={(event) => setKind(event.target.value as SectorKind | "all")} className="h-8 rounded border border-border-strong bg-surface px-1">
+                <option value="all">all</option>
+                {kinds.map((k) => (
+                  <option key={k} value={k}>
+                    {k}
+                  </option>
+                ))}
+              </select>
+            </label>
+            <label className="flex items-center gap-1">
+              <span className="text-muted-foreground">Up to level</span>
+              <input
+                type="number"
+                min={0}
+                step={0.5}
+                value={maxLevel}
+                onChange={(event) => setMaxLevel(Number(event.target.value))}
+                className="h-8 w-16 rounded border border-border-strong bg-surface px-2"
+              />
+            </label>
+            <label className="flex items-center gap-1">
+              <input type="checkbox" checked={onlyTachyonic} onChange={(event) => setOnlyTachyonic(event.target.checked)} />
+              <span>Tachyonic only</span>
+            </label>
+          </div>
+        </div>
+        {visibleSectors.length === 0 ? <p className="text-sm text-muted-foreground">No sector matches the filters.</p> : null}
+        {visibleSectors.map((sector) => {
+          const title = `${sector.pair[0]}\u2013${sector.pair[1]}`;
+          return (
+            <details key={sector.pair.join("|")} open={visibleSectors.length <= 6} className="rounded-lg border border-border bg-surface" data-testid={`sector-${sector.pair.join("-")}`}>
+              <summary className="flex cursor-pointer flex-wrap items-center gap-x-4 gap-y-1 px-4 py-2 text-sm">
+                <span className="font-mono font-semibold">{title}</span>
+                <span className="text-muted-foreground">
+                  NN {sector.nn} &middot; DD {sector.dd} &middot; &nu; = {sector.nu} &middot; y = {formatNumber(sector.separation)} &middot; Chan-Paton {sector.chanPaton}
+                </span>
+                <span className="font-mono text-xs text-muted-foreground">
+                  a:{" "}
+                  {Object.entries(sector.zeroPoint)
+                    .map(([k, v]) => `${k} ${formatMassSquared(v)}`)
+                    .join(", ")}
+                </span>
+                {sector.tachyonic ? (
+                  <Badge variant="danger" className="border-dashed border-danger">
+                    tachyon{sector.criticalSeparation !== null ? `, y_c = ${formatNumber(sector.criticalSeparation)}` : ""}
+                  </Badge>
+                ) : null}
+                {result.supercharges !== null ? (
+                  <Badge variant={sector.supersymmetric ? "success" : "outline"}>{sector.supersymmetric ? "supersymmetric" : "no supersymmetry"}</Badge>
+                ) : null}
+              </summary>
+              <div className="grid gap-3 border-t border-border px-4 py-3">
+                <SectorLevelsTable caption={`Levels of sector ${title}`} rows={sector.levels} kind={kind} maxLevel={maxLevel} showGeV={showGeV} />
+                {sector.massless.length > 0 ? (
+                  <div className="text-xs">
+                    <h4 className="font-semibold">Massless content</h4>
+                    <ul className="list-disc pl-4 text-muted-foreground">
+                      {sector.massless.map((m) => (
+                        <li key={`${m.sector}-${m.description}`}>
+                          {m.sector}: {m.description} ({m.states} states{m.withChanPaton ? `, ${m.withChanPaton} with Chan-Paton` : ""})
+                        </li>
+                      ))}
+                    </ul>
+                  </div>
+                ) : null}
+                {sector.notes.length > 0 ? (
+                  <ul className="list-disc pl-4 text-xs text-muted-foreground">
+                    {sector.notes.map((n) => (
+                      <li key={n}>{n}</li>
+                    ))}
+                  </ul>
+                ) : null}
+                <details className="text-xs">
+                  <summary className="cursor-pointer font-semibold">Mode expansions</summary>
+                  <div className="mt-2 overflow-x-auto">
+                    <ModeExpansions axes={sector.axes} />
+                  </div>
+                </details>
+              </div>
+            </details>
+          );
+        })}
+      </section>
+
+      <ConventionsNote full />
+
+      {forkOpen ? (
+        <ForkDialog
+          open
+          onOpenChange={setForkOpen}
+          groups={writableGroups}
+          defaultTitle={`${configuration.title} (fork)`}
+          sourceLabel={`revision ${revision.number}`}
+          pending={fork.isPending}
+          error={fork.error?.message ?? null}
+          onFork={(input) =>
+            fork.mutate({ ...input, revisionId: revision.id }, { onSuccess: (created) => router.push(`/configurations/${created.id}`) })
+          }
+        />
+      ) : null}
+    </div>
+  );
+}
+
+function highestLevel(sectors: Sector[]): number {
+  let highest = 0;
+  for (const sector of sectors) for (const row of sector.levels) highest = Math.max(highest, parseRational(row.level));
+  return highest;
+}

@@ -1,0 +1,160 @@
+"use client";
+
+import {
+  flexRender,
+  getCoreRowModel,
+  getFilteredRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type ColumnDef,
+  type SortingState,
+} from "@tanstack/react-table";
+import { useMemo, useState } from "react";
+import type { LevelRow, SectorKind } from "@/lib/boundary/types";
+import { formatMassSquared, formatNumber, parseRational } from "@/lib/designer/spectrum-summary";
+import { cn } from "@/lib/utils";
+
+export interface SectorLevelsTableProps {
+  /** Caption naming the sector, for assistive technology. */
+  caption: string;
+  rows: LevelRow[];
+  /** Only rows of this kind (NS, R, bosonic), or all. */
+  kind: SectorKind | "all";
+  /** Only rows up to this level. */
+  maxLevel: number;
+  showGeV: boolean;
+}
+
+function compareDecimal(a: string | null, b: string | null): number {
+  if (a === b) return 0;
+  if (a === null) return -1;
+  if (b === null) return 1;
+  const x = BigInt(a);
+  const y = BigInt(b);
+  return x < y ? -1 : x > y ? 1 : 0;
+}
+
+/** The levels of one sector, sortable by any column, filtered by kind and level. */
+export function SectorLevelsTable({ caption, rows, kind, maxLevel, showGeV }: SectorLevelsTableProps) {
+  const [sorting, setSorting] = useState<SortingState>([]);
+  const columns = useMemo<ColumnDef<LevelRow>[]>(
+    () => [
+      { accessorKey: "sector", header: "Sector", filterFn: (row, _id, value: string) => value === "all" || row.original.sector === value },
+      {
+        accessorKey: "level",
+        header: "Level N",
+        sortingFn: (a, b) => parseRational(a.original.level) - parseRational(b.original.level),
+        filterFn: (row, _id, value: number) => parseRational(row.original.level) <= value,
+      },
+      {
+        accessorKey: "massSquared",
+        header: "\u03b1\u2032M\u00b2",
+        sortingFn: (a, b) => parseRational(a.original.massSquared) - parseRational(b.original.massSquared),
+        cell: ({ row }) => (
+          <>
+            {formatMassSquared(row.original.massSquared)}
+            {parseRational(row.original.massSquared) < 0 ? <span className="ml-1 font-sans text-danger-soft-foreground">tachyon</span> : null}
+          </>
+        ),
+      },
+      { accessorKey: "mass", header: "M\u221a\u03b1\u2032", cell: ({ row }) => formatNumber(row.original.mass, 6) },
+      ...(showGeV
+        ? [{ accessorKey: "massGeV", header: "M (GeV)", cell: ({ row }) => formatNumber(row.original.massGeV ?? null, 6) } satisfies ColumnDef<LevelRow>]
+        : []),
+      {
+        accessorKey: "states",
+        header: "States",
+        sortingFn: (a, b) => compareDecimal(a.original.states, b.original.states),
+        cell: ({ row }) => row.original.states ?? <span title={row.original.note}>&mdash;</span>,
+      },
+      {
+        accessorKey: "withChanPaton",
+        header: "With Chan-Paton",
+        sortingFn: (a, b) => compareDecimal(a.original.withChanPaton, b.original.withChanPaton),
+      },
+    ],
+    [showGeV],
+  );
+  const columnFilters = useMemo(
+    () => [
+      { id: "sector", value: kind },
+      { id: "level", value: maxLevel },
+    ],
+    [kind, maxLevel],
+  );
+  const table = useReactTable({
+    data: rows,
+    columns,
+    state: { sorting, columnFilters },
+    onSortingChange: setSorting,
+    getCoreRowModel: getCoreRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+    getFilteredRowModel: getFilteredRowModel(),
+  });
+  const visible = table.getRowModel().rows;
+  const notes = [...new Set(rows.map((r) => r.note).filter((n): n is string => Boolean(n)))];
+
+  return (
+    <div className="grid gap-1">
+      <div className="overflow-x-auto rounded-md border border-border">
+        <table className="w-full border-collapse text-xs">
+          <caption className="sr-only">{caption}</caption>
+          <thead className="bg-surface-muted/70 text-muted-foreground">
+            {table.getHeaderGroups().map((group) => (
+              <tr key={group.id}>
+                {group.headers.map((header) => {
+                  const sorted = header.column.getIsSorted();
+                  return (
+                    <th
+                      key={header.id}
+                      scope="col"
+                      aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : "none"}
+                      className={cn("px-2 py-1 font-semibold", header.column.id === "sector" ? "text-left" : "text-right")}
+                    >
+                      <button
+                        type="button"
+                        onClick={header.column.getToggleSortingHandler()}
+                        className="inline-flex items-center gap-1 rounded hover:text-foreground focus-visible:outline-2 focus-visible:outline-ring"
+                      >
+                        {flexRender(header.column.columnDef.header, header.getContext())}
+                        <span aria-hidden="true" className="w-2">
+                          {sorted === "asc" ? "\u25b2" : sorted === "desc" ? "\u25bc" : ""}
+                        </span>
+                      </button>
+                    </th>
+                  );
+                })}
+              </tr>
+            ))}
+          </thead>
+          <tbody>
+            {visible.length === 0 ? (
+              <tr>
+                <td colSpan={columns.length} className="px-2 py-3 text-center text-muted-foreground">
+                  No levels match the filters.
+                </td>
+              </tr>
+            ) : (
+              visible.map((row) => (
+                <tr key={row.id} className="border-t border-border">
+                  {row.getVisibleCells().map((cell) => (
+                    <td key={cell.id} className={cn("px-2 py-1 font-mono whitespace-nowrap", cell.column.id === "sector" ? "text-left font-sans" : "text-right")}>
+                      {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                    </td>
+                  ))}
+                </tr>
+              ))
+            )}
+          </tbody>
+        </table>
+      </div>
+      {notes.length > 0 ? (
+        <ul className="list-disc pl-4 text-[11px] text-muted-foreground">
+          {notes.map((note) => (
+            <li key={note}>{note}</li>
+          ))}
+        </ul>
+      ) : null}
+    </div>
+  );
+}
