@@ -1,4 +1,5 @@
 import type { NextConfig } from "next";
+import { securityHeaders } from "./lib/security-headers";
 
 const nextConfig: NextConfig = {
   reactStrictMode: true,
@@ -7,6 +8,15 @@ const nextConfig: NextConfig = {
   distDir: process.env.NEXT_DIST_DIR || ".next",
   // pg and bcryptjs run on the server only; keep them out of the bundle.
   serverExternalPackages: ["pg"],
+  // Security headers and the content security policy on every response (lib/security-headers.ts).
+  // Read when the server starts (next dev) or at build time (next build): build with the real NEXTAUTH_URL.
+  async headers() {
+    const headers = securityHeaders({
+      development: process.env.NODE_ENV === "development",
+      https: (process.env.NEXTAUTH_URL ?? "").startsWith("https://"),
+    });
+    return [{ source: "/:path*", headers }];
+  },
 };
 
 export default nextConfig;
