@@ -131,6 +131,8 @@ describe("checkConfiguration", () => {
 
   it("rejects a non-positive string scale", () => {
     expect(checkConfiguration(config({ stringScaleGeV: 0 }))[0]?.path).toEqual(["stringScaleGeV"]);
+    // Far above the Planck scale masses in GeV would overflow to Infinity.
+    expect(checkConfiguration(config({ stringScaleGeV: Number.MAX_VALUE }))[0]?.path).toEqual(["stringScaleGeV"]);
     expect(checkConfiguration(config({ stringScaleGeV: 1e16 }))).toEqual([]);
   });
 

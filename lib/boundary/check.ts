@@ -64,6 +64,8 @@ export const configurationLimits = {
   minBosonicDimension: 2,
   /** Longest stack id. */
   maxIdLength: 64,
+  /** Largest string scale in GeV (beyond the Planck scale, ~1.2e19 GeV); keeps masses in GeV finite. */
+  maxStringScaleGeV: 1e20,
 } as const;
 
 /**
@@ -100,7 +102,8 @@ export function describeStack(stack: Pick<Stack, "id" | "label">): string {
  * needs D = 10; IIA allows only even p and IIB only odd p; worldvolume axes lie in 1..D-1,
  * sorted and without duplicates; stack ids are unique and well formed; counts are integers
  * 1..10000; at most 64 stacks; levels are integers 0..200; positions are finite, at most 1e6
- * in size, and keyed by Dirichlet axes of the stack; the string scale is positive or null.
+ * in size, and keyed by Dirichlet axes of the stack; the string scale is null or positive and at
+ * most 1e20 GeV.
  *
  * @param config - The configuration to check (not mutated).
  * @returns The problems in document order; an empty array means the configuration is valid.
@@ -121,10 +124,10 @@ export function checkConfiguration(config: Configuration): ConfigurationProblem[
   }
 
   const scale = config.stringScaleGeV;
-  if (scale !== null && !(Number.isFinite(scale) && scale > 0)) {
+  if (scale !== null && !(Number.isFinite(scale) && scale > 0 && scale <= configurationLimits.maxStringScaleGeV)) {
     problems.push({
       path: ["stringScaleGeV"],
-      message: `The string scale must be a positive number of GeV or null, got ${String(scale)}`,
+      message: `The string scale must be a positive number of GeV up to ${configurationLimits.maxStringScaleGeV} (above the Planck scale), or null; got ${String(scale)}`,
     });
   }
 
