@@ -41,6 +41,7 @@ export async function signUp(page: Page, account: NewAccount): Promise<void> {
   await page.getByLabel("Repeat the password").fill(account.password);
   await page.getByRole("button", { name: "Create account" }).click();
   await expect(page).toHaveURL(/\/dashboard$/, { timeout: signInTimeout });
+  await expect(page.getByRole("button", { name: /^Account:/ })).toBeVisible();
 }
 
 /** Signs in through the password form and waits for the dashboard (or `expectPath`). */
@@ -50,6 +51,7 @@ export async function signIn(page: Page, credentials: { email: string; password:
   await page.getByLabel("Password").fill(credentials.password);
   await page.getByRole("button", { name: "Sign in", exact: true }).click();
   await expect(page).toHaveURL(expectPath, { timeout: signInTimeout });
+  await expect(page.getByRole("button", { name: /^Account:/ })).toBeVisible();
 }
 
 /** Signs out through the account menu in the header. */
