@@ -112,12 +112,15 @@ export function DesignerCanvas({ result, readOnly = false, onSaveShortcut, class
         target !== null &&
         (target.isContentEditable || ["INPUT", "TEXTAREA", "SELECT"].includes(target.tagName) || target.closest("dialog[open]") !== null);
       const mod = event.metaKey || event.ctrlKey;
-      if (mod && event.key.toLowerCase() === "s") {
+      if (mod && event.key.toLowerCase() === "s" && onSaveShortcut) {
         event.preventDefault();
-        onSaveShortcut?.();
+        onSaveShortcut();
         return;
       }
       if (editable) return;
+      const canvasFocused = target !== null && frameRef.current?.contains(target) === true;
+      // A read-only canvas (the landing demo) leaves the page's own shortcuts alone.
+      if (readOnly && !canvasFocused) return;
       const key = event.key;
       if (mod && key.toLowerCase() === "z") {
         event.preventDefault();
@@ -137,7 +140,6 @@ export function DesignerCanvas({ result, readOnly = false, onSaveShortcut, class
         return;
       }
       if (mod || event.altKey) return;
-      const canvasFocused = target !== null && frameRef.current?.contains(target) === true;
       switch (key) {
         case "?":
           setHelpOpen(true);

@@ -6,6 +6,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import type { Sector, SectorKind } from "@/lib/boundary/types";
 import { formatMassSquared, formatNumber, parseRational } from "@/lib/designer/spectrum-summary";
+import { formatDateTime } from "@/lib/format-date";
 import {
   configurationQueries,
   useForkConfiguration,
@@ -75,7 +76,7 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
           </div>
           <h1 className="text-2xl font-semibold tracking-tight">Results: {configuration.title}</h1>
           <p className="text-sm text-muted-foreground">
-            Revision {revision.number} by {revision.author.name}, {new Date(revision.createdAt).toLocaleString()}
+            Revision {revision.number} by {revision.author.name}, {formatDateTime(revision.createdAt)}
             {revision.message ? ` \u2014 \u201c${revision.message}\u201d` : ""}. Engine {stored.engineVersion}, computed in {formatNumber(stored.computeMs, 3)} ms.
           </p>
         </div>

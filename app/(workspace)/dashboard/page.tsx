@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { Suspense } from "react";
-import { MyConfigurationsPanel, MyConfigurationsPanelSkeleton } from "@/components/dashboard/my-configurations-panel";
+import { ConfigurationsPanel } from "@/components/configurations/configurations-panel";
+import { MyConfigurationsPanelSkeleton } from "@/components/dashboard/my-configurations-panel";
 import { MyGroupsPanel, MyGroupsPanelSkeleton } from "@/components/dashboard/my-groups-panel";
 import { PageContainer } from "@/components/layout/page-container";
 import { PageHeader } from "@/components/ui/page-header";
@@ -17,7 +18,7 @@ export default async function DashboardPage() {
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,24rem)]">
         <div className="grid content-start gap-6">
           <Suspense fallback={<MyConfigurationsPanelSkeleton />}>
-            <MyConfigurationsPanel actor={user} />
+            <ConfigurationsPanel actor={user} />
           </Suspense>
         </div>
         <div className="grid content-start gap-6">
