@@ -109,6 +109,21 @@ describe("checkConfiguration", () => {
     expect(checkConfiguration(config({ stacks: stacks.slice(0, 64) }))).toEqual([]);
   });
 
+  it("bounds sectors x (levels + 1) so one result cannot list millions of rows", () => {
+    const many = Array.from({ length: 64 }, (_, i) => stack(`s${i}`, [2, 3]));
+    // 64 stacks: 64 * 65 / 2 = 2080 sectors; 2080 * 9 = 18720 fits, 2080 * 10 = 20800 does not.
+    expect(checkConfiguration(config({ stacks: many, levels: 8 }))).toEqual([]);
+    const problems = checkConfiguration(config({ stacks: many, levels: 9 }));
+    expect(problems).toEqual([
+      {
+        path: ["levels"],
+        message: "64 stacks give 2080 sectors, too many to list up to level 9 in one result; lower levels to at most 8 or use fewer stacks",
+      },
+    ]);
+    // Twelve stacks (78 sectors) still reach the top level 200: 78 * 201 = 15678.
+    expect(checkConfiguration(config({ stacks: many.slice(0, 12), levels: 200 }))).toEqual([]);
+  });
+
   it("rejects positions that are not finite, too large, off the axes, or on Neumann axes", () => {
     const problems = checkConfiguration(
       config({

@@ -64,6 +64,11 @@ export const configurationLimits = {
   minBosonicDimension: 2,
   /** Longest stack id. */
   maxIdLength: 64,
+  /**
+   * Largest sectors x (levels + 1) in one result: bounds the rows listed (about four per sector
+   * and level) so that 64 stacks cannot ask for millions of rows. Twelve stacks reach level 200.
+   */
+  maxSectorLevels: 20_000,
   /** Largest string scale in GeV (beyond the Planck scale, ~1.2e19 GeV); keeps masses in GeV finite. */
   maxStringScaleGeV: 1e20,
 } as const;
@@ -103,7 +108,7 @@ export function describeStack(stack: Pick<Stack, "id" | "label">): string {
  * sorted and without duplicates; stack ids are unique and well formed; counts are integers
  * 1..10000; at most 64 stacks; levels are integers 0..200; positions are finite, at most 1e6
  * in size, and keyed by Dirichlet axes of the stack; the string scale is null or positive and at
- * most 1e20 GeV.
+ * most 1e20 GeV; sectors x (levels + 1) stays within 20000.
  *
  * @param config - The configuration to check (not mutated).
  * @returns The problems in document order; an empty array means the configuration is valid.
@@ -115,8 +120,9 @@ export function describeStack(stack: Pick<Stack, "id" | "label">): string {
 export function checkConfiguration(config: Configuration): ConfigurationProblem[] {
   const problems: ConfigurationProblem[] = [];
   const dimension = checkDimension(config, problems);
+  const levelsOk = Number.isInteger(config.levels) && config.levels >= 0 && config.levels <= configurationLimits.maxLevel;
 
-  if (!Number.isInteger(config.levels) || config.levels < 0 || config.levels > configurationLimits.maxLevel) {
+  if (!levelsOk) {
     problems.push({
       path: ["levels"],
       message: `Levels must be a whole number from 0 to ${configurationLimits.maxLevel}, got ${String(config.levels)}`,
@@ -135,6 +141,21 @@ export function checkConfiguration(config: Configuration): ConfigurationProblem[
     problems.push({
       path: ["stacks"],
       message: `At most ${configurationLimits.maxStacks} stacks are allowed, got ${config.stacks.length}`,
+    });
+  }
+
+  const sectorCount = (config.stacks.length * (config.stacks.length + 1)) / 2;
+  if (
+    levelsOk &&
+    config.stacks.length <= configurationLimits.maxStacks &&
+    sectorCount * (config.levels + 1) > configurationLimits.maxSectorLevels
+  ) {
+    const highest = Math.floor(configurationLimits.maxSectorLevels / sectorCount) - 1;
+    problems.push({
+      path: ["levels"],
+      message:
+        `${config.stacks.length} stacks give ${sectorCount} sectors, too many to list up to level ${config.levels} in one result; ` +
+        `lower levels to at most ${highest} or use fewer stacks`,
     });
   }
 
