@@ -1,7 +1,8 @@
 #!/usr/bin/env node
 // `npm test`: install what is missing, start PostgreSQL, then run the unit tests, the integration tests
 // against a fresh `mooring_test` database, and the browser tests against a production build served on
-// 127.0.0.1:3100 with its own fresh `mooring_e2e` database and fake mail server.
+// 127.0.0.1:3100 with its own fresh `mooring_e2e` database and fake mail server, then a short fault run
+// (scripts/fault-run.mjs: a throwaway PostgreSQL stopped and restarted under load) on the same build.
 // `node scripts/test.mjs unit integration` runs only the named parts (unit, integration, e2e).
 import { rmSync } from "node:fs";
 import { appEnv, buildApp, clearMailbox, dataDir, runNpmScriptIfPresent, startApp, startMaildev } from "./lib/app.mjs";
@@ -197,6 +198,12 @@ async function main() {
           "playwright",
         );
       }
+      // Short fault run on the same build: its own throwaway PostgreSQL is stopped and restarted under load.
+      await step(
+        "fault run (database restart under load)",
+        () => runStep(process.execPath, ["scripts/fault-run.mjs", "--short"], { env: e2eEnv }),
+        "playwright",
+      );
     }
   }
 
