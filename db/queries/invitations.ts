@@ -1,5 +1,5 @@
 import "server-only";
-import { and, desc, eq, gt, isNull } from "drizzle-orm";
+import { and, desc, eq, gt, isNull, sql } from "drizzle-orm";
 import { NotFoundError, ValidationError } from "../../lib/errors";
 import { createSecureToken, hashSecureToken } from "../../lib/secure-token";
 import type { CreateInvitationInput } from "../../lib/validations/invitation";
@@ -62,6 +62,9 @@ export async function createInvitation(
   assertUuid(groupId, "group");
   const signedIn = requireActor(actor);
   return db.transaction(async (tx) => {
+    // Invitations of one e-mail to one group run one at a time, so the newest always retires the
+    // others (without the lock, simultaneous requests would each see no pending one and all insert).
+    await tx.execute(sql`select pg_advisory_xact_lock(hashtext(${`invitation:${groupId}:${input.email}`}))`);
     await requireGroupRole(tx, signedIn, groupId, "owner");
     const group = await loadGroup(tx, groupId);
     if (group.kind === "personal") {
