@@ -15,49 +15,51 @@ export default async function AccountPage() {
   const account = await getAccount(await requireUser("/account"));
 
   return (
-    <PageContainer className="grid max-w-3xl gap-6">
-      <PageHeader title="Account" description="Your name, sign-in details and role on this Mooring site." />
-      <Card aria-labelledby="account-details-title">
-        <CardHeader>
-          <CardTitle id="account-details-title">Details</CardTitle>
-        </CardHeader>
-        <CardContent>
-          <dl className="grid gap-x-6 gap-y-3 text-sm sm:grid-cols-[10rem_1fr]">
-            <dt className="text-muted-foreground">E-mail</dt>
-            <dd className="font-medium">
-              {account.email}
-              {account.emailVerifiedAt ? null : <span className="ml-2 text-xs font-normal text-muted-foreground">(not yet confirmed)</span>}
-            </dd>
-            <dt className="text-muted-foreground">Site role</dt>
-            <dd>
-              <RoleBadge role={account.siteRole} />
-              <span className="ml-2 text-muted-foreground">
-                {account.siteRole === "admin" ? "You can manage accounts and roles." : "Group roles are set by each group's owners."}
-              </span>
-            </dd>
-            <dt className="text-muted-foreground">Member since</dt>
-            <dd>{formatDate(account.createdAt)}</dd>
-          </dl>
-        </CardContent>
-      </Card>
-      <Card aria-labelledby="account-name-title">
-        <CardHeader>
-          <CardTitle id="account-name-title">Name</CardTitle>
-          <CardDescription>Shown to your collaborators beside revisions and comments.</CardDescription>
-        </CardHeader>
-        <CardContent>
-          <AccountNameForm name={account.name} />
-        </CardContent>
-      </Card>
-      <Card aria-labelledby="account-password-title">
-        <CardHeader>
-          <CardTitle id="account-password-title">Password</CardTitle>
-          <CardDescription>You can always sign in with an e-mailed link as well.</CardDescription>
-        </CardHeader>
-        <CardContent>
-          <ChangePasswordForm hasPassword={account.hasPassword} />
-        </CardContent>
-      </Card>
+    <PageContainer>
+      <div className="grid max-w-3xl gap-6">
+        <PageHeader title="Account" description="Your name, sign-in details and role on this Mooring site." />
+        <Card aria-labelledby="account-details-title">
+          <CardHeader>
+            <CardTitle id="account-details-title">Details</CardTitle>
+          </CardHeader>
+          <CardContent>
+            <dl className="grid gap-x-6 gap-y-3 text-sm sm:grid-cols-[10rem_1fr]">
+              <dt className="text-muted-foreground">E-mail</dt>
+              <dd className="font-medium">
+                {account.email}
+                {account.emailVerifiedAt ? null : <span className="ml-2 text-xs font-normal text-muted-foreground">(not yet confirmed)</span>}
+              </dd>
+              <dt className="text-muted-foreground">Site role</dt>
+              <dd>
+                <RoleBadge role={account.siteRole} />
+                <span className="ml-2 text-muted-foreground">
+                  {account.siteRole === "admin" ? "You can manage accounts and roles." : "Group roles are set by each group's owners."}
+                </span>
+              </dd>
+              <dt className="text-muted-foreground">Member since</dt>
+              <dd>{formatDate(account.createdAt)}</dd>
+            </dl>
+          </CardContent>
+        </Card>
+        <Card aria-labelledby="account-name-title">
+          <CardHeader>
+            <CardTitle id="account-name-title">Name</CardTitle>
+            <CardDescription>Shown to your collaborators beside revisions and comments.</CardDescription>
+          </CardHeader>
+          <CardContent>
+            <AccountNameForm name={account.name} />
+          </CardContent>
+        </Card>
+        <Card aria-labelledby="account-password-title">
+          <CardHeader>
+            <CardTitle id="account-password-title">Password</CardTitle>
+            <CardDescription>You can always sign in with an e-mailed link as well.</CardDescription>
+          </CardHeader>
+          <CardContent>
+            <ChangePasswordForm hasPassword={account.hasPassword} />
+          </CardContent>
+        </Card>
+      </div>
     </PageContainer>
   );
 }

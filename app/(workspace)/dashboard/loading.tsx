@@ -1,5 +1,6 @@
 import { MyConfigurationsPanelSkeleton } from "@/components/dashboard/my-configurations-panel";
 import { MyGroupsPanelSkeleton } from "@/components/dashboard/my-groups-panel";
+import { RecentActivityPanelSkeleton } from "@/components/dashboard/recent-activity-panel";
 import { PageContainer } from "@/components/layout/page-container";
 import { Skeleton } from "@/components/ui/skeleton";
 
@@ -12,7 +13,10 @@ export default function DashboardLoading() {
       </div>
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,24rem)]">
         <MyConfigurationsPanelSkeleton />
-        <MyGroupsPanelSkeleton />
+        <div className="grid content-start gap-6">
+          <MyGroupsPanelSkeleton />
+          <RecentActivityPanelSkeleton />
+        </div>
       </div>
     </PageContainer>
   );

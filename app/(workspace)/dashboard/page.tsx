@@ -3,6 +3,7 @@ import { Suspense } from "react";
 import { ConfigurationsPanel } from "@/components/configurations/configurations-panel";
 import { MyConfigurationsPanelSkeleton } from "@/components/dashboard/my-configurations-panel";
 import { MyGroupsPanel, MyGroupsPanelSkeleton } from "@/components/dashboard/my-groups-panel";
+import { RecentActivityPanel, RecentActivityPanelSkeleton } from "@/components/dashboard/recent-activity-panel";
 import { PageContainer } from "@/components/layout/page-container";
 import { PageHeader } from "@/components/ui/page-header";
 import { requireUser } from "@/lib/session";
@@ -24,6 +25,9 @@ export default async function DashboardPage() {
         <div className="grid content-start gap-6">
           <Suspense fallback={<MyGroupsPanelSkeleton />}>
             <MyGroupsPanel actor={user} />
+          </Suspense>
+          <Suspense fallback={<RecentActivityPanelSkeleton />}>
+            <RecentActivityPanel actor={user} />
           </Suspense>
         </div>
       </div>

@@ -1,0 +1,99 @@
+import Link from "next/link";
+import type { Actor } from "@/db/queries/actor";
+import { listRecentActivityForUser, type ActivityDto } from "@/db/queries/auth";
+import { Card, CardContent, CardDescription, CardHeader, CardTitle } from "@/components/ui/card";
+import { EmptyState } from "@/components/ui/empty-state";
+import { Skeleton } from "@/components/ui/skeleton";
+import { formatDateTime } from "@/lib/format-date";
+
+/** Past-tense phrases for the audit actions a user sees about themselves. */
+const actionPhrases: Record<string, string> = {
+  "configuration.create": "Created",
+  "configuration.update": "Saved a revision of",
+  "configuration.fork": "Forked",
+  "configuration.restore": "Restored an earlier revision of",
+  "configuration.delete": "Deleted",
+  "configuration.undelete": "Recovered",
+  "comment.create": "Commented",
+  "comment.delete": "Deleted a comment",
+  "attachment.create": "Attached a file",
+  "attachment.delete": "Removed an attachment",
+  "share_link.create": "Created a share link",
+  "share_link.revoke": "Revoked a share link",
+  "invitation.create": "Invited someone",
+  "invitation.resend": "Resent an invitation",
+  "invitation.revoke": "Revoked an invitation",
+  "invitation.accept": "Joined",
+  "membership.role_change": "Changed a member's role",
+  "group.create": "Created the group",
+};
+
+/** What the signed-in user did lately, in the groups they belong to. */
+export async function RecentActivityPanel({ actor }: { actor: Actor }) {
+  const entries = await listRecentActivityForUser(actor, { limit: 8 });
+
+  return (
+    <Card aria-labelledby="recent-activity-title">
+      <CardHeader>
+        <CardTitle id="recent-activity-title">Recent activity</CardTitle>
+        <CardDescription>Your latest changes across your groups.</CardDescription>
+      </CardHeader>
+      <CardContent>
+        {entries.length === 0 ? (
+          <EmptyState title="Nothing yet" description="Saves, forks, comments and invitations you make will be listed here." />
+        ) : (
+          <ol className="grid gap-3">
+            {entries.map((entry) => (
+              <li key={entry.id} className="grid gap-0.5 text-sm">
+                <ActivityLine entry={entry} />
+                <time dateTime={entry.createdAt.toISOString()} className="text-xs text-muted-foreground tabular">
+                  {formatDateTime(entry.createdAt)}
+                </time>
+              </li>
+            ))}
+          </ol>
+        )}
+      </CardContent>
+    </Card>
+  );
+}
+
+function ActivityLine({ entry }: { entry: ActivityDto }) {
+  const phrase = actionPhrases[entry.action] ?? entry.action.replace(/[._]/g, " ");
+  const groupLabel = entry.group.kind === "personal" ? "my space" : entry.group.name;
+  return (
+    <p>
+      {phrase}{" "}
+      {entry.configuration ? (
+        <Link href={`/configurations/${entry.configuration.id}`} className="font-medium hover:text-accent hover:underline">
+          {entry.configuration.title}
+        </Link>
+      ) : null}{" "}
+      <span className="text-muted-foreground">
+        in{" "}
+        <Link href={`/groups/${entry.group.slug}`} className="hover:text-accent hover:underline">
+          {groupLabel}
+        </Link>
+      </span>
+    </p>
+  );
+}
+
+export function RecentActivityPanelSkeleton() {
+  return (
+    <Card aria-busy="true" aria-label="Loading your recent activity">
+      <CardHeader>
+        <Skeleton className="h-5 w-32" />
+        <Skeleton className="h-4 w-52" />
+      </CardHeader>
+      <CardContent className="grid gap-3">
+        {[0, 1, 2].map((row) => (
+          <div key={row} className="grid gap-1.5">
+            <Skeleton className="h-4 w-56" />
+            <Skeleton className="h-3 w-32" />
+          </div>
+        ))}
+      </CardContent>
+    </Card>
+  );
+}

@@ -1,0 +1,68 @@
+import "server-only";
+import { and, desc, eq, isNull } from "drizzle-orm";
+import { db } from "../index";
+import { auditLog, configurations, groups, memberships, type GroupKind } from "../schema";
+import { requireActor, type Actor } from "./actor";
+
+/** One entry of the signed-in user's own recent activity. */
+export interface ActivityDto {
+  id: string;
+  /** Dotted verb from the audit log, e.g. "configuration.update". */
+  action: string;
+  group: { slug: string; name: string; kind: GroupKind };
+  /** The configuration the entry is about, when it still exists. */
+  configuration: { id: string; title: string } | null;
+  createdAt: Date;
+}
+
+/** Options of `listRecentActivityForUser`. */
+export interface ListRecentActivityOptions {
+  /** Number of entries (1..50, default 10). */
+  limit?: number;
+}
+
+/**
+ * The actor's own writes in groups they still belong to, newest first. Entries in groups the actor
+ * has left are omitted, so nothing about those groups leaks; account-level events are left out.
+ */
+export async function listRecentActivityForUser(
+  actor: Actor | null,
+  options: ListRecentActivityOptions = {},
+): Promise<ActivityDto[]> {
+  const signedIn = requireActor(actor);
+  const limit = Math.min(50, Math.max(1, options.limit ?? 10));
+  const rows = await db
+    .select({
+      id: auditLog.id,
+      action: auditLog.action,
+      groupSlug: groups.slug,
+      groupName: groups.name,
+      groupKind: groups.kind,
+      configurationId: configurations.id,
+      configurationTitle: configurations.title,
+      createdAt: auditLog.createdAt,
+    })
+    .from(auditLog)
+    .innerJoin(groups, and(eq(groups.id, auditLog.groupId), isNull(groups.deletedAt)))
+    .innerJoin(memberships, and(eq(memberships.groupId, groups.id), eq(memberships.userId, signedIn.id)))
+    .leftJoin(
+      configurations,
+      and(
+        eq(auditLog.entityType, "configuration"),
+        eq(configurations.id, auditLog.entityId),
+        eq(configurations.groupId, groups.id),
+        isNull(configurations.deletedAt),
+      ),
+    )
+    .where(eq(auditLog.actorId, signedIn.id))
+    .orderBy(desc(auditLog.createdAt))
+    .limit(limit);
+
+  return rows.map((row) => ({
+    id: row.id,
+    action: row.action,
+    group: { slug: row.groupSlug, name: row.groupName, kind: row.groupKind },
+    configuration: row.configurationId && row.configurationTitle ? { id: row.configurationId, title: row.configurationTitle } : null,
+    createdAt: row.createdAt,
+  }));
+}
