@@ -32,12 +32,23 @@ export interface ConfigurationCollaborationProps {
   revisionNumber?: number;
 }
 
-/** Comments and attachments of a configuration, for the bottom of its results page. */
+/**
+ * The collaboration block of a configuration's results page: share links (editors) and history,
+ * then comments on the viewed revision and the attachments.
+ */
 export function ConfigurationCollaboration({ configurationId, canEdit, revisionId, revisionNumber }: ConfigurationCollaborationProps) {
   return (
-    <div className="grid gap-8 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
-      <CommentsPanel configurationId={configurationId} revisionId={revisionId} revisionNumber={revisionNumber} />
-      <AttachmentsPanel configurationId={configurationId} canEdit={canEdit} />
-    </div>
+    <section aria-label="Collaboration" className="grid gap-6 border-t border-border pt-6">
+      <div className="flex flex-wrap items-center gap-2">
+        {canEdit ? <ShareLinksDialog configurationId={configurationId} /> : null}
+        <Link href={`/configurations/${configurationId}/history`} className={buttonClassName({ variant: "outline" })}>
+          History and diff
+        </Link>
+      </div>
+      <div className="grid gap-8 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+        <CommentsPanel configurationId={configurationId} revisionId={revisionId} revisionNumber={revisionNumber} />
+        <AttachmentsPanel configurationId={configurationId} canEdit={canEdit} />
+      </div>
+    </section>
   );
 }

@@ -13,8 +13,8 @@ export interface GroupConfigurationsTableProps {
   groupSlug: string;
   /** Lab owners get a starter toggle per row. */
   canPublishStarters: boolean;
-  /** Members of a lab who may fork starters into their space. */
-  canForkStarters: boolean;
+  /** Which rows offer "Fork to my space": lab starters for students, every row in a shared group. */
+  forkScope: "none" | "starters" | "all";
   emptyTitle: string;
   emptyDescription?: string;
   caption: string;
@@ -25,13 +25,13 @@ export function GroupConfigurationsTable({
   configurations,
   groupSlug,
   canPublishStarters,
-  canForkStarters,
+  forkScope,
   emptyTitle,
   emptyDescription,
   caption,
 }: GroupConfigurationsTableProps) {
   if (configurations.length === 0) return <EmptyState title={emptyTitle} description={emptyDescription} />;
-  const showActions = canPublishStarters || canForkStarters;
+  const showActions = canPublishStarters || forkScope !== "none";
   return (
     <Table>
       <TableCaption>{caption} Masses as alpha&apos; M² with alpha&apos; = 1.</TableCaption>
@@ -75,7 +75,7 @@ export function GroupConfigurationsTable({
             {showActions ? (
               <TableCell className="text-right">
                 <span className="inline-flex gap-2">
-                  {canForkStarters && configuration.isStarter ? (
+                  {forkScope === "all" || (forkScope === "starters" && configuration.isStarter) ? (
                     <ForkToSpaceButton configurationId={configuration.id} title={configuration.title} />
                   ) : null}
                   {canPublishStarters ? (

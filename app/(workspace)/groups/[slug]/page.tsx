@@ -16,7 +16,7 @@ import { listInvitations } from "@/db/queries/invitations";
 import { listStarterForks } from "@/db/queries/labs";
 import { NotFoundError } from "@/lib/errors";
 import { requireUser } from "@/lib/session";
-import { toJson } from "@/lib/to-json";
+import { toJson } from "@/lib/queries/configurations";
 
 interface GroupPageProps {
   params: Promise<{ slug: string }>;
@@ -80,7 +80,7 @@ export default async function GroupPage({ params }: GroupPageProps) {
               configurations={starters}
               groupSlug={group.slug}
               canPublishStarters={false}
-              canForkStarters
+              forkScope="starters"
               emptyTitle="No starters yet"
               emptyDescription="Your instructor has not published a starter configuration yet."
               caption="Starters published by the lab's instructors."
@@ -101,7 +101,7 @@ export default async function GroupPage({ params }: GroupPageProps) {
             configurations={configurations.items}
             groupSlug={group.slug}
             canPublishStarters={isLab && isOwner}
-            canForkStarters={false}
+            forkScope={personal || isLab ? "none" : "all"}
             emptyTitle="No configurations yet"
             emptyDescription={roleAtLeast(group.role, "editor") ? "Create one in the designer or import a configuration file." : undefined}
             caption="Sorted by last change."

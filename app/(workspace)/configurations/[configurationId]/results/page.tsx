@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import { getResultForRevision, listRevisions } from "@/db/queries/configurations";
+import { ConfigurationCollaboration } from "@/components/collaboration/configuration-collaboration";
 import { ResultsView } from "@/components/results/results-view";
 import { EmptyState } from "@/components/ui/empty-state";
 import { ButtonLink } from "@/components/ui/button";
@@ -36,13 +37,23 @@ export default async function ConfigurationResultsPage({ params, searchParams }:
   }
   const result = await getResultForRevision(user, revision.id);
   return (
-    <ResultsView
-      key={revision.id}
-      configuration={toJson(configuration)}
-      revisions={toJson(revisions)}
-      revision={toJson(revision)}
-      initialResult={toJson(result)}
-      writableGroups={writableGroups}
-    />
+    <>
+      <ResultsView
+        key={revision.id}
+        configuration={toJson(configuration)}
+        revisions={toJson(revisions)}
+        revision={toJson(revision)}
+        initialResult={toJson(result)}
+        writableGroups={writableGroups}
+      />
+      <div className="mx-auto w-full max-w-7xl px-4 pb-10 sm:px-6">
+        <ConfigurationCollaboration
+          configurationId={configuration.id}
+          canEdit={configuration.canEdit}
+          revisionId={revision.id}
+          revisionNumber={revision.number}
+        />
+      </div>
+    </>
   );
 }
