@@ -15,9 +15,10 @@
  *
  * Environment: BENCH_URL, BENCH_DURATION (seconds per case, default 10), BENCH_CONNECTIONS
  * (default 16), BENCH_EMAIL and BENCH_PASSWORD (default: the seed's demo researcher
- * ada@mooring.test). Start the production server first, e.g. `npm run build && npm run serve`.
+ * ada@mooring.test), BENCH_SERVER_PID (optional: the server's pid(s), to report its CPU time
+ * per request, which stays meaningful when other work on the machine inflates latencies). Start the production server first, e.g. `npm run build && npm run serve`.
  */
-import { mkdirSync, writeFileSync } from "node:fs";
+import { mkdirSync, readFileSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import autocannon, { type RequestSpec } from "autocannon";
@@ -28,6 +29,8 @@ const baseUrl = (process.env.BENCH_URL ?? "http://127.0.0.1:3000").replace(/\/+$
 const durationSeconds = positiveNumber(process.env.BENCH_DURATION, 10);
 const connections = positiveNumber(process.env.BENCH_CONNECTIONS, 16);
 const warmupSeconds = Math.min(3, durationSeconds);
+/** Linux USER_HZ, the unit of utime/stime in /proc/<pid>/stat. */
+const clockTicksPerSecond = 100;
 
 interface CaseReport {
   name: string;
@@ -46,6 +49,8 @@ interface CaseReport {
   errors?: number;
   timeouts?: number;
   p95ToYardstick?: number;
+  /** Server process CPU time per request (BENCH_SERVER_PID), unaffected by queueing on a busy machine. */
+  serverCpuMsPerRequest?: number;
 }
 
 interface TargetReport {
@@ -138,6 +143,7 @@ async function main(): Promise<void> {
     cpu: os.cpus()[0]?.model ?? "unknown",
     cpus: os.cpus().length,
     signedIn: session !== undefined,
+    loadAverage: os.loadavg(),
     cases: reports,
     targets,
   };
@@ -163,11 +169,17 @@ async function runCase(name: string, request: RequestSpec, options: { warmup?: b
     requests: [request],
     ...(options.warmup === false ? {} : { warmup: { connections, duration: warmupSeconds } }),
   });
+  // The main run (after the warm-up) starts with this event; server CPU is read around it.
+  let cpuAtStart: number | undefined;
+  instance.on("start", () => {
+    cpuAtStart = serverCpuMs();
+  });
   instance.on("response", (_client: unknown, statusCode: number, _bytes: number, responseTime: number) => {
     times.push(responseTime);
     statusCounts[String(statusCode)] = (statusCounts[String(statusCode)] ?? 0) + 1;
   });
   const result = await instance;
+  const cpuAtEnd = serverCpuMs();
   times.sort((a, b) => a - b);
   console.log("done");
   return {
@@ -185,7 +197,30 @@ async function runCase(name: string, request: RequestSpec, options: { warmup?: b
     statusCounts,
     errors: result.errors,
     timeouts: result.timeouts,
+    serverCpuMsPerRequest:
+      cpuAtStart !== undefined && cpuAtEnd !== undefined && times.length > 0 ? (cpuAtEnd - cpuAtStart) / times.length : undefined,
   };
+}
+
+/**
+ * CPU time (user + system) used so far by the server processes named in BENCH_SERVER_PID
+ * (comma-separated pids, e.g. the next-server process), from /proc; undefined when unset or unreadable.
+ */
+function serverCpuMs(): number | undefined {
+  const pids = (process.env.BENCH_SERVER_PID ?? "").split(",").map((p) => p.trim()).filter(Boolean);
+  if (pids.length === 0) return undefined;
+  let total = 0;
+  for (const pid of pids) {
+    try {
+      // Fields after the parenthesised command name; utime and stime are fields 14 and 15, in clock ticks.
+      const stat = readFileSync(`/proc/${pid}/stat`, "utf8");
+      const fields = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+      total += (Number(fields[11]) + Number(fields[12])) * (1000 / clockTicksPerSecond);
+    } catch {
+      return undefined;
+    }
+  }
+  return total;
 }
 
 /**
@@ -355,9 +390,13 @@ function notMeasured(name: string, method: string, route: string, reason: string
 }
 
 function printReport(reports: CaseReport[], targets: TargetReport[]): void {
-  console.log(`\nAPI benchmark, ${baseUrl}, ${connections} connections, ${durationSeconds} s per case`);
+  const [load] = os.loadavg();
+  console.log(
+    `\nAPI benchmark, ${baseUrl}, ${connections} connections, ${durationSeconds} s per case ` +
+      `(load average ${(load ?? 0).toFixed(1)} on ${os.cpus().length} cores)`,
+  );
   printRows(
-    ["case", "requests", "p50 ms", "p95 ms", "p99 ms", "req/s", "p95 / health", "statuses"],
+    ["case", "requests", "p50 ms", "p95 ms", "p99 ms", "req/s", "p95 / health", "server CPU ms/req", "statuses"],
     reports.map((r) =>
       r.status === "measured"
         ? [
@@ -368,11 +407,12 @@ function printReport(reports: CaseReport[], targets: TargetReport[]): void {
             fixed(r.p99Ms),
             fixed(r.requestsPerSecond, 0),
             r.p95ToYardstick === undefined ? "-" : `${r.p95ToYardstick.toFixed(2)}x`,
+            fixed(r.serverCpuMsPerRequest, 2),
             Object.entries(r.statusCounts ?? {})
               .map(([code, count]) => `${code}:${count}`)
               .join(" ") + (r.errors ? ` errors:${r.errors}` : ""),
           ]
-        : [`${r.name} (${r.method} ${r.path})`, "-", "-", "-", "-", "-", "-", `not measured: ${r.reason ?? ""}`],
+        : [`${r.name} (${r.method} ${r.path})`, "-", "-", "-", "-", "-", "-", "-", `not measured: ${r.reason ?? ""}`],
     ),
   );
   console.log("\nTargets (product.md, reported not asserted):");
