@@ -10,10 +10,11 @@ export interface SiteHeaderProps {
   showMailbox?: boolean;
 }
 
+// Only sections that have an index page; configurations and groups are reached from the dashboard.
 const workspaceNav: readonly NavItem[] = [
   { href: "/dashboard", label: "Dashboard" },
-  { href: "/configurations", label: "Configurations" },
-  { href: "/groups", label: "Groups" },
+  { href: "/configurations/new", label: "New configuration" },
+  { href: "/groups/new", label: "New group" },
 ];
 
 const adminNav: readonly NavItem[] = [{ href: "/admin", label: "Admin" }];

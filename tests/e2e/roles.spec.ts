@@ -55,6 +55,20 @@ test.describe("site roles", () => {
     await expect(ownRow.getByRole("combobox", { name: /^Site role of/ })).toHaveValue("admin");
   });
 
+  test("an admin reads captured mail, with working links, in the development mailbox", async ({ page }) => {
+    await page.goto("/reset-password");
+    await page.getByLabel("E-mail").fill(demoAccounts.sky.email);
+    await page.getByRole("button", { name: "Send the reset link" }).click();
+    await expect(page.getByText("If an account exists for that address")).toBeVisible();
+
+    await signIn(page, demoAccounts.admin);
+    await page.goto("/admin/mailbox");
+    await expect(page.getByRole("heading", { name: "Development mailbox" })).toBeVisible();
+    const message = page.getByRole("listitem").filter({ hasText: demoAccounts.sky.email }).first();
+    await expect(message.getByRole("heading", { name: "Reset your Mooring password" })).toBeVisible();
+    await expect(message.getByRole("link", { name: /\/reset-password\/[A-Za-z0-9_-]+$/ })).toBeVisible();
+  });
+
   test("an admin's role change takes effect on the member's next request", async ({ page, browser }) => {
     const account = newAccount("promoted");
     const memberContext = await browser.newContext();
