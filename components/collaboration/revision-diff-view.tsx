@@ -1,5 +1,6 @@
 import type { ReactNode } from "react";
 import { Badge } from "@/components/ui/badge";
+import { formatMassSquared } from "@/lib/designer/spectrum-summary";
 import type { ConfigurationDiff, SpectrumDiff } from "@/lib/revisions/diff";
 
 export interface RevisionDiffViewProps {
@@ -121,8 +122,8 @@ export function RevisionDiffView({ fromNumber, toNumber, configurationDiff, spec
                 <ul className="ml-6 list-disc text-muted-foreground">
                   {sector.lightest ? (
                     <li>
-                      lightest α′M² <Old>{sector.lightest.before?.massSquared ?? "none"}</Old> →{" "}
-                      <New>{sector.lightest.after?.massSquared ?? "none"}</New>
+                      lightest α′M² <Old>{massOrNone(sector.lightest.before)}</Old> →{" "}
+                      <New>{massOrNone(sector.lightest.after)}</New>
                       {sector.lightest.after ? ` (${sector.lightest.after.sector}, level ${sector.lightest.after.level})` : ""}
                     </li>
                   ) : null}
@@ -139,6 +140,10 @@ export function RevisionDiffView({ fromNumber, toNumber, configurationDiff, spec
       </section>
     </div>
   );
+}
+
+function massOrNone(state: { massSquared: string } | null): string {
+  return state ? formatMassSquared(state.massSquared) : "none";
 }
 
 function show(value: string | number | null): string {
