@@ -14,7 +14,7 @@ import { createTestGroup, createTestUser, type TestUser } from "@/tests/fixtures
 // Every route handler under app/api against every kind of caller, from ONE table. The route files
 // are found on disk when the test runs: a new route.ts, or a new exported method, without an entry
 // here fails "the table covers every route handler". Each cell calls the real handler with a mocked
-// session against PostgreSQL; a cell that changes data gets a world of its own.
+// session against PostgreSQL.
 
 vi.mock("@/lib/session", async () => {
   const { AsyncLocalStorage } = await import("node:async_hooks");
@@ -395,8 +395,11 @@ describe("authorization matrix", () => {
     }
   });
 
-  // Reads share one world; every cell that writes gets a fresh one, so the order of roles does not matter.
+  // A cell that succeeds with PUT, PATCH or DELETE changes or removes the record it is about, so it
+  // gets a world of its own; every other cell (reads, creates, refusals) shares one world, so the
+  // order of the cells does not matter. A refusal that wrongly wrote would show in later cells too.
   let shared: Promise<World> | undefined;
+  const needsOwnWorld = (method: Method, status: number) => method !== "GET" && method !== "POST" && status < 400;
   for (const [file, entry] of Object.entries(matrix)) {
     if ("excluded" in entry) continue;
     describe(file, () => {
@@ -404,7 +407,7 @@ describe("authorization matrix", () => {
         for (const role of roles) {
           const status = cell.expect[role];
           it(`${method} as ${role} -> ${status}`, async () => {
-            const world = method === "GET" ? await (shared ??= createWorld()) : await createWorld();
+            const world = needsOwnWorld(method, status) ? await createWorld() : await (shared ??= createWorld());
             const handler = (await handlersOf(file))[method];
             if (!handler) throw new Error(`${file} does not export ${method}`);
             const { request, params = {} } = await cell.request(world, role);
