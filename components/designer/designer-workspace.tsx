@@ -62,18 +62,19 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
   const fork = useForkConfiguration(id);
   const canEdit = configuration.canEdit;
 
-  // Load the saved document, or an unsaved draft of it kept in this browser.
+  // Load the saved document, or an unsaved draft of it kept in this browser. Runs again if the
+  // store holds another document (another designer tab state, or a store re-created by a reload).
   useEffect(() => {
+    if (ready) return;
     const draft = readDraft(window.localStorage, id);
-    if (draft && JSON.stringify(draft.document) !== JSON.stringify(initial.document)) {
-      load(draft.document, { configurationId: id, baseVersion: draft.baseVersion ?? initial.version, dirty: true });
+    if (draft && JSON.stringify(draft.document) !== JSON.stringify(configuration.document)) {
+      load(draft.document, { configurationId: id, baseVersion: draft.baseVersion ?? configuration.version, dirty: true });
       setRecoveredAt(draft.savedAt);
     } else {
       if (draft) clearDraft(window.localStorage, id);
-      load(initial.document, { configurationId: id, baseVersion: initial.version });
+      load(configuration.document, { configurationId: id, baseVersion: configuration.version });
     }
-    // Only when the page opens another configuration; later server data arrives through react-query.
-  }, [id]);
+  }, [id, ready, configuration, load]);
 
   // Keep every unsaved change in localStorage until it is saved.
   useEffect(() => {

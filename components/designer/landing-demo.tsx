@@ -24,8 +24,8 @@ export function LandingDemo({ configuration }: LandingDemoProps) {
   const preview = useLivePreview(ready ? document : configuration);
 
   useEffect(() => {
-    useDesignerStore.getState().load(configuration, { configurationId: demoId, baseVersion: null });
-  }, [configuration]);
+    if (!ready) useDesignerStore.getState().load(configuration, { configurationId: demoId, baseVersion: null });
+  }, [configuration, ready]);
 
   return (
     <section aria-labelledby="landing-demo-title" className="grid gap-3">

@@ -1,6 +1,6 @@
 "use client";
 
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Dialog } from "@/components/ui/dialog";
 import { Field } from "@/components/ui/field";
@@ -18,6 +18,12 @@ export interface SaveDialogProps {
 /** Asks for a revision message and saves. */
 export function SaveDialog({ open, onOpenChange, pending, error, onSave }: SaveDialogProps) {
   const [message, setMessage] = useState("");
+  const inputRef = useRef<HTMLInputElement>(null);
+
+  // The dialog focuses its first control when it opens; the message field is the useful one.
+  useEffect(() => {
+    if (open) inputRef.current?.focus();
+  }, [open]);
   return (
     <Dialog
       open={open}
@@ -44,7 +50,7 @@ export function SaveDialog({ open, onOpenChange, pending, error, onSave }: SaveD
         className="grid gap-3"
       >
         <Field id="revision-message" label="What changed?" hint="Optional, up to 500 characters." error={error}>
-          <Input value={message} maxLength={500} autoFocus onChange={(event) => setMessage(event.target.value)} placeholder="e.g. moved the probe to y = 2" />
+          <Input ref={inputRef} value={message} maxLength={500} onChange={(event) => setMessage(event.target.value)} placeholder="e.g. moved the probe to y = 2" />
         </Field>
       </form>
     </Dialog>

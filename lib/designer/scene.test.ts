@@ -96,3 +96,21 @@ describe("label placement", () => {
     }
   });
 });
+
+describe("curves with shared ends", () => {
+  it("bend differently when two sectors join the same two screen points", () => {
+    const twins: Configuration = {
+      ...document,
+      stacks: [
+        { id: "x", label: "x", count: 1, anti: false, worldvolume: [], position: { "9": 2 } },
+        { id: "y", label: "y", count: 1, anti: false, worldvolume: [], position: {} },
+        { id: "z", label: "z", count: 1, anti: false, worldvolume: [1], position: {} },
+      ],
+    };
+    const twinScene = buildScene({ document: twins, result: null, axes: { horizontal: 8, vertical: 9 }, viewport, width: 400, height: 300, selection: [], gridStep: 1 });
+    const [xy, xz] = twinScene.curves;
+    expect(xy!.points.slice(0, 2)).toEqual(xz!.points.slice(0, 2));
+    expect(xy!.points.slice(6, 8)).toEqual(xz!.points.slice(6, 8));
+    expect(xy!.points.slice(2, 6)).not.toEqual(xz!.points.slice(2, 6));
+  });
+});

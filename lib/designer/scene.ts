@@ -120,14 +120,22 @@ export function buildScene(input: BuildSceneInput): Scene {
   }
   const lanes = assignLanes(pairs.map(([i, j]) => [shapeKey(hitEntries[i]!.shape), shapeKey(hitEntries[j]!.shape)]));
   const laneSpacing = Math.max(view.width, 1) / 10;
+  const sharedEnds = new Map<string, number>();
   const curves: SceneCurve[] = pairs.map(([i, j], k) => {
     const a = document.stacks[i]!;
     const b = document.stacks[j]!;
     const lane = lanes[k] ?? 0;
     const world = curveAnchors(hitEntries[i]!.shape, hitEntries[j]!.shape, viewCentre, lane, laneSpacing);
-    const curve = curveBetween(toScreen(world.start, viewport), toScreen(world.end, viewport), {
-      bend: lane % 2 === 0 ? 0.22 : -0.22,
-      loopAngle: Math.PI / 4 + (lane * Math.PI) / 5,
+    const start = toScreen(world.start, viewport);
+    const end = toScreen(world.end, viewport);
+    // Curves that share both ends on screen (a point above two coincident stacks) fan out.
+    const endsKey = [start, end].map((p) => `${Math.round(p.x)},${Math.round(p.y)}`).sort().join("|");
+    const repeat = sharedEnds.get(endsKey) ?? 0;
+    sharedEnds.set(endsKey, repeat + 1);
+    const spread = repeat === 0 ? 0 : repeat % 2 === 1 ? (repeat + 1) / 2 : -repeat / 2;
+    const curve = curveBetween(start, end, {
+      bend: (lane % 2 === 0 ? 0.22 : -0.22) + spread * 0.3,
+      loopAngle: Math.PI / 4 + ((lane + spread) * Math.PI) / 5,
     });
     const info = lightest.get(pairKey(a.id, b.id));
     const mid = curveMidpoint(curve);

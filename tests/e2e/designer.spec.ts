@@ -1,0 +1,259 @@
+import { expect, test, type Page } from "@playwright/test";
+import { computeSpectrum } from "@/lib/boundary";
+import type { Configuration } from "@/lib/boundary/types";
+import { formatMassSquared, parseRational } from "@/lib/designer/spectrum-summary";
+import { demoAccounts, signIn } from "./helpers/accounts";
+
+// The designer end to end: Konva draws to a <canvas>, so every assertion goes through the
+// boundary grid, the live preview and the results tables, which mirror the model.
+
+const groupSlug = "brane-engineering";
+
+/** A small IIA document of our own: a D4 and a D0 above it. */
+function twoStackDocument(title: string): Configuration {
+  return {
+    format: 1,
+    title,
+    theory: "IIA",
+    stringScaleGeV: null,
+    levels: 3,
+    stacks: [
+      { id: "a", label: "slab", count: 1, anti: false, worldvolume: [1, 2, 3, 4], position: {} },
+      { id: "b", label: "point", count: 1, anti: false, worldvolume: [], position: { "9": 1.5 } },
+    ],
+  };
+}
+
+function unique(label: string): string {
+  return `${label} ${Date.now().toString(36)}${Math.random().toString(36).slice(2, 6)}`;
+}
+
+/** Creates a configuration in the shared demo group through the API; returns its id. */
+async function createInGroup(page: Page, document: Configuration): Promise<string> {
+  const groups = (await (await page.request.get("/api/groups")).json()) as Array<{ id: string; slug: string }>;
+  const group = groups.find((g) => g.slug === groupSlug);
+  expect(group).toBeDefined();
+  const response = await page.request.post("/api/configurations", { data: { groupId: group?.id, document, message: "Created by the test" } });
+  expect(response.status()).toBe(201);
+  return ((await response.json()) as { id: string }).id;
+}
+
+async function openDesigner(page: Page, id: string): Promise<void> {
+  await page.goto(`/configurations/${id}`);
+  // The first visit of a route may compile it on a development server: allow for that.
+  await expect(page.getByRole("application", { name: /Canvas showing/ })).toBeVisible({ timeout: 30_000 });
+  await expect(page.getByTestId("save-state")).toHaveText("All changes saved");
+}
+
+async function saveWithMessage(page: Page, message: string): Promise<void> {
+  await page.getByRole("button", { name: "Save", exact: true }).click();
+  const dialog = page.getByRole("dialog", { name: "Save a revision" });
+  await dialog.getByLabel("What changed?").fill(message);
+  await dialog.getByRole("button", { name: "Save revision" }).click();
+}
+
+test.describe("designer", () => {
+  test("builds a three-stack configuration on the canvas and in the grid, saves it and reloads the same", async ({ page }) => {
+    await signIn(page, demoAccounts.ada);
+    const title = unique("Three stacks");
+    await page.goto("/configurations/new");
+    await page.getByLabel("Title").fill(title);
+    await page.getByLabel("Space").selectOption({ label: "Brane Engineering Group" });
+    await page.getByRole("radio", { name: /Type IIA/ }).check();
+    await page.getByRole("button", { name: "Create and open the designer" }).click();
+    await expect(page).toHaveURL(/\/configurations\/[0-9a-f-]{36}$/);
+    await expect(page.getByTestId("preview-gauge-group")).toHaveText("U(1)");
+    await expect(page.getByRole("combobox", { name: "Vertical display axis" })).toHaveValue("9");
+    await expect(page.getByRole("combobox", { name: "Horizontal display axis" })).toHaveValue("8");
+
+    // Canvas: add a stack at the centre of the view and move it with the keyboard (one grid step = 0.5).
+    await page.getByRole("button", { name: "Add stack (A)" }).click();
+    await expect(page.getByLabel("Select stack s1")).toBeChecked();
+    await expect(page.getByTestId("preview-gauge-group")).toHaveText("U(1) x U(1)");
+    const canvas = page.getByRole("application", { name: /Canvas showing/ });
+    await canvas.focus();
+    for (let i = 0; i < 4; i++) await page.keyboard.press("ArrowUp");
+    await expect(page.getByLabel("Position of stack s1 on x9")).toHaveValue("2");
+
+    // Canvas: drag the new D0 two units to the right. The view was fitted to the starting stack at
+    // the origin (80 px per unit, origin at the centre), so s1 is drawn 160 px above the centre.
+    const box = await canvas.boundingBox();
+    if (!box) throw new Error("the canvas has no box");
+    const cx = box.x + box.width / 2;
+    const cy = box.y + box.height / 2;
+    await page.mouse.move(cx, cy - 160);
+    await page.mouse.down();
+    for (let step = 1; step <= 8; step++) await page.mouse.move(cx + step * 20, cy - 160);
+    await page.mouse.up();
+    await expect(page.getByLabel("Position of stack s1 on x8")).toHaveValue("2");
+    await expect(page.getByLabel("Position of stack s1 on x9")).toHaveValue("2");
+
+    // Grid: a third stack, made an anti-D4 pair of branes one unit above the first D4.
+    await page.getByRole("button", { name: "Add stack", exact: true }).click();
+    for (const axis of [1, 2, 3, 4]) await page.getByRole("button", { name: `Stack s2, axis x${axis}: Dirichlet` }).click();
+    await expect(page.getByTestId("stack-kind-s2")).toHaveText("D4");
+    await page.getByLabel("Number of branes N in stack s2").fill("2");
+    await page.getByRole("button", { name: "Stack s2 is an antibrane" }).click();
+    await page.getByLabel("Position of stack s2 on x9").fill("1");
+    await expect(page.getByTestId("stack-kind-s2")).toHaveText("anti-D4");
+    await expect(page.getByTestId("preview-gauge-group")).toHaveText("U(2) x U(1) x U(1)");
+    await expect(page.getByTestId("preview-stability")).toContainText("tachyonic sector");
+    await expect(page.getByTestId("preview-tachyons")).toContainText("a\u2013s2");
+
+    // An odd p is not allowed in IIA: shown inline, and saving is blocked until it is fixed.
+    await page.getByRole("button", { name: "Stack s2, axis x5: Dirichlet" }).click();
+    await expect(page.getByRole("alert").filter({ hasText: /IIA allows only even p/ })).toBeVisible();
+    await expect(page.getByRole("button", { name: "Save", exact: true })).toBeDisabled();
+    await page.getByRole("button", { name: "Stack s2, axis x5: Neumann" }).click();
+    await expect(page.getByRole("alert").filter({ hasText: /IIA allows only even p/ })).toHaveCount(0);
+
+    await saveWithMessage(page, "Three stacks with a brane-antibrane pair");
+    await expect(page.getByTestId("save-state")).toHaveText("All changes saved");
+    await expect(page.getByTestId("saved-version")).toHaveText("version 2");
+
+    await page.reload();
+    await expect(page.getByTestId("save-state")).toHaveText("All changes saved");
+    await expect(page.getByText("Unsaved draft restored")).toHaveCount(0);
+    await expect(page.getByLabel("Position of stack s1 on x8")).toHaveValue("2");
+    await expect(page.getByLabel("Position of stack s1 on x9")).toHaveValue("2");
+    await expect(page.getByTestId("stack-kind-s2")).toHaveText("anti-D4");
+    await expect(page.getByLabel("Number of branes N in stack s2")).toHaveValue("2");
+    await expect(page.getByLabel("Position of stack s2 on x9")).toHaveValue("1");
+    await expect(page.getByTestId("preview-gauge-group")).toHaveText("U(2) x U(1) x U(1)");
+  });
+
+  test("keeps an unsaved draft across a reload", async ({ page }) => {
+    await signIn(page, demoAccounts.ada);
+    const id = await createInGroup(page, twoStackDocument(unique("Draft kept")));
+    await openDesigner(page, id);
+    await page.getByLabel("Position of stack b on x9").fill("3.25");
+    await expect(page.getByTestId("save-state")).toHaveText("Unsaved changes");
+    await page.reload();
+    await expect(page.getByText("Unsaved draft restored")).toBeVisible();
+    await expect(page.getByLabel("Position of stack b on x9")).toHaveValue("3.25");
+  });
+
+  test("shows results whose numbers equal the engine's", async ({ page }) => {
+    await signIn(page, demoAccounts.ada);
+    const document: Configuration = {
+      ...twoStackDocument(unique("Results check")),
+      stacks: [
+        ...twoStackDocument("x").stacks,
+        { id: "c", label: "anti slab", count: 2, anti: true, worldvolume: [1, 2, 3, 4], position: { "9": 2 } },
+      ],
+    };
+    const id = await createInGroup(page, document);
+    await page.goto(`/configurations/${id}/results`);
+    const expected = computeSpectrum(document);
+    const table = page.getByTestId("lightest-table");
+    await expect(table.getByRole("row")).toHaveCount(expected.lightest.length + 1);
+    const rows = await table.getByRole("row").all();
+    for (const [i, state] of expected.lightest.entries()) {
+      const cells = rows[i + 1]!.getByRole("cell");
+      await expect(cells.nth(0)).toHaveText(`${state.pair[0]}\u2013${state.pair[1]}`);
+      await expect(cells.nth(1)).toHaveText(state.sector);
+      await expect(cells.nth(2)).toHaveText(state.level);
+      await expect(cells.nth(3)).toHaveText(formatMassSquared(state.massSquared));
+      await expect(cells.nth(6)).toHaveText(state.withChanPaton);
+    }
+    await expect(page.getByTestId("results-supercharges")).toHaveText(`${expected.supercharges} supercharges`);
+    const tachyonic = expected.sectors.filter((s) => s.tachyonic).length;
+    await expect(page.getByTestId("results-stability")).toHaveText(tachyonic === 0 ? "No tachyons" : new RegExp(`^${tachyonic} tachyonic sector`));
+
+    // The per-sector table of the brane-antibrane sector sorts by alpha' M^2.
+    const sector = page.getByTestId("sector-a-c");
+    await sector.getByRole("button", { name: /M²/ }).first().click();
+    const firstRow = sector.getByRole("table").first().getByRole("row").nth(1);
+    const lightestAc = expected.sectors.find((s) => s.pair.join("-") === "a-c")!;
+    const minimum = [...lightestAc.levels].sort((x, y) => parseRational(x.massSquared) - parseRational(y.massSquared))[0]!;
+    await expect(firstRow.getByRole("cell").nth(2)).toContainText(formatMassSquared(minimum.massSquared));
+    await expect(page.getByText(/Caution/).first()).toBeVisible();
+  });
+
+  test("a collaborator forks a saved configuration into their own space", async ({ page, browser }) => {
+    await signIn(page, demoAccounts.ada);
+    const title = unique("Fork source");
+    const id = await createInGroup(page, twoStackDocument(title));
+
+    const benContext = await browser.newContext();
+    const ben = await benContext.newPage();
+    await signIn(ben, demoAccounts.ben);
+    await openDesigner(ben, id);
+    await ben.getByRole("button", { name: "Fork", exact: true }).click();
+    const dialog = ben.getByRole("dialog", { name: "Fork this configuration" });
+    const personal = await dialog.locator("option", { hasText: "(personal)" }).getAttribute("value");
+    await dialog.getByLabel("Space").selectOption(personal ?? "");
+    await dialog.getByRole("button", { name: "Fork", exact: true }).click();
+    await expect(ben).not.toHaveURL(new RegExp(`/configurations/${id}$`));
+    await expect(ben).toHaveURL(/\/configurations\/[0-9a-f-]{36}$/);
+    const forkedFrom = ben.getByTestId("forked-from");
+    await expect(forkedFrom).toContainText(`forked from ${title} (revision 1)`);
+    await expect(forkedFrom.getByRole("link")).toHaveAttribute("href", `/configurations/${id}`);
+    await expect(ben.getByText("Personal space")).toBeVisible();
+    await benContext.close();
+  });
+
+  test("a stale save shows the conflict dialog and can reload the latest version", async ({ page, browser }) => {
+    await signIn(page, demoAccounts.ada);
+    const id = await createInGroup(page, twoStackDocument(unique("Conflict")));
+    await openDesigner(page, id);
+
+    const benContext = await browser.newContext();
+    const ben = await benContext.newPage();
+    await signIn(ben, demoAccounts.ben);
+    await openDesigner(ben, id);
+    await ben.getByLabel("Number of branes N in stack a").fill("3");
+    await saveWithMessage(ben, "Three slabs");
+    await expect(ben.getByTestId("saved-version")).toHaveText("version 2");
+
+    await page.getByLabel("Label of stack b").fill("ada's point");
+    await saveWithMessage(page, "Renamed the point");
+    const conflict = page.getByRole("dialog", { name: "Someone saved a newer version" });
+    await expect(conflict).toBeVisible();
+    await expect(conflict).toContainText("You edited version 1, but version 2 is now stored");
+    await expect(conflict.getByRole("button", { name: "Save as fork" })).toBeVisible();
+    await conflict.getByRole("button", { name: /Reload latest/ }).click();
+    await expect(conflict).toBeHidden();
+    await expect(page.getByLabel("Number of branes N in stack a")).toHaveValue("3");
+    await expect(page.getByLabel("Label of stack b")).toHaveValue("point");
+    await expect(page.getByTestId("saved-version")).toHaveText("version 2");
+    await benContext.close();
+  });
+
+  test("the whole edit-and-save flow works by keyboard through the grid", async ({ page }) => {
+    await signIn(page, demoAccounts.ada);
+    const id = await createInGroup(page, twoStackDocument(unique("Keyboard")));
+    await openDesigner(page, id);
+
+    await page.getByRole("button", { name: "Add stack", exact: true }).focus();
+    await page.keyboard.press("Enter");
+    const toggle = page.getByRole("button", { name: "Stack s1, axis x1: Dirichlet" });
+    await toggle.focus();
+    await page.keyboard.press("Space");
+    await expect(page.getByRole("button", { name: "Stack s1, axis x1: Neumann" })).toBeFocused();
+    // Tab walks to the next axis cell's toggle, Enter flips it: a D2 now.
+    await page.keyboard.press("Tab");
+    await expect(page.getByRole("button", { name: "Stack s1, axis x2: Dirichlet" })).toBeFocused();
+    await page.keyboard.press("Enter");
+    await expect(page.getByTestId("stack-kind-s1")).toHaveText("D2");
+
+    const position = page.getByLabel("Position of stack s1 on x9");
+    await position.focus();
+    await page.keyboard.press("ArrowUp");
+    await page.keyboard.press("ArrowUp");
+    await expect(position).toHaveValue("1");
+    const count = page.getByLabel("Number of branes N in stack s1");
+    await count.focus();
+    await page.keyboard.press("ArrowUp");
+    await expect(count).toHaveValue("2");
+    await expect(page.getByTestId("preview-gauge-group")).toHaveText(/U\(2\)/);
+
+    await page.keyboard.press("Control+s");
+    const dialog = page.getByRole("dialog", { name: "Save a revision" });
+    await expect(dialog.getByLabel("What changed?")).toBeFocused();
+    await page.keyboard.type("Added a D2 pair by keyboard");
+    await page.keyboard.press("Enter");
+    await expect(page.getByTestId("save-state")).toHaveText("All changes saved");
+    await expect(page.getByTestId("saved-version")).toHaveText("version 2");
+  });
+});
