@@ -15,7 +15,7 @@
 //   - nothing partial was written: per configuration, version = 1 + accepted saves and every
 //     revision has exactly one stored result.
 // Prints a report and "N passed, N failed"; exits non-zero when a check fails.
-import { spawnSync } from "node:child_process";
+import { spawn, spawnSync } from "node:child_process";
 import { chownSync, existsSync, mkdirSync, mkdtempSync, rmSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
@@ -45,6 +45,20 @@ function run(cmd, args, { asPostgres = false } = {}) {
   const result = spawnSync(command, argv, { encoding: "utf8", cwd: "/", stdio: ["ignore", "pipe", "pipe"] });
   if (result.error) throw result.error;
   return result;
+}
+
+/** Like `run`, without blocking the event loop (the load keeps going while pg_ctl works). */
+function runAsync(cmd, args, { asPostgres = false } = {}) {
+  const [command, argv] = asPostgres && isRoot ? ["runuser", ["-u", "postgres", "--", cmd, ...args]] : [cmd, args];
+  return new Promise((resolve, reject) => {
+    const child = spawn(command, argv, { cwd: "/", stdio: ["ignore", "pipe", "pipe"] });
+    let stdout = "";
+    let stderr = "";
+    child.stdout.on("data", (chunk) => (stdout += chunk));
+    child.stderr.on("data", (chunk) => (stderr += chunk));
+    child.on("error", reject);
+    child.on("close", (status) => resolve({ status, stdout, stderr }));
+  });
 }
 
 function must(result, what) {
@@ -77,18 +91,24 @@ async function createCluster() {
   return cluster;
 }
 
-function startCluster(cluster) {
+function startArgs(cluster) {
   const options = `-p ${cluster.port} -k ${cluster.socketDir} -c listen_addresses=127.0.0.1`;
-  must(
-    run(path.join(cluster.pgBin, "pg_ctl"), ["start", "-D", cluster.pgdata, "-l", cluster.logFile, "-w", "-t", "60", "-o", options], {
-      asPostgres: true,
-    }),
-    "pg_ctl start",
-  );
+  return ["start", "-D", cluster.pgdata, "-l", cluster.logFile, "-w", "-t", "60", "-o", options];
 }
 
-function stopCluster(cluster, mode) {
-  must(run(path.join(cluster.pgBin, "pg_ctl"), ["stop", "-D", cluster.pgdata, "-m", mode, "-w", "-t", "60"], { asPostgres: true }), `pg_ctl stop -m ${mode}`);
+function startCluster(cluster) {
+  must(run(path.join(cluster.pgBin, "pg_ctl"), startArgs(cluster), { asPostgres: true }), "pg_ctl start");
+}
+
+async function startClusterAsync(cluster) {
+  must(await runAsync(path.join(cluster.pgBin, "pg_ctl"), startArgs(cluster), { asPostgres: true }), "pg_ctl start");
+}
+
+async function stopClusterAsync(cluster, mode) {
+  must(
+    await runAsync(path.join(cluster.pgBin, "pg_ctl"), ["stop", "-D", cluster.pgdata, "-m", mode, "-w", "-t", "60"], { asPostgres: true }),
+    `pg_ctl stop -m ${mode}`,
+  );
 }
 
 function psql(cluster, sql, databaseName = "postgres") {
@@ -128,7 +148,8 @@ async function signIn(baseUrl, email, password) {
 
 /**
  * Bounded request loops: `workers` loops, each with its own configuration, cycling through the
- * four operations until `shouldStop()`; every outcome is recorded with the phase it started in.
+ * four operations until `shouldStop()`; every outcome is recorded with its phase (when it began
+ * and ended in the same one).
  */
 function startLoad({ baseUrl, cookie, configurationIds, document, phase, shouldStop }) {
   const records = [];
@@ -174,6 +195,9 @@ function startLoad({ baseUrl, cookie, configurationIds, document, phase, shouldS
       } catch (error) {
         record.error = error instanceof Error ? `${error.message}${error.cause ? ` (${error.cause.code ?? error.cause.message})` : ""}` : String(error);
       }
+      // A request that began in one phase and ended in another (e.g. in flight while the database
+      // went down) belongs to neither.
+      if (phase() !== startedIn) record.phase = `transition-${startedIn}`;
       records.push(record);
     }
   });
@@ -235,12 +259,14 @@ async function main() {
     try {
       await sleep(plan.warmMs);
       for (const [round, mode] of plan.shutdowns.entries()) {
-        stopCluster(cluster, mode);
+        // Requests that start while the database goes down may meet either state.
+        currentPhase = `stopping-${round}`;
+        await stopClusterAsync(cluster, mode);
         currentPhase = `outage-${round}`;
         log(`PostgreSQL stopped (${mode}); load continues for ${plan.outageMs / 1000}s`);
         await sleep(plan.outageMs);
         currentPhase = `restarting-${round}`;
-        startCluster(cluster);
+        await startClusterAsync(cluster);
         const restartedAt = Date.now();
         currentPhase = `recovering-${round}`;
         // Recovered once a fresh read succeeds (the app was not restarted).
@@ -270,7 +296,7 @@ async function main() {
     const by = (predicate) => records.filter(predicate);
     const summary = {};
     for (const r of records) {
-      const key = `${r.phase.replace(/-\d+$/, "")} ${r.op}`;
+      const key = `${r.phase.startsWith("transition") ? "between phases" : r.phase.replace(/-\d+$/, "")} ${r.op}`;
       summary[key] ??= {};
       const outcome = r.error ? "network error" : String(r.status);
       summary[key][outcome] = (summary[key][outcome] ?? 0) + 1;
