@@ -53,6 +53,9 @@ async function saveWithMessage(page: Page, message: string): Promise<void> {
 }
 
 test.describe("designer", () => {
+  // Whole flows with two sign-ins and several saves: longer than the default budget on a shared machine.
+  test.describe.configure({ timeout: 180_000 });
+
   test("builds a three-stack configuration on the canvas and in the grid, saves it and reloads the same", async ({ page }) => {
     await signIn(page, demoAccounts.ada);
     const title = unique("Three stacks");
