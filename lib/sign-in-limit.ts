@@ -73,6 +73,22 @@ export async function limitSignInAttempt<T>(
   }
 }
 
+/** E-mailed sign-in and password-reset links allowed per address per window (together). */
+export const emailedLinkLimit: RateLimitOptions = { limit: 5, windowMs: 15 * 60_000 };
+
+/**
+ * Counts one request for an e-mailed link (sign-in link or password reset) to `email`, so a form
+ * cannot be used to flood someone's mailbox. The limit applies whether or not the account exists,
+ * so the answer reveals nothing about accounts.
+ *
+ * @returns null when the link may be sent, else the user-facing message to show instead.
+ */
+export async function limitEmailedLinks(email: string, options: RateLimitOptions = emailedLinkLimit): Promise<string | null> {
+  const verdict = await consumeRateLimit(`email-link:${email.trim().toLowerCase()}`, options);
+  if (verdict.ok) return null;
+  return `Too many e-mails were requested for this address. Try again in ${minutesText(verdict.retryAfterSeconds)}.`;
+}
+
 /**
  * The client address of a next-auth `authorize(credentials, req)` call, whose `req.headers` is a
  * plain object in the App Router.

@@ -6,7 +6,13 @@ import { verifyPassword } from "@/db/queries/users";
 import { users } from "@/db/schema";
 import { RateLimitError, ServiceUnavailableError, UnauthenticatedError } from "@/lib/errors";
 import { consumeRateLimit, peekRateLimit } from "@/lib/rate-limit";
-import { limitSignInAttempt, signInAddress, signInLimitPerAddress, signInLimitPerEmail } from "@/lib/sign-in-limit";
+import {
+  emailedLinkLimit,
+  limitSignInAttempt,
+  signInAddress,
+  signInLimitPerAddress,
+  signInLimitPerEmail,
+} from "@/lib/sign-in-limit";
 import { createTestUser } from "@/tests/fixtures/users";
 
 const small = {
@@ -103,6 +109,27 @@ describe("the password sign-in provider (lib/auth.ts)", () => {
       await expect(signIn("correct horse battery")).rejects.toThrow(/This account is locked/);
     }
     await expect(signIn("correct horse battery")).rejects.toThrow(/Too many failed sign-ins for this e-mail address/);
+  });
+});
+
+describe("e-mailed links (app/(auth)/actions.ts)", () => {
+  it("sends at most 5 sign-in or reset links per address per window, then says to wait, account or not", async () => {
+    const { requestPasswordResetAction, requestSignInLinkAction } = await import("@/app/(auth)/actions");
+    const { idleState } = await import("@/lib/action-state");
+    const email = `nobody-${randomUUID()}@test.mooring`;
+    const form = new FormData();
+    form.set("email", email);
+    for (let i = 0; i < emailedLinkLimit.limit; i += 1) {
+      const action = i % 2 ? requestPasswordResetAction : requestSignInLinkAction;
+      expect((await action(idleState(), form)).status).toBe("success");
+    }
+    const refused = await requestSignInLinkAction(idleState(), form);
+    expect(refused.status).toBe("error");
+    expect(refused.message).toMatch(/^Too many e-mails were requested for this address\. Try again in \d+ minutes?\.$/);
+    // Another address is not affected.
+    const other = new FormData();
+    other.set("email", `other-${randomUUID()}@test.mooring`);
+    expect((await requestPasswordResetAction(idleState(), other)).status).toBe("success");
   });
 });
 
