@@ -113,33 +113,41 @@ test.describe("group roles", () => {
   });
 
   test("a viewer cannot save a group's configuration; an editor can", async ({ page, browser }) => {
-    await signIn(page, demoAccounts.cora);
-    const list = await page.request.get("/api/configurations?scope=accessible&pageSize=100");
-    expect(list.status()).toBe(200);
-    const rows = ((await list.json()) as { items: ConfigurationRow[] }).items;
-    const target = rows.find((row) => row.group.slug === "brane-engineering");
-    expect(target).toBeDefined();
-    const id = target?.id ?? "";
-
-    const before = await page.request.get(`/api/configurations/${id}`);
-    const configuration = (await before.json()) as { version: number; document: unknown };
-    const attempt = await page.request.put(`/api/configurations/${id}`, {
-      headers: { "if-match": `"${configuration.version}"` },
-      data: { document: configuration.document, message: "A viewer's edit" },
-    });
-    expect(attempt.status()).toBe(403);
-    const after = (await (await page.request.get(`/api/configurations/${id}`)).json()) as { version: number };
-    expect(after.version).toBe(configuration.version);
-
+    // The editor creates a configuration of its own in the group, so no other test's data changes.
     const editorContext = await browser.newContext();
     const editor = await editorContext.newPage();
     await signIn(editor, demoAccounts.ben);
+    const list = await editor.request.get("/api/configurations?scope=accessible&pageSize=100");
+    expect(list.status()).toBe(200);
+    const seeded = ((await list.json()) as { items: ConfigurationRow[] }).items.find((row) => row.group.slug === "brane-engineering");
+    expect(seeded).toBeDefined();
+    const source = (await (await editor.request.get(`/api/configurations/${seeded?.id ?? ""}`)).json()) as {
+      document: Record<string, unknown>;
+      group: { id: string };
+    };
+    // A title of its own, so tests that look configurations up by title never see this copy.
+    const document = { ...source.document, title: `Role check ${Date.now().toString(36)}` };
+    const created = await editor.request.post("/api/configurations", {
+      data: { groupId: source.group.id, document, message: "Made for the role test" },
+    });
+    expect(created.status()).toBe(201);
+    const { id, version } = (await created.json()) as { id: string; version: number };
+
+    await signIn(page, demoAccounts.cora);
+    const attempt = await page.request.put(`/api/configurations/${id}`, {
+      headers: { "if-match": `"${version}"` },
+      data: { document, message: "A viewer's edit" },
+    });
+    expect(attempt.status()).toBe(403);
+    const afterViewer = (await (await page.request.get(`/api/configurations/${id}`)).json()) as { version: number };
+    expect(afterViewer.version).toBe(version);
+
     const saved = await editor.request.put(`/api/configurations/${id}`, {
-      headers: { "if-match": `"${configuration.version}"` },
-      data: { document: configuration.document, message: "An editor's save" },
+      headers: { "if-match": `"${version}"` },
+      data: { document, message: "An editor's save" },
     });
     expect(saved.status()).toBe(200);
-    expect(((await saved.json()) as { version: number }).version).toBe(configuration.version + 1);
+    expect(((await saved.json()) as { version: number }).version).toBe(version + 1);
     await editorContext.close();
   });
 });
