@@ -1,4 +1,4 @@
-import { readdirSync } from "node:fs";
+import { readdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, it, vi } from "vitest";
 import type { Actor } from "@/db/queries/actor";
@@ -10,6 +10,7 @@ import { createShareLink } from "@/db/queries/share-links";
 import { computeSpectrum } from "@/lib/boundary";
 import { probeNearSevenBrane } from "@/lib/demo-configurations";
 import { createTestGroup, createTestUser, type TestUser } from "@/tests/fixtures/users";
+import { idleState } from "@/lib/action-state";
 
 // Every route handler under app/api against every kind of caller, from ONE table. The route files
 // are found on disk when the test runs: a new route.ts, or a new exported method, without an entry
@@ -24,6 +25,19 @@ vi.mock("@/lib/session", async () => {
     runAs: <T>(actor: Actor | null, action: () => Promise<T>) => store.run(actor, action),
   };
 });
+// Server actions revalidate and redirect through Next; outside a request both become observable no-ops.
+class RedirectSignal extends Error {
+  constructor(readonly url: string) {
+    super(`redirect to ${url}`);
+  }
+}
+vi.mock("next/cache", () => ({ revalidatePath: () => undefined, revalidateTag: () => undefined }));
+vi.mock("next/navigation", async (importOriginal) => ({
+  ...(await importOriginal<object>()),
+  redirect: (url: string) => {
+    throw new RedirectSignal(url);
+  },
+}));
 const { runAs } = (await import("@/lib/session")) as unknown as {
   runAs: <T>(actor: Actor | null, action: () => Promise<T>) => Promise<T>;
 };
@@ -414,6 +428,167 @@ describe("authorization matrix", () => {
             const response = await runAs(actorOf(world, role), () => handler(request, { params: Promise.resolve(params) }));
             const body = response.status >= 400 ? await response.text() : "";
             expect({ status: response.status, body: body.slice(0, 200) }).toMatchObject({ status });
+          });
+        }
+      }
+    });
+  }
+});
+
+// ---------------------------------------------------------------------------------------------
+// Server actions: every exported function of every "use server" file under app/, from one table.
+// An action answers with form state rather than a status, so a cell expects "ok" (success, a
+// redirect, or a result) or "refused" (an error state whose message is a deliberate refusal).
+// ---------------------------------------------------------------------------------------------
+
+type Outcome = "ok" | "refused";
+interface ActionCell {
+  /** Calls the action for `role` in `world` (inside the mocked session). */
+  call: (action: (...args: never[]) => Promise<unknown>, world: World, role: Role) => Promise<unknown>;
+  expect: Record<Role, Outcome>;
+  /** True when a successful call changes the record it is about (it then gets a world of its own). */
+  consumes?: boolean;
+}
+type ActionEntry = { actions: Record<string, ActionCell> } | { excluded: string };
+
+function form(fields: Record<string, string>): FormData {
+  const data = new FormData();
+  for (const [key, value] of Object.entries(fields)) data.set(key, value);
+  return data;
+}
+
+const okFor = (allowed: Role[]): Record<Role, Outcome> =>
+  Object.fromEntries(roles.map((role) => [role, allowed.includes(role) ? "ok" : "refused"])) as Record<Role, Outcome>;
+const signedInRoles: Role[] = ["nonMember", "viewer", "editor", "owner", "admin"];
+
+/** A lab group (owner, editor, viewer as in the world's group) with one configuration, for lab-only actions. */
+async function labConfiguration(world: World): Promise<{ id: string; slug: string }> {
+  const lab = await createTestGroup(
+    world.users.owner.actor,
+    [
+      { actor: world.users.viewer.actor, role: "viewer" },
+      { actor: world.users.editor.actor, role: "editor" },
+    ],
+    "lab",
+  );
+  const created = await createConfiguration(world.users.owner.actor, lab.id, probeNearSevenBrane, "starter", computeSpectrum(probeNearSevenBrane), 1);
+  return { id: created.id, slug: lab.slug };
+}
+
+/** THE table of server actions (path relative to app/). */
+const actionMatrix: Record<string, ActionEntry> = {
+  "(auth)/actions.ts": {
+    excluded: "public forms used before signing in (sign-up, e-mailed links, reset with a token); tested in auth-actions.test.ts and sign-in-limit.test.ts",
+  },
+  "(workspace)/account/actions.ts": {
+    actions: {
+      updateAccountNameAction: { call: (action) => action(...([idleState(), form({ name: "Renamed Person" })] as never[])), expect: okFor(signedInRoles) },
+      changePasswordAction: {
+        // Test accounts have no password yet, so no current password is asked for.
+        call: (action) =>
+          action(...([idleState(), form({ currentPassword: "", newPassword: "a brand new password", confirmPassword: "a brand new password" })] as never[])),
+        expect: okFor(signedInRoles),
+      },
+    },
+  },
+  "(workspace)/admin/actions.ts": {
+    actions: {
+      changeSiteRoleAction: {
+        call: (action, world) => action(...([idleState(), form({ userId: world.target.actor.id, siteRole: "admin" })] as never[])),
+        expect: okFor(["admin"]),
+      },
+    },
+  },
+  "(workspace)/groups/actions.ts": {
+    actions: {
+      createGroupAction: {
+        call: (action) => action(...([idleState(), form({ name: `Action group ${Math.random()}`, kind: "research", slug: "", description: "" })] as never[])),
+        expect: okFor(signedInRoles),
+      },
+      forkToPersonalSpaceAction: { call: (action, world) => action(...([world.configurationId] as never[])), expect: okFor(["viewer", "editor", "owner", "admin"]) },
+      setStarterAction: {
+        call: async (action, world) => {
+          const lab = await labConfiguration(world);
+          return action(...([lab.id, true, lab.slug] as never[]));
+        },
+        expect: okFor(["owner", "admin"]),
+      },
+    },
+  },
+  "(workspace)/configurations/[configurationId]/history/actions.ts": {
+    actions: {
+      restoreRevisionAction: {
+        call: (action, world) => action(...([world.configurationId, world.revisionId, 1] as never[])),
+        expect: okFor(["editor", "owner", "admin"]),
+        consumes: true,
+      },
+    },
+  },
+};
+
+const appRoot = path.resolve(import.meta.dirname, "..", "..", "app");
+
+/** Every file under app/ that starts with "use server", found on disk. */
+function actionFiles(): string[] {
+  return (readdirSync(appRoot, { recursive: true }) as string[])
+    .map((file) => file.split(path.sep).join("/"))
+    .filter((file) => /\.tsx?$/.test(file) && /^\s*["']use server["']/.test(readFileSync(path.join(appRoot, file), "utf8")))
+    .sort();
+}
+
+async function actionsOf(file: string): Promise<Record<string, (...args: never[]) => Promise<unknown>>> {
+  const module = (await import(/* @vite-ignore */ path.join(appRoot, file))) as Record<string, unknown>;
+  return Object.fromEntries(
+    Object.entries(module).filter((entry): entry is [string, (...args: never[]) => Promise<unknown>] => typeof entry[1] === "function"),
+  );
+}
+
+/** "ok" or "refused", from what an action returned or threw. */
+async function outcomeOf(run: () => Promise<unknown>): Promise<{ outcome: Outcome; detail: string }> {
+  try {
+    const value = (await run()) as { status?: string; message?: string | null; error?: string } | undefined;
+    if (value && (value.status === "error" || typeof value.error === "string")) {
+      const message = value.message ?? value.error ?? "";
+      return { outcome: "refused", detail: `${message} ${JSON.stringify((value as { fieldErrors?: unknown }).fieldErrors ?? {})}` };
+    }
+    return { outcome: "ok", detail: JSON.stringify(value ?? null).slice(0, 120) };
+  } catch (error) {
+    if (error instanceof RedirectSignal) return { outcome: "ok", detail: error.message };
+    throw error;
+  }
+}
+
+describe("server action matrix", () => {
+  it("the table covers every server action file under app/ and every function it exports", async () => {
+    const files = actionFiles();
+    expect(files.length).toBeGreaterThan(2);
+    expect(files.filter((file) => !(file in actionMatrix))).toEqual([]);
+    expect(Object.keys(actionMatrix).filter((file) => !files.includes(file))).toEqual([]);
+    for (const file of files) {
+      const entry = actionMatrix[file];
+      if (!entry || "excluded" in entry) continue;
+      const exported = Object.keys(await actionsOf(file)).sort();
+      expect({ file, actions: exported }).toEqual({ file, actions: Object.keys(entry.actions).sort() });
+    }
+  });
+
+  let shared: Promise<World> | undefined;
+  for (const [file, entry] of Object.entries(actionMatrix)) {
+    if ("excluded" in entry) continue;
+    describe(file, () => {
+      for (const [name, cell] of Object.entries(entry.actions)) {
+        for (const role of roles) {
+          const expected = cell.expect[role];
+          it(`${name} as ${role} -> ${expected}`, async () => {
+            // Account actions change the acting user, so each of their cells gets its own world too.
+            const own = (cell.consumes && expected === "ok") || file.includes("account/");
+            const world = own ? await createWorld() : await (shared ??= createWorld());
+            const action = (await actionsOf(file))[name];
+            if (!action) throw new Error(`${file} does not export ${name}`);
+            const result = await runAs(actorOf(world, role), () => outcomeOf(() => cell.call(action, world, role)));
+            expect({ outcome: result.outcome, detail: result.detail }).toMatchObject({ outcome: expected });
+            // A refusal is deliberate, never the catch-all for an unexpected error.
+            if (result.outcome === "refused") expect(result.detail).not.toMatch(/Something went wrong/);
           });
         }
       }
