@@ -13,8 +13,8 @@ export interface GroupConfigurationsTableProps {
   groupSlug: string;
   /** Lab owners get a starter toggle per row. */
   canPublishStarters: boolean;
-  /** Which rows offer "Fork to my space": lab starters for students, every row in a shared group. */
-  forkScope: "none" | "starters" | "all";
+  /** Whether starter rows offer "Fork to my space". */
+  forkScope: "none" | "starters";
   emptyTitle: string;
   emptyDescription?: string;
   caption: string;
@@ -75,7 +75,7 @@ export function GroupConfigurationsTable({
             {showActions ? (
               <TableCell className="text-right">
                 <span className="inline-flex gap-2">
-                  {forkScope === "all" || (forkScope === "starters" && configuration.isStarter) ? (
+                  {forkScope === "starters" && configuration.isStarter ? (
                     <ForkToSpaceButton configurationId={configuration.id} title={configuration.title} />
                   ) : null}
                   {canPublishStarters ? (

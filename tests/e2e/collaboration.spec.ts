@@ -70,9 +70,11 @@ test.describe("collaboration", () => {
     await owner.goto(`${configurationPath}/results`);
     await expect(owner.getByText(comment)).toBeVisible();
 
-    // Fork into the collaborator's own space.
-    await collaborator.goto("/groups/brane-engineering");
-    await collaborator.getByRole("region", { name: "Configurations" }).getByRole("button", { name: /^Fork “.*” to my space$/ }).first().click();
+    // Fork into the collaborator's own space from the results page.
+    await collaborator.getByRole("button", { name: "Fork", exact: true }).click();
+    // The personal space is the default target.
+    const dialog = collaborator.getByRole("dialog", { name: "Fork this configuration" });
+    await dialog.getByRole("button", { name: "Fork", exact: true }).click();
     await expect(collaborator).toHaveURL(/\/configurations\/[0-9a-f-]{36}$/, { timeout: 2 * signInTimeout });
     expect(new URL(collaborator.url()).pathname).not.toBe(configurationPath);
 

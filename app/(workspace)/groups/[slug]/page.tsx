@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { GroupConfigurationsTable } from "@/components/collaboration/group-configurations-table";
+import { ConfigurationTable } from "@/components/configurations/configuration-table";
 import { InvitationsPanel } from "@/components/collaboration/invitations-panel";
 import { MembersTable } from "@/components/collaboration/members-table";
 import { StarterForksComparison } from "@/components/collaboration/starter-forks-comparison";
@@ -39,13 +40,14 @@ export default async function GroupPage({ params }: GroupPageProps) {
   const isOwner = group.role === "owner";
   const isLab = group.kind === "lab";
   const personal = group.kind === "personal";
-  const [members, configurations, invitations, comparison] = await Promise.all([
+  const pageSize = 10;
+  const [members, firstPage, labConfigurations, invitations, comparison] = await Promise.all([
     listMembers(actor, group.id),
-    listConfigurationsForGroup(actor, group.id, { limit: 200 }),
+    listConfigurationsForGroup(actor, group.id, { sort: "updated", direction: "desc", limit: pageSize }),
+    isLab ? listConfigurationsForGroup(actor, group.id, { sort: "title", direction: "asc", limit: 500, starter: isOwner ? undefined : true }) : null,
     isOwner && !personal ? listInvitations(actor, group.id) : Promise.resolve([]),
     isLab && roleAtLeast(group.role, "editor") ? listStarterForks(actor, group.id) : Promise.resolve(null),
   ]);
-  const starters = configurations.items.filter((configuration) => configuration.isStarter);
 
   return (
     <PageContainer className="grid gap-6">
@@ -69,45 +71,47 @@ export default async function GroupPage({ params }: GroupPageProps) {
         }
       />
 
-      {isLab && !roleAtLeast(group.role, "editor") ? (
-        <Card aria-labelledby="starters-title">
-          <CardHeader>
-            <CardTitle id="starters-title">Starter configurations</CardTitle>
-            <CardDescription>Fork a starter into your own space to explore other boundary choices; the instructor sees your fork&apos;s key results.</CardDescription>
-          </CardHeader>
-          <CardContent>
-            <GroupConfigurationsTable
-              configurations={starters}
-              groupSlug={group.slug}
-              canPublishStarters={false}
-              forkScope="starters"
-              emptyTitle="No starters yet"
-              emptyDescription="Your instructor has not published a starter configuration yet."
-              caption="Starters published by the lab's instructors."
-            />
-          </CardContent>
-        </Card>
-      ) : null}
-
       <Card aria-labelledby="configurations-title">
         <CardHeader>
           <CardTitle id="configurations-title">Configurations</CardTitle>
           <CardDescription>
-            {isLab && isOwner ? "Publish a configuration as a starter so students can fork it." : `${configurations.total} in this ${personal ? "space" : "group"}.`}
+            {firstPage.total === 1 ? "1 configuration" : `${firstPage.total} configurations`} in this {personal ? "space" : isLab ? "lab" : "group"}. Open one to see its results, comments, history and forks.
           </CardDescription>
         </CardHeader>
         <CardContent>
-          <GroupConfigurationsTable
-            configurations={configurations.items}
-            groupSlug={group.slug}
-            canPublishStarters={isLab && isOwner}
-            forkScope={personal || isLab ? "none" : "all"}
-            emptyTitle="No configurations yet"
-            emptyDescription={roleAtLeast(group.role, "editor") ? "Create one in the designer or import a configuration file." : undefined}
-            caption="Sorted by last change."
+          <ConfigurationTable
+            groupId={group.id}
+            label="Group configurations"
+            pageSize={pageSize}
+            initialData={{ ...toJson(firstPage), page: 1, pageSize }}
+            emptyMessage={roleAtLeast(group.role, "editor") ? "No configurations yet. Create one in the designer or import a configuration file." : "No configurations yet."}
           />
         </CardContent>
       </Card>
+
+      {labConfigurations ? (
+        <Card aria-labelledby="starters-title">
+          <CardHeader>
+            <CardTitle id="starters-title">Starter configurations</CardTitle>
+            <CardDescription>
+              {isOwner
+                ? "Publish configurations as starters; students fork them into their own space and their forks appear under “Student forks”."
+                : "Fork a starter into your own space to explore other boundary choices; the instructor sees your fork’s key results."}
+            </CardDescription>
+          </CardHeader>
+          <CardContent>
+            <GroupConfigurationsTable
+              configurations={labConfigurations.items}
+              groupSlug={group.slug}
+              canPublishStarters={isOwner}
+              forkScope="starters"
+              emptyTitle={isOwner ? "No configurations in this lab yet" : "No starters yet"}
+              emptyDescription={isOwner ? "Create a configuration in this lab, then publish it here." : "Your instructor has not published a starter configuration yet."}
+              caption={isOwner ? "Every configuration of the lab." : "Starters published by the lab's instructors."}
+            />
+          </CardContent>
+        </Card>
+      ) : null}
 
       {comparison ? (
         <Card aria-labelledby="forks-title">
