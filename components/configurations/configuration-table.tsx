@@ -198,13 +198,13 @@ export function ConfigurationTable({ groupId, scope = "accessible", label = "Con
                       key={header.id}
                       scope="col"
                       aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}
-                      className="h-9 px-3 text-left font-semibold tracking-wide uppercase"
+                      className="h-9 px-3 text-left font-semibold tracking-wide"
                     >
                       {header.column.getCanSort() ? (
                         <button
                           type="button"
                           onClick={header.column.getToggleSortingHandler()}
-                          className="inline-flex items-center gap-1 uppercase hover:text-foreground focus-visible:outline-2 focus-visible:outline-ring"
+                          className="inline-flex items-center gap-1 hover:text-foreground focus-visible:outline-2 focus-visible:outline-ring"
                         >
                           {content}
                           <span aria-hidden="true">{sorted === "asc" ? "\u25b2" : sorted === "desc" ? "\u25bc" : "\u2195"}</span>
