@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { toSafeCallbackPath } from "@/lib/safe-redirect";
+import { toCallbackQuery, toSafeCallbackPath } from "@/lib/safe-redirect";
 
 describe("toSafeCallbackPath", () => {
   it("keeps a same-site path with its query", () => {
@@ -22,5 +22,15 @@ describe("toSafeCallbackPath", () => {
       expect(toSafeCallbackPath("/\\elsewhere.example")).toBe("/dashboard");
       expect(toSafeCallbackPath("javascript:alert(1)")).toBe("/dashboard");
     });
+  });
+});
+
+describe("toCallbackQuery", () => {
+  it("encodes a path to come back to", () => {
+    expect(toCallbackQuery("/invitations/abc?x=1")).toBe("?callbackUrl=%2Finvitations%2Fabc%3Fx%3D1");
+  });
+
+  it("is empty for the default destination", () => {
+    expect(toCallbackQuery("/dashboard")).toBe("");
   });
 });

@@ -7,3 +7,8 @@ export function toSafeCallbackPath(value: string | string[] | null | undefined, 
   if (!candidate || !candidate.startsWith("/") || candidate.startsWith("//") || candidate.startsWith("/\\")) return fallback;
   return candidate;
 }
+
+/** `?callbackUrl=…` to carry `path` between the sign-in and sign-up pages; empty for the default. */
+export function toCallbackQuery(path: string, fallback = "/dashboard"): string {
+  return path === fallback ? "" : `?callbackUrl=${encodeURIComponent(path)}`;
+}

@@ -11,18 +11,23 @@ import { idleState } from "@/lib/action-state";
 import { useHydrated } from "@/lib/hooks/use-hydrated";
 import { minPasswordLength } from "@/lib/validations/auth";
 
-export function SignUpForm() {
+export interface SignUpFormProps {
+  /** Same-site path to open once the account exists and is signed in. */
+  callbackPath: string;
+}
+
+export function SignUpForm({ callbackPath }: SignUpFormProps) {
   const hydrated = useHydrated();
   const [state, formAction, pending] = useActionState(async (previous: SignUpState, formData: FormData): Promise<SignUpState> => {
     const result = await signUpAction(previous, formData);
     if (result.status !== "success") return result;
-    // The account exists now; sign in with the same credentials and open the dashboard.
+    // The account exists now; sign in with the same credentials and go on.
     const signedIn = await signIn("password", { email: formData.get("email"), password: formData.get("password"), redirect: false });
     if (!signedIn?.ok || signedIn.error) {
       window.location.assign("/sign-in");
       return result;
     }
-    window.location.assign("/dashboard");
+    window.location.assign(callbackPath);
     return result;
   }, idleState());
 

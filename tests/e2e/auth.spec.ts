@@ -75,6 +75,20 @@ test.describe("sign-in and sign-out", () => {
     await expect(page).toHaveURL(/\/account$/, { timeout: signInTimeout });
     await expect(page.getByText(demoAccounts.cora.email)).toBeVisible();
   });
+
+  test("an account created on the way keeps the destination", async ({ page }) => {
+    const account = newAccount("detour");
+    await page.goto("/account");
+    await page.getByRole("link", { name: "Create one" }).click();
+    await expect(page).toHaveURL(/\/sign-up\?callbackUrl=%2Faccount$/);
+    await page.getByLabel("Name").fill(account.name);
+    await page.getByLabel("E-mail").fill(account.email);
+    await page.getByLabel("Password", { exact: true }).fill(account.password);
+    await page.getByLabel("Repeat the password").fill(account.password);
+    await page.getByRole("button", { name: "Create account" }).click();
+    await expect(page).toHaveURL(/\/account$/, { timeout: signInTimeout });
+    await expect(page.getByText(account.email)).toBeVisible();
+  });
 });
 
 test.describe("sign-in link", () => {

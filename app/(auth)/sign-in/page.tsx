@@ -5,7 +5,7 @@ import { AuthPanel } from "@/components/auth/auth-panel";
 import { SignInForm } from "@/components/auth/sign-in-form";
 import { Alert } from "@/components/ui/alert";
 import { ButtonLink } from "@/components/ui/button";
-import { toSafeCallbackPath } from "@/lib/safe-redirect";
+import { toCallbackQuery, toSafeCallbackPath } from "@/lib/safe-redirect";
 import { getCurrentUser } from "@/lib/session";
 
 export const metadata: Metadata = { title: "Sign in" };
@@ -14,6 +14,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
   const params = await searchParams;
   const callbackPath = toSafeCallbackPath(params.callbackUrl);
   if (await getCurrentUser()) redirect(callbackPath);
+  const query = toCallbackQuery(callbackPath);
 
   return (
     <AuthPanel
@@ -22,7 +23,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
       footer={
         <p>
           No account yet?{" "}
-          <Link href="/sign-up" className="font-medium text-accent hover:underline">
+          <Link href={`/sign-up${query}`} className="font-medium text-accent hover:underline">
             Create one
           </Link>
         </p>

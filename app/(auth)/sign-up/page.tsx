@@ -3,12 +3,15 @@ import Link from "next/link";
 import { redirect } from "next/navigation";
 import { AuthPanel } from "@/components/auth/auth-panel";
 import { SignUpForm } from "@/components/auth/sign-up-form";
+import { toCallbackQuery, toSafeCallbackPath } from "@/lib/safe-redirect";
 import { getCurrentUser } from "@/lib/session";
 
 export const metadata: Metadata = { title: "Create an account" };
 
-export default async function SignUpPage() {
-  if (await getCurrentUser()) redirect("/dashboard");
+export default async function SignUpPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+  const callbackPath = toSafeCallbackPath((await searchParams).callbackUrl);
+  if (await getCurrentUser()) redirect(callbackPath);
+  const query = toCallbackQuery(callbackPath);
 
   return (
     <AuthPanel
@@ -17,13 +20,13 @@ export default async function SignUpPage() {
       footer={
         <p>
           Already have an account?{" "}
-          <Link href="/sign-in" className="font-medium text-accent hover:underline">
+          <Link href={`/sign-in${query}`} className="font-medium text-accent hover:underline">
             Sign in
           </Link>
         </p>
       }
     >
-      <SignUpForm />
+      <SignUpForm callbackPath={callbackPath} />
     </AuthPanel>
   );
 }
