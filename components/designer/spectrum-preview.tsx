@@ -22,7 +22,12 @@ export function SpectrumPreview({ result, issues, elapsedMs, lightestRows = 8 }:
         <h2 id="spectrum-preview-title" className="text-sm font-semibold">
           Live spectrum
         </h2>
-        <span className="font-mono text-[11px] text-muted-foreground" title="Time to check and compute the draft in this browser">
+        <span
+          className="font-mono text-[11px] text-muted-foreground"
+          title="Time to check and compute the draft in this browser"
+          // Measured separately on the server render and in the browser.
+          suppressHydrationWarning
+        >
           {elapsedMs.toFixed(1)} ms
         </span>
       </div>
@@ -116,13 +121,13 @@ function PreviewBody({ result, lightestRows }: { result: SpectrumResult; lightes
           <table className="w-full border-collapse text-xs" aria-label="Lightest states">
             <thead className="bg-surface-muted/70 text-muted-foreground">
               <tr>
-                <th scope="col" className="px-2 py-1 text-left font-semibold">Sector</th>
-                <th scope="col" className="px-2 py-1 text-left font-semibold">NS/R</th>
-                <th scope="col" className="px-2 py-1 text-right font-semibold">Level</th>
-                <th scope="col" className="px-2 py-1 text-right font-semibold">&alpha;&prime;M&sup2;</th>
-                <th scope="col" className="px-2 py-1 text-right font-semibold">M&radic;&alpha;&prime;</th>
-                <th scope="col" className="px-2 py-1 text-right font-semibold">States</th>
-                <th scope="col" className="px-2 py-1 text-right font-semibold">With CP</th>
+                <th scope="col" className="px-1.5 py-1 text-left font-semibold">Sector</th>
+                <th scope="col" className="px-1.5 py-1 text-left font-semibold">NS/R</th>
+                <th scope="col" className="px-1.5 py-1 text-right font-semibold">Level</th>
+                <th scope="col" className="px-1.5 py-1 text-right font-semibold">&alpha;&prime;M&sup2;</th>
+                <th scope="col" className="px-1.5 py-1 text-right font-semibold">M&radic;&alpha;&prime;</th>
+                <th scope="col" className="px-1.5 py-1 text-right font-semibold">States</th>
+                <th scope="col" className="px-1.5 py-1 text-right font-semibold">With CP</th>
               </tr>
             </thead>
             <tbody>
@@ -130,18 +135,18 @@ function PreviewBody({ result, lightestRows }: { result: SpectrumResult; lightes
                 const negative = row.massSquared.startsWith("-");
                 return (
                   <tr key={`${row.pair.join("|")}-${row.sector}-${row.level}-${i}`} className="border-t border-border">
-                    <td className="px-2 py-1 font-mono whitespace-nowrap">
+                    <td className="px-1.5 py-1 font-mono whitespace-nowrap">
                       {row.pair[0]}&ndash;{row.pair[1]}
                     </td>
                     <td className="px-2 py-1">{row.sector}</td>
-                    <td className="px-2 py-1 text-right font-mono">{row.level}</td>
-                    <td className="px-2 py-1 text-right font-mono whitespace-nowrap">
+                    <td className="px-1.5 py-1 text-right font-mono">{row.level}</td>
+                    <td className="px-1.5 py-1 text-right font-mono whitespace-nowrap">
                       {formatMassSquared(row.massSquared)}
                       {negative ? <span className="ml-1 text-danger-soft-foreground">tachyon</span> : null}
                     </td>
-                    <td className="px-2 py-1 text-right font-mono">{formatNumber(row.mass)}</td>
-                    <td className="px-2 py-1 text-right font-mono">{row.states ?? "\u2014"}</td>
-                    <td className="px-2 py-1 text-right font-mono">{row.withChanPaton}</td>
+                    <td className="px-1.5 py-1 text-right font-mono">{formatNumber(row.mass)}</td>
+                    <td className="px-1.5 py-1 text-right font-mono">{row.states ?? "\u2014"}</td>
+                    <td className="px-1.5 py-1 text-right font-mono">{row.withChanPaton}</td>
                   </tr>
                 );
               })}
