@@ -1,5 +1,5 @@
 import { expect, test } from "@playwright/test";
-import { demoAccounts, newAccount, signIn, signInTimeout, signOut, signUp } from "./helpers/accounts";
+import { demoAccounts, newAccount, signIn, signInTimeout, signOut, signUp, submitSignUpForm } from "./helpers/accounts";
 import { extractFirstLink, waitForMessageTo } from "./helpers/mailbox";
 
 test.describe("sign-up", () => {
@@ -81,11 +81,7 @@ test.describe("sign-in and sign-out", () => {
     await page.goto("/account");
     await page.getByRole("link", { name: "Create one" }).click();
     await expect(page).toHaveURL(/\/sign-up\?callbackUrl=%2Faccount$/);
-    await page.getByLabel("Name").fill(account.name);
-    await page.getByLabel("E-mail").fill(account.email);
-    await page.getByLabel("Password", { exact: true }).fill(account.password);
-    await page.getByLabel("Repeat the password").fill(account.password);
-    await page.getByRole("button", { name: "Create account" }).click();
+    await submitSignUpForm(page, account);
     await expect(page).toHaveURL(/\/account$/, { timeout: signInTimeout });
     await expect(page.getByText(account.email)).toBeVisible();
   });

@@ -35,13 +35,18 @@ export function newAccount(label: string): NewAccount {
 /** Creates the account through the sign-up form; ends signed in on the dashboard. */
 export async function signUp(page: Page, account: NewAccount): Promise<void> {
   await page.goto("/sign-up");
+  await submitSignUpForm(page, account);
+  await expect(page).toHaveURL(/\/dashboard$/, { timeout: signInTimeout });
+  await expect(page.getByRole("button", { name: /^Account:/ })).toBeVisible();
+}
+
+/** Fills in and submits the sign-up form that is open on `page`. */
+export async function submitSignUpForm(page: Page, account: NewAccount): Promise<void> {
   await page.getByLabel("Name").fill(account.name);
   await page.getByLabel("E-mail").fill(account.email);
   await page.getByLabel("Password", { exact: true }).fill(account.password);
   await page.getByLabel("Repeat the password").fill(account.password);
   await page.getByRole("button", { name: "Create account" }).click();
-  await expect(page).toHaveURL(/\/dashboard$/, { timeout: signInTimeout });
-  await expect(page.getByRole("button", { name: /^Account:/ })).toBeVisible();
 }
 
 /** Signs in through the password form and waits for the dashboard (or `expectPath`). */
