@@ -10,6 +10,7 @@ import {
   ApiError,
   apiFetch,
   configurationQueries,
+  useDeleteConfiguration,
   useForkConfiguration,
   useUpdateConfiguration,
   type ConfigurationJson,
@@ -18,6 +19,7 @@ import { selectDocument, useDesignerStore } from "@/lib/stores/designer-store";
 import { Alert } from "@/components/ui/alert";
 import { Badge } from "@/components/ui/badge";
 import { Button, ButtonLink } from "@/components/ui/button";
+import { Dialog } from "@/components/ui/dialog";
 import { BoundaryGrid } from "./boundary-grid";
 import { ConflictDialog } from "./conflict-dialog";
 import { DesignerCanvas } from "./designer-canvas";
@@ -60,6 +62,8 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
 
   const update = useUpdateConfiguration(id);
   const fork = useForkConfiguration(id);
+  const remove = useDeleteConfiguration(id);
+  const [deleteOpen, setDeleteOpen] = useState(false);
   const canEdit = configuration.canEdit;
 
   // Load the saved document, or an unsaved draft of it kept in this browser. Runs again if the
@@ -209,6 +213,11 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
             Fork
           </Button>
           {canEdit ? (
+            <Button variant="ghost" size="sm" onClick={() => setDeleteOpen(true)}>
+              Delete
+            </Button>
+          ) : null}
+          {canEdit ? (
             <Button size="sm" onClick={openSave} disabled={!dirty || blocked} title={blocked ? "Fix the problems shown in the grid first" : undefined}>
               Save
             </Button>
@@ -250,6 +259,35 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
         </div>
       </div>
 
+      <Dialog
+        open={deleteOpen}
+        onOpenChange={setDeleteOpen}
+        title="Delete this configuration?"
+        description="It disappears from lists and links for everyone in the space. Nothing is erased: the record and its revisions are kept in the database."
+        footer={
+          <>
+            <Button variant="secondary" onClick={() => setDeleteOpen(false)}>
+              Cancel
+            </Button>
+            <Button
+              variant="danger"
+              pending={remove.isPending}
+              onClick={() =>
+                remove.mutate(undefined, {
+                  onSuccess: () => {
+                    clearDraft(window.localStorage, id);
+                    router.push("/dashboard");
+                  },
+                })
+              }
+            >
+              Delete
+            </Button>
+          </>
+        }
+      >
+        {remove.error ? <p className="text-danger-soft-foreground">{remove.error.message}</p> : null}
+      </Dialog>
       <SaveDialog open={saveOpen} onOpenChange={setSaveOpen} pending={update.isPending} error={saveError} onSave={save} />
       <ConflictDialog
         open={conflictVersion !== null}
