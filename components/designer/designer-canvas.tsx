@@ -218,6 +218,7 @@ export function DesignerCanvas({ result, readOnly = false, onSaveShortcut, class
       <div role="toolbar" aria-label="Canvas tools" className="flex flex-wrap items-center gap-1 border-b border-border px-2 py-1.5 text-xs">
         <AxisSelect
           label="Horizontal"
+          shortLabel="Across"
           value={displayAxes.horizontal}
           other={displayAxes.vertical}
           axes={axes}
@@ -225,6 +226,7 @@ export function DesignerCanvas({ result, readOnly = false, onSaveShortcut, class
         />
         <AxisSelect
           label="Vertical"
+          shortLabel="Up"
           value={displayAxes.vertical}
           other={displayAxes.horizontal}
           axes={axes}
@@ -334,6 +336,8 @@ function CanvasLegend() {
 
 interface AxisSelectProps {
   label: string;
+  /** Visible text; `label` is the accessible name. */
+  shortLabel: string;
   value: number;
   /** The axis shown in the other direction (not selectable here). */
   other: number;
@@ -341,10 +345,12 @@ interface AxisSelectProps {
   onChange: (axis: number) => void;
 }
 
-function AxisSelect({ label, value, other, axes, onChange }: AxisSelectProps) {
+function AxisSelect({ label, shortLabel, value, other, axes, onChange }: AxisSelectProps) {
   return (
     <label className="flex items-center gap-1">
-      <span className="text-muted-foreground">{label}</span>
+      <span className="text-muted-foreground" aria-hidden="true">
+        {shortLabel}
+      </span>
       <select
         value={value}
         onChange={(event) => onChange(Number(event.target.value))}
@@ -362,7 +368,7 @@ function AxisSelect({ label, value, other, axes, onChange }: AxisSelectProps) {
 }
 
 function Divider() {
-  return <span aria-hidden="true" className="mx-1 h-5 w-px bg-border" />;
+  return <span aria-hidden="true" className="mx-0.5 h-5 w-px bg-border" />;
 }
 
 interface ToolButtonProps {
@@ -383,7 +389,7 @@ function ToolButton({ label, pressed, disabled, onClick, children }: ToolButtonP
       disabled={disabled}
       onClick={onClick}
       className={cn(
-        "h-7 min-w-7 rounded px-2 font-medium",
+        "h-7 min-w-7 rounded px-1.5 font-medium",
         pressed ? "bg-accent-soft text-accent-soft-foreground" : "text-foreground hover:bg-surface-muted",
         "focus-visible:outline-2 focus-visible:outline-ring disabled:opacity-40",
       )}
