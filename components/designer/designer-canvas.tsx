@@ -285,6 +285,7 @@ export function DesignerCanvas({ result, readOnly = false, onSaveShortcut, class
         ref={frameRef}
         tabIndex={0}
         role="application"
+        data-designer-canvas=""
         aria-roledescription="brane canvas"
         aria-label={`Canvas showing x${displayAxes.horizontal} across and x${displayAxes.vertical} up. ${selection.length} selected. Arrow keys move the selection; press ? for shortcuts.`}
         className="relative min-h-[280px] flex-1 bg-background focus-visible:outline-2 focus-visible:-outline-offset-2 focus-visible:outline-ring"

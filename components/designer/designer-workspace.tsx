@@ -20,6 +20,8 @@ import { Alert } from "@/components/ui/alert";
 import { Badge } from "@/components/ui/badge";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { Dialog } from "@/components/ui/dialog";
+import { exportCanvasPng, pngFileName } from "@/components/canvas/export-canvas-png";
+import { ExportMenu } from "@/components/configurations/export-menu";
 import { BoundaryGrid } from "./boundary-grid";
 import { ConflictDialog } from "./conflict-dialog";
 import { DesignerCanvas } from "./designer-canvas";
@@ -209,6 +211,13 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
           <ButtonLink href={`/configurations/${id}/history`} variant="ghost" size="sm">
             History
           </ButtonLink>
+          <ExportMenu
+            configurationId={id}
+            onExportPng={() => {
+              const frame = window.document.querySelector<HTMLElement>("[data-designer-canvas]");
+              if (frame) exportCanvasPng(frame, pngFileName(document.title));
+            }}
+          />
           <Button variant="secondary" size="sm" onClick={() => setForkMode("saved")} disabled={writableGroups.length === 0}>
             Fork
           </Button>

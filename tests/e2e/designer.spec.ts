@@ -136,6 +136,23 @@ test.describe("designer", () => {
     await expect(page.getByLabel("Position of stack b on x9")).toHaveValue("3.25");
   });
 
+  test("exports the canvas as a PNG image", async ({ page }) => {
+    await signIn(page, demoAccounts.ada);
+    const id = await createInGroup(page, twoStackDocument(unique("Canvas picture")));
+    await openDesigner(page, id);
+    await page.getByRole("button", { name: "Export", exact: true }).click();
+    const downloading = page.waitForEvent("download");
+    await page.getByRole("menuitem", { name: /Canvas \(PNG\)/ }).click();
+    const download = await downloading;
+    expect(download.suggestedFilename()).toMatch(/^canvas-picture-.*-canvas\.png$/);
+    const path = await download.path();
+    const { readFile } = await import("node:fs/promises");
+    const bytes = await readFile(path);
+    // PNG signature (RFC 2083 / ISO 15948): 89 50 4E 47 0D 0A 1A 0A.
+    expect([...bytes.subarray(0, 8)]).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
+    expect(bytes.length).toBeGreaterThan(1000);
+  });
+
   test("shows results whose numbers equal the engine's", async ({ page }) => {
     await signIn(page, demoAccounts.ada);
     const document: Configuration = {

@@ -1,0 +1,32 @@
+/**
+ * Saves what the designer's stage shows as a PNG. Konva draws each layer into its own <canvas>
+ * inside the stage's container, so the layers are composited in order onto one canvas filled with
+ * the page background (layers are transparent) before download. Browser only.
+ */
+export function exportCanvasPng(container: HTMLElement, fileName: string): boolean {
+  const layers = Array.from(container.querySelectorAll("canvas"));
+  const first = layers[0];
+  if (!first) return false;
+  const output = window.document.createElement("canvas");
+  output.width = first.width;
+  output.height = first.height;
+  const context = output.getContext("2d");
+  if (!context) return false;
+  context.fillStyle = getComputedStyle(container).backgroundColor || "#ffffff";
+  context.fillRect(0, 0, output.width, output.height);
+  for (const layer of layers) context.drawImage(layer, 0, 0);
+  const link = window.document.createElement("a");
+  link.href = output.toDataURL("image/png");
+  link.download = fileName;
+  link.click();
+  return true;
+}
+
+/** A file name from a configuration title: lower case, dashes, no punctuation. */
+export function pngFileName(title: string): string {
+  const slug = title
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, "-")
+    .replace(/^-+|-+$/g, "");
+  return `${slug || "configuration"}-canvas.png`;
+}
