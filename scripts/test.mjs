@@ -122,10 +122,10 @@ async function teardown() {
 
 function summary() {
   console.log("\n[test] summary");
-  for (const t of setupTimings) console.log(`  setup  ${t.name.padEnd(34)} ${t.seconds.toFixed(1).padStart(6)}s`);
+  for (const t of setupTimings) console.log(`  setup  ${t.name.padEnd(40)} ${t.seconds.toFixed(1).padStart(6)}s`);
   for (const r of results) {
     const counts = r.counted ? ` (${r.passed} passed, ${r.failed} failed)` : "";
-    console.log(`  ${r.code === 0 ? "ok    " : "FAILED"} ${r.name.padEnd(34)} ${r.seconds.toFixed(1).padStart(6)}s${counts}`);
+    console.log(`  ${r.code === 0 ? "ok    " : "FAILED"} ${r.name.padEnd(40)} ${r.seconds.toFixed(1).padStart(6)}s${counts}`);
   }
   const passed = results.reduce((sum, r) => sum + r.passed, 0);
   // A failed step without a parsed count (a build, a migration, a crashed runner) counts as one failure.
