@@ -29,7 +29,7 @@ export function ensureNodeModules() {
   if (r.status !== 0) throw new Error(`npm ci failed (exit ${r.status})`);
 }
 
-/** Installs Debian's chromium with apt-get when /usr/bin/chromium is missing (never `playwright install`). */
+/** Installs Debian's chromium with apt-get when /usr/bin/chromium is missing (Playwright never downloads a browser of its own here). */
 export function ensureChromium() {
   if (existsSync(chromiumPath)) return;
   aptInstall(["chromium"], "Chromium (for the browser tests)");
