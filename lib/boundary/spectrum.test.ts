@@ -149,7 +149,7 @@ describe("computeSpectrum", () => {
   });
 
   describe("type II, nu > 0", () => {
-    it("gives 8 supercharges and equal NS and R counts at nu = 4 (physics.md)", () => {
+    it("gives 8 supercharges and equal NS and R counts at nu = 4 (physics.md; Polchinski vol. 2 section 13.4, from memory)", () => {
       const result = computeSpectrum(config("IIA", [stack("w", axes(1, 8)), stack("p", axes(1, 4))], { levels: 2 }));
       const pair = sectorOf(result.sectors, "p", "w");
       expect(pair.nu).toBe(4);
@@ -158,7 +158,7 @@ describe("computeSpectrum", () => {
       expect(pair.supersymmetric).toBe(true);
     });
 
-    it("puts the single R ground state at nu = 8 in one orientation and says so (physics.md)", () => {
+    it("puts the single R ground state at nu = 8 in one orientation and says so (physics.md; Polchinski vol. 2 section 13.4, from memory)", () => {
       const result = computeSpectrum(config("IIA", [stack("w", axes(1, 8)), stack("z", [])], { levels: 1 }));
       const pair = sectorOf(result.sectors, "w", "z");
       expect(pair.zeroPoint).toEqual({ NS: "1/2", R: "0" });
@@ -170,7 +170,7 @@ describe("computeSpectrum", () => {
       expect(result.supercharges).toBe(8);
     });
 
-    it("finds a tachyon at nu = 2 with a = -1/4 and no supersymmetry (physics.md)", () => {
+    it("finds a tachyon at nu = 2 with a = -1/4 and no supersymmetry (physics.md; Polchinski vol. 2 section 13.4, from memory)", () => {
       const result = computeSpectrum(config("IIA", [stack("d2", [1, 2]), stack("d0", [], { position: { "5": 1 } })]));
       const pair = sectorOf(result.sectors, "d0", "d2");
       expect(pair.zeroPoint.NS).toBe("-1/4");
@@ -295,7 +295,7 @@ describe("computeSpectrum", () => {
       }
     });
 
-    it("warns about a non-critical bosonic dimension and uses a = -(D - 2)/24 (physics.md)", () => {
+    it("warns about a non-critical bosonic dimension and uses a = -(D - 2)/24 (physics.md; Polchinski vol. 2 section 13.4, from memory)", () => {
       const result = computeSpectrum(config("bosonic", [stack("a", [1, 2])], { dimension: 6, levels: 1 }));
       expect(result.warnings[0]).toContain("D = 6");
       expect(result.dimension).toBe(6);
