@@ -94,15 +94,23 @@ describe("POST /api/spectrum", () => {
 
   it("rate-limits anonymous callers per address with Retry-After, but not signed-in users", async () => {
     const body = JSON.stringify({ ...bosonic, levels: 0 });
-    let last: Response | undefined;
-    for (let i = 0; i < 121; i += 1) last = await post(body, { "x-forwarded-for": "203.0.113.5" });
-    expect(last?.status).toBe(429);
-    expect(Number(last?.headers.get("retry-after"))).toBeGreaterThan(0);
-    // Another address still gets through.
-    expect((await post(body, { "x-forwarded-for": "203.0.113.6" })).status).toBe(200);
-    // A signed-in caller from the limited address is not counted.
-    session.signedIn = true;
-    const signedIn = await post(body, { "x-forwarded-for": "203.0.113.5", cookie: "next-auth.session-token=abc" });
-    expect(signedIn.status).toBe(200);
+    // Windows are fixed slices of the clock: pin the clock to the start of one window so the
+    // 121 requests cannot straddle a boundary and split their count (only Date is faked).
+    vi.useFakeTimers({ toFake: ["Date"] });
+    vi.setSystemTime(new Date("2030-01-01T00:00:01Z"));
+    try {
+      let last: Response | undefined;
+      for (let i = 0; i < 121; i += 1) last = await post(body, { "x-forwarded-for": "203.0.113.5" });
+      expect(last?.status).toBe(429);
+      expect(Number(last?.headers.get("retry-after"))).toBeGreaterThan(0);
+      // Another address still gets through.
+      expect((await post(body, { "x-forwarded-for": "203.0.113.6" })).status).toBe(200);
+      // A signed-in caller from the limited address is not counted.
+      session.signedIn = true;
+      const signedIn = await post(body, { "x-forwarded-for": "203.0.113.5", cookie: "next-auth.session-token=abc" });
+      expect(signedIn.status).toBe(200);
+    } finally {
+      vi.useRealTimers();
+    }
   });
 });
