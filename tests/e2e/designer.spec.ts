@@ -80,7 +80,15 @@ test.describe("designer", () => {
 
     // Canvas: drag the new D0 two units to the right. The view was fitted to the starting stack at
     // the origin (80 px per unit, origin at the centre), so s1 is drawn 160 px above the centre.
-    const box = await canvas.boundingBox();
+    // The preview beside the canvas grows as stacks are added and the canvas refits after a resize:
+    // wait until its box holds still before aiming at a stack by pixels.
+    let box = await canvas.boundingBox();
+    await expect(async () => {
+      const before = await canvas.boundingBox();
+      await page.waitForTimeout(250);
+      box = await canvas.boundingBox();
+      expect(box).toEqual(before);
+    }).toPass({ timeout: 10_000 });
     if (!box) throw new Error("the canvas has no box");
     const cx = box.x + box.width / 2;
     const cy = box.y + box.height / 2;
