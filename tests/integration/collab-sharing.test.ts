@@ -13,7 +13,7 @@ import { braneAntibranePair } from "@/lib/demo-configurations";
 import { ForbiddenError, NotFoundError, ValidationError } from "@/lib/errors";
 import { hashSecureToken } from "@/lib/secure-token";
 import { makeSector, makeSpectrumResult } from "@/tests/fixtures/spectrum-result-builders";
-import { createTestGroup, createTestUser } from "@/tests/fixtures/users";
+import { createRoleGroup, createTestGroup, createTestUser } from "@/tests/fixtures/users";
 
 const session = vi.hoisted(() => ({ actor: null as Actor | null }));
 vi.mock("@/lib/session", () => ({ getCurrentUser: async () => session.actor }));
@@ -23,16 +23,7 @@ const { DELETE: revokeRoute } = await import("@/app/api/share-links/[shareLinkId
 const result = makeSpectrumResult([makeSector(["brane", "anti"])]);
 
 async function scenario() {
-  const [owner, editor, viewer, outsider] = await Promise.all([
-    createTestUser({ label: "owner" }),
-    createTestUser({ label: "editor" }),
-    createTestUser({ label: "viewer" }),
-    createTestUser({ label: "outsider" }),
-  ]);
-  const group = await createTestGroup(owner.actor, [
-    { actor: editor.actor, role: "editor" },
-    { actor: viewer.actor, role: "viewer" },
-  ]);
+  const { owner, editor, viewer, outsider, group } = await createRoleGroup();
   const configuration = await createConfiguration(owner.actor, group.id, braneAntibranePair, "First", result, 1);
   return { owner, editor, viewer, outsider, group, configuration };
 }

@@ -7,7 +7,7 @@ import { computeSpectrum } from "@/lib/boundary";
 import type { Configuration } from "@/lib/boundary/types";
 import { braneAntibranePair, landingDemoConfiguration } from "@/lib/demo-configurations";
 import { moveStacks } from "@/lib/designer/document";
-import { createTestGroup, createTestUser } from "@/tests/fixtures/users";
+import { createRoleGroup, createTestUser } from "@/tests/fixtures/users";
 
 // The configuration route handlers, called with Request objects against PostgreSQL. The session
 // is injected by mocking `getCurrentUser`; everything behind it (zod, the DAL, the engine) is real.
@@ -40,16 +40,7 @@ async function revisionCount(configurationId: string): Promise<number> {
 }
 
 async function scenario() {
-  const [owner, editor, viewer, outsider] = await Promise.all([
-    createTestUser({ label: "owner" }),
-    createTestUser({ label: "editor" }),
-    createTestUser({ label: "viewer" }),
-    createTestUser({ label: "outsider" }),
-  ]);
-  const group = await createTestGroup(owner.actor, [
-    { actor: editor.actor, role: "editor" },
-    { actor: viewer.actor, role: "viewer" },
-  ]);
+  const { owner, editor, viewer, outsider, group } = await createRoleGroup();
   as(owner.actor);
   const created = await listRoute.POST(json("POST", base, { groupId: group.id, document: landingDemoConfiguration, message: "First sketch" }));
   expect(created.status).toBe(201);

@@ -23,7 +23,7 @@ import type { Configuration, SpectrumResult } from "@/lib/boundary/types";
 import { braneAntibranePair, twoTwoBraneStacks } from "@/lib/demo-configurations";
 import { ConflictError, ForbiddenError, NotFoundError, UnauthenticatedError } from "@/lib/errors";
 import { makeSector, makeSpectrumResult } from "@/tests/fixtures/spectrum-result-builders";
-import { createTestGroup, createTestUser } from "@/tests/fixtures/users";
+import { createRoleGroup, createTestGroup, createTestUser } from "@/tests/fixtures/users";
 
 /** A hand-made result (shapes only; the engine's physics is tested in lib/boundary). */
 function fixtureResult(lightestMassSquared: string, tachyonic: boolean): SpectrumResult {
@@ -55,16 +55,9 @@ function moved(document: Configuration, y: number): Configuration {
 
 /** A research group with an owner, an editor, a viewer, an outsider and an admin, plus one saved configuration. */
 async function scenario() {
-  const [owner, editor, viewer, outsider, admin] = await Promise.all([
-    createTestUser({ label: "owner" }),
-    createTestUser({ label: "editor" }),
-    createTestUser({ label: "viewer" }),
-    createTestUser({ label: "outsider" }),
+  const [{ owner, editor, viewer, outsider, group }, admin] = await Promise.all([
+    createRoleGroup(),
     createTestUser({ label: "admin", siteRole: "admin" }),
-  ]);
-  const group = await createTestGroup(owner.actor, [
-    { actor: editor.actor, role: "editor" },
-    { actor: viewer.actor, role: "viewer" },
   ]);
   const configuration = await createConfiguration(
     editor.actor,
