@@ -5,6 +5,7 @@ import { CartesianGrid, Legend, Line, LineChart, ResponsiveContainer, Tooltip, X
 import type { Sector } from "@/lib/boundary/types";
 import { degeneracyRows } from "@/lib/designer/plot-data";
 import { formatNumber } from "@/lib/designer/spectrum-summary";
+import { axisStyle, horizontalAxisLabel, tooltipContentStyle, verticalAxisLabel } from "./chart-style";
 
 export interface DegeneracyPlotProps {
   sectors: Sector[];
@@ -47,20 +48,18 @@ export function DegeneracyPlot({ sectors }: DegeneracyPlotProps) {
               dataKey="level"
               type="number"
               domain={["dataMin", "dataMax"]}
-              label={{ value: "level N", position: "insideBottom", offset: -16, fill: "var(--muted-foreground)", fontSize: 12 }}
-              stroke="var(--muted-foreground)"
-              fontSize={11}
+              label={horizontalAxisLabel("level N")}
+              {...axisStyle}
             />
             <YAxis
               tickFormatter={(v: number) => formatNumber(v, 3)}
-              label={{ value: "log\u2081\u2080 states", angle: -90, position: "insideLeft", fill: "var(--muted-foreground)", fontSize: 12 }}
-              stroke="var(--muted-foreground)"
-              fontSize={11}
+              label={verticalAxisLabel("log\u2081\u2080 states")}
+              {...axisStyle}
             />
             <Tooltip
               formatter={(value) => (typeof value === "number" ? formatNumber(value, 4) : String(value))}
               labelFormatter={(value) => `N = ${String(value)}`}
-              contentStyle={{ background: "var(--surface-raised)", border: "1px solid var(--border)", fontSize: 12 }}
+              contentStyle={tooltipContentStyle}
             />
             <Legend verticalAlign="top" height={24} wrapperStyle={{ fontSize: 12 }} />
             {present.map((kind) => (

@@ -5,6 +5,7 @@ import { CartesianGrid, Legend, Line, LineChart, ReferenceDot, ReferenceLine, Re
 import type { Sector } from "@/lib/boundary/types";
 import { massCurvePoints, massCurves } from "@/lib/designer/plot-data";
 import { formatNumber } from "@/lib/designer/spectrum-summary";
+import { axisStyle, horizontalAxisLabel, tooltipContentStyle, verticalAxisLabel } from "./chart-style";
 
 export interface MassPlotProps {
   sectors: Sector[];
@@ -35,20 +36,18 @@ export function MassPlot({ sectors }: MassPlotProps) {
               type="number"
               domain={[0, yMax]}
               tickFormatter={(v: number) => formatNumber(v, 3)}
-              label={{ value: "separation y (\u221a\u03b1\u2032)", position: "insideBottom", offset: -16, fill: "var(--muted-foreground)", fontSize: 12 }}
-              stroke="var(--muted-foreground)"
-              fontSize={11}
+              label={horizontalAxisLabel("separation y (\u221a\u03b1\u2032)")}
+              {...axisStyle}
             />
             <YAxis
               tickFormatter={(v: number) => formatNumber(v, 3)}
-              label={{ value: "\u03b1\u2032M\u00b2", angle: -90, position: "insideLeft", fill: "var(--muted-foreground)", fontSize: 12 }}
-              stroke="var(--muted-foreground)"
-              fontSize={11}
+              label={verticalAxisLabel("\u03b1\u2032M\u00b2")}
+              {...axisStyle}
             />
             <Tooltip
               formatter={(value) => (typeof value === "number" ? formatNumber(value, 4) : String(value))}
               labelFormatter={(value) => `y = ${typeof value === "number" ? formatNumber(value, 4) : String(value)}`}
-              contentStyle={{ background: "var(--surface-raised)", border: "1px solid var(--border)", fontSize: 12 }}
+              contentStyle={tooltipContentStyle}
             />
             <Legend verticalAlign="top" height={24} wrapperStyle={{ fontSize: 12 }} />
             <ReferenceLine y={0} stroke="var(--muted-foreground)" strokeDasharray="4 2" label={{ value: "massless", position: "insideTopRight", fontSize: 11, fill: "var(--muted-foreground)" }} />
