@@ -194,6 +194,19 @@ describe("configurationWarnings", () => {
     );
     expect(warnings.some((warning) => warning.includes("Every spatial axis is ND"))).toBe(true);
   });
+
+  it("lists the same warnings in the same order whatever the order of the stacks", () => {
+    // Found by the stack-order property in spectrum.property.test.ts: two D8s came out in input order.
+    const d8a = stack("s1", [1, 2, 3, 4, 5, 6, 7, 9]);
+    const d8b = stack("s3", [2, 3, 4, 5, 6, 7, 8, 9]);
+    const forward = configurationWarnings(config({ theory: "IIA", stacks: [d8a, d8b] }));
+    expect(forward).toHaveLength(2);
+    expect(forward[0]).toContain('Stack "s1"');
+    expect(configurationWarnings(config({ theory: "IIA", stacks: [d8b, d8a] }))).toEqual(forward);
+    const bosonic = (stacks: Stack[]) => configurationWarnings(config({ theory: "bosonic", stacks }));
+    const antis = [stack("b", [2], { anti: true }), stack("a", [2], { anti: true })];
+    expect(bosonic(antis)).toEqual(bosonic([...antis].reverse()));
+  });
 });
 
 describe("dimensionOf", () => {

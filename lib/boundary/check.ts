@@ -176,6 +176,11 @@ export function checkConfiguration(config: Configuration): ConfigurationProblem[
   return problems;
 }
 
+/** Orders stacks by id: the canonical order of sectors and warnings, whatever the order of the input. */
+export function compareStackIds(x: Stack, y: Stack): number {
+  return x.id < y.id ? -1 : x.id > y.id ? 1 : 0;
+}
+
 /**
  * Lists cautions for a configuration the engine can compute but whose physics needs care.
  *
@@ -184,7 +189,8 @@ export function checkConfiguration(config: Configuration): ConfigurationProblem[
  * ND, which the light-cone counting does not cover.
  *
  * @param config - The configuration (assumed to pass `checkConfiguration`; not mutated).
- * @returns Warning sentences in a fixed order; empty when there is nothing to say.
+ * @returns Warning sentences in a fixed order, with stacks taken in id order so that the order of
+ *   `config.stacks` does not matter; empty when there is nothing to say.
  * @example
  * configurationWarnings({ format: 1, title: "t", theory: "bosonic", dimension: 26, stringScaleGeV: null,
  *   levels: 1, stacks: [] })
@@ -193,6 +199,7 @@ export function checkConfiguration(config: Configuration): ConfigurationProblem[
 export function configurationWarnings(config: Configuration): string[] {
   const warnings: string[] = [];
   const dimension = dimensionOf(config);
+  const stacks = [...config.stacks].sort(compareStackIds);
   if (config.theory === "bosonic" && dimension !== bosonicCriticalDimension) {
     warnings.push(
       `Non-critical dimension D = ${dimension}: the bosonic string is consistent only at D = ${bosonicCriticalDimension}. ` +
@@ -200,14 +207,14 @@ export function configurationWarnings(config: Configuration): string[] {
     );
   }
   if (config.theory === "bosonic") {
-    const anti = config.stacks.filter((stack) => stack.anti);
+    const anti = stacks.filter((stack) => stack.anti);
     if (anti.length > 0) {
       warnings.push(
         `The bosonic string has no RR charge, so the antibrane flag of ${listStacks(anti)} is ignored.`,
       );
     }
   } else {
-    const highCodimension = config.stacks.filter((stack) => stack.worldvolume.length >= 8);
+    const highCodimension = stacks.filter((stack) => stack.worldvolume.length >= 8);
     for (const stack of highCodimension) {
       const p = stack.worldvolume.length;
       const why =
@@ -217,10 +224,10 @@ export function configurationWarnings(config: Configuration): string[] {
       warnings.push(`${capitalise(describeStack(stack))} is a D${p}: ${why}. The open-string spectrum is shown without these ingredients.`);
     }
   }
-  for (let i = 0; i < config.stacks.length; i += 1) {
-    for (let j = i + 1; j < config.stacks.length; j += 1) {
-      const a = config.stacks[i];
-      const b = config.stacks[j];
+  for (let i = 0; i < stacks.length; i += 1) {
+    for (let j = i + 1; j < stacks.length; j += 1) {
+      const a = stacks[i];
+      const b = stacks[j];
       if (a && b && classifyPair(a, b, dimension).nu === dimension - 1) {
         warnings.push(
           `Every spatial axis is ND between ${describeStack(a)} and ${describeStack(b)}: the light-cone counting needs ` +

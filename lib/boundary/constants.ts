@@ -14,12 +14,13 @@ import type { Moding } from "./types";
 import { rational, type Rational } from "./rational";
 
 /**
- * Version stamped on every spectrum result; bump the minor version when numbers may change.
+ * Version stamped on every spectrum result; bump the minor version when numbers may change and the
+ * patch version when only the presentation does (1.0.1: warnings in stack-id order).
  *
  * @example
- * ENGINE_VERSION // => "1.0.0"
+ * ENGINE_VERSION // => "1.0.1"
  */
-export const ENGINE_VERSION = "1.0.0";
+export const ENGINE_VERSION = "1.0.1";
 
 /**
  * Critical dimension of the bosonic string (Lorentz invariance of the light-cone quantisation

@@ -14,7 +14,7 @@
  * the document nor anything else outside the configuration changes the result.
  */
 
-import { ConfigurationError, checkConfiguration, configurationWarnings, describeStack, dimensionOf } from "./check";
+import { ConfigurationError, checkConfiguration, compareStackIds, configurationWarnings, describeStack, dimensionOf } from "./check";
 import { classifyPair, type PairClassification } from "./classify";
 import { CONVENTIONS_TEXT, ENGINE_VERSION } from "./constants";
 import { oscillatorDegeneracies, projectedDegeneracies, type OrientedCounts } from "./degeneracy";
@@ -562,10 +562,6 @@ function formatAxisList(axes: number[]): string {
 /** "1 state", "8 states". */
 function plural(count: number | bigint | string, noun: string): string {
   return `${String(count)} ${noun}${String(count) === "1" ? "" : "s"}`;
-}
-
-function compareStackIds(x: Stack, y: Stack): number {
-  return x.id < y.id ? -1 : x.id > y.id ? 1 : 0;
 }
 
 function maxBig(x: bigint, y: bigint): bigint {
