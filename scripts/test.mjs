@@ -34,7 +34,7 @@ const dbSuffix = process.env.MOORING_TEST_DB_SUFFIX ? `_${process.env.MOORING_TE
 const testDb = `mooring_test${dbSuffix}`;
 const e2eDb = `mooring_e2e${dbSuffix}`;
 
-/** @type {{ name: string, code: number, seconds: number, passed: number, failed: number, counted: boolean }[]} */
+/** @type {{ name: string, code: number, seconds: number, passed: number, failed: number, counted: boolean, failures: string[] }[]} */
 const results = [];
 const setupTimings = [];
 const services = [];
@@ -58,6 +58,26 @@ function countTests(output, runner) {
   const failed = output.match(/^\s*(\d+) failed/m)?.[1];
   if (passed === undefined && failed === undefined) return null;
   return { passed: Number(passed ?? 0), failed: Number(failed ?? 0) };
+}
+
+/**
+ * The failing tests named in a vitest or Playwright report, each with the first lines of its error,
+ * so that the summary at the end of a long log says what failed (CI often shows only the tail).
+ */
+function failingTests(output, runner) {
+  const lines = output.replace(/\u001b\[[0-9;]*m/g, "").split("\n");
+  const header = runner === "vitest" ? /^\s*FAIL\s+.*>\s/ : /^\s+\d+\) \[.*\] › /;
+  const found = [];
+  for (let i = 0; i < lines.length && found.length < 10; i += 1) {
+    if (!header.test(lines[i])) continue;
+    const detail = lines
+      .slice(i + 1, i + 12)
+      .map((line) => line.trim())
+      .filter((line) => line && !line.startsWith("❯") && !/^[⎯─]+/.test(line))
+      .slice(0, 4);
+    found.push([lines[i].trim(), ...detail.map((line) => `    ${line}`)].map((line) => line.slice(0, 240)).join("\n"));
+  }
+  return found;
 }
 
 /** Runs a setup action and records how long it took (shown in the summary). */
@@ -88,6 +108,7 @@ async function step(name, action, runner) {
     passed: counts?.passed ?? 0,
     failed: counts?.failed ?? 0,
     counted: counts !== null,
+    failures: code !== 0 && runner ? failingTests(output, runner) : [],
   });
   console.log(`[test] ${name}: ${code === 0 ? "ok" : `FAILED (exit ${code})`} in ${seconds.toFixed(1)}s`);
   return code === 0;
@@ -126,6 +147,7 @@ function summary() {
   for (const r of results) {
     const counts = r.counted ? ` (${r.passed} passed, ${r.failed} failed)` : "";
     console.log(`  ${r.code === 0 ? "ok    " : "FAILED"} ${r.name.padEnd(40)} ${r.seconds.toFixed(1).padStart(6)}s${counts}`);
+    for (const failure of r.failures) console.log(failure.replace(/^/gm, "           "));
   }
   const passed = results.reduce((sum, r) => sum + r.passed, 0);
   // A failed step without a parsed count (a build, a migration, a crashed runner) counts as one failure.
