@@ -29,6 +29,8 @@ const baseUrl = (process.env.BENCH_URL ?? "http://127.0.0.1:3000").replace(/\/+$
 const durationSeconds = positiveNumber(process.env.BENCH_DURATION, 10);
 const connections = positiveNumber(process.env.BENCH_CONNECTIONS, 16);
 const warmupSeconds = Math.min(3, durationSeconds);
+/** What a browser sends with the app's own fetches (the proxy's CSRF check is skipped for them, see proxy.ts). */
+const sameOriginHeaders = { origin: baseUrl, "sec-fetch-site": "same-origin" };
 /** Linux USER_HZ, the unit of utime/stime in /proc/<pid>/stat. */
 const clockTicksPerSecond = 100;
 
@@ -92,7 +94,7 @@ async function main(): Promise<void> {
 
   // 2. Stateless compute.
   const spectrumBody = JSON.stringify(benchPreviewDemo);
-  const spectrumHeaders = { "content-type": "application/json", origin: baseUrl, ...authHeaders };
+  const spectrumHeaders = { "content-type": "application/json", ...sameOriginHeaders, ...authHeaders };
   const spectrumProbe = await probe("POST", "/api/spectrum", spectrumHeaders, spectrumBody);
   reports.push(
     spectrumProbe === 404
@@ -239,7 +241,7 @@ function saveRequest(handles: ConfigurationHandle[], authHeaders: Record<string,
       return {
         ...request,
         path: `/api/configurations/${encodeURIComponent(handle.id)}`,
-        headers: { ...authHeaders, "content-type": "application/json", origin: baseUrl, "if-match": handle.version },
+        headers: { ...authHeaders, "content-type": "application/json", ...sameOriginHeaders, "if-match": handle.version },
         body: JSON.stringify({ document: handle.document, message: "bench:api save" }),
       };
     },
@@ -259,7 +261,7 @@ async function warmUpSaves(handles: ConfigurationHandle[], authHeaders: Record<s
   for (const handle of handles) {
     const response = await fetch(`${baseUrl}/api/configurations/${encodeURIComponent(handle.id)}`, {
       method: "PUT",
-      headers: { ...authHeaders, "content-type": "application/json", origin: baseUrl, "if-match": handle.version },
+      headers: { ...authHeaders, "content-type": "application/json", ...sameOriginHeaders, "if-match": handle.version },
       body: JSON.stringify({ document: handle.document, message: "bench:api warm-up save" }),
     });
     const text = await response.text();

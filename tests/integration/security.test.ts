@@ -4,12 +4,14 @@ import path from "node:path";
 import { eq } from "drizzle-orm";
 import NextAuth from "next-auth";
 import { NextRequest } from "next/server";
-import { afterEach, describe, expect, it } from "vitest";
+import fc from "fast-check";
+import { afterEach, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/index";
 import { bcryptCost } from "@/db/queries/users";
 import { users } from "@/db/schema";
 import { authOptions } from "@/lib/auth";
-import { proxy } from "@/proxy";
+import { checkCrossSiteRequest } from "@/lib/csrf";
+import { config as proxyConfig, proxy } from "@/proxy";
 import { createTestUser } from "@/tests/fixtures/users";
 
 const root = path.resolve(import.meta.dirname, "..", "..");
@@ -41,6 +43,54 @@ describe("CSRF protection in proxy.ts", () => {
     expect(passes(await call("/api/configurations", "GET", { origin: "https://evil.example", "sec-fetch-site": "cross-site" }))).toBe(true);
     // next-auth checks its own double-submit CSRF token on /api/auth/*.
     expect(passes(await call("/api/auth/callback/password", "POST", { origin: "https://evil.example" }))).toBe(true);
+  });
+});
+
+describe("which /api requests reach the CSRF check (proxy.ts matcher)", () => {
+  const app = "http://127.0.0.1:3000";
+  let doesMatch: typeof import("next/experimental/testing/server").unstable_doesMiddlewareMatch;
+  beforeAll(async () => {
+    // Loaded only once the proxy tests above have run: imported earlier, Next's testing helper makes
+    // NextResponse there fail with "AsyncLocalStorage accessed in runtime where it is not available".
+    doesMatch = (await import("next/experimental/testing/server")).unstable_doesMiddlewareMatch;
+  });
+  const matches = (pathname: string, headers: Record<string, string>) =>
+    doesMatch({ config: proxyConfig, url: `${app}${pathname}`, headers });
+
+  it("runs the check for requests that may come from another site", () => {
+    expect(matches("/api/configurations", { "sec-fetch-site": "cross-site", origin: "https://evil.example" })).toBe(true);
+    expect(matches("/api/configurations", { "sec-fetch-site": "same-site" })).toBe(true);
+    expect(matches("/api/configurations", { "sec-fetch-site": "none", origin: "https://evil.example" })).toBe(true);
+    expect(matches("/api/spectrum", { origin: "https://evil.example" })).toBe(true);
+    expect(matches("/api/spectrum", { origin: "null" })).toBe(true);
+  });
+
+  it("skips the app's own requests and clients without browser headers", () => {
+    expect(matches("/api/configurations", { "sec-fetch-site": "same-origin", origin: app })).toBe(false);
+    expect(matches("/api/spectrum", {})).toBe(false);
+  });
+
+  it("skips only requests that lib/csrf.ts would let through, whatever the method (fast-check)", () => {
+    const headerValue = (choices: string[]) =>
+      fc.option(fc.oneof(fc.constantFrom(...choices), fc.string({ maxLength: 12 })), { nil: undefined });
+    fc.assert(
+      fc.property(
+        fc.constantFrom("GET", "POST", "PUT", "PATCH", "DELETE"),
+        headerValue(["same-origin", "none", "same-site", "cross-site", "Same-Origin", "same-origin ", ""]),
+        headerValue([app, "https://evil.example", "null", "http://localhost:3000", ""]),
+        (method, site, origin) => {
+          const headers: Record<string, string> = {};
+          if (site !== undefined) headers["sec-fetch-site"] = site;
+          if (origin !== undefined) headers.origin = origin;
+          if (matches("/api/configurations", headers)) return;
+          // A request with an empty Origin or Sec-Fetch-Site counts as lacking it here; browsers never send one.
+          const sent = Object.fromEntries(Object.entries(headers).filter(([, value]) => value !== ""));
+          const verdict = checkCrossSiteRequest(new Request(`${app}/api/configurations`, { method, headers: sent }));
+          expect(verdict).toEqual({ ok: true });
+        },
+      ),
+      { numRuns: 2000 },
+    );
   });
 });
 
