@@ -1,5 +1,5 @@
 import "server-only";
-import { and, eq, isNull } from "drizzle-orm";
+import { and, eq, isNull, sql, type Placeholder } from "drizzle-orm";
 import { ForbiddenError, NotFoundError, UnauthenticatedError } from "../../lib/errors";
 import { db, type Executor } from "../index";
 import { groups, memberships, users, type GroupRole, type SiteRole } from "../schema";
@@ -49,12 +49,10 @@ export async function getGroupRole(
   groupId: string,
 ): Promise<GroupRole | null> {
   if (!actor) return null;
-  const [row] = await executor
-    .select({ role: memberships.role })
-    .from(groups)
-    .leftJoin(memberships, and(eq(memberships.groupId, groups.id), eq(memberships.userId, actor.id)))
-    .where(and(eq(groups.id, groupId), isNull(groups.deletedAt)))
-    .limit(1);
+  const [row] =
+    executor === db
+      ? await groupRoleStatement.execute({ groupId, userId: actor.id })
+      : await selectGroupRole(executor, groupId, actor.id);
   if (!row) return null;
   if (actor.siteRole === "admin") return "owner";
   return row.role;
@@ -91,13 +89,31 @@ export async function requireGroupRole(
  */
 export async function getActorById(userId: string): Promise<Actor | null> {
   if (!isUuid(userId)) return null;
-  const [row] = await db
-    .select({ id: users.id, email: users.email, name: users.name, siteRole: users.siteRole })
-    .from(users)
-    .where(and(eq(users.id, userId), isNull(users.deletedAt)))
-    .limit(1);
+  const [row] = await actorByIdStatement.execute({ userId });
   return row ?? null;
 }
+
+// Prepared statements for the lookups made on nearly every request: PostgreSQL parses and plans
+// them once per connection instead of on every call. Inside a transaction the same query is built
+// on the transaction instead, since a prepared statement runs on a pool connection of its own.
+
+function selectGroupRole(executor: Executor, groupId: string | Placeholder, userId: string | Placeholder) {
+  return executor
+    .select({ role: memberships.role })
+    .from(groups)
+    .leftJoin(memberships, and(eq(memberships.groupId, groups.id), eq(memberships.userId, userId)))
+    .where(and(eq(groups.id, groupId), isNull(groups.deletedAt)))
+    .limit(1);
+}
+
+const groupRoleStatement = selectGroupRole(db, sql.placeholder("groupId"), sql.placeholder("userId")).prepare("group_role");
+
+const actorByIdStatement = db
+  .select({ id: users.id, email: users.email, name: users.name, siteRole: users.siteRole })
+  .from(users)
+  .where(and(eq(users.id, sql.placeholder("userId")), isNull(users.deletedAt)))
+  .limit(1)
+  .prepare("actor_by_id");
 
 const uuidPattern = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
