@@ -12,6 +12,7 @@ import {
   type KeyboardEvent,
   type ReactNode,
 } from "react";
+import { useHydrated } from "@/lib/hooks/use-hydrated";
 import { cn } from "@/lib/utils";
 
 interface MenuContextValue {
@@ -34,6 +35,7 @@ export interface DropdownMenuProps {
 /**
  * A menu button following the WAI-ARIA menu pattern: Enter, Space or ArrowDown opens it and focuses the
  * first item; arrows, Home and End move; Escape closes and returns focus; Tab or a click outside closes.
+ * The trigger stays disabled until React has hydrated, so a click on the server-rendered button is never lost.
  */
 export function DropdownMenu({ trigger, label, children, align = "end", triggerClassName, className }: DropdownMenuProps) {
   const [open, setOpen] = useState(false);
@@ -41,6 +43,7 @@ export function DropdownMenu({ trigger, label, children, align = "end", triggerC
   const menuRef = useRef<HTMLDivElement>(null);
   const pendingFocus = useRef<"first" | "last" | null>(null);
   const menuId = useId();
+  const hydrated = useHydrated();
 
   const items = useCallback(
     () => Array.from(menuRef.current?.querySelectorAll<HTMLElement>('[role="menuitem"]:not([aria-disabled="true"])') ?? []),
@@ -115,6 +118,7 @@ export function DropdownMenu({ trigger, label, children, align = "end", triggerC
           aria-expanded={open}
           aria-controls={open ? menuId : undefined}
           aria-label={label}
+          disabled={!hydrated}
           onClick={() => setOpen((value) => !value)}
           onKeyDown={onTriggerKeyDown}
           className={cn(

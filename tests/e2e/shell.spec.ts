@@ -38,6 +38,8 @@ test.describe("account menu", () => {
   test("works from the keyboard: arrows move, Escape closes and returns focus", async ({ page }) => {
     await signIn(page, demoAccounts.cora);
     const trigger = page.getByRole("button", { name: /^Account:/ });
+    // The trigger is disabled until the page has hydrated; focusing it earlier would not stick.
+    await expect(trigger).toBeEnabled();
     await trigger.focus();
     await page.keyboard.press("Enter");
     await expect(page.getByRole("menu")).toBeVisible();
