@@ -285,7 +285,7 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
                 remove.mutate(undefined, {
                   onSuccess: () => {
                     clearDraft(window.localStorage, id);
-                    router.push("/dashboard");
+                    router.push(`/dashboard?${new URLSearchParams({ deleted: id, title: configuration.title }).toString()}`);
                   },
                 })
               }

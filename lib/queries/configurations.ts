@@ -178,6 +178,18 @@ export function useDeleteConfiguration(id: string) {
   });
 }
 
+/** Brings back a deleted configuration (the undo of `useDeleteConfiguration`). */
+export function useUndeleteConfiguration(id: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: () => apiFetch<ConfigurationJson>(`/api/configurations/${id}/undelete`, { method: "POST" }),
+    onSuccess: (configuration) => {
+      client.setQueryData(configurationQueries.detail(id).queryKey, configuration);
+      void client.invalidateQueries({ queryKey: configurationQueries.lists() });
+    },
+  });
+}
+
 /** Converts a server DTO to the shape the API sends (dates as ISO strings), for server-rendered initial data. */
 export function toJson<T>(value: T): Jsonified<T> {
   return JSON.parse(JSON.stringify(value)) as Jsonified<T>;

@@ -40,6 +40,12 @@ export const updateConfigurationBodySchema = z.object({
 export type UpdateConfigurationBody = z.infer<typeof updateConfigurationBodySchema>;
 
 /** Body of `POST /api/configurations/[configurationId]/fork`. */
+/** The dashboard's `?deleted=<id>&title=<title>` after a delete, which offers an undo. */
+export const deletedNoticeSchema = z.object({
+  deleted: uuid,
+  title: z.string().max(200).catch(""),
+});
+
 export const forkConfigurationBodySchema = z.object({
   targetGroupId: uuid,
   revisionId: uuid.optional(),

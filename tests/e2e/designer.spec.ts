@@ -161,6 +161,25 @@ test.describe("designer", () => {
     expect(bytes.length).toBeGreaterThan(1000);
   });
 
+  test("a deleted configuration comes back with the dashboard's undo", async ({ page }) => {
+    await signIn(page, demoAccounts.ada);
+    const title = unique("Undo delete");
+    const id = await createInGroup(page, twoStackDocument(title));
+    await openDesigner(page, id);
+    await page.getByRole("button", { name: "Delete", exact: true }).click();
+    await page.getByRole("dialog", { name: "Delete this configuration?" }).getByRole("button", { name: "Delete" }).click();
+    await expect(page).toHaveURL(/\/dashboard\?deleted=/);
+    const notice = page.getByRole("status").filter({ hasText: `“${title}” was deleted` });
+    await expect(notice).toBeVisible();
+    expect((await page.request.get(`/api/configurations/${id}`)).status()).toBe(404);
+
+    await notice.getByRole("button", { name: "Undo delete" }).click();
+    await expect(page).toHaveURL(new RegExp(`/configurations/${id}$`));
+    await expect(page.getByTestId("save-state")).toHaveText("All changes saved");
+    await expect(page.getByLabel("Position of stack b on x9")).toHaveValue("1.5");
+    expect((await page.request.get(`/api/configurations/${id}`)).status()).toBe(200);
+  });
+
   test("shows results whose numbers equal the engine's", async ({ page }) => {
     await signIn(page, demoAccounts.ada);
     const document: Configuration = {

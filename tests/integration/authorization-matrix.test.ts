@@ -278,6 +278,11 @@ const matrix: Record<string, RouteEntry> = {
       DELETE: { request: (w) => ({ request: json("DELETE", configurationPath(w)), params: configurationParams(w) }), expect: editorsWrite(204) },
     },
   },
+  "configurations/[configurationId]/undelete/route.ts": {
+    methods: {
+      POST: { request: (w) => ({ request: json("POST", `${configurationPath(w)}/undelete`), params: configurationParams(w) }), expect: editorsWrite(200) },
+    },
+  },
   "configurations/[configurationId]/fork/route.ts": {
     methods: {
       // Into the caller's own personal space: reading the source is what is checked.

@@ -1,21 +1,26 @@
 import type { Metadata } from "next";
 import { Suspense } from "react";
 import { ConfigurationsPanel } from "@/components/configurations/configurations-panel";
+import { DeletedNotice } from "@/components/dashboard/deleted-notice";
 import { MyConfigurationsPanelSkeleton } from "@/components/dashboard/my-configurations-panel";
 import { MyGroupsPanel, MyGroupsPanelSkeleton } from "@/components/dashboard/my-groups-panel";
 import { RecentActivityPanel, RecentActivityPanelSkeleton } from "@/components/dashboard/recent-activity-panel";
 import { PageContainer } from "@/components/layout/page-container";
 import { PageHeader } from "@/components/ui/page-header";
 import { requireUser } from "@/lib/session";
+import { deletedNoticeSchema } from "@/lib/validations/configuration-api";
 
 export const metadata: Metadata = { title: "Dashboard" };
 
-export default async function DashboardPage() {
+export default async function DashboardPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await requireUser("/dashboard");
+  // After a delete the designer comes here with ?deleted=<id>&title=<title> to offer an undo.
+  const deleted = deletedNoticeSchema.safeParse(await searchParams);
 
   return (
     <PageContainer className="grid gap-6">
       <PageHeader title={`Welcome back, ${user.name.split(" ")[0] ?? user.name}`} description="Your configurations, groups and recent activity." />
+      {deleted.success ? <DeletedNotice configurationId={deleted.data.deleted} title={deleted.data.title} /> : null}
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,24rem)]">
         <div className="grid content-start gap-6">
           <Suspense fallback={<MyConfigurationsPanelSkeleton />}>
