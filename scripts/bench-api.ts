@@ -6,7 +6,9 @@
  *   3. a configuration read, GET /api/configurations/:id,
  *   4. a save, PUT /api/configurations/:id with If-Match (revision + result).
  * Reports p50, p95, p99 (from every response time) and throughput, PASS/MISS against
- * product.md's targets, and writes bench-results/api.json.
+ * product.md's targets, and writes bench-results/api.json. It also weighs the designer route's
+ * first-load JavaScript (product.md's editor target): every script a browser loads until the
+ * designer's canvas is drawn, gzipped.
  *
  * The read and save cases sign in (next-auth credentials) and work on scratch configurations
  * created for the run in the account's personal space, one per connection so that saves do not
@@ -21,6 +23,7 @@
 import { mkdirSync, readFileSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
+import { gzipSync } from "node:zlib";
 import autocannon, { type RequestSpec } from "autocannon";
 import { benchPreviewDemo } from "../tests/fixtures/bench-12-stacks";
 import { printRows, quantile } from "./lib/bench-report";
@@ -123,6 +126,7 @@ async function main(): Promise<void> {
     await warmUpSaves(handles.handles, authHeaders);
     reports.push(await runCase("save", saveRequest(handles.handles, authHeaders), { warmup: false }));
   }
+  const firstLoad = session && first ? await weighDesignerFirstLoad(session, first.id) : undefined;
   if (session) await deleteScratchConfigurations(session, handles.handles);
 
   const yardstick = reports[0];
@@ -133,6 +137,14 @@ async function main(): Promise<void> {
     judge(reports, "spectrum", "POST /api/spectrum", 25),
     judge(reports, "configuration read", "configuration read", 20),
     judge(reports, "save", "save (revision + result)", 50),
+    firstLoad
+      ? {
+          target: "designer first-load JS",
+          limit: `< ${designerFirstLoadLimitKb} kB gzipped`,
+          measured: `${firstLoad.gzippedKb.toFixed(1)} kB (${firstLoad.scripts} scripts)`,
+          status: firstLoad.gzippedKb < designerFirstLoadLimitKb ? ("PASS" as const) : ("MISS" as const),
+        }
+      : { target: "designer first-load JS", limit: `< ${designerFirstLoadLimitKb} kB gzipped`, measured: "-", status: "NOT MEASURED" as const },
   ];
 
   printReport(reports, targets);
@@ -147,12 +159,65 @@ async function main(): Promise<void> {
     signedIn: session !== undefined,
     loadAverage: os.loadavg(),
     cases: reports,
+    designerFirstLoad: firstLoad,
     targets,
   };
   const dir = path.resolve(process.cwd(), "bench-results");
   mkdirSync(dir, { recursive: true });
   writeFileSync(path.join(dir, "api.json"), `${JSON.stringify(out, null, 2)}\n`);
   console.log(`\nWrote ${path.relative(process.cwd(), path.join(dir, "api.json"))}`);
+}
+
+/** product.md: "first-load JavaScript of the designer route under 350 kB gzipped". */
+const designerFirstLoadLimitKb = 350;
+
+interface FirstLoadReport {
+  scripts: number;
+  rawKb: number;
+  gzippedKb: number;
+}
+
+/**
+ * Weighs the JavaScript a browser loads to open the designer until its canvas is drawn: Debian's
+ * Chromium (headless, as in the browser tests) opens the page signed in, and every script response,
+ * chunks imported after hydration included, is gzipped (zlib's default level, as servers usually
+ * send it) and summed in kB (1000 bytes). Undefined when the browser or the page is unavailable.
+ */
+async function weighDesignerFirstLoad(session: Session, configurationId: string): Promise<FirstLoadReport | undefined> {
+  const { chromium } = await import("@playwright/test");
+  const browser = await chromium
+    .launch({ executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium", args: ["--no-sandbox"] })
+    .catch((error: unknown) => {
+      console.warn(`designer first-load JS not measured: ${error instanceof Error ? error.message : String(error)}`);
+      return undefined;
+    });
+  if (!browser) return undefined;
+  try {
+    const context = await browser.newContext();
+    await context.addCookies(
+      session.cookie.split("; ").map((pair) => {
+        const cut = pair.indexOf("=");
+        return { name: pair.slice(0, cut), value: pair.slice(cut + 1), url: baseUrl };
+      }),
+    );
+    const page = await context.newPage();
+    const bodies: Promise<Buffer | undefined>[] = [];
+    page.on("response", (response) => {
+      if (response.request().resourceType() === "script") bodies.push(response.body().catch(() => undefined));
+    });
+    const response = await page.goto(`${baseUrl}/configurations/${encodeURIComponent(configurationId)}`);
+    if (response?.status() !== 200 || !page.url().includes(`/configurations/${configurationId}`)) return undefined;
+    await page.getByRole("application", { name: /Canvas showing/ }).waitFor({ timeout: 60_000 });
+    await page.waitForLoadState("networkidle");
+    const scripts = (await Promise.all(bodies)).filter((body): body is Buffer => body !== undefined);
+    return {
+      scripts: scripts.length,
+      rawKb: scripts.reduce((sum, body) => sum + body.length, 0) / 1000,
+      gzippedKb: scripts.reduce((sum, body) => sum + gzipSync(body).length, 0) / 1000,
+    };
+  } finally {
+    await browser.close();
+  }
 }
 
 /** Runs one autocannon case after a warm-up and summarises every response time it saw. */
