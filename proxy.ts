@@ -10,8 +10,8 @@ import { getEnv } from "@/lib/env";
  * redirect is convenience only: every page, action, route handler and DAL function checks the session again.
  *
  * Under /api the proxy runs only for requests a browser may have sent from another site (see
- * `config.matcher`): running it costs about as much as a whole small route handler, and the
- * requests it skips are exactly those `checkCrossSiteRequest` lets through whatever their method.
+ * `config.matcher`): running it costs about as much as a whole small route handler, and every
+ * request it skips is one that `checkCrossSiteRequest` lets through whatever its method.
  */
 export async function proxy(request: NextRequest) {
   if (request.nextUrl.pathname.startsWith("/api/")) {
@@ -39,8 +39,7 @@ export const config = {
     "/account/:path*",
     // /api, for requests that may come from another site. Skipped: Sec-Fetch-Site "same-origin" (the
     // app's own fetches) and requests with neither Sec-Fetch-Site nor Origin (scripts, which carry no
-    // ambient cookies). tests/integration/security.test.ts checks
-    // that everything skipped is something lib/csrf.ts would pass.
+    // ambient cookies). tests/integration/security.test.ts checks that lib/csrf.ts passes all of them.
     { source: "/api/:path*", has: [{ type: "header", key: "sec-fetch-site", value: "(?!same-origin$).*" }] },
     { source: "/api/:path*", missing: [{ type: "header", key: "sec-fetch-site" }], has: [{ type: "header", key: "origin" }] },
   ],

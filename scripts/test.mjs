@@ -65,7 +65,8 @@ function countTests(output, runner) {
  * so that the summary at the end of a long log says what failed (CI often shows only the tail).
  */
 function failingTests(output, runner) {
-  const lines = output.replace(/\u001b\[[0-9;]*m/g, "").split("\n");
+  // runStep has already stripped the colour codes.
+  const lines = output.split("\n");
   const header = runner === "vitest" ? /^\s*FAIL\s+.*>\s/ : /^\s+\d+\) \[.*\] › /;
   const found = [];
   for (let i = 0; i < lines.length && found.length < 10; i += 1) {
