@@ -6,7 +6,7 @@
 export function exportCanvasPng(container: HTMLElement, fileName: string): boolean {
   const layers = Array.from(container.querySelectorAll("canvas"));
   const first = layers[0];
-  if (!first) return false;
+  if (!first || first.width === 0 || first.height === 0) return false;
   const output = window.document.createElement("canvas");
   output.width = first.width;
   output.height = first.height;
@@ -20,6 +20,25 @@ export function exportCanvasPng(container: HTMLElement, fileName: string): boole
   link.download = fileName;
   link.click();
   return true;
+}
+
+/**
+ * Exports once the canvas has been drawn: the canvas library loads after the page, so an early
+ * click waits for it (checking every 100 ms) instead of doing nothing. Resolves to false when
+ * there is still no drawn canvas after `timeoutMs`.
+ */
+export async function exportCanvasPngWhenReady(
+  findContainer: () => HTMLElement | null,
+  fileName: string,
+  timeoutMs = 10_000,
+): Promise<boolean> {
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    const container = findContainer();
+    if (container && exportCanvasPng(container, fileName)) return true;
+    if (Date.now() >= deadline) return false;
+    await new Promise((resolve) => setTimeout(resolve, 100));
+  }
 }
 
 /** A file name from a configuration title: lower case, dashes, no punctuation. */

@@ -20,7 +20,7 @@ import { Alert } from "@/components/ui/alert";
 import { Badge } from "@/components/ui/badge";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { Dialog } from "@/components/ui/dialog";
-import { exportCanvasPng, pngFileName } from "@/components/canvas/export-canvas-png";
+import { exportCanvasPngWhenReady, pngFileName } from "@/components/canvas/export-canvas-png";
 import { ExportMenu } from "@/components/configurations/export-menu";
 import { BoundaryGrid } from "./boundary-grid";
 import { ConflictDialog } from "./conflict-dialog";
@@ -61,6 +61,7 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
   const [forkError, setForkError] = useState<string | null>(null);
   const [forkPending, setForkPending] = useState(false);
   const [storageWarning, setStorageWarning] = useState(false);
+  const [exportError, setExportError] = useState<string | null>(null);
 
   const update = useUpdateConfiguration(id);
   const fork = useForkConfiguration(id);
@@ -214,8 +215,11 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
           <ExportMenu
             configurationId={id}
             onExportPng={() => {
-              const frame = window.document.querySelector<HTMLElement>("[data-designer-canvas]");
-              if (frame) exportCanvasPng(frame, pngFileName(document.title));
+              setExportError(null);
+              const findFrame = () => window.document.querySelector<HTMLElement>("[data-designer-canvas]");
+              void exportCanvasPngWhenReady(findFrame, pngFileName(document.title)).then((done) => {
+                if (!done) setExportError("The canvas has not finished drawing, so there was nothing to export. Try again in a moment.");
+              });
             }}
           />
           <Button variant="secondary" size="sm" onClick={() => setForkMode("saved")} disabled={writableGroups.length === 0}>
@@ -248,6 +252,7 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
       {storageWarning ? (
         <Alert variant="warning">This browser refused to keep a local copy of your draft; save soon to avoid losing work.</Alert>
       ) : null}
+      {exportError ? <Alert variant="danger">{exportError}</Alert> : null}
 
       <div className="grid gap-3 xl:grid-cols-[minmax(0,1fr)_25rem]">
         <div className="flex min-w-0 flex-col gap-3">
