@@ -5,13 +5,26 @@ import { Button } from "@/components/ui/button";
 import { Dialog } from "@/components/ui/dialog";
 import { Field } from "@/components/ui/field";
 import { Input } from "@/components/ui/input";
-import { Select } from "@/components/ui/select";
+import { Select, type SelectProps } from "@/components/ui/select";
 
 /** A group the user may write to (editor or owner). */
 export interface WritableGroup {
   id: string;
   name: string;
   kind: string;
+}
+
+/** A select of the spaces the user may write to, personal spaces marked; passes other props to Select. */
+export function SpaceSelect({ groups, ...props }: SelectProps & { groups: WritableGroup[] }) {
+  return (
+    <Select {...props}>
+      {groups.map((group) => (
+        <option key={group.id} value={group.id}>
+          {group.kind === "personal" ? `${group.name} (personal)` : group.name}
+        </option>
+      ))}
+    </Select>
+  );
 }
 
 export interface ForkDialogProps {
@@ -59,13 +72,7 @@ export function ForkDialog({ open, onOpenChange, groups, defaultTitle, sourceLab
           }}
         >
           <Field id="fork-group" label="Space">
-            <Select value={groupId} onChange={(event) => setGroupId(event.target.value)}>
-              {groups.map((group) => (
-                <option key={group.id} value={group.id}>
-                  {group.kind === "personal" ? `${group.name} (personal)` : group.name}
-                </option>
-              ))}
-            </Select>
+            <SpaceSelect groups={groups} value={groupId} onChange={(event) => setGroupId(event.target.value)} />
           </Field>
           <Field id="fork-title" label="Title" error={error}>
             <Input value={title} maxLength={120} onChange={(event) => setTitle(event.target.value)} />

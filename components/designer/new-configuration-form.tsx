@@ -9,8 +9,7 @@ import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Input } from "@/components/ui/input";
-import { Select } from "@/components/ui/select";
-import type { WritableGroup } from "./fork-dialog";
+import { SpaceSelect, type WritableGroup } from "./fork-dialog";
 
 export interface NewConfigurationFormProps {
   groups: WritableGroup[];
@@ -48,13 +47,7 @@ export function NewConfigurationForm({ groups, defaultGroupId }: NewConfiguratio
         <Input value={title} maxLength={120} required onChange={(event) => setTitle(event.target.value)} placeholder="e.g. Probe D3 near a D7 wall" />
       </Field>
       <Field id="new-group" label="Space">
-        <Select value={groupId} onChange={(event) => setGroupId(event.target.value)}>
-          {groups.map((group) => (
-            <option key={group.id} value={group.id}>
-              {group.kind === "personal" ? `${group.name} (personal)` : group.name}
-            </option>
-          ))}
-        </Select>
+        <SpaceSelect groups={groups} value={groupId} onChange={(event) => setGroupId(event.target.value)} />
       </Field>
       <fieldset className="grid gap-2">
         <legend className="mb-1 text-sm font-medium">Theory</legend>
