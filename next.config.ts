@@ -1,5 +1,5 @@
 import type { NextConfig } from "next";
-import { securityHeaders } from "./lib/security-headers";
+import { securityHeaders } from "./lib/server/security-headers";
 
 const nextConfig: NextConfig = {
   reactStrictMode: true,
@@ -8,7 +8,7 @@ const nextConfig: NextConfig = {
   distDir: process.env.NEXT_DIST_DIR || ".next",
   // pg and bcryptjs run on the server only; keep them out of the bundle.
   serverExternalPackages: ["pg"],
-  // Security headers and the content security policy on every response (lib/security-headers.ts).
+  // Security headers and the content security policy on every response (lib/server/security-headers.ts).
   // Read when the server starts (next dev) or at build time (next build): build with the real NEXTAUTH_URL.
   async headers() {
     const headers = securityHeaders({

@@ -1,11 +1,11 @@
 import { getToken } from "next-auth/jwt";
 import { NextResponse, type NextRequest } from "next/server";
-import { getAuthSecret } from "@/lib/auth-secret";
-import { checkCrossSiteRequest, crossSiteRejection } from "@/lib/csrf";
-import { getEnv } from "@/lib/env";
+import { getAuthSecret } from "@/lib/server/auth-secret";
+import { checkCrossSiteRequest, crossSiteRejection } from "@/lib/server/csrf";
+import { getEnv } from "@/lib/server/env";
 
 /**
- * Refuses cross-site state-changing requests to /api (lib/csrf.ts; next-auth's routes keep their own
+ * Refuses cross-site state-changing requests to /api (lib/server/csrf.ts; next-auth's routes keep their own
  * token), and sends visitors without a session from the signed-in areas to the sign-in page. The
  * redirect is convenience only: every page, action, route handler and DAL function checks the session again.
  *
@@ -39,7 +39,7 @@ export const config = {
     "/account/:path*",
     // /api, for requests that may come from another site. Skipped: Sec-Fetch-Site "same-origin" (the
     // app's own fetches) and requests with neither Sec-Fetch-Site nor Origin (scripts, which carry no
-    // ambient cookies). tests/integration/security.test.ts checks that lib/csrf.ts passes all of them.
+    // ambient cookies). tests/integration/security.test.ts checks that lib/server/csrf.ts passes all of them.
     { source: "/api/:path*", has: [{ type: "header", key: "sec-fetch-site", value: "(?!same-origin$).*" }] },
     { source: "/api/:path*", missing: [{ type: "header", key: "sec-fetch-site" }], has: [{ type: "header", key: "origin" }] },
   ],

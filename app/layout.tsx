@@ -4,8 +4,8 @@ import { plexMono, plexSans } from "@/app/fonts";
 import { Providers } from "@/app/providers";
 import { SiteFooter } from "@/components/layout/site-footer";
 import { SiteHeader } from "@/components/layout/site-header";
-import { getEnv } from "@/lib/env";
-import { getCurrentUser } from "@/lib/session";
+import { getEnv } from "@/lib/server/env";
+import { getCurrentUser } from "@/lib/server/session";
 import { themeInitScript } from "@/lib/theme";
 import "./globals.css";
 

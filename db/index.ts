@@ -1,7 +1,7 @@
 import "server-only";
 import { drizzle, type NodePgDatabase } from "drizzle-orm/node-postgres";
 import { Pool } from "pg";
-import { getEnv } from "../lib/env";
+import { getEnv } from "../lib/server/env";
 import * as schema from "./schema";
 
 /** The Drizzle database handle, typed with Mooring's schema. */

@@ -3,8 +3,8 @@
 import { redirect } from "next/navigation";
 import { createUser, issuePasswordResetToken, issueSignInLinkToken, resetPasswordWithToken } from "@/db/queries/users";
 import { errorState, invalidState, readFields, type ActionState, type FieldsOf } from "@/lib/action-state";
-import { sendPasswordResetMail, sendSignInLinkMail } from "@/lib/mail";
-import { limitEmailedLinks } from "@/lib/sign-in-limit";
+import { sendPasswordResetMail, sendSignInLinkMail } from "@/lib/server/mail";
+import { limitEmailedLinks } from "@/lib/server/sign-in-limit";
 import { emailRequestSchema, passwordResetSchema, signUpSchema } from "@/lib/validations/auth";
 
 export type SignUpState = ActionState<FieldsOf<typeof signUpSchema>>;
@@ -71,7 +71,7 @@ async function requestEmailedLink(
   const parsed = emailRequestSchema.safeParse(fields);
   if (!parsed.success) return invalidState(parsed.error.issues, fields);
   try {
-    // At most a few links per address per quarter hour (lib/sign-in-limit.ts), account or not.
+    // At most a few links per address per quarter hour (lib/server/sign-in-limit.ts), account or not.
     const refused = await limitEmailedLinks(parsed.data.email);
     if (refused) return { status: "error", message: refused, fieldErrors: {}, values: fields };
     await issueAndSend(parsed.data.email);

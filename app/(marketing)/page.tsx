@@ -2,7 +2,7 @@ import { LandingDemo } from "@/components/designer/landing-demo";
 import { PageContainer } from "@/components/layout/page-container";
 import { ButtonLink } from "@/components/ui/button";
 import { landingDemoConfiguration } from "@/lib/demo-configurations";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 
 export default async function LandingPage() {
   const user = await getCurrentUser();

@@ -1,5 +1,5 @@
 import type { ReactNode } from "react";
-import { requireUser } from "@/lib/session";
+import { requireUser } from "@/lib/server/session";
 
 /** The signed-in area. The proxy already redirects visitors; this re-checks on the server. */
 export default async function WorkspaceLayout({ children }: { children: ReactNode }) {

@@ -7,7 +7,7 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Input } from "@/components/ui/input";
 import { idleState } from "@/lib/action-state";
-import { useHydrated } from "@/lib/hooks/use-hydrated";
+import { useHydrated } from "@/lib/client/use-hydrated";
 
 export interface EmailRequestFormProps {
   action: (previous: EmailRequestState, formData: FormData) => Promise<EmailRequestState>;

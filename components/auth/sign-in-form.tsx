@@ -9,7 +9,7 @@ import { Field } from "@/components/ui/field";
 import { Input } from "@/components/ui/input";
 import { idleState, invalidState, readFields, type ActionState, type FieldsOf } from "@/lib/action-state";
 import { signInSchema } from "@/lib/validations/auth";
-import { useHydrated } from "@/lib/hooks/use-hydrated";
+import { useHydrated } from "@/lib/client/use-hydrated";
 
 type SignInState = ActionState<FieldsOf<typeof signInSchema>>;
 

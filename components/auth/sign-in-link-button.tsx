@@ -5,7 +5,7 @@ import { signIn } from "next-auth/react";
 import { useActionState } from "react";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
-import { useHydrated } from "@/lib/hooks/use-hydrated";
+import { useHydrated } from "@/lib/client/use-hydrated";
 
 interface LinkState {
   error: string | null;

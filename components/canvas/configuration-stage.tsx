@@ -8,7 +8,7 @@ import { hitTest, rectFromCorners, stacksInRect } from "@/lib/canvas/hit-test";
 import { draggableAxes, type DisplayAxes } from "@/lib/canvas/projection";
 import { panBy, toWorld, zoomAt, type Point, type Viewport } from "@/lib/canvas/viewport";
 import { buildScene, curveLabelWidth, sceneFontSize, type SceneCurve, type SceneStack } from "@/lib/designer/scene";
-import type { SelectionMode } from "@/lib/stores/designer-store";
+import type { SelectionMode } from "@/lib/client/designer-store";
 import { useCanvasPalette, type CanvasPalette } from "./use-canvas-palette";
 
 export interface ConfigurationStageProps {

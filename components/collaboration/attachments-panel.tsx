@@ -6,7 +6,7 @@ import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Skeleton } from "@/components/ui/skeleton";
 import { formatDateTime } from "@/lib/format-date";
-import { collaborationQueries, useDeleteAttachment, useUploadAttachment } from "@/lib/queries/collaboration";
+import { collaborationQueries, useDeleteAttachment, useUploadAttachment } from "@/lib/client/collaboration";
 import { attachmentMaxBytes } from "@/lib/validations/attachment";
 
 export interface AttachmentsPanelProps {

@@ -9,7 +9,7 @@ import { Field } from "@/components/ui/field";
 import { Skeleton } from "@/components/ui/skeleton";
 import { Textarea } from "@/components/ui/textarea";
 import { formatDateTime } from "@/lib/format-date";
-import { collaborationQueries, useAddComment, useDeleteComment } from "@/lib/queries/collaboration";
+import { collaborationQueries, useAddComment, useDeleteComment } from "@/lib/client/collaboration";
 import { commentMaxLength } from "@/lib/validations/comment";
 
 export interface CommentsPanelProps {

@@ -8,7 +8,8 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Input } from "@/components/ui/input";
 import { Select } from "@/components/ui/select";
-import { ApiError, apiFetch, type ConfigurationJson } from "@/lib/queries/configurations";
+import { type ConfigurationJson } from "@/lib/client/configurations";
+import { ApiError, apiFetch } from "@/lib/client/api-client";
 import { formatJsonPath } from "@/lib/validations/configuration";
 import { importMaxBytes } from "@/lib/validations/import";
 

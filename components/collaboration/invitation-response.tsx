@@ -7,7 +7,7 @@ import { Alert } from "@/components/ui/alert";
 import { Button, buttonClassName } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Input } from "@/components/ui/input";
-import { ApiError, apiFetch } from "@/lib/queries/configurations";
+import { ApiError, apiFetch } from "@/lib/client/api-client";
 import { invitationSignUpSchema } from "@/lib/validations/invitation";
 import { minPasswordLength } from "@/lib/validations/auth";
 

@@ -11,14 +11,14 @@ import { Select } from "@/components/ui/select";
 import { Table, TableBody, TableCell, TableHead, TableHeader, TableRow } from "@/components/ui/table";
 import type { GroupRole } from "@/db/schema";
 import { formatDateTime } from "@/lib/format-date";
-import { ApiError } from "@/lib/queries/configurations";
+import { ApiError } from "@/lib/client/api-client";
 import {
   collaborationQueries,
   useInvite,
   useResendInvitation,
   useRevokeInvitation,
   type InvitationJson,
-} from "@/lib/queries/collaboration";
+} from "@/lib/client/collaboration";
 
 export interface InvitationsPanelProps {
   groupId: string;

@@ -9,7 +9,7 @@ import { Button } from "@/components/ui/button";
 import { Select } from "@/components/ui/select";
 import { Table, TableBody, TableCaption, TableCell, TableHead, TableHeader, TableRow } from "@/components/ui/table";
 import type { GroupRole } from "@/db/schema";
-import { collaborationQueries, useChangeMemberRole, useRemoveMember, type MemberJson } from "@/lib/queries/collaboration";
+import { collaborationQueries, useChangeMemberRole, useRemoveMember, type MemberJson } from "@/lib/client/collaboration";
 import { formatDate } from "@/lib/format-date";
 
 export interface MembersTableProps {

@@ -8,7 +8,7 @@ import { Dialog } from "@/components/ui/dialog";
 import { Input } from "@/components/ui/input";
 import { Label } from "@/components/ui/label";
 import { formatDateTime } from "@/lib/format-date";
-import { collaborationQueries, useCreateShareLink, useRevokeShareLink } from "@/lib/queries/collaboration";
+import { collaborationQueries, useCreateShareLink, useRevokeShareLink } from "@/lib/client/collaboration";
 
 export interface ShareLinksDialogProps {
   configurationId: string;

@@ -18,7 +18,7 @@ import {
   type ConfigurationListParams,
   type ConfigurationPageJson,
   type ConfigurationSummaryJson,
-} from "@/lib/queries/configurations";
+} from "@/lib/client/configurations";
 import { cn } from "@/lib/utils";
 import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";

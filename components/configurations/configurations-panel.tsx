@@ -2,7 +2,7 @@ import type { Actor } from "@/db/queries/actor";
 import { listConfigurationsForUser } from "@/db/queries/configurations";
 import { ButtonLink } from "@/components/ui/button";
 import { Card, CardContent, CardDescription, CardHeader, CardTitle } from "@/components/ui/card";
-import { toJson } from "@/lib/queries/configurations";
+import { toJson } from "@/lib/client/api-client";
 import { ConfigurationTable } from "./configuration-table";
 
 export interface ConfigurationsPanelProps {

@@ -3,8 +3,8 @@
 import { useRouter } from "next/navigation";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
-import { useHydrated } from "@/lib/hooks/use-hydrated";
-import { useUndeleteConfiguration } from "@/lib/queries/configurations";
+import { useHydrated } from "@/lib/client/use-hydrated";
+import { useUndeleteConfiguration } from "@/lib/client/configurations";
 
 export interface DeletedNoticeProps {
   configurationId: string;

@@ -19,7 +19,7 @@ import {
 } from "@/lib/designer/document";
 import { stackKind } from "@/lib/designer/spectrum-summary";
 import type { FieldIssue } from "@/lib/errors";
-import { selectDocument, useDesignerStore } from "@/lib/stores/designer-store";
+import { selectDocument, useDesignerStore } from "@/lib/client/designer-store";
 import { cn } from "@/lib/utils";
 import { Button } from "@/components/ui/button";
 import { NumberField } from "./number-field";

@@ -8,7 +8,7 @@ import { addStack, deleteStacks, duplicateStacks, moveStacks, spatialAxes } from
 import { fitSceneViewport } from "@/lib/designer/scene";
 import { snapValue } from "@/lib/canvas/snap";
 import { toWorld } from "@/lib/canvas/viewport";
-import { selectCanRedo, selectCanUndo, selectDocument, useDesignerStore } from "@/lib/stores/designer-store";
+import { selectCanRedo, selectCanUndo, selectDocument, useDesignerStore } from "@/lib/client/designer-store";
 import { cn } from "@/lib/utils";
 import { ShortcutHelpDialog } from "./shortcut-help-dialog";
 

@@ -6,16 +6,9 @@ import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useState } from "react";
 import { setTitle } from "@/lib/designer/document";
 import { clearDraft, readDraft, writeDraft } from "@/lib/designer/draft-storage";
-import {
-  ApiError,
-  apiFetch,
-  configurationQueries,
-  useDeleteConfiguration,
-  useForkConfiguration,
-  useUpdateConfiguration,
-  type ConfigurationJson,
-} from "@/lib/queries/configurations";
-import { selectDocument, useDesignerStore } from "@/lib/stores/designer-store";
+import { configurationQueries, useDeleteConfiguration, useForkConfiguration, useUpdateConfiguration, type ConfigurationJson } from "@/lib/client/configurations";
+import { ApiError, apiFetch } from "@/lib/client/api-client";
+import { selectDocument, useDesignerStore } from "@/lib/client/designer-store";
 import { Alert } from "@/components/ui/alert";
 import { Badge } from "@/components/ui/badge";
 import { Button, ButtonLink } from "@/components/ui/button";

@@ -2,7 +2,7 @@
 
 import { useEffect } from "react";
 import type { Configuration } from "@/lib/boundary/types";
-import { selectDocument, useDesignerStore } from "@/lib/stores/designer-store";
+import { selectDocument, useDesignerStore } from "@/lib/client/designer-store";
 import { BoundaryGrid } from "./boundary-grid";
 import { DesignerCanvas } from "./designer-canvas";
 import { SpectrumPreview } from "./spectrum-preview";

@@ -13,7 +13,7 @@ import {
   type ConfigurationJson,
   type ResultJson,
   type RevisionSummaryJson,
-} from "@/lib/queries/configurations";
+} from "@/lib/client/configurations";
 import { Badge } from "@/components/ui/badge";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { ExportMenu } from "@/components/configurations/export-menu";

@@ -1,7 +1,7 @@
 import "server-only";
 import { and, desc, eq, gt, isNull, sql } from "drizzle-orm";
 import { NotFoundError, ValidationError } from "../../lib/errors";
-import { createSecureToken, hashSecureToken } from "../../lib/secure-token";
+import { createSecureToken, hashSecureToken } from "../../lib/server/secure-token";
 import type { CreateInvitationInput } from "../../lib/validations/invitation";
 import { db, type Executor } from "../index";
 import { groups, invitations, memberships, users, type GroupRole, type InvitationRow } from "../schema";

@@ -5,7 +5,7 @@ import { rateLimitBuckets } from "../schema";
 
 /**
  * Fixed-window counters in PostgreSQL, so every app instance sees the same counts. Like the
- * health ping these rows belong to no user, so the functions take no actor; only lib/rate-limit.ts
+ * health ping these rows belong to no user, so the functions take no actor; only lib/server/rate-limit.ts
  * calls them.
  */
 

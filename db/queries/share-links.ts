@@ -2,7 +2,7 @@ import "server-only";
 import { and, desc, eq, isNull } from "drizzle-orm";
 import type { Configuration, SpectrumResult } from "../../lib/boundary/types";
 import { NotFoundError } from "../../lib/errors";
-import { createSecureToken, hashSecureToken } from "../../lib/secure-token";
+import { createSecureToken, hashSecureToken } from "../../lib/server/secure-token";
 import { db } from "../index";
 import { configurations, groups, results, revisions, shareLinks, users } from "../schema";
 import { assertUuid, requireActor, type Actor } from "./actor";

@@ -8,7 +8,7 @@ import {
   UnauthenticatedError,
   ValidationError,
 } from "../../lib/errors";
-import { createSecureToken, hashSecureToken } from "../../lib/secure-token";
+import { createSecureToken, hashSecureToken } from "../../lib/server/secure-token";
 import { db, type Transaction } from "../index";
 import { authTokens, users, type AuthTokenKind, type SiteRole } from "../schema";
 import { assertUuid, requireActor, requireSiteAdmin, type Actor } from "./actor";

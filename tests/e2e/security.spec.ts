@@ -2,7 +2,7 @@ import { expect, test } from "@playwright/test";
 import { demoAccounts, signIn } from "./helpers/accounts";
 
 // The production build's security headers, content security policy, cookie flags and CSRF check,
-// as Chromium sees them. The policy itself is unit-tested in lib/security-headers.test.ts; here
+// as Chromium sees them. The policy itself is unit-tested in lib/server/security-headers.test.ts; here
 // the pages that use KaTeX, Konva, recharts and next/font must load without a single violation.
 
 test.describe("security in the browser", () => {

@@ -2,12 +2,12 @@ import type { User } from "next-auth";
 import type { CredentialsConfig } from "next-auth/providers/credentials";
 import { describe, expect, it } from "vitest";
 import { issueSignInLinkToken } from "@/db/queries/users";
-import { authOptions } from "@/lib/auth";
+import { authOptions } from "@/lib/server/auth";
 import { createTestUser } from "@/tests/fixtures/users";
 
 type Authorize = (credentials: Record<string, string>) => Promise<User | null>;
 
-/** The `authorize` function a Credentials provider of lib/auth.ts was configured with. */
+/** The `authorize` function a Credentials provider of lib/server/auth.ts was configured with. */
 function authorizeOf(id: "password" | "email-link"): Authorize {
   const provider = authOptions.providers.find(
     (candidate) => candidate.type === "credentials" && (candidate as CredentialsConfig).options?.id === id,
@@ -62,7 +62,7 @@ describe("session callbacks", () => {
   it("carry id and site role from the signed-in user into the token and the session", async () => {
     const jwt = authOptions.callbacks?.jwt;
     const session = authOptions.callbacks?.session;
-    if (!jwt || !session) throw new Error("lib/auth.ts must define the jwt and session callbacks");
+    if (!jwt || !session) throw new Error("lib/server/auth.ts must define the jwt and session callbacks");
     const user = { id: "5f0c6a53-8a4e-4f8e-9b1e-0d7f3b1c2a10", name: "Ada", email: "ada@test.mooring", siteRole: "admin" as const };
 
     const token = await jwt({ token: { sub: user.id }, user, account: null, trigger: "signIn" });

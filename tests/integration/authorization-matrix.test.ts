@@ -17,7 +17,7 @@ import { idleState } from "@/lib/action-state";
 // here fails "the table covers every route handler". Each cell calls the real handler with a mocked
 // session against PostgreSQL.
 
-vi.mock("@/lib/session", async () => {
+vi.mock("@/lib/server/session", async () => {
   const { AsyncLocalStorage } = await import("node:async_hooks");
   const store = new AsyncLocalStorage<Actor | null>();
   return {
@@ -38,7 +38,7 @@ vi.mock("next/navigation", async (importOriginal) => ({
     throw new RedirectSignal(url);
   },
 }));
-const { runAs } = (await import("@/lib/session")) as unknown as {
+const { runAs } = (await import("@/lib/server/session")) as unknown as {
   runAs: <T>(actor: Actor | null, action: () => Promise<T>) => Promise<T>;
 };
 

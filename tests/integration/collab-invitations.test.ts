@@ -13,11 +13,11 @@ import {
 } from "@/db/queries/invitations";
 import { auditLog, invitations, memberships, users } from "@/db/schema";
 import { ForbiddenError, NotFoundError, ValidationError } from "@/lib/errors";
-import { hashSecureToken } from "@/lib/secure-token";
+import { hashSecureToken } from "@/lib/server/secure-token";
 import { createTestGroup, createTestUser } from "@/tests/fixtures/users";
 
 const session = vi.hoisted(() => ({ actor: null as Actor | null }));
-vi.mock("@/lib/session", () => ({ getCurrentUser: async () => session.actor }));
+vi.mock("@/lib/server/session", () => ({ getCurrentUser: async () => session.actor }));
 // The accept route is tested without a mail server; invitations are created through the DAL.
 const { POST: acceptRoute } = await import("@/app/api/invitations/accept/route");
 const { POST: inviteRoute } = await import("@/app/api/groups/[groupId]/invitations/route");

@@ -10,7 +10,7 @@ import { makeSector, makeSpectrumResult } from "@/tests/fixtures/spectrum-result
 import { createTestGroup, createTestUser } from "@/tests/fixtures/users";
 
 const session = vi.hoisted(() => ({ actor: null as Actor | null }));
-vi.mock("@/lib/session", () => ({ getCurrentUser: async () => session.actor }));
+vi.mock("@/lib/server/session", () => ({ getCurrentUser: async () => session.actor }));
 
 const groupsRoute = await import("@/app/api/groups/route");
 const membersRoute = await import("@/app/api/groups/[groupId]/members/route");

@@ -11,12 +11,12 @@ import { shareLinks } from "@/db/schema";
 import type { Configuration } from "@/lib/boundary/types";
 import { braneAntibranePair } from "@/lib/demo-configurations";
 import { ForbiddenError, NotFoundError, ValidationError } from "@/lib/errors";
-import { hashSecureToken } from "@/lib/secure-token";
+import { hashSecureToken } from "@/lib/server/secure-token";
 import { makeSector, makeSpectrumResult } from "@/tests/fixtures/spectrum-result-builders";
 import { createRoleGroup, createTestGroup, createTestUser } from "@/tests/fixtures/users";
 
 const session = vi.hoisted(() => ({ actor: null as Actor | null }));
-vi.mock("@/lib/session", () => ({ getCurrentUser: async () => session.actor }));
+vi.mock("@/lib/server/session", () => ({ getCurrentUser: async () => session.actor }));
 const { DELETE: revokeRoute } = await import("@/app/api/share-links/[shareLinkId]/route");
 
 /** A hand-made result (shapes only; physics is tested in lib/boundary). */

@@ -11,7 +11,7 @@ import { makeSector, makeSpectrumResult } from "@/tests/fixtures/spectrum-result
 import { createTestGroup, createTestUser } from "@/tests/fixtures/users";
 
 const session = vi.hoisted(() => ({ actor: null as Actor | null }));
-vi.mock("@/lib/session", () => ({ getCurrentUser: async () => session.actor }));
+vi.mock("@/lib/server/session", () => ({ getCurrentUser: async () => session.actor }));
 const attachmentsRoute = await import("@/app/api/configurations/[configurationId]/attachments/route");
 const attachmentRoute = await import("@/app/api/attachments/[attachmentId]/route");
 const importRoute = await import("@/app/api/configurations/import/route");

@@ -13,7 +13,7 @@ import { createTestGroup, createTestUser } from "@/tests/fixtures/users";
 // Many requests at once through the route handlers, each with its own signed-in user: the mocked
 // session reads the actor from an AsyncLocalStorage, so parallel requests do not share one.
 // (tests/integration/db-configurations.test.ts covers a few concurrent saves at the DAL level.)
-vi.mock("@/lib/session", async () => {
+vi.mock("@/lib/server/session", async () => {
   const { AsyncLocalStorage } = await import("node:async_hooks");
   const store = new AsyncLocalStorage<Actor | null>();
   return {
@@ -21,7 +21,7 @@ vi.mock("@/lib/session", async () => {
     runAs: <T>(actor: Actor | null, action: () => Promise<T>) => store.run(actor, action),
   };
 });
-const { runAs } = (await import("@/lib/session")) as unknown as {
+const { runAs } = (await import("@/lib/server/session")) as unknown as {
   runAs: <T>(actor: Actor | null, action: () => Promise<T>) => Promise<T>;
 };
 const configurationRoute = await import("@/app/api/configurations/[configurationId]/route");

@@ -12,7 +12,7 @@ import { createRoleGroup, createTestUser } from "@/tests/fixtures/users";
 // The configuration route handlers, called with Request objects against PostgreSQL. The session
 // is injected by mocking `getCurrentUser`; everything behind it (zod, the DAL, the engine) is real.
 const session = vi.hoisted(() => ({ actor: null as Actor | null }));
-vi.mock("@/lib/session", () => ({ getCurrentUser: async () => session.actor }));
+vi.mock("@/lib/server/session", () => ({ getCurrentUser: async () => session.actor }));
 const listRoute = await import("@/app/api/configurations/route");
 const itemRoute = await import("@/app/api/configurations/[configurationId]/route");
 const forkRoute = await import("@/app/api/configurations/[configurationId]/fork/route");

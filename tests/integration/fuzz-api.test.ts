@@ -24,7 +24,7 @@ const runs = Math.max(1_000, Number(process.env.FUZZ_API_RUNS ?? 0) || 0);
 const seed = process.env.FUZZ_SEED ? Number(process.env.FUZZ_SEED) : undefined;
 
 const session = vi.hoisted(() => ({ actor: null as Actor | null }));
-vi.mock("@/lib/session", () => ({ getCurrentUser: async () => session.actor }));
+vi.mock("@/lib/server/session", () => ({ getCurrentUser: async () => session.actor }));
 const spectrumRoute = await import("@/app/api/spectrum/route");
 const importRoute = await import("@/app/api/configurations/import/route");
 

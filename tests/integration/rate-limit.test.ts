@@ -6,7 +6,7 @@ import { eq } from "drizzle-orm";
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import { db } from "@/db/index";
 import { rateLimitBuckets } from "@/db/schema";
-import { clientAddress, consumeRateLimit, peekRateLimit, refundRateLimit, resetRateLimits } from "@/lib/rate-limit";
+import { clientAddress, consumeRateLimit, peekRateLimit, refundRateLimit, resetRateLimits } from "@/lib/server/rate-limit";
 
 const run = promisify(execFile);
 const root = path.resolve(import.meta.dirname, "..", "..");

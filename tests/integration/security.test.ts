@@ -9,8 +9,8 @@ import { afterEach, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/index";
 import { bcryptCost } from "@/db/queries/users";
 import { users } from "@/db/schema";
-import { authOptions } from "@/lib/auth";
-import { checkCrossSiteRequest } from "@/lib/csrf";
+import { authOptions } from "@/lib/server/auth";
+import { checkCrossSiteRequest } from "@/lib/server/csrf";
 import { config as proxyConfig, proxy } from "@/proxy";
 import { createTestUser } from "@/tests/fixtures/users";
 
@@ -70,7 +70,7 @@ describe("which /api requests reach the CSRF check (proxy.ts matcher)", () => {
     expect(matches("/api/spectrum", {})).toBe(false);
   });
 
-  it("skips only requests that lib/csrf.ts would let through, whatever the method (fast-check)", () => {
+  it("skips only requests that lib/server/csrf.ts would let through, whatever the method (fast-check)", () => {
     const headerValue = (choices: string[]) =>
       fc.option(fc.oneof(fc.constantFrom(...choices), fc.string({ maxLength: 12 })), { nil: undefined });
     fc.assert(
@@ -94,7 +94,7 @@ describe("which /api requests reach the CSRF check (proxy.ts matcher)", () => {
   });
 });
 
-describe("session cookies (next-auth, lib/auth.ts)", () => {
+describe("session cookies (next-auth, lib/server/auth.ts)", () => {
   const originalUrl = process.env.NEXTAUTH_URL;
   afterEach(() => {
     process.env.NEXTAUTH_URL = originalUrl;

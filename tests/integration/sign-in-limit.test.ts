@@ -5,14 +5,14 @@ import { db } from "@/db/index";
 import { verifyPassword } from "@/db/queries/users";
 import { users } from "@/db/schema";
 import { RateLimitError, ServiceUnavailableError, UnauthenticatedError } from "@/lib/errors";
-import { consumeRateLimit, peekRateLimit } from "@/lib/rate-limit";
+import { consumeRateLimit, peekRateLimit } from "@/lib/server/rate-limit";
 import {
   emailedLinkLimit,
   limitSignInAttempt,
   signInAddress,
   signInLimitPerAddress,
   signInLimitPerEmail,
-} from "@/lib/sign-in-limit";
+} from "@/lib/server/sign-in-limit";
 import { createTestUser } from "@/tests/fixtures/users";
 
 const small = {
@@ -86,15 +86,15 @@ describe("limitSignInAttempt", () => {
   });
 });
 
-describe("the password sign-in provider (lib/auth.ts)", () => {
+describe("the password sign-in provider (lib/server/auth.ts)", () => {
   type Authorize = (credentials: Record<string, string>, req: { headers: Record<string, string> }) => Promise<unknown>;
 
   it("shows the account lockout after 10 failures, then the per-e-mail limit, and never signs in meanwhile", async () => {
-    const { authOptions } = await import("@/lib/auth");
+    const { authOptions } = await import("@/lib/server/auth");
     // next-auth v4 keeps the provider's own options (id "password", authorize) under `options`.
     const providers = authOptions.providers as unknown as { options: { id?: string; authorize: Authorize } }[];
     const provider = providers.find((candidate) => candidate.options.id === "password");
-    if (!provider) throw new Error("lib/auth.ts has no password provider");
+    if (!provider) throw new Error("lib/server/auth.ts has no password provider");
     const user = await createTestUser({ label: "provider", password: "correct horse battery" });
     const req = { headers: { "x-forwarded-for": freshAddress() } };
     const signIn = (password: string) => provider.options.authorize({ email: user.actor.email, password }, req);

@@ -1,10 +1,10 @@
 import { beforeEach, describe, expect, it, vi } from "vitest";
 import type { SpectrumResult } from "@/lib/boundary/types";
-import { resetRateLimits } from "@/lib/rate-limit";
+import { resetRateLimits } from "@/lib/server/rate-limit";
 
 // The compute route needs no database; only the session lookup is replaced.
 const session = vi.hoisted(() => ({ signedIn: false }));
-vi.mock("@/lib/session", () => ({
+vi.mock("@/lib/server/session", () => ({
   getCurrentUser: async () => (session.signedIn ? { id: "user-1", name: "Test", siteRole: "member" } : null),
 }));
 

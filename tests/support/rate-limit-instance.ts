@@ -3,7 +3,7 @@
 // Usage: tsx --conditions=react-server tests/support/rate-limit-instance.ts <key> <limit> <windowMs> <hits>
 // Prints one JSON line: { "ok": <accepted hits>, "refused": <refused hits>, "remainingSeen": [...] }.
 import { closeDatabase } from "@/db/index";
-import { consumeRateLimit } from "@/lib/rate-limit";
+import { consumeRateLimit } from "@/lib/server/rate-limit";
 
 async function main(): Promise<void> {
   const [key, limit, windowMs, hits] = process.argv.slice(2);

@@ -6,7 +6,7 @@ import { SignInForm } from "@/components/auth/sign-in-form";
 import { Alert } from "@/components/ui/alert";
 import { ButtonLink } from "@/components/ui/button";
 import { toCallbackQuery, toSafeCallbackPath } from "@/lib/safe-redirect";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 
 export const metadata: Metadata = { title: "Sign in" };
 

@@ -4,7 +4,7 @@ import { redirect } from "next/navigation";
 import { AuthPanel } from "@/components/auth/auth-panel";
 import { SignUpForm } from "@/components/auth/sign-up-form";
 import { toCallbackQuery, toSafeCallbackPath } from "@/lib/safe-redirect";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 
 export const metadata: Metadata = { title: "Create an account" };
 

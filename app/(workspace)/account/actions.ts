@@ -3,7 +3,7 @@
 import { revalidatePath } from "next/cache";
 import { updateAccount } from "@/db/queries/users";
 import { errorState, invalidState, readFields, type ActionState, type FieldsOf } from "@/lib/action-state";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 import { accountNameSchema, changePasswordSchema } from "@/lib/validations/auth";
 
 export type AccountNameState = ActionState<FieldsOf<typeof accountNameSchema>>;

@@ -7,7 +7,7 @@ import { Card, CardContent, CardDescription, CardHeader, CardTitle } from "@/com
 import { PageHeader } from "@/components/ui/page-header";
 import { getAccount } from "@/db/queries/users";
 import { formatDate } from "@/lib/format-date";
-import { requireUser } from "@/lib/session";
+import { requireUser } from "@/lib/server/session";
 
 export const metadata: Metadata = { title: "Account" };
 

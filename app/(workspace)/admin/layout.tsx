@@ -1,7 +1,7 @@
 import type { ReactNode } from "react";
 import { notFound } from "next/navigation";
 import { isSiteAdmin } from "@/db/queries/actor";
-import { requireUser } from "@/lib/session";
+import { requireUser } from "@/lib/server/session";
 
 /**
  * Admin pages answer 404 to everyone but site admins, so the area does not announce itself.

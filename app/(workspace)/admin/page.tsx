@@ -11,9 +11,9 @@ import { PageHeader } from "@/components/ui/page-header";
 import { Table, TableBody, TableCaption, TableCell, TableHead, TableHeader, TableRow } from "@/components/ui/table";
 import { isSiteAdmin } from "@/db/queries/actor";
 import { listUsers } from "@/db/queries/users";
-import { getEnv } from "@/lib/env";
+import { getEnv } from "@/lib/server/env";
 import { formatDate } from "@/lib/format-date";
-import { requireUser } from "@/lib/session";
+import { requireUser } from "@/lib/server/session";
 
 export const metadata: Metadata = { title: "Users and roles" };
 

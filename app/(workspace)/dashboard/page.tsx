@@ -7,7 +7,7 @@ import { MyGroupsPanel, MyGroupsPanelSkeleton } from "@/components/dashboard/my-
 import { RecentActivityPanel, RecentActivityPanelSkeleton } from "@/components/dashboard/recent-activity-panel";
 import { PageContainer } from "@/components/layout/page-container";
 import { PageHeader } from "@/components/ui/page-header";
-import { requireUser } from "@/lib/session";
+import { requireUser } from "@/lib/server/session";
 import { deletedNoticeSchema } from "@/lib/validations/configuration-api";
 
 export const metadata: Metadata = { title: "Dashboard" };

@@ -5,7 +5,7 @@ import { redirect } from "next/navigation";
 import { forkConfiguration, setConfigurationStarter } from "@/db/queries/configurations";
 import { createGroup, getPersonalGroup } from "@/db/queries/groups";
 import { errorState, invalidState, readFields, type ActionState, type FieldsOf } from "@/lib/action-state";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 import { createGroupSchema } from "@/lib/validations/group";
 
 export type CreateGroupState = ActionState<FieldsOf<typeof createGroupSchema>>;

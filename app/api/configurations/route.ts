@@ -3,9 +3,9 @@ import {
   listConfigurationsForGroup,
   listConfigurationsForUser,
 } from "@/db/queries/configurations";
-import { computeAuthoritativeResult, readJsonBody } from "@/lib/api/configuration-handlers";
+import { computeAuthoritativeResult, readJsonBody } from "@/lib/server/configuration-handlers";
 import { UnauthenticatedError, toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 import {
   configurationBodyLimitBytes,
   createConfigurationBodySchema,

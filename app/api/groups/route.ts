@@ -1,7 +1,7 @@
 import { createGroup, listGroupsForUser } from "@/db/queries/groups";
-import { readJsonBody } from "@/lib/api/configuration-handlers";
+import { readJsonBody } from "@/lib/server/configuration-handlers";
 import { toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 import { createGroupSchema } from "@/lib/validations/group";
 
 /** GET /api/groups: the signed-in user's groups (personal space first). */

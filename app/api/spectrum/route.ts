@@ -1,7 +1,7 @@
 import { computeSpectrum } from "@/lib/boundary";
 import { PayloadTooLargeError, RateLimitError, toErrorResponse } from "@/lib/errors";
-import { clientAddress, consumeRateLimit, type RateLimitOptions } from "@/lib/rate-limit";
-import { getCurrentUser } from "@/lib/session";
+import { clientAddress, consumeRateLimit, type RateLimitOptions } from "@/lib/server/rate-limit";
+import { getCurrentUser } from "@/lib/server/session";
 import { formatIssues, spectrumRequestSchema } from "@/lib/validations/configuration";
 
 /** Largest accepted body of `POST /api/spectrum`, in bytes (64 KiB holds 64 verbose stacks). */

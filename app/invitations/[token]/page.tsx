@@ -9,7 +9,7 @@ import { Card, CardContent, CardDescription, CardHeader, CardTitle } from "@/com
 import { getInvitationPreview, type InvitationPreviewDto } from "@/db/queries/invitations";
 import { NotFoundError } from "@/lib/errors";
 import { formatDateTime } from "@/lib/format-date";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 import { linkTokenSchema } from "@/lib/validations/auth";
 
 export const metadata: Metadata = { title: "Invitation" };

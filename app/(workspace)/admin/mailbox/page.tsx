@@ -9,8 +9,8 @@ import { EmptyState } from "@/components/ui/empty-state";
 import { PageHeader } from "@/components/ui/page-header";
 import { isSiteAdmin } from "@/db/queries/actor";
 import { formatDateTime } from "@/lib/format-date";
-import { isMailboxEnabled, listCapturedMail, type CapturedMail } from "@/lib/mailbox";
-import { requireUser } from "@/lib/session";
+import { isMailboxEnabled, listCapturedMail, type CapturedMail } from "@/lib/server/mailbox";
+import { requireUser } from "@/lib/server/session";
 
 export const metadata: Metadata = { title: "Development mailbox" };
 

@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import { DesignerWorkspace } from "@/components/designer/designer-workspace";
-import { getConfigurationOrNotFound, listWritableGroups } from "@/lib/api/configuration-pages";
-import { toJson } from "@/lib/queries/configurations";
-import { requireUser } from "@/lib/session";
+import { getConfigurationOrNotFound, listWritableGroups } from "@/lib/server/configuration-pages";
+import { toJson } from "@/lib/client/api-client";
+import { requireUser } from "@/lib/server/session";
 
 export const metadata: Metadata = { title: "Designer" };
 

@@ -5,7 +5,7 @@ import { Card, CardContent } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
 import { roleAtLeast } from "@/db/queries/actor";
 import { listGroupsForUser } from "@/db/queries/groups";
-import { requireUser } from "@/lib/session";
+import { requireUser } from "@/lib/server/session";
 
 export const metadata: Metadata = { title: "Import a configuration" };
 

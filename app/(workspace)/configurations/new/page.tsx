@@ -3,8 +3,8 @@ import { NewConfigurationForm } from "@/components/designer/new-configuration-fo
 import { PageContainer } from "@/components/layout/page-container";
 import { EmptyState } from "@/components/ui/empty-state";
 import { PageHeader } from "@/components/ui/page-header";
-import { listWritableGroups } from "@/lib/api/configuration-pages";
-import { requireUser } from "@/lib/session";
+import { listWritableGroups } from "@/lib/server/configuration-pages";
+import { requireUser } from "@/lib/server/session";
 
 export const metadata: Metadata = { title: "New configuration" };
 

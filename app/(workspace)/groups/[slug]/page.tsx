@@ -16,8 +16,8 @@ import { getGroupBySlug, listMembers } from "@/db/queries/groups";
 import { listInvitations } from "@/db/queries/invitations";
 import { listStarterForks } from "@/db/queries/labs";
 import { NotFoundError } from "@/lib/errors";
-import { requireUser } from "@/lib/session";
-import { toJson } from "@/lib/queries/configurations";
+import { requireUser } from "@/lib/server/session";
+import { toJson } from "@/lib/client/api-client";
 
 interface GroupPageProps {
   params: Promise<{ slug: string }>;

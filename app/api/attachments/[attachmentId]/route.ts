@@ -1,7 +1,7 @@
 import { deleteAttachment, getAttachmentFile } from "@/db/queries/attachments";
 import { toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/session";
-import { contentDisposition } from "@/lib/api/content-disposition";
+import { getCurrentUser } from "@/lib/server/session";
+import { contentDisposition } from "@/lib/server/content-disposition";
 
 interface AttachmentRouteContext {
   params: Promise<{ attachmentId: string }>;

@@ -1,6 +1,6 @@
 import { deleteComment } from "@/db/queries/comments";
 import { toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 
 interface CommentRouteContext {
   params: Promise<{ commentId: string }>;

@@ -1,7 +1,7 @@
 import { getConfiguration, softDeleteConfiguration, updateConfiguration } from "@/db/queries/configurations";
-import { computeAuthoritativeResult, readJsonBody } from "@/lib/api/configuration-handlers";
+import { computeAuthoritativeResult, readJsonBody } from "@/lib/server/configuration-handlers";
 import { UnauthenticatedError, ValidationError, toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 import {
   configurationBodyLimitBytes,
   parseIfMatch,

@@ -1,10 +1,10 @@
 import { createConfiguration } from "@/db/queries/configurations";
 import { getPersonalGroup } from "@/db/queries/groups";
-import { computeAuthoritativeResult } from "@/lib/api/configuration-handlers";
-import { parseConfigurationFile, relativeToFile } from "@/lib/api/import-configuration";
-import { readMultipartFile } from "@/lib/api/multipart";
+import { computeAuthoritativeResult } from "@/lib/server/configuration-handlers";
+import { parseConfigurationFile, relativeToFile } from "@/lib/server/import-configuration";
+import { readMultipartFile } from "@/lib/server/multipart";
 import { toErrorResponse, UnauthenticatedError, ValidationError } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 import { importFieldsSchema, importMaxBytes } from "@/lib/validations/import";
 
 /**

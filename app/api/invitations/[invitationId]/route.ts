@@ -1,6 +1,6 @@
 import { revokeInvitation } from "@/db/queries/invitations";
 import { toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 
 interface InvitationRouteContext {
   params: Promise<{ invitationId: string }>;

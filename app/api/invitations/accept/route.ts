@@ -1,7 +1,7 @@
 import { acceptInvitation, acceptInvitationWithNewAccount } from "@/db/queries/invitations";
-import { readJsonBody } from "@/lib/api/configuration-handlers";
+import { readJsonBody } from "@/lib/server/configuration-handlers";
 import { toErrorResponse, ValidationError } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 import { acceptInvitationSchema } from "@/lib/validations/invitation";
 
 /**

@@ -1,6 +1,6 @@
 import { revokeShareLink } from "@/db/queries/share-links";
 import { toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 
 interface ShareLinkRouteContext {
   params: Promise<{ shareLinkId: string }>;

@@ -2,9 +2,9 @@
 
 import { revalidatePath } from "next/cache";
 import { getRevision, restoreRevision } from "@/db/queries/configurations";
-import { computeAuthoritativeResult } from "@/lib/api/configuration-handlers";
+import { computeAuthoritativeResult } from "@/lib/server/configuration-handlers";
 import { errorState } from "@/lib/action-state";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 
 /**
  * Restores an old revision as a new revision (editors and owners), recomputing its result with

@@ -21,7 +21,7 @@ import {
 import { NotFoundError } from "@/lib/errors";
 import { formatDateTime } from "@/lib/format-date";
 import { diffConfigurations, diffSpectra } from "@/lib/revisions/diff";
-import { requireUser } from "@/lib/session";
+import { requireUser } from "@/lib/server/session";
 
 export const metadata: Metadata = { title: "History" };
 

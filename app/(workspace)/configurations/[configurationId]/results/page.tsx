@@ -4,9 +4,9 @@ import { ConfigurationCollaboration } from "@/components/collaboration/configura
 import { ResultsView } from "@/components/results/results-view";
 import { EmptyState } from "@/components/ui/empty-state";
 import { ButtonLink } from "@/components/ui/button";
-import { getConfigurationOrNotFound, listWritableGroups } from "@/lib/api/configuration-pages";
-import { toJson } from "@/lib/queries/configurations";
-import { requireUser } from "@/lib/session";
+import { getConfigurationOrNotFound, listWritableGroups } from "@/lib/server/configuration-pages";
+import { toJson } from "@/lib/client/api-client";
+import { requireUser } from "@/lib/server/session";
 
 export const metadata: Metadata = { title: "Results" };
 

@@ -10,7 +10,7 @@ import { listAuditLog } from "@/db/queries/audit-log";
 import { getGroupBySlug } from "@/db/queries/groups";
 import { NotFoundError } from "@/lib/errors";
 import { formatDateTime } from "@/lib/format-date";
-import { requireUser } from "@/lib/session";
+import { requireUser } from "@/lib/server/session";
 
 export const metadata: Metadata = { title: "Audit log" };
 

@@ -1,7 +1,7 @@
 import { listAttachments, uploadAttachment } from "@/db/queries/attachments";
-import { readMultipartFile } from "@/lib/api/multipart";
+import { readMultipartFile } from "@/lib/server/multipart";
 import { toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 import { attachmentFileNameSchema, attachmentMaxBytes } from "@/lib/validations/attachment";
 
 interface AttachmentsRouteContext {

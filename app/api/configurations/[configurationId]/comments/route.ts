@@ -1,7 +1,7 @@
 import { addComment, listComments } from "@/db/queries/comments";
-import { readJsonBody } from "@/lib/api/configuration-handlers";
+import { readJsonBody } from "@/lib/server/configuration-handlers";
 import { toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 import { createCommentSchema } from "@/lib/validations/comment";
 
 interface CommentsRouteContext {

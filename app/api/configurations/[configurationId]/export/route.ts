@@ -1,10 +1,10 @@
 import { z } from "zod";
 import { getConfiguration, getResultForRevision, getRevision } from "@/db/queries/configurations";
-import { contentDisposition } from "@/lib/api/content-disposition";
+import { contentDisposition } from "@/lib/server/content-disposition";
 import { NotFoundError, toErrorResponse } from "@/lib/errors";
 import { spectrumToCsv } from "@/lib/export/csv";
 import { spectrumToLatexTable } from "@/lib/export/latex-table";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 
 interface ExportRouteContext {
   params: Promise<{ configurationId: string }>;

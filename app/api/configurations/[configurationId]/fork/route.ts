@@ -1,7 +1,7 @@
 import { forkConfiguration } from "@/db/queries/configurations";
-import { readJsonBody } from "@/lib/api/configuration-handlers";
+import { readJsonBody } from "@/lib/server/configuration-handlers";
 import { UnauthenticatedError, toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 import { configurationBodyLimitBytes, forkConfigurationBodySchema } from "@/lib/validations/configuration-api";
 
 interface ForkRouteContext {

@@ -1,6 +1,6 @@
 import { listRevisions } from "@/db/queries/configurations";
 import { UnauthenticatedError, toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 
 interface RevisionsRouteContext {
   params: Promise<{ configurationId: string }>;

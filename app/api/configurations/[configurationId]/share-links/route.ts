@@ -1,7 +1,7 @@
 import { createShareLink, listShareLinks } from "@/db/queries/share-links";
 import { toErrorResponse } from "@/lib/errors";
-import { absoluteUrl } from "@/lib/mail";
-import { getCurrentUser } from "@/lib/session";
+import { absoluteUrl } from "@/lib/server/mail";
+import { getCurrentUser } from "@/lib/server/session";
 
 interface ShareLinksRouteContext {
   params: Promise<{ configurationId: string }>;

@@ -1,6 +1,6 @@
 import { undeleteConfiguration } from "@/db/queries/configurations";
 import { UnauthenticatedError, toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 
 interface UndeleteRouteContext {
   params: Promise<{ configurationId: string }>;

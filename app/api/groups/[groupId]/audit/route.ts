@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { listAuditLog } from "@/db/queries/audit-log";
 import { toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 
 interface AuditRouteContext {
   params: Promise<{ groupId: string }>;

@@ -1,8 +1,8 @@
 import { createInvitation, listInvitations } from "@/db/queries/invitations";
-import { readJsonBody } from "@/lib/api/configuration-handlers";
-import { deliverInvitation } from "@/lib/api/invitation-mail";
+import { readJsonBody } from "@/lib/server/configuration-handlers";
+import { deliverInvitation } from "@/lib/server/invitation-mail";
 import { toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 import { createInvitationSchema } from "@/lib/validations/invitation";
 
 interface InvitationsRouteContext {

@@ -1,6 +1,6 @@
 import { listMembers } from "@/db/queries/groups";
 import { toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 
 interface MembersRouteContext {
   params: Promise<{ groupId: string }>;

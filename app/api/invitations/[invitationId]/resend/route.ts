@@ -1,7 +1,7 @@
 import { resendInvitation } from "@/db/queries/invitations";
-import { deliverInvitation } from "@/lib/api/invitation-mail";
+import { deliverInvitation } from "@/lib/server/invitation-mail";
 import { toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 
 interface ResendRouteContext {
   params: Promise<{ invitationId: string }>;

@@ -1,6 +1,6 @@
-import { getRevisionOfConfiguration } from "@/lib/api/configuration-handlers";
+import { getRevisionOfConfiguration } from "@/lib/server/configuration-handlers";
 import { UnauthenticatedError, toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 
 interface RevisionRouteContext {
   params: Promise<{ configurationId: string; revisionId: string }>;

@@ -1,7 +1,7 @@
 import { removeMember, setMemberRole } from "@/db/queries/groups";
-import { readJsonBody } from "@/lib/api/configuration-handlers";
+import { readJsonBody } from "@/lib/server/configuration-handlers";
 import { toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 import { changeRoleSchema } from "@/lib/validations/group";
 
 interface MemberRouteContext {

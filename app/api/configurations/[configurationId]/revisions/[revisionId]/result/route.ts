@@ -1,7 +1,7 @@
 import { getResultForRevision } from "@/db/queries/configurations";
-import { getRevisionOfConfiguration } from "@/lib/api/configuration-handlers";
+import { getRevisionOfConfiguration } from "@/lib/server/configuration-handlers";
 import { UnauthenticatedError, toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/session";
+import { getCurrentUser } from "@/lib/server/session";
 
 interface ResultRouteContext {
   params: Promise<{ configurationId: string; revisionId: string }>;

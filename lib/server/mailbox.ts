@@ -1,6 +1,6 @@
 import "server-only";
 import { z } from "zod";
-import { getEnv } from "@/lib/env";
+import { getEnv } from "@/lib/server/env";
 
 const addressSchema = z.object({ address: z.string(), name: z.string().optional().default("") });
 

@@ -1,6 +1,6 @@
 import "server-only";
 import { RateLimitError, UnauthenticatedError } from "@/lib/errors";
-import { consumeRateLimit, refundRateLimit, type RateLimitOptions } from "@/lib/rate-limit";
+import { consumeRateLimit, refundRateLimit, type RateLimitOptions } from "@/lib/server/rate-limit";
 
 /**
  * Failed password sign-ins allowed per e-mail address per window. Above the account lockout of

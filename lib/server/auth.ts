@@ -3,12 +3,12 @@ import type { NextAuthOptions, User } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import type { Actor } from "@/db/queries/actor";
 import { consumeSignInLinkToken, verifyPassword } from "@/db/queries/users";
-import { getAuthSecret } from "@/lib/auth-secret";
-import { limitSignInAttempt, signInAddress } from "@/lib/sign-in-limit";
+import { getAuthSecret } from "@/lib/server/auth-secret";
+import { limitSignInAttempt, signInAddress } from "@/lib/server/sign-in-limit";
 import { toDomainError } from "@/lib/errors";
 import { signInLinkSchema, signInSchema } from "@/lib/validations/auth";
 
-/** Sessions last 30 days; the user's role is re-read from the database on every request (lib/session.ts). */
+/** Sessions last 30 days; the user's role is re-read from the database on every request (lib/server/session.ts). */
 const sessionMaxAgeSeconds = 30 * 24 * 60 * 60;
 
 /**
@@ -35,7 +35,7 @@ export const authOptions: NextAuthOptions = {
         const parsed = signInSchema.safeParse(credentials);
         if (!parsed.success) throw new Error(parsed.error.issues[0]?.message ?? "Enter your e-mail and password.");
         const { email, password } = parsed.data;
-        // Failed attempts are counted per e-mail and per client address in PostgreSQL (lib/sign-in-limit.ts).
+        // Failed attempts are counted per e-mail and per client address in PostgreSQL (lib/server/sign-in-limit.ts).
         return toUser(
           await authorizeWith(() =>
             limitSignInAttempt(email, signInAddress(req.headers), () => verifyPassword(null, email, password)),

@@ -1,6 +1,6 @@
 import "server-only";
 import type { IssuedInvitation } from "@/db/queries/invitations";
-import { sendInvitationMail } from "@/lib/mail";
+import { sendInvitationMail } from "@/lib/server/mail";
 
 /**
  * Sends the e-mail of a freshly issued invitation. The invitation is already stored, so a mail

@@ -1,6 +1,6 @@
 import "server-only";
 import nodemailer, { type Transporter } from "nodemailer";
-import { getEnv } from "@/lib/env";
+import { getEnv } from "@/lib/server/env";
 
 /** One message: plain text always, HTML as a courtesy; both say the same. */
 export interface MailContent {

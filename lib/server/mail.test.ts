@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { renderMail } from "@/lib/mail";
+import { renderMail } from "@/lib/server/mail";
 
 const template = {
   to: "ada@mooring.test",

@@ -10,7 +10,7 @@ import type { MemberDto } from "@/db/queries/groups";
 import type { InvitationDto } from "@/db/queries/invitations";
 import type { ShareLinkDto } from "@/db/queries/share-links";
 import type { GroupRole } from "@/db/schema";
-import { apiFetch, type Jsonified } from "@/lib/queries/configurations";
+import { apiFetch, type Jsonified } from "@/lib/client/api-client";
 
 export type CommentJson = Jsonified<CommentDto>;
 export type ShareLinkJson = Jsonified<ShareLinkDto>;

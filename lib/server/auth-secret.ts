@@ -1,4 +1,4 @@
-import { getEnv } from "@/lib/env";
+import { getEnv } from "@/lib/server/env";
 
 // Only for `next dev` and tests without a configured secret; production refuses to run without one.
 const developmentSecret = "mooring-development-secret-not-for-production";

@@ -12,15 +12,8 @@ import type {
   RevisionSummaryDto,
 } from "@/db/queries/configurations";
 import type { Configuration } from "@/lib/boundary/types";
-import type { FieldIssue } from "@/lib/errors";
+import { apiFetch, type Jsonified } from "@/lib/client/api-client";
 import type { ListConfigurationsQuery } from "@/lib/validations/configuration-api";
-
-/** A DTO as it arrives over JSON: dates become ISO strings. */
-export type Jsonified<T> = T extends Date
-  ? string
-  : T extends object
-    ? { [K in keyof T]: Jsonified<T[K]> }
-    : T;
 
 export type ConfigurationJson = Jsonified<ConfigurationDto>;
 export type ConfigurationSummaryJson = Jsonified<ConfigurationSummaryDto>;
@@ -31,43 +24,6 @@ export type ConfigurationPageJson = Jsonified<ConfigurationPage> & { page: numbe
 
 /** Filters of a configuration list, as sent in the query string. */
 export type ConfigurationListParams = Partial<Omit<ListConfigurationsQuery, "starter">> & { starter?: boolean };
-
-/** An error answer of the API, with its status and body fields. */
-export class ApiError extends Error {
-  constructor(
-    readonly status: number,
-    readonly code: string,
-    message: string,
-    readonly issues: FieldIssue[] = [],
-    readonly currentVersion: number | null = null,
-  ) {
-    super(message);
-    this.name = "ApiError";
-  }
-}
-
-/** Fetches JSON from the API and turns error answers into {@link ApiError}. */
-export async function apiFetch<T>(url: string, init?: RequestInit): Promise<T> {
-  let response: Response;
-  try {
-    response = await fetch(url, { ...init, headers: { accept: "application/json", ...init?.headers } });
-  } catch {
-    throw new ApiError(0, "network", "The server could not be reached. Your draft is kept in this browser.");
-  }
-  if (response.status === 204) return undefined as T;
-  const body: unknown = await response.json().catch(() => null);
-  if (!response.ok) {
-    const data = (typeof body === "object" && body !== null ? body : {}) as Record<string, unknown>;
-    throw new ApiError(
-      response.status,
-      typeof data.error === "string" ? data.error : "error",
-      typeof data.message === "string" ? data.message : `The request failed (${response.status}).`,
-      Array.isArray(data.issues) ? (data.issues as FieldIssue[]) : [],
-      typeof data.currentVersion === "number" ? data.currentVersion : null,
-    );
-  }
-  return body as T;
-}
 
 function toSearch(params: ConfigurationListParams): string {
   const search = new URLSearchParams();
@@ -188,9 +144,4 @@ export function useUndeleteConfiguration(id: string) {
       void client.invalidateQueries({ queryKey: configurationQueries.lists() });
     },
   });
-}
-
-/** Converts a server DTO to the shape the API sends (dates as ISO strings), for server-rendered initial data. */
-export function toJson<T>(value: T): Jsonified<T> {
-  return JSON.parse(JSON.stringify(value)) as Jsonified<T>;
 }

@@ -3,7 +3,7 @@ import { getServerSession } from "next-auth";
 import { redirect } from "next/navigation";
 import { cache } from "react";
 import { getActorById, type Actor } from "@/db/queries/actor";
-import { authOptions } from "@/lib/auth";
+import { authOptions } from "@/lib/server/auth";
 
 /**
  * The signed-in user as an Actor, or null. The session only names the account; name and site role
