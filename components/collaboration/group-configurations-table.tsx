@@ -5,7 +5,7 @@ import { formatMassSquared, SupersymmetryBadge, TachyonBadge } from "@/component
 import { Badge } from "@/components/ui/badge";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Table, TableBody, TableCaption, TableCell, TableHead, TableHeader, TableRow } from "@/components/ui/table";
-import type { ConfigurationSummaryDto } from "@/db/queries/configurations";
+import type { ConfigurationSummaryDto } from "@/db/queries/configuration-dtos";
 import { formatDate } from "@/lib/format-date";
 
 export interface GroupConfigurationsTableProps {

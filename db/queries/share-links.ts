@@ -7,7 +7,7 @@ import { db } from "../index";
 import { configurations, groups, results, revisions, shareLinks, users } from "../schema";
 import { assertUuid, requireActor, type Actor } from "./actor";
 import { recordAudit } from "./audit";
-import { requireConfigurationRole } from "./collab-access";
+import { requireConfigurationRole } from "./configuration-access";
 
 /**
  * Read-only share links. Editors and owners create and revoke them; anyone holding the token may
@@ -48,7 +48,7 @@ export async function createShareLink(
     if (!row) throw new Error("Share link insert returned no row.");
     await recordAudit(tx, {
       actorId: signedIn.id,
-      groupId: access.groupId,
+      groupId: access.row.groupId,
       action: "share_link.create",
       entityType: "share_link",
       entityId: row.id,
@@ -90,7 +90,7 @@ export async function revokeShareLink(actor: Actor | null, shareLinkId: string):
       await tx.update(shareLinks).set({ revokedAt }).where(eq(shareLinks.id, shareLinkId));
       await recordAudit(tx, {
         actorId: signedIn.id,
-        groupId: access.groupId,
+        groupId: access.row.groupId,
         action: "share_link.revoke",
         entityType: "share_link",
         entityId: shareLinkId,

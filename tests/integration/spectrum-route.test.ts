@@ -69,16 +69,18 @@ describe("POST /api/spectrum", () => {
     };
     const response = await post(JSON.stringify(invalid));
     expect(response.status).toBe(422);
-    const body = (await response.json()) as { error: string; issues: { path: string; message: string }[] };
+    const body = (await response.json()) as { error: string; issues: { path: (string | number)[]; jsonPath: string; message: string }[] };
     expect(body.error).toBe("validation_failed");
-    expect(body.issues).toEqual([{ path: "stacks[1].worldvolume", message: expect.stringContaining("IIA allows only even p") }]);
+    expect(body.issues).toEqual([
+      { path: ["stacks", 1, "worldvolume"], jsonPath: "stacks[1].worldvolume", message: expect.stringContaining("IIA allows only even p") },
+    ]);
   });
 
   it("returns 422 with the path of a shape error", async () => {
     const response = await post(JSON.stringify({ ...bosonic, stacks: [{ ...bosonic.stacks[0], count: "many" }] }));
     expect(response.status).toBe(422);
-    const body = (await response.json()) as { issues: { path: string }[] };
-    expect(body.issues.map((issue) => issue.path)).toEqual(["stacks[0].count"]);
+    const body = (await response.json()) as { issues: { jsonPath: string }[] };
+    expect(body.issues.map((issue) => issue.jsonPath)).toEqual(["stacks[0].count"]);
   });
 
   it("returns 400 for malformed JSON", async () => {

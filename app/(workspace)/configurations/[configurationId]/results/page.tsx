@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { getResultForRevision, listRevisions } from "@/db/queries/configurations";
+import { getResultForRevision, listRevisions } from "@/db/queries/revisions";
 import { ConfigurationCollaboration } from "@/components/collaboration/configuration-collaboration";
 import { ResultsView } from "@/components/results/results-view";
 import { EmptyState } from "@/components/ui/empty-state";
