@@ -1,16 +1,31 @@
 import "server-only";
-import { ConfigurationError, computeSpectrum } from "../../lib/boundary";
-import type { Configuration, SpectrumResult } from "../../lib/boundary/types";
-import { ValidationError } from "../../lib/errors";
+import { and, eq, sql } from "drizzle-orm";
+import { ENGINE_VERSION } from "../../lib/boundary";
+import type { Configuration } from "../../lib/boundary/types";
+import { computeSpectrumJob } from "../../lib/server/compute/pool";
+import { parseMassSquared, type SpectrumJobSummary } from "../../lib/server/compute/spectrum-job";
 import type { Transaction } from "../index";
 import { results } from "../schema";
 
-/** The engine's authoritative result of a document and how long the server took to compute it. */
-export interface ComputedResult {
-  result: SpectrumResult;
+/** A result the server just computed, as JSON text ready to store. */
+export interface FreshResult {
+  source: "fresh";
+  json: string;
+  summary: SpectrumJobSummary;
+  engineVersion: string;
   /** Milliseconds, to the microsecond. */
   computeMs: number;
 }
+
+/** The stored result of another revision with the same document, copied row to row inside PostgreSQL. */
+export interface StoredResult {
+  source: "stored";
+  revisionId: string;
+  summary: SpectrumJobSummary;
+}
+
+/** The result a new revision gets. */
+export type RevisionResult = FreshResult | StoredResult;
 
 /** Options of {@link computeResult}. */
 export interface ComputeResultOptions {
@@ -21,29 +36,56 @@ export interface ComputeResultOptions {
 /**
  * Computes the authoritative result of a document on the server. Every write of a document (create,
  * save, import, restore, fork of a changed draft) calls this itself: a result never comes from the
- * caller, so a browser's live preview is never trusted. Engine problems (a D3 in IIA, ...) become a
- * 422 with every JSON path under `document`.
+ * caller, so a browser's live preview is never trusted. Large documents are computed off the
+ * request thread (lib/server/compute/pool.ts). Engine problems (a D3 in IIA, ...) become a 422 with
+ * every JSON path under `document`.
  */
-export function computeResult(document: Configuration, options: ComputeResultOptions = {}): ComputedResult {
-  const started = performance.now();
-  try {
-    const result = computeSpectrum(document);
-    return { result, computeMs: Math.round((performance.now() - started) * 1000) / 1000 };
-  } catch (error) {
-    if (error instanceof ConfigurationError) {
-      const at = options.problemsAt ?? ["document"];
-      throw new ValidationError(error.problems.map((problem) => ({ path: [...at, ...problem.path], message: problem.message })));
-    }
-    throw error;
-  }
+export async function computeResult(document: Configuration, options: ComputeResultOptions = {}): Promise<FreshResult> {
+  const outcome = await computeSpectrumJob({ document }, { problemsAt: options.problemsAt ?? ["document"] });
+  return { source: "fresh", json: outcome.json, summary: outcome.summary, engineVersion: outcome.engineVersion, computeMs: outcome.computeMs };
 }
 
-/** Stores the result of a revision inside the revision's transaction. */
-export async function storeResult(tx: Transaction, revisionId: string, computed: ComputedResult): Promise<void> {
-  await tx.insert(results).values({
+/**
+ * The stored result of a revision when the running engine version computed it, so that copying the
+ * revision's unchanged document can copy its result too; null when it must be recomputed. The
+ * summary is read inside PostgreSQL, so the result itself never travels.
+ */
+export async function reusableResult(tx: Transaction, revisionId: string): Promise<StoredResult | null> {
+  const [stored] = await tx
+    .select({
+      lightest: sql<string | null>`${results.result} -> 'lightest' -> 0 ->> 'massSquared'`,
+      supercharges: sql<number | null>`(${results.result} ->> 'supercharges')::int`,
+      tachyonic: sql<boolean>`jsonb_path_exists(${results.result}, '$.sectors[*] ? (@.tachyonic == true)')`,
+    })
+    .from(results)
+    .where(and(eq(results.revisionId, revisionId), eq(results.engineVersion, ENGINE_VERSION)))
+    .limit(1);
+  if (!stored) return null;
+  const lightestMassSquared = stored.lightest === null ? null : parseMassSquared(stored.lightest);
+  return {
+    source: "stored",
     revisionId,
-    engineVersion: computed.result.engineVersion,
-    result: computed.result,
-    computeMs: Number.isFinite(computed.computeMs) && computed.computeMs >= 0 ? computed.computeMs : 0,
-  });
+    summary: {
+      lightestMassSquared,
+      supercharges: stored.supercharges,
+      tachyonic: stored.tachyonic || (lightestMassSquared !== null && lightestMassSquared < 0),
+    },
+  };
+}
+
+/** Stores the result of a new revision inside the revision's transaction. */
+export async function storeResult(tx: Transaction, revisionId: string, result: RevisionResult): Promise<void> {
+  if (result.source === "fresh") {
+    await tx.insert(results).values({
+      revisionId,
+      engineVersion: result.engineVersion,
+      // The JSON text goes to PostgreSQL as it is: no parse and re-serialise on the request thread.
+      result: sql`${result.json}::jsonb`,
+      computeMs: Number.isFinite(result.computeMs) && result.computeMs >= 0 ? result.computeMs : 0,
+    });
+    return;
+  }
+  await tx.execute(sql`
+    insert into ${results} (revision_id, engine_version, result, compute_ms)
+    select ${revisionId}, engine_version, result, compute_ms from ${results} where revision_id = ${result.revisionId}`);
 }

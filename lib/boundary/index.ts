@@ -13,6 +13,7 @@ export {
   checkConfiguration,
   configurationWarnings,
   configurationLimits,
+  configurationCost,
   dimensionOf,
   describeStack,
   ConfigurationError,
