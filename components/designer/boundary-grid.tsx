@@ -17,7 +17,7 @@ import {
   spatialAxes,
   toggleAxis,
 } from "@/lib/designer/document";
-import { stackKind } from "@/lib/designer/spectrum-summary";
+import { stackKind } from "@/lib/designer/stack-kind";
 import type { FieldIssue } from "@/lib/errors";
 import { selectDocument, useDesignerStore } from "@/lib/client/designer-store";
 import { cn } from "@/lib/utils";
