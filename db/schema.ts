@@ -16,7 +16,8 @@ import {
   unique,
   uuid,
 } from "drizzle-orm/pg-core";
-import type { Configuration, SpectrumResult } from "../lib/boundary/types";
+import type { Configuration } from "../lib/boundary/types";
+import type { StoredSpectrumResult } from "../lib/validations/spectrum-result";
 
 /*
  * Mooring's tables. Conventions:
@@ -254,7 +255,8 @@ export const results = pgTable("results", {
     .unique()
     .references(() => revisions.id, { onDelete: "cascade" }),
   engineVersion: text("engine_version").notNull(),
-  result: jsonb("result").$type<SpectrumResult>().notNull(),
+  /** Read it through `readStoredResult` (lib/validations/spectrum-result.ts), which upgrades older results. */
+  result: jsonb("result").$type<StoredSpectrumResult>().notNull(),
   computeMs: doublePrecision("compute_ms").notNull(),
   createdAt: createdAt(),
 });

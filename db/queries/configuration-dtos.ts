@@ -3,6 +3,7 @@ import { eq, sql, type Placeholder } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import type { Configuration, SpectrumResult, Theory } from "../../lib/boundary/types";
 import { NotFoundError } from "../../lib/errors";
+import { readStoredResult } from "../../lib/validations/spectrum-result";
 import { db, type Executor } from "../index";
 import { configurations, groups, results, revisions, users, type ConfigurationRow, type GroupKind, type GroupRole } from "../schema";
 import { getGroupRole, roleAtLeast, type Actor } from "./actor";
@@ -221,7 +222,7 @@ export function toResultDto(row: typeof results.$inferSelect): ResultDto {
   return {
     revisionId: row.revisionId,
     engineVersion: row.engineVersion,
-    result: row.result,
+    result: readStoredResult(row.result),
     computeMs: row.computeMs,
     createdAt: row.createdAt,
   };

@@ -60,7 +60,7 @@ export async function forkConfiguration(
     const title = input.title?.trim() || (input.document ?? revision.document).title;
     const document: Configuration = { ...(input.document ?? revision.document), title };
     // The title is not part of the physics, so an untouched document keeps the source's result.
-    const result = (input.document === undefined ? await reusableResult(tx, revision.id) : null) ?? (await computeResult(document));
+    const result = (input.document === undefined ? await reusableResult(tx, revision.id, document) : null) ?? (await computeResult(document));
     const [created] = await tx
       .insert(configurations)
       .values({

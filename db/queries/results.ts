@@ -3,7 +3,7 @@ import { and, eq, sql } from "drizzle-orm";
 import { ENGINE_VERSION } from "../../lib/boundary";
 import type { Configuration } from "../../lib/boundary/types";
 import { computeSpectrumJob } from "../../lib/server/compute/pool";
-import { parseMassSquared, type SpectrumJobSummary } from "../../lib/server/compute/spectrum-job";
+import { parseResultNumber, type ResultSummary } from "../../lib/spectrum";
 import type { Transaction } from "../index";
 import { results } from "../schema";
 
@@ -11,7 +11,7 @@ import { results } from "../schema";
 export interface FreshResult {
   source: "fresh";
   json: string;
-  summary: SpectrumJobSummary;
+  summary: ResultSummary;
   engineVersion: string;
   /** Milliseconds, to the microsecond. */
   computeMs: number;
@@ -21,7 +21,7 @@ export interface FreshResult {
 export interface StoredResult {
   source: "stored";
   revisionId: string;
-  summary: SpectrumJobSummary;
+  summary: ResultSummary;
 }
 
 /** The result a new revision gets. */
@@ -50,7 +50,7 @@ export async function computeResult(document: Configuration, options: ComputeRes
  * revision's unchanged document can copy its result too; null when it must be recomputed. The
  * summary is read inside PostgreSQL, so the result itself never travels.
  */
-export async function reusableResult(tx: Transaction, revisionId: string): Promise<StoredResult | null> {
+export async function reusableResult(tx: Transaction, revisionId: string, document: Configuration): Promise<StoredResult | null> {
   const [stored] = await tx
     .select({
       lightest: sql<string | null>`${results.result} -> 'lightest' -> 0 ->> 'massSquared'`,
@@ -61,11 +61,13 @@ export async function reusableResult(tx: Transaction, revisionId: string): Promi
     .where(and(eq(results.revisionId, revisionId), eq(results.engineVersion, ENGINE_VERSION)))
     .limit(1);
   if (!stored) return null;
-  const lightestMassSquared = stored.lightest === null ? null : parseMassSquared(stored.lightest);
+  const lightest = stored.lightest === null ? Number.NaN : parseResultNumber(stored.lightest);
+  const lightestMassSquared = Number.isFinite(lightest) ? lightest : null;
   return {
     source: "stored",
     revisionId,
     summary: {
+      stackCount: document.stacks.length,
       lightestMassSquared,
       supercharges: stored.supercharges,
       tachyonic: stored.tachyonic || (lightestMassSquared !== null && lightestMassSquared < 0),

@@ -1,7 +1,7 @@
 import "server-only";
 import { and, eq, isNull, sql } from "drizzle-orm";
 import type { Configuration } from "../../lib/boundary/types";
-import type { SpectrumJobSummary } from "../../lib/server/compute/spectrum-job";
+import type { ResultSummary } from "../../lib/spectrum";
 import { ConflictError, NotFoundError, ValidationError } from "../../lib/errors";
 import type { Transaction } from "../index";
 import { configurations, revisions, type ConfigurationRow } from "../schema";
@@ -27,16 +27,13 @@ export function requireTitle(document: Configuration): string {
 }
 
 /** The configuration columns a document and its result set (the list summary included). */
-export function documentColumns(document: Configuration, summary: SpectrumJobSummary) {
+export function documentColumns(document: Configuration, summary: ResultSummary) {
   return {
     title: requireTitle(document),
     description: document.description ?? "",
     theory: document.theory,
     document,
-    stackCount: document.stacks.length,
-    lightestMassSquared: summary.lightestMassSquared,
-    tachyonic: summary.tachyonic,
-    supercharges: summary.supercharges,
+    ...summary,
   } satisfies Partial<typeof configurations.$inferInsert>;
 }
 

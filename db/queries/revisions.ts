@@ -122,7 +122,7 @@ export async function restoreRevision(
       .where(and(eq(revisions.id, revisionId), eq(revisions.configurationId, configurationId)))
       .limit(1);
     if (!old) throw new NotFoundError("No such revision.");
-    const result = (await reusableResult(tx, old.id)) ?? (await computeResult(old.document));
+    const result = (await reusableResult(tx, old.id, old.document)) ?? (await computeResult(old.document));
     const bumped = await bumpVersion(
       tx,
       configurationId,

@@ -6,6 +6,7 @@
  */
 import { ConfigurationError, computeSpectrum, type ConfigurationProblem } from "../../boundary";
 import type { Configuration, Sector, SpectrumResult } from "../../boundary/types";
+import { summarizeResult, type ResultSummary } from "../../spectrum";
 
 /** Which sectors keep their level rows and mode expansions in an API response. */
 export interface SectorPageOptions {
@@ -32,17 +33,9 @@ export interface SpectrumJob {
   page?: SectorPageOptions;
 }
 
-/** Summary columns of a result, as stored for sortable lists. */
-export interface SpectrumJobSummary {
-  /** alpha' M^2 of the lightest state, or null when there is none. */
-  lightestMassSquared: number | null;
-  tachyonic: boolean;
-  supercharges: number | null;
-}
-
 /** What a computation answers. */
 export type SpectrumJobOutcome =
-  | { ok: true; json: string; summary: SpectrumJobSummary; engineVersion: string; computeMs: number; page: SectorPage | null }
+  | { ok: true; json: string; summary: ResultSummary; engineVersion: string; computeMs: number; page: SectorPage | null }
   | { ok: false; problems: ConfigurationProblem[] };
 
 /**
@@ -63,7 +56,7 @@ export function runSpectrumJob(job: SpectrumJob): SpectrumJobOutcome {
   return {
     ok: true,
     json,
-    summary: summarizeSpectrum(result),
+    summary: summarizeResult(job.document, result),
     engineVersion: result.engineVersion,
     computeMs: Math.round((performance.now() - started) * 1000) / 1000,
     page,
@@ -89,22 +82,4 @@ function pageSectors(result: SpectrumResult, options: SectorPageOptions): Sector
     index >= sectorOffset && index < end ? sector : { ...sector, levels: [], axes: [], detailOmitted: true },
   );
   return { sectorOffset, sectorsWithDetail: end - sectorOffset, sectorCount, nextSectorOffset: end < sectorCount ? end : null };
-}
-
-function summarizeSpectrum(result: SpectrumResult): SpectrumJobSummary {
-  const lightest = result.lightest[0];
-  const lightestMassSquared = lightest ? parseMassSquared(lightest.massSquared) : null;
-  return {
-    lightestMassSquared,
-    tachyonic: result.sectors.some((sector) => sector.tachyonic) || (lightestMassSquared !== null && lightestMassSquared < 0),
-    supercharges: result.supercharges,
-  };
-}
-
-/** "-1/2", "3" or a decimal string as a number; null when it is not a finite number. */
-export function parseMassSquared(text: string): number | null {
-  const [numerator, denominator, ...rest] = text.split("/");
-  const value =
-    denominator === undefined ? Number(numerator) : rest.length === 0 ? Number(numerator) / Number(denominator) : NaN;
-  return Number.isFinite(value) ? value : null;
 }
