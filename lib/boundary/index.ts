@@ -28,6 +28,7 @@ export {
 } from "./classify";
 export { expandAxis, expandPair, bosonModing, fermionModing } from "./expansion";
 export { formatDecimal } from "./format";
+export { resultInputKey } from "./result-key";
 export {
   ENGINE_VERSION,
   CONVENTIONS_TEXT,

@@ -12,3 +12,4 @@ export { lightestBySector, lightestLevel, type SectorLightest } from "./lightest
 export { isTachyonicState, tachyonicSectors, type TachyonicSector } from "./tachyons";
 export { summarizeResult, type ResultSummary } from "./summary";
 export { displaySignificantDigits, formatMassSquared, formatNumber, formatPair, type FormatNumberOptions } from "./format";
+export { resultOverview, sectorOverview, type ResultOverview, type SectorOverview, type SectorDetailField } from "./overview";
