@@ -1,11 +1,11 @@
 import type { ReactNode } from "react";
-import type { SpectrumResult } from "@/lib/boundary/types";
-import { formatNumber, formatPair, pairKey, tachyonicSectors } from "@/lib/spectrum";
+import { formatNumber, formatPair, pairKey, type SummaryFacts } from "@/lib/spectrum";
 import { Badge } from "@/components/ui/badge";
 import { MassSquaredText } from "./mass-text";
 
 export interface SpectrumSummaryProps {
-  result: SpectrumResult;
+  /** `summaryFacts(result)` of a full result, or the facts the server sends with a result's overview. */
+  facts: SummaryFacts;
 }
 
 /**
@@ -13,9 +13,9 @@ export interface SpectrumSummaryProps {
  * The one summary of the designer preview, the results page and the shared view; it lays
  * itself out by the width it is given (a list in a side panel, cards across a page).
  */
-export function SpectrumSummary({ result }: SpectrumSummaryProps) {
-  const tachyons = tachyonicSectors(result);
-  const lightest = result.lightest[0] ?? null;
+export function SpectrumSummary({ facts }: SpectrumSummaryProps) {
+  const { tachyons, tachyonCount, lightest } = facts;
+  const result = facts;
   return (
     <div className="@container">
       <dl className="grid gap-2 text-sm @2xl:grid-cols-2 @2xl:gap-3 @5xl:grid-cols-4" aria-label="Spectrum summary">
@@ -45,7 +45,7 @@ export function SpectrumSummary({ result }: SpectrumSummaryProps) {
           term="Stability"
           value={
             <span data-testid="spectrum-stability" className={tachyons.length > 0 ? "text-danger-soft-foreground" : undefined}>
-              {tachyons.length === 0 ? "No tachyons" : `${tachyons.length} tachyonic sector${tachyons.length > 1 ? "s" : ""}`}
+              {tachyonCount === 0 ? "No tachyons" : `${tachyonCount} tachyonic sector${tachyonCount > 1 ? "s" : ""}`}
             </span>
           }
           detail={
@@ -65,6 +65,7 @@ export function SpectrumSummary({ result }: SpectrumSummaryProps) {
                     ) : null}
                   </li>
                 ))}
+                {tachyonCount > tachyons.length ? <li>and {tachyonCount - tachyons.length} more (see the sectors below)</li> : null}
               </ul>
             )
           }
@@ -76,7 +77,7 @@ export function SpectrumSummary({ result }: SpectrumSummaryProps) {
               {result.gaugeGroup || "none"}
             </span>
           }
-          detail={`${result.sectors.length} sector${result.sectors.length === 1 ? "" : "s"} of open strings.`}
+          detail={`${facts.sectorCount} sector${facts.sectorCount === 1 ? "" : "s"} of open strings.`}
         />
         <SummaryItem
           term="Lightest state"

@@ -3,7 +3,16 @@ import { eq, sql } from "drizzle-orm";
 import { ENGINE_VERSION } from "../../lib/boundary";
 import type { Sector } from "../../lib/boundary/types";
 import { NotFoundError } from "../../lib/errors";
-import { resultOverview, type ResultOverview } from "../../lib/spectrum";
+import { massCurves as curvesOf, type MassCurve } from "../../lib/designer/plot-data";
+import {
+  pageSectorOverviews,
+  resultOverview,
+  summaryFacts,
+  type ResultOverview,
+  type SectorOverviewPage,
+  type SectorPageQuery,
+  type SummaryFacts,
+} from "../../lib/spectrum";
 import { readStoredResult } from "../../lib/validations/spectrum-result";
 import { db } from "../index";
 import { results, revisions } from "../schema";
@@ -19,10 +28,24 @@ import { toResultDto, type ResultDto, type ResultMetaDto } from "./configuration
  * when the running engine stored it (older results are upgraded through `readStoredResult`).
  */
 
-/** The overview of a stored result with its metadata. */
-export interface ResultOverviewDto extends ResultMetaDto {
-  overview: ResultOverview;
+/** Sectors in the first page of a result's head. */
+const firstPageSectors = 100;
+
+/**
+ * What the results page opens with: the result without its sectors, the summary facts, the mass
+ * curves, whether masses are also given in GeV, and the first page of sector overviews; further
+ * pages and each sector's detail are read on demand.
+ */
+export interface ResultHeadDto extends ResultMetaDto {
+  result: Omit<ResultOverview, "sectors">;
+  facts: SummaryFacts;
+  massCurves: MassCurve[];
+  showGeV: boolean;
+  firstPage: SectorOverviewPage;
 }
+
+/** Sector overview marks drawn on the mass plot at most, over all curves. */
+const maxCurveMarks = 240;
 
 /** The stored result of a revision, parsed and upgraded to the running engine's shape. */
 export async function getResultForRevision(actor: Actor | null, revisionId: string): Promise<ResultDto> {
@@ -45,17 +68,59 @@ export async function getResultText(actor: Actor | null, configurationId: string
   return `${head.slice(0, -1)},"result":${text}}`;
 }
 
-/** The overview of a stored result (computed from the full result for rows stored without one). */
-export async function getResultOverview(actor: Actor | null, configurationId: string, revisionId: string): Promise<ResultOverviewDto> {
+/** The head of a stored result (see {@link ResultHeadDto}). */
+export async function getResultHead(actor: Actor | null, configurationId: string, revisionId: string): Promise<ResultHeadDto> {
   const meta = await locateResult(actor, revisionId, configurationId);
-  const { resultId, ...dto } = meta;
+  const overview = await loadOverview(meta);
+  const { sectors, ...result } = overview;
+  let marks = 0;
+  const massCurves = curvesOf(sectors.filter((sector) => sector.pair[0] !== sector.pair[1])).map((curve) => {
+    const kept = curve.sectors.slice(0, Math.max(0, maxCurveMarks - marks));
+    marks += kept.length;
+    return { ...curve, sectors: kept };
+  });
+  return {
+    revisionId: meta.revisionId,
+    engineVersion: meta.engineVersion,
+    computeMs: meta.computeMs,
+    createdAt: meta.createdAt,
+    result,
+    facts: summaryFacts(overview),
+    massCurves,
+    // Every row carries a mass in GeV exactly when the configuration sets a string scale.
+    showGeV: overview.lightest.some((state) => "massGeV" in state) || sectors.some((sector) => sector.lightest?.massGeV !== undefined),
+    firstPage: pageSectorOverviews(sectors, { limit: firstPageSectors }),
+  };
+}
+
+/** Options of {@link getResultSectorPage}. */
+export type ResultSectorPageQuery = Omit<SectorPageQuery, "labels">;
+
+/** One page of a stored result's sector overviews that match a filter; the search matches stack ids and labels. */
+export async function getResultSectorPage(
+  actor: Actor | null,
+  configurationId: string,
+  revisionId: string,
+  query: ResultSectorPageQuery,
+): Promise<SectorOverviewPage> {
+  const meta = await locateResult(actor, revisionId, configurationId);
+  const [overview, [revision]] = await Promise.all([
+    loadOverview(meta),
+    db.select({ stacks: sql<Array<{ id: string; label?: string }>>`${revisions.document} -> 'stacks'` }).from(revisions).where(eq(revisions.id, revisionId)),
+  ]);
+  const labels = new Map((revision?.stacks ?? []).map((stack) => [stack.id, stack.label ?? ""]));
+  return pageSectorOverviews(overview.sectors, { ...query, labels });
+}
+
+/** The stored overview when the running engine stored it, else one built from the upgraded full result. */
+async function loadOverview(meta: { resultId: string; engineVersion: string }): Promise<ResultOverview> {
   if (meta.engineVersion === ENGINE_VERSION) {
-    const [row] = await db.select({ overview: results.overview }).from(results).where(eq(results.id, resultId));
-    if (row?.overview) return { ...dto, overview: row.overview };
+    const [row] = await db.select({ overview: results.overview }).from(results).where(eq(results.id, meta.resultId));
+    if (row?.overview) return row.overview;
   }
-  const [row] = await db.select({ result: results.result }).from(results).where(eq(results.id, resultId));
+  const [row] = await db.select({ result: results.result }).from(results).where(eq(results.id, meta.resultId));
   if (!row) throw new NotFoundError("This revision has no stored result yet.");
-  return { ...dto, overview: resultOverview(readStoredResult(row.result)) };
+  return resultOverview(readStoredResult(row.result));
 }
 
 /** One sector of a stored result, with its level rows, expansions, massless content and notes. */

@@ -9,7 +9,16 @@ export { compareResultNumbers, parseExactRational, parseResultNumber } from "./r
 export { compareStateCounts, isSurviving, log10OfStateCount } from "./state-count";
 export { pairKey } from "./pair-key";
 export { lightestBySector, lightestLevel, type SectorLightest } from "./lightest";
-export { isTachyonicState, tachyonicSectors, type TachyonicSector } from "./tachyons";
-export { summarizeResult, type ResultSummary } from "./summary";
+export { isTachyonicState, tachyonicSectors, type TachyonicSector, type TachyonSource } from "./tachyons";
+export { summarizeResult, summaryFacts, type ResultSummary, type SummaryFacts } from "./summary";
 export { displaySignificantDigits, formatMassSquared, formatNumber, formatPair, type FormatNumberOptions } from "./format";
-export { resultOverview, sectorOverview, type ResultOverview, type SectorOverview, type SectorDetailField } from "./overview";
+export {
+  pageSectorOverviews,
+  resultOverview,
+  sectorOverview,
+  type ResultOverview,
+  type SectorDetailField,
+  type SectorOverview,
+  type SectorOverviewPage,
+  type SectorPageQuery,
+} from "./overview";

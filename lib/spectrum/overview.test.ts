@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { computeSpectrum } from "@/lib/boundary";
 import { braneAntibranePair, landingDemoConfiguration } from "@/lib/demo-configurations";
-import { resultOverview } from "./overview";
+import { pageSectorOverviews, resultOverview } from "./overview";
 
 describe("resultOverview", () => {
   it("keeps every header field and drops only the detail, which together rebuild each sector", () => {
@@ -30,5 +30,28 @@ describe("resultOverview", () => {
     expect(pair?.lightest?.sector).toBe("NS");
     expect(pair?.lightest?.level).toBe("0");
     expect(Number(pair?.lightest?.massSquared)).toBeCloseTo((1.5 / (2 * Math.PI)) ** 2 - 0.5, 10);
+  });
+});
+
+describe("pageSectorOverviews", () => {
+  const overview = resultOverview(computeSpectrum(landingDemoConfiguration));
+
+  it("pages the sectors in result order and counts every match", () => {
+    const first = pageSectorOverviews(overview.sectors, { limit: 2 });
+    const second = pageSectorOverviews(overview.sectors, { offset: 2, limit: 2 });
+    expect(first.total).toBe(overview.sectors.length);
+    expect([...first.items, ...second.items]).toEqual(overview.sectors.slice(0, 4));
+    expect(pageSectorOverviews(overview.sectors, { offset: 999 }).items).toEqual([]);
+  });
+
+  it("matches a stack's id or label, case-insensitively, and keeps only tachyonic sectors when asked", () => {
+    const [first] = landingDemoConfiguration.stacks;
+    const labels = new Map(landingDemoConfiguration.stacks.map((stack) => [stack.id, stack.label]));
+    const byLabel = pageSectorOverviews(overview.sectors, { search: (first?.label ?? "").toUpperCase(), labels });
+    expect(byLabel.total).toBe(landingDemoConfiguration.stacks.length);
+    expect(byLabel.items.every((sector) => sector.pair.includes(first?.id ?? ""))).toBe(true);
+    const tachyonic = pageSectorOverviews(overview.sectors, { tachyonicOnly: true });
+    expect(tachyonic.items.every((sector) => sector.tachyonic)).toBe(true);
+    expect(tachyonic.total).toBe(overview.sectors.filter((sector) => sector.tachyonic).length);
   });
 });

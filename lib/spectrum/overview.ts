@@ -61,3 +61,45 @@ export function sectorOverview(sector: Sector, index: number): SectorOverview {
     noteCount: notes.length,
   };
 }
+
+/** Options of {@link pageSectorOverviews}. */
+export interface SectorPageQuery {
+  /** Index of the first matching sector to return (default 0). */
+  offset?: number;
+  /** How many matching sectors to return at most (default 100). */
+  limit?: number;
+  /** Keep sectors one of whose stacks' id or label contains this text (case-insensitive). */
+  search?: string;
+  /** Keep only tachyonic sectors. */
+  tachyonicOnly?: boolean;
+  /** Stack labels by id, so that the search matches labels too. */
+  labels?: ReadonlyMap<string, string>;
+}
+
+/** One page of the sectors that match a filter. */
+export interface SectorOverviewPage {
+  items: SectorOverview[];
+  /** How many sectors match the filter in all. */
+  total: number;
+  offset: number;
+}
+
+/**
+ * One page of the overview sectors that match a filter, in result order.
+ *
+ * @param sectors - The overview's sectors.
+ * @param query - Offset, page size, search text, tachyonic-only flag and stack labels.
+ * @returns The page, the number of matches and the offset used.
+ * @example
+ * pageSectorOverviews(overview.sectors, { search: "probe", limit: 20 }).total // => sectors of stacks named like "probe"
+ */
+export function pageSectorOverviews(sectors: readonly SectorOverview[], query: SectorPageQuery = {}): SectorOverviewPage {
+  const needle = query.search?.trim().toLowerCase() ?? "";
+  const matchesStack = (id: string) => id.toLowerCase().includes(needle) || (query.labels?.get(id)?.toLowerCase().includes(needle) ?? false);
+  const matching = sectors.filter(
+    (sector) => (!query.tachyonicOnly || sector.tachyonic) && (needle === "" || sector.pair.some(matchesStack)),
+  );
+  const offset = Math.min(Math.max(0, Math.floor(query.offset ?? 0)), matching.length);
+  const limit = Math.max(1, Math.floor(query.limit ?? 100));
+  return { items: matching.slice(offset, offset + limit), total: matching.length, offset };
+}

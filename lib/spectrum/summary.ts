@@ -4,8 +4,9 @@
  *
  * Invalid-input policy: an unreadable lightest alpha' M^2 is stored as null; nothing throws.
  */
-import type { Configuration, SpectrumResult } from "@/lib/boundary/types";
+import type { Configuration, LightestState, SpectrumResult } from "@/lib/boundary/types";
 import { parseResultNumber } from "./result-number";
+import { tachyonicSectors, type TachyonicSector, type TachyonSource } from "./tachyons";
 
 /** The summary columns of a configuration's current result. */
 export interface ResultSummary {
@@ -43,5 +44,45 @@ export function summarizeResult(
     // even in a stored result whose flags say otherwise.
     tachyonic: result.sectors.some((sector) => sector.tachyonic) || (lightestMassSquared !== null && lightestMassSquared < 0),
     supercharges: result.supercharges,
+  };
+}
+
+/** Tachyonic sectors listed in a summary at most; `tachyonCount` says how many there are. */
+const listedTachyons = 50;
+
+/** What the one summary component shows of a result. */
+export interface SummaryFacts {
+  supercharges: number | null;
+  bps: boolean;
+  gaugeGroup: string;
+  /** The lightest state over all sectors, or null when none survives. */
+  lightest: LightestState | null;
+  /** The first tachyonic sectors, in result order. */
+  tachyons: TachyonicSector[];
+  /** How many sectors are tachyonic in all. */
+  tachyonCount: number;
+  sectorCount: number;
+}
+
+/**
+ * The facts of the summary component, from a full result or an overview (lib/spectrum/overview.ts).
+ *
+ * @param result - Supercharges, BPS flag, gauge group, lightest states and sectors are read.
+ * @returns The facts, with at most fifty tachyonic sectors listed (and their total count).
+ * @example
+ * summaryFacts(result).tachyonCount // => 1 for a D4-antiD4 pair below y_c
+ */
+export function summaryFacts(
+  result: Pick<SpectrumResult, "supercharges" | "bps" | "gaugeGroup" | "lightest"> & { sectors: readonly TachyonSource[] },
+): SummaryFacts {
+  const tachyons = tachyonicSectors(result);
+  return {
+    supercharges: result.supercharges,
+    bps: result.bps,
+    gaugeGroup: result.gaugeGroup,
+    lightest: result.lightest[0] ?? null,
+    tachyons: tachyons.slice(0, listedTachyons),
+    tachyonCount: tachyons.length,
+    sectorCount: result.sectors.length,
   };
 }

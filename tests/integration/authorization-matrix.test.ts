@@ -332,6 +332,17 @@ const matrix: Record<string, RouteEntry> = {
       },
     },
   },
+  "configurations/[configurationId]/revisions/[revisionId]/result/sectors/route.ts": {
+    methods: {
+      GET: {
+        request: (w) => ({
+          request: json("GET", `${configurationPath(w)}/revisions/${w.revisionId}/result/sectors?limit=5`),
+          params: { configurationId: w.configurationId, revisionId: w.revisionId },
+        }),
+        expect: membersRead,
+      },
+    },
+  },
   "configurations/[configurationId]/revisions/[revisionId]/result/sectors/[sectorIndex]/route.ts": {
     methods: {
       GET: {

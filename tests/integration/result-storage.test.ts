@@ -4,7 +4,7 @@ import { db } from "@/db/index";
 import type { Actor } from "@/db/queries/actor";
 import { createConfiguration, updateConfiguration } from "@/db/queries/configurations";
 import { forkConfiguration } from "@/db/queries/forks";
-import { getResultOverview, getResultSector, getResultText } from "@/db/queries/result-reads";
+import { getResultHead, getResultSector, getResultSectorPage, getResultText } from "@/db/queries/result-reads";
 import { hashDocument } from "@/db/queries/results";
 import { restoreRevision } from "@/db/queries/revisions";
 import { results } from "@/db/schema";
@@ -12,7 +12,7 @@ import { computeSpectrum, ENGINE_VERSION } from "@/lib/boundary";
 import type { Configuration } from "@/lib/boundary/types";
 import { braneAntibranePair } from "@/lib/demo-configurations";
 import { NotFoundError } from "@/lib/errors";
-import { resultOverview } from "@/lib/spectrum";
+import { resultOverview, summaryFacts } from "@/lib/spectrum";
 import { createRoleGroup } from "@/tests/fixtures/users";
 
 // Counts the computations the DAL asks for, passing each on to the real pool.
@@ -101,16 +101,35 @@ describe("reading stored results", () => {
     expect(body.result).toEqual(computeSpectrum(document));
   });
 
-  it("reads the overview and then one sector at a time", async () => {
+  it("reads the head, then pages of sector overviews, then one sector at a time", async () => {
     const { owner, outsider, configuration, document, revisionId } = await saved();
     const full = computeSpectrum(document);
-    const { overview } = await getResultOverview(owner.actor, configuration.id, revisionId);
-    expect(overview).toEqual(resultOverview(full));
+    const overview = resultOverview(full);
+    const head = await getResultHead(owner.actor, configuration.id, revisionId);
+    expect(head.firstPage).toEqual({ items: overview.sectors, total: overview.sectors.length, offset: 0 });
+    expect(head.facts).toEqual(summaryFacts(full));
+    expect(head.result.lightest).toEqual(full.lightest);
+    expect(head.massCurves.map((curve) => curve.interceptText)).toEqual(["-1/2"]);
     for (const sector of overview.sectors) {
       expect(await getResultSector(owner.actor, configuration.id, revisionId, sector.index)).toEqual(full.sectors[sector.index]);
     }
     await expect(getResultSector(owner.actor, configuration.id, revisionId, overview.sectors.length)).rejects.toBeInstanceOf(NotFoundError);
-    await expect(getResultOverview(outsider.actor, configuration.id, revisionId)).rejects.toBeInstanceOf(NotFoundError);
+    await expect(getResultHead(outsider.actor, configuration.id, revisionId)).rejects.toBeInstanceOf(NotFoundError);
+  });
+
+  it("filters the sector pages by stack id or label and by tachyons, on the server", async () => {
+    const { owner, configuration, document, revisionId } = await saved();
+    const antiLabel = document.stacks.find((stack) => stack.id === "anti")?.label ?? "";
+    const byLabel = await getResultSectorPage(owner.actor, configuration.id, revisionId, { search: antiLabel.slice(-12) });
+    expect(byLabel.items.map((sector) => sector.pair)).toEqual([
+      ["anti", "anti"],
+      ["anti", "brane"],
+    ]);
+    const tachyonic = await getResultSectorPage(owner.actor, configuration.id, revisionId, { tachyonicOnly: true });
+    expect(tachyonic.items.map((sector) => sector.pair)).toEqual([["anti", "brane"]]);
+    const paged = await getResultSectorPage(owner.actor, configuration.id, revisionId, { offset: 1, limit: 1 });
+    expect(paged).toMatchObject({ total: 3, offset: 1 });
+    expect(paged.items).toHaveLength(1);
   });
 
   it("upgrades a result stored by an older engine without an overview", async () => {
@@ -119,9 +138,9 @@ describe("reading stored results", () => {
       .update(results)
       .set({ engineVersion: "1.0.0", overview: null, contentHash: null, result: sql`jsonb_set(${results.result} #- '{conventions}', '{engineVersion}', '"1.0.0"')` })
       .where(eq(results.revisionId, revisionId));
-    const { overview, engineVersion } = await getResultOverview(owner.actor, configuration.id, revisionId);
-    expect(engineVersion).toBe("1.0.0");
-    expect(overview.sectors).toHaveLength(computeSpectrum(document).sectors.length);
+    const head = await getResultHead(owner.actor, configuration.id, revisionId);
+    expect(head.engineVersion).toBe("1.0.0");
+    expect(head.firstPage.total).toBe(computeSpectrum(document).sectors.length);
     const text = JSON.parse(await getResultText(owner.actor, configuration.id, revisionId)) as { result: { conventions: string } };
     // readStoredResult fills what the older engine did not store.
     expect(typeof text.result.conventions).toBe("string");
