@@ -9,6 +9,7 @@ import { clearDraft, readDraft, writeDraft } from "@/lib/designer/draft-storage"
 import { configurationQueries, useDeleteConfiguration, useForkConfiguration, useUpdateConfiguration, type ConfigurationJson } from "@/lib/client/configurations";
 import { ApiError, apiFetch } from "@/lib/client/api-client";
 import { selectDocument, useDesignerStore } from "@/lib/client/designer-store";
+import { configurationTitleMaxLength } from "@/lib/validations/configuration";
 import { Alert } from "@/components/ui/alert";
 import { Badge } from "@/components/ui/badge";
 import { Button, ButtonLink } from "@/components/ui/button";
@@ -190,7 +191,7 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
             id="configuration-title"
             value={document.title}
             readOnly={!canEdit}
-            maxLength={120}
+            maxLength={configurationTitleMaxLength}
             onChange={(event) => edit((doc) => setTitle(doc, event.target.value), { gesture: "title" })}
             className="-ml-1 w-full rounded px-1 text-xl font-semibold tracking-tight hover:bg-surface-muted focus:bg-surface focus-visible:outline-2 focus-visible:outline-ring"
           />

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { configurationSchema } from "./configuration";
+import { configurationSchema, configurationTitleMaxLength } from "./configuration";
 
 /** Largest request body accepted by the configuration routes, in bytes. */
 export const configurationBodyLimitBytes = 256 * 1024;
@@ -43,13 +43,13 @@ export type UpdateConfigurationBody = z.infer<typeof updateConfigurationBodySche
 /** The dashboard's `?deleted=<id>&title=<title>` after a delete, which offers an undo. */
 export const deletedNoticeSchema = z.object({
   deleted: uuid,
-  title: z.string().max(200).catch(""),
+  title: z.string().max(configurationTitleMaxLength).catch(""),
 });
 
 export const forkConfigurationBodySchema = z.object({
   targetGroupId: uuid,
   revisionId: uuid.optional(),
-  title: z.string().trim().min(1).max(120).optional(),
+  title: z.string().trim().min(1).max(configurationTitleMaxLength).optional(),
 });
 export type ForkConfigurationBody = z.infer<typeof forkConfigurationBodySchema>;
 

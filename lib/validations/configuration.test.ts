@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { configurationSchema, formatIssues, formatJsonPath, spectrumRequestSchema } from "./configuration";
+import { configurationSchema, configurationTitleMaxLength, formatIssues, formatJsonPath, spectrumRequestSchema } from "./configuration";
 
 const valid = {
   format: 1,
@@ -43,6 +43,14 @@ describe("configurationSchema", () => {
     expect(issuesOf({ ...valid, title: "  " }).map((issue) => issue.path)).toEqual(["title"]);
     const badColour = { ...valid, stacks: [{ ...valid.stacks[0], colour: "red" }] };
     expect(issuesOf(badColour).map((issue) => issue.path)).toEqual(["stacks[0].colour"]);
+  });
+
+  it("takes a title up to configurationTitleMaxLength characters after trimming", () => {
+    const longest = "t".repeat(configurationTitleMaxLength);
+    expect(issuesOf({ ...valid, title: `  ${longest}  ` })).toEqual([]);
+    expect(issuesOf({ ...valid, title: `${longest}t` })).toEqual([
+      { path: "title", message: `Use at most ${configurationTitleMaxLength} characters.` },
+    ]);
   });
 
   it("uses the same rules for the spectrum request body", () => {

@@ -9,6 +9,12 @@ import type { Configuration, Stack } from "@/lib/boundary/types";
  * issues at their JSON paths so that there is one source of truth for them.
  */
 
+/**
+ * The longest configuration title, in characters after trimming. The one limit for the document
+ * schema, the API bodies that carry a title, the forms and the data-access layer.
+ */
+export const configurationTitleMaxLength = 200;
+
 const stackSchema = z.object({
   id: z.string({ error: "A stack id must be text." }),
   label: z.string({ error: "A label must be text." }).max(120, "Keep the label under 120 characters.").default(""),
@@ -34,7 +40,7 @@ const configurationShape = z.object({
     .string({ error: "The title must be text." })
     .trim()
     .min(1, "Give the configuration a title.")
-    .max(200, "Keep the title under 200 characters."),
+    .max(configurationTitleMaxLength, `Use at most ${configurationTitleMaxLength} characters.`),
   description: z.string().max(5000, "Keep the description under 5000 characters.").optional(),
   theory: z.enum(["bosonic", "IIA", "IIB"], { error: 'The theory must be "bosonic", "IIA" or "IIB".' }),
   dimension: z.number({ error: "The dimension must be a number." }).optional(),
