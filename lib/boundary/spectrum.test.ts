@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { ConfigurationError } from "./check";
+import { ConfigurationError, checkConfiguration } from "./check";
 import { parseRational, rationalToNumber } from "./rational";
-import { computeSpectrum } from "./spectrum";
+import { computeSpectrum, tryComputeSpectrum } from "./spectrum";
 import type { Configuration, Sector, Stack } from "./types";
 
 const axes = (from: number, to: number): number[] => Array.from({ length: to - from + 1 }, (_, i) => from + i);
@@ -323,5 +323,26 @@ describe("computeSpectrum", () => {
       expect(sector?.levels.map((row) => row.sector)).toEqual(["R"]);
       expect(sector?.massless.map((content) => content.sector)).toEqual(["NS", "R"]);
     });
+  });
+});
+
+describe("tryComputeSpectrum", () => {
+  it("returns the result computeSpectrum gives for a valid configuration, with no problems", () => {
+    const valid = config("IIA", [stack("a", axes(1, 4)), stack("b", axes(1, 4), { anti: true, position: { "9": 2 } })]);
+    const attempt = tryComputeSpectrum(valid);
+    expect(attempt.problems).toEqual([]);
+    expect(attempt.result).toEqual(computeSpectrum(valid));
+  });
+
+  it("returns every problem checkConfiguration finds instead of throwing, and no result", () => {
+    const bad = config("IIA", [stack("a", [1]), stack("a", [1, 2])], { levels: 500 });
+    const attempt = tryComputeSpectrum(bad);
+    expect(attempt.result).toBeNull();
+    expect(attempt.problems).toEqual(checkConfiguration(bad));
+    expect(attempt.problems.length).toBeGreaterThan(1);
+  });
+
+  it("still throws a RangeError for an invalid lightestCount", () => {
+    expect(() => tryComputeSpectrum(config("IIB", []), { lightestCount: 1.5 })).toThrow(RangeError);
   });
 });

@@ -34,7 +34,12 @@ const stackSchema = z.object({
     .optional(),
 }) satisfies z.ZodType<Stack>;
 
-const configurationShape = z.object({
+/**
+ * The document's shape alone: types, text lengths and the file format, without the engine's
+ * problems. For a caller that runs `checkConfiguration` itself (the designer's live preview checks
+ * and computes in one engine pass); everything else uses {@link configurationSchema}.
+ */
+export const configurationShapeSchema = z.object({
   format: z.literal(1, { error: "Only file format 1 is known." }),
   title: z
     .string({ error: "The title must be text." })
@@ -57,7 +62,7 @@ const configurationShape = z.object({
  * @example
  * configurationSchema.safeParse(document).success
  */
-export const configurationSchema = configurationShape.superRefine((configuration, context) => {
+export const configurationSchema = configurationShapeSchema.superRefine((configuration, context) => {
   for (const problem of checkConfiguration(configuration)) {
     context.addIssue({ code: "custom", path: problem.path, message: problem.message });
   }
