@@ -4,7 +4,6 @@ import { useQuery, useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useState } from "react";
-import { setTitle } from "@/lib/designer/document";
 import { clearDraft, readDraft, writeDraft } from "@/lib/designer/draft-storage";
 import { configurationQueries, useDeleteConfiguration, useForkConfiguration, useUpdateConfiguration, type ConfigurationJson } from "@/lib/client/configurations";
 import { ApiError, apiFetch } from "@/lib/client/api-client";
@@ -45,7 +44,7 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
   const document = useDesignerStore(selectDocument);
   const dirty = useDesignerStore((s) => s.dirty);
   const baseVersion = useDesignerStore((s) => s.baseVersion);
-  const { load, markSaved, edit } = useDesignerStore.getState();
+  const { load, markSaved, setTitle } = useDesignerStore.getState();
 
   const [recoveredAt, setRecoveredAt] = useState<number | null>(null);
   const [saveOpen, setSaveOpen] = useState(false);
@@ -192,7 +191,7 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
             value={document.title}
             readOnly={!canEdit}
             maxLength={configurationTitleMaxLength}
-            onChange={(event) => edit((doc) => setTitle(doc, event.target.value), { gesture: "title" })}
+            onChange={(event) => setTitle(event.target.value)}
             className="-ml-1 w-full rounded px-1 text-xl font-semibold tracking-tight hover:bg-surface-muted focus:bg-surface focus-visible:outline-2 focus-visible:outline-ring"
           />
         </div>
