@@ -30,7 +30,8 @@ function sector(pair: [string, string], separation: number, rows: Array<[string,
 
 describe("massCurves", () => {
   it("recovers N + a from alpha' M^2 at the separation and finds the tachyon crossing", () => {
-    // Brane-antibrane NS ground state: N + a = -1/2, y_c = pi sqrt(2) ~ 4.443 (physics.md, from memory).
+    // Brane-antibrane NS ground state: N + a = -1/2, y_c = pi sqrt(2) ~ 4.443 (Banks and Susskind 1995,
+    // hep-th/9511194, from memory).
     const y = 2;
     const massSquared = String((y / (2 * Math.PI)) ** 2 - 0.5);
     const [curve] = massCurves([sector(["a", "b"], y, [["0", massSquared, "2", "NS"]])]);

@@ -107,6 +107,8 @@ test.describe("designer", () => {
     await page.getByRole("button", { name: "Stack s2 is an antibrane" }).click();
     await page.getByLabel("Position of stack s2 on x9").fill("1");
     await expect(page.getByTestId("stack-kind-s2")).toHaveText("anti-D4");
+    // U(N) per separated stack; an anti-D4 one unit from a D4 is inside y_c = pi sqrt(2), so tachyonic
+    // (common practice; Banks and Susskind 1995, hep-th/9511194, from memory).
     await expect(page.getByTestId("preview-gauge-group")).toHaveText("U(2) x U(1) x U(1)");
     await expect(page.getByTestId("preview-stability")).toContainText("tachyonic sector");
     await expect(page.getByTestId("preview-tachyons")).toContainText("a\u2013s2");
