@@ -11,7 +11,7 @@ const theory = z.enum(["bosonic", "IIA", "IIB"]);
 export const listConfigurationsQuerySchema = z.object({
   groupId: uuid.optional(),
   scope: z.enum(["accessible", "created"]).default("accessible"),
-  search: z.string().trim().max(120).optional(),
+  search: z.string().trim().max(configurationTitleMaxLength).optional(),
   theory: theory.optional(),
   starter: z.enum(["true", "false"]).transform((value) => value === "true").optional(),
   sort: z.enum(["updated", "created", "title", "lightest", "stacks"]).default("updated"),
