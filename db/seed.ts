@@ -1,5 +1,4 @@
 import { eq, sql } from "drizzle-orm";
-import { computeSpectrum } from "../lib/boundary/index";
 import type { Configuration } from "../lib/boundary/types";
 import {
   bosonicTwentyFiveWithTwentyThree,
@@ -13,12 +12,9 @@ import {
 } from "../lib/demo-configurations";
 import { closeDatabase, db } from "./index";
 import type { Actor } from "./queries/actor";
-import {
-  createConfiguration,
-  forkConfiguration,
-  updateConfiguration,
-  type ConfigurationDto,
-} from "./queries/configurations";
+import type { ConfigurationDto } from "./queries/configuration-dtos";
+import { createConfiguration, updateConfiguration } from "./queries/configurations";
+import { forkConfiguration } from "./queries/forks";
 import { createGroup, getPersonalGroup } from "./queries/groups";
 import { createUser } from "./queries/users";
 import * as schema from "./schema";
@@ -171,8 +167,7 @@ async function create(
   message: string,
   options: { isStarter?: boolean } = {},
 ): Promise<ConfigurationDto> {
-  const { result, computeMs } = compute(document);
-  return createConfiguration(actor, groupId, document, message, result, computeMs, options);
+  return createConfiguration(actor, groupId, document, message, options);
 }
 
 async function save(
@@ -181,20 +176,7 @@ async function save(
   document: Configuration,
   message: string,
 ): Promise<ConfigurationDto> {
-  const { result, computeMs } = compute(document);
-  return updateConfiguration(actor, configuration.id, {
-    expectedVersion: configuration.version,
-    document,
-    message,
-    result,
-    computeMs,
-  });
-}
-
-function compute(document: Configuration) {
-  const started = performance.now();
-  const result = computeSpectrum(document);
-  return { result, computeMs: performance.now() - started };
+  return updateConfiguration(actor, configuration.id, { expectedVersion: configuration.version, document, message });
 }
 
 function flipToAntibrane(document: Configuration, stackId: string): Configuration {

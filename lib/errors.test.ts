@@ -2,6 +2,7 @@ import { describe, expect, it, vi } from "vitest";
 import { z } from "zod";
 import {
   ConflictError,
+  formatJsonPath,
   ForbiddenError,
   NotFoundError,
   RateLimitError,
@@ -66,5 +67,14 @@ describe("toErrorResponse", () => {
     expect(log).toHaveBeenCalledTimes(1);
     expect(((await response.json()) as { message: string }).message).not.toContain("boom");
     log.mockRestore();
+  });
+});
+
+describe("formatJsonPath", () => {
+  it("writes indices in brackets and non-identifier keys quoted", () => {
+    expect(formatJsonPath(["stacks", 1, "worldvolume"])).toBe("stacks[1].worldvolume");
+    expect(formatJsonPath(["stacks", 0, "position", "9"])).toBe('stacks[0].position["9"]');
+    expect(formatJsonPath([])).toBe("");
+    expect(formatJsonPath([0])).toBe("[0]");
   });
 });

@@ -6,6 +6,23 @@ export interface FieldIssue {
   message: string;
 }
 
+/**
+ * Formats a path as JSON-path text: `["stacks", 0, "position", "9"]` -> `stacks[0].position["9"]`.
+ *
+ * @example
+ * formatJsonPath(["stacks", 1, "worldvolume"]) // => "stacks[1].worldvolume"
+ * formatJsonPath([])                           // => ""
+ */
+export function formatJsonPath(path: readonly PropertyKey[]): string {
+  let text = "";
+  for (const key of path) {
+    if (typeof key === "number") text += `[${key}]`;
+    else if (typeof key === "string" && /^[A-Za-z_$][\w$]*$/.test(key)) text += text ? `.${key}` : key;
+    else text += `[${JSON.stringify(String(key))}]`;
+  }
+  return text;
+}
+
 /** Base class of the errors the data-access layer throws on purpose; each maps to one HTTP status. */
 export abstract class DomainError extends Error {
   abstract readonly status: number;
@@ -90,8 +107,19 @@ export class ValidationError extends DomainError {
     );
   }
 
+  /** Each issue with its path as an array (for programs) and as JSON-path text (for people). */
   override toJSON() {
-    return { issues: this.issues };
+    return { issues: this.issues.map((issue) => ({ ...issue, jsonPath: formatJsonPath(issue.path) })) };
+  }
+}
+
+/** The request body is not well-formed JSON (or not UTF-8 text) (400). */
+export class InvalidJsonError extends DomainError {
+  readonly status = 400;
+  readonly code = "invalid_json";
+  constructor(message = "The request body is not valid JSON.") {
+    super(message);
+    this.name = "InvalidJsonError";
   }
 }
 

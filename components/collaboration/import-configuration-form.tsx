@@ -10,7 +10,7 @@ import { Input } from "@/components/ui/input";
 import { Select } from "@/components/ui/select";
 import { type ConfigurationJson } from "@/lib/client/configurations";
 import { ApiError, apiFetch } from "@/lib/client/api-client";
-import { formatJsonPath } from "@/lib/validations/configuration";
+import { formatJsonPath } from "@/lib/errors";
 import { importMaxBytes } from "@/lib/validations/import";
 
 export interface ImportConfigurationFormProps {

@@ -16,9 +16,3 @@ export function TachyonBadge({ tachyonic }: { tachyonic: boolean }) {
     <Badge variant="outline">stable</Badge>
   );
 }
-
-/** alpha' M^2 of the lightest state as stored for sorting (approximate; exact values are on the results page). */
-export function formatMassSquared(value: number | null): string {
-  if (value === null) return "—";
-  return Number.isInteger(value) ? String(value) : value.toPrecision(4).replace(/\.?0+$/, "");
-}

@@ -3,7 +3,7 @@
 import { useState } from "react";
 import type { Configuration, Stack } from "@/lib/boundary/types";
 import { maxStackCount, renameProblem, spatialAxes } from "@/lib/designer/document";
-import { stackKind } from "@/lib/designer/spectrum-summary";
+import { stackKind } from "@/lib/designer/stack-kind";
 import type { FieldIssue } from "@/lib/errors";
 import { selectDocument, useDesignerStore } from "@/lib/client/designer-store";
 import { cn } from "@/lib/utils";

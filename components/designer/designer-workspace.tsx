@@ -6,7 +6,7 @@ import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useState } from "react";
 import { clearDraft, readDraft, writeDraft } from "@/lib/designer/draft-storage";
 import { configurationQueries, useDeleteConfiguration, useForkConfiguration, useUpdateConfiguration, type ConfigurationJson } from "@/lib/client/configurations";
-import { ApiError, apiFetch } from "@/lib/client/api-client";
+import { ApiError } from "@/lib/client/api-client";
 import { selectDocument, useDesignerStore } from "@/lib/client/designer-store";
 import { configurationTitleMaxLength } from "@/lib/validations/configuration";
 import { Alert } from "@/components/ui/alert";
@@ -147,17 +147,10 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
       const current = configuration.currentRevision;
       // A draft forks from the revision it was based on, when that is the one loaded here.
       const revisionId = forkMode === "draft" && current?.number !== state.baseVersion ? undefined : current?.id;
-      const created = await fork.mutateAsync({ targetGroupId: input.targetGroupId, title: input.title, revisionId });
-      if (forkMode === "draft") {
-        // Keep the draft: save it as the fork's first change.
-        const draft = { ...state.history.present, title: input.title };
-        await apiFetch<ConfigurationJson>(`/api/configurations/${created.id}`, {
-          method: "PUT",
-          headers: { "content-type": "application/json", "if-match": `"${created.version}"` },
-          body: JSON.stringify({ document: draft, message: `Draft saved as a fork of version ${state.baseVersion ?? "?"}` }),
-        });
-        clearDraft(window.localStorage, id);
-      }
+      // A draft travels with the fork request, so the fork starts from it in one step.
+      const document = forkMode === "draft" ? state.history.present : undefined;
+      const created = await fork.mutateAsync({ targetGroupId: input.targetGroupId, title: input.title, revisionId, document });
+      if (document) clearDraft(window.localStorage, id);
       setForkMode(null);
       setConflictVersion(null);
       router.push(`/configurations/${created.id}`);

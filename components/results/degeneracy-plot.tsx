@@ -4,7 +4,7 @@ import { useMemo, useState } from "react";
 import { CartesianGrid, Legend, Line, LineChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import type { Sector } from "@/lib/boundary/types";
 import { degeneracyRows } from "@/lib/designer/plot-data";
-import { formatNumber } from "@/lib/designer/spectrum-summary";
+import { formatNumber, formatPair, pairKey } from "@/lib/spectrum";
 import { axisStyle, horizontalAxisLabel, tooltipContentStyle, verticalAxisLabel } from "./chart-style";
 
 export interface DegeneracyPlotProps {
@@ -34,8 +34,8 @@ export function DegeneracyPlot({ sectors }: DegeneracyPlotProps) {
           className="h-7 rounded border border-border-strong bg-surface px-1 font-mono"
         >
           {sectors.map((s, i) => (
-            <option key={s.pair.join("|")} value={i}>
-              {s.pair[0]}&ndash;{s.pair[1]}
+            <option key={pairKey(...s.pair)} value={i}>
+              {formatPair(s.pair)}
             </option>
           ))}
         </select>
@@ -52,12 +52,12 @@ export function DegeneracyPlot({ sectors }: DegeneracyPlotProps) {
               {...axisStyle}
             />
             <YAxis
-              tickFormatter={(v: number) => formatNumber(v, 3)}
+              tickFormatter={(v: number) => formatNumber(v, { significantDigits: 3 })}
               label={verticalAxisLabel("log\u2081\u2080 states")}
               {...axisStyle}
             />
             <Tooltip
-              formatter={(value) => (typeof value === "number" ? formatNumber(value, 4) : String(value))}
+              formatter={(value) => (typeof value === "number" ? formatNumber(value) : String(value))}
               labelFormatter={(value) => `N = ${String(value)}`}
               contentStyle={tooltipContentStyle}
             />

@@ -4,7 +4,7 @@ import { useMemo } from "react";
 import { CartesianGrid, Legend, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import type { Sector } from "@/lib/boundary/types";
 import { massCurvePoints, massCurves } from "@/lib/designer/plot-data";
-import { formatNumber } from "@/lib/designer/spectrum-summary";
+import { formatNumber } from "@/lib/spectrum";
 import { axisStyle, horizontalAxisLabel, tooltipContentStyle, verticalAxisLabel } from "./chart-style";
 
 export interface MassPlotProps {
@@ -35,18 +35,18 @@ export function MassPlot({ sectors }: MassPlotProps) {
               dataKey="y"
               type="number"
               domain={[0, yMax]}
-              tickFormatter={(v: number) => formatNumber(v, 3)}
+              tickFormatter={(v: number) => formatNumber(v, { significantDigits: 3 })}
               label={horizontalAxisLabel("separation y (\u221a\u03b1\u2032)")}
               {...axisStyle}
             />
             <YAxis
-              tickFormatter={(v: number) => formatNumber(v, 3)}
+              tickFormatter={(v: number) => formatNumber(v, { significantDigits: 3 })}
               label={verticalAxisLabel("\u03b1\u2032M\u00b2")}
               {...axisStyle}
             />
             <Tooltip
-              formatter={(value) => (typeof value === "number" ? formatNumber(value, 4) : String(value))}
-              labelFormatter={(value) => `y = ${typeof value === "number" ? formatNumber(value, 4) : String(value)}`}
+              formatter={(value) => (typeof value === "number" ? formatNumber(value) : String(value))}
+              labelFormatter={(value) => `y = ${typeof value === "number" ? formatNumber(value) : String(value)}`}
               contentStyle={tooltipContentStyle}
             />
             <Legend verticalAlign="top" height={24} wrapperStyle={{ fontSize: 12 }} />
@@ -73,7 +73,7 @@ export function MassPlot({ sectors }: MassPlotProps) {
                   r={5}
                   fill="var(--danger)"
                   stroke="var(--surface)"
-                  label={{ value: `y_c = ${formatNumber(curve.crossing, 4)}`, position: "top", fontSize: 11, fill: "var(--danger)" }}
+                  label={{ value: `y_c = ${formatNumber(curve.crossing)}`, position: "top", fontSize: 11, fill: "var(--danger)" }}
                   ifOverflow="extendDomain"
                 />
               ) : null,
@@ -97,7 +97,7 @@ export function MassPlot({ sectors }: MassPlotProps) {
         red dots mark tachyon crossings y<sub>c</sub> = 2&pi;&radic;(&minus;(N + a)), beyond which the state is massive.
         {curves
           .filter((c) => c.crossing !== null)
-          .map((c) => ` ${c.label}: y_c = ${formatNumber(c.crossing, 4)}.`)
+          .map((c) => ` ${c.label}: y_c = ${formatNumber(c.crossing)}.`)
           .join("")}
       </figcaption>
     </figure>

@@ -5,7 +5,7 @@ import dynamic from "next/dynamic";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import type { Sector, SectorKind } from "@/lib/boundary/types";
-import { formatMassSquared, formatNumber, parseRational } from "@/lib/designer/spectrum-summary";
+import { formatMassSquared, formatNumber, formatPair, pairKey, parseResultNumber } from "@/lib/spectrum";
 import { formatDateTime } from "@/lib/format-date";
 import {
   configurationQueries,
@@ -20,7 +20,9 @@ import { ExportMenu } from "@/components/configurations/export-menu";
 import { ConventionsNote } from "@/components/designer/conventions-note";
 import { ForkDialog, type WritableGroup } from "@/components/designer/fork-dialog";
 import { ForkedFromNote } from "@/components/designer/forked-from-note";
+import { LightestStatesTable } from "./lightest-states-table";
 import { SectorLevelsTable } from "./sector-levels-table";
+import { SpectrumSummary } from "./spectrum-summary";
 
 const ModeExpansions = dynamic(() => import("./mode-expansions").then((m) => m.ModeExpansions), {
   ssr: false,
@@ -58,7 +60,6 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
   const [forkOpen, setForkOpen] = useState(false);
   const fork = useForkConfiguration(configuration.id);
   const kinds: SectorKind[] = result.theory === "bosonic" ? ["bosonic"] : ["NS", "R"];
-  const tachyonic = result.sectors.filter((s) => s.tachyonic);
   const visibleSectors = result.sectors.filter(
     (s) => (!onlyTachyonic || s.tachyonic) && (search.trim() === "" || s.pair.join(" ").toLowerCase().includes(search.trim().toLowerCase())),
   );
@@ -77,7 +78,7 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
           <h1 className="text-2xl font-semibold tracking-tight">Results: {configuration.title}</h1>
           <p className="text-sm text-muted-foreground">
             Revision {revision.number} by {revision.author.name}, {formatDateTime(revision.createdAt)}
-            {revision.message ? ` \u2014 \u201c${revision.message}\u201d` : ""}. Engine {stored.engineVersion}, computed in {formatNumber(stored.computeMs, 3)} ms.
+            {revision.message ? ` \u2014 \u201c${revision.message}\u201d` : ""}. Engine {stored.engineVersion}, computed in {formatNumber(stored.computeMs)} ms.
           </p>
         </div>
         <div className="flex flex-wrap items-center gap-2">
@@ -107,42 +108,11 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
         </div>
       </header>
 
-      <section aria-labelledby="summary-title" className="grid gap-4 md:grid-cols-3">
+      <section aria-labelledby="summary-title">
         <h2 id="summary-title" className="sr-only">
           Summary
         </h2>
-        <div className="rounded-lg border border-border bg-surface p-4">
-          <h3 className="text-xs font-semibold tracking-wide text-muted-foreground uppercase">Supersymmetry</h3>
-          <p className="mt-1 text-lg font-semibold" data-testid="results-supercharges">
-            {result.supercharges === null ? "not applicable" : `${result.supercharges} supercharges`}
-          </p>
-          <p className="text-sm text-muted-foreground">
-            {result.supercharges === null
-              ? "The bosonic string has no spacetime supersymmetry."
-              : result.bps
-                ? "BPS: every pair of stacks is mutually supersymmetric."
-                : "Not BPS: some pairs break all supersymmetry between them."}
-          </p>
-        </div>
-        <div className="rounded-lg border border-border bg-surface p-4">
-          <h3 className="text-xs font-semibold tracking-wide text-muted-foreground uppercase">Stability</h3>
-          <p className="mt-1 text-lg font-semibold" data-testid="results-stability">
-            {tachyonic.length === 0 ? "No tachyons" : `${tachyonic.length} tachyonic sector${tachyonic.length > 1 ? "s" : ""}`}
-          </p>
-          <ul className="text-sm text-muted-foreground">
-            {tachyonic.map((s) => (
-              <li key={s.pair.join("|")}>
-                {s.pair[0]}&ndash;{s.pair[1]} at y = {formatNumber(s.separation)}
-                {s.criticalSeparation !== null ? `; stable beyond y_c = ${formatNumber(s.criticalSeparation)}` : ""}
-              </li>
-            ))}
-          </ul>
-        </div>
-        <div className="rounded-lg border border-border bg-surface p-4">
-          <h3 className="text-xs font-semibold tracking-wide text-muted-foreground uppercase">Gauge group</h3>
-          <p className="mt-1 font-mono text-lg font-semibold">{result.gaugeGroup || "none"}</p>
-          <p className="text-sm text-muted-foreground">{result.sectors.length} sectors</p>
-        </div>
+        <SpectrumSummary result={result} />
       </section>
 
       {result.warnings.length > 0 ? (
@@ -157,34 +127,7 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
         <h2 id="lightest-title" className="text-lg font-semibold">
           Lightest states
         </h2>
-        <div className="overflow-x-auto rounded-lg border border-border bg-surface">
-          <table className="w-full border-collapse text-sm" aria-labelledby="lightest-title" data-testid="lightest-table">
-            <thead className="bg-surface-muted/70 text-xs text-muted-foreground">
-              <tr>
-                {["Sector", "NS/R", "Level", "\u03b1\u2032M\u00b2", "M\u221a\u03b1\u2032", "States", "With Chan-Paton"].map((h, i) => (
-                  <th key={h} scope="col" className={i < 2 ? "px-3 py-1.5 text-left font-semibold" : "px-3 py-1.5 text-right font-semibold"}>
-                    {h}
-                  </th>
-                ))}
-              </tr>
-            </thead>
-            <tbody>
-              {result.lightest.map((row, i) => (
-                <tr key={`${row.pair.join("|")}-${row.sector}-${row.level}-${i}`} className="border-t border-border">
-                  <td className="px-3 py-1.5 font-mono">
-                    {row.pair[0]}&ndash;{row.pair[1]}
-                  </td>
-                  <td className="px-3 py-1.5">{row.sector}</td>
-                  <td className="px-3 py-1.5 text-right font-mono">{row.level}</td>
-                  <td className="px-3 py-1.5 text-right font-mono">{formatMassSquared(row.massSquared)}</td>
-                  <td className="px-3 py-1.5 text-right font-mono">{formatNumber(row.mass, 6)}</td>
-                  <td className="px-3 py-1.5 text-right font-mono">{row.states ?? "\u2014"}</td>
-                  <td className="px-3 py-1.5 text-right font-mono">{row.withChanPaton}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <LightestStatesTable states={result.lightest} label="Lightest states" data-testid="lightest-table" />
       </section>
 
       <section aria-labelledby="plots-title" className="grid gap-4">
@@ -250,9 +193,9 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
         </div>
         {visibleSectors.length === 0 ? <p className="text-sm text-muted-foreground">No sector matches the filters.</p> : null}
         {visibleSectors.map((sector) => {
-          const title = `${sector.pair[0]}\u2013${sector.pair[1]}`;
+          const title = formatPair(sector.pair);
           return (
-            <details key={sector.pair.join("|")} open={visibleSectors.length <= 6} className="rounded-lg border border-border bg-surface" data-testid={`sector-${sector.pair.join("-")}`}>
+            <details key={pairKey(...sector.pair)} open={visibleSectors.length <= 6} className="rounded-lg border border-border bg-surface" data-testid={`sector-${sector.pair.join("-")}`}>
               <summary className="flex cursor-pointer flex-wrap items-center gap-x-4 gap-y-1 px-4 py-2 text-sm">
                 <span className="font-mono font-semibold">{title}</span>
                 <span className="text-muted-foreground">
@@ -328,6 +271,6 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
 
 function highestLevel(sectors: Sector[]): number {
   let highest = 0;
-  for (const sector of sectors) for (const row of sector.levels) highest = Math.max(highest, parseRational(row.level));
+  for (const sector of sectors) for (const row of sector.levels) highest = Math.max(highest, parseResultNumber(row.level));
   return highest;
 }

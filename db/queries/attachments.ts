@@ -7,7 +7,7 @@ import { db } from "../index";
 import { attachments, users } from "../schema";
 import { assertUuid, requireActor, type Actor } from "./actor";
 import { recordAudit } from "./audit";
-import { requireConfigurationRole } from "./collab-access";
+import { requireConfigurationRole } from "./configuration-access";
 
 /**
  * Figures and notes attached to a configuration, stored in PostgreSQL. Editors and owners upload
@@ -64,7 +64,7 @@ export async function uploadAttachment(
     if (!row) throw new Error("Attachment insert returned no row.");
     await recordAudit(tx, {
       actorId: signedIn.id,
-      groupId: access.groupId,
+      groupId: access.row.groupId,
       action: "attachment.create",
       entityType: "attachment",
       entityId: row.id,
@@ -139,7 +139,7 @@ export async function deleteAttachment(actor: Actor | null, attachmentId: string
     await tx.update(attachments).set({ deletedAt: new Date() }).where(eq(attachments.id, attachmentId));
     await recordAudit(tx, {
       actorId: signedIn.id,
-      groupId: access.groupId,
+      groupId: access.row.groupId,
       action: "attachment.delete",
       entityType: "attachment",
       entityId: attachmentId,

@@ -6,7 +6,7 @@ import { db } from "../index";
 import { comments, revisions, users } from "../schema";
 import { assertUuid, requireActor, requireGroupRole, roleAtLeast, type Actor } from "./actor";
 import { recordAudit } from "./audit";
-import { requireConfigurationRole } from "./collab-access";
+import { requireConfigurationRole } from "./configuration-access";
 
 /**
  * Comments on a configuration. Policy: every member of the configuration's group may read and
@@ -63,7 +63,7 @@ export async function addComment(
   const signedIn = requireActor(actor);
   return db.transaction(async (tx) => {
     const access = await requireConfigurationRole(tx, signedIn, configurationId, "viewer");
-    const revisionId = input.revisionId ?? access.currentRevisionId;
+    const revisionId = input.revisionId ?? access.row.currentRevisionId;
     if (!revisionId) throw ValidationError.at(["revisionId"], "This configuration has no saved revision to comment on yet.");
     const [revision] = await tx
       .select({ id: revisions.id, number: revisions.number })
@@ -78,7 +78,7 @@ export async function addComment(
     if (!row) throw new Error("Comment insert returned no row.");
     await recordAudit(tx, {
       actorId: signedIn.id,
-      groupId: access.groupId,
+      groupId: access.row.groupId,
       action: "comment.create",
       entityType: "comment",
       entityId: row.id,
@@ -110,14 +110,14 @@ export async function deleteComment(actor: Actor | null, commentId: string): Pro
     if (!row) throw new NotFoundError("No such comment.");
     const access = await requireConfigurationRole(tx, signedIn, row.configurationId, "viewer");
     if (row.authorId !== signedIn.id) {
-      await requireGroupRole(tx, signedIn, access.groupId, "owner", "comment").catch(() => {
+      await requireGroupRole(tx, signedIn, access.row.groupId, "owner", "comment").catch(() => {
         throw new ForbiddenError("Only the author or a group owner can delete this comment.");
       });
     }
     await tx.update(comments).set({ deletedAt: new Date() }).where(eq(comments.id, commentId));
     await recordAudit(tx, {
       actorId: signedIn.id,
-      groupId: access.groupId,
+      groupId: access.row.groupId,
       action: "comment.delete",
       entityType: "comment",
       entityId: commentId,

@@ -7,7 +7,7 @@ import { db, type Executor } from "../index";
 import { groups, invitations, memberships, users, type GroupRole, type InvitationRow } from "../schema";
 import { assertUuid, requireActor, requireGroupRole, type Actor } from "./actor";
 import { recordAudit } from "./audit";
-import { CollaborationConflictError } from "./collab-access";
+import { CollaborationConflictError } from "./collaboration-errors";
 import { createUser } from "./users";
 
 /** How long an invitation link works, in days. */

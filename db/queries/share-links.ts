@@ -1,4 +1,5 @@
 import "server-only";
+import { readStoredResult } from "../../lib/validations/spectrum-result";
 import { and, desc, eq, isNull } from "drizzle-orm";
 import type { Configuration, SpectrumResult } from "../../lib/boundary/types";
 import { NotFoundError } from "../../lib/errors";
@@ -7,7 +8,7 @@ import { db } from "../index";
 import { configurations, groups, results, revisions, shareLinks, users } from "../schema";
 import { assertUuid, requireActor, type Actor } from "./actor";
 import { recordAudit } from "./audit";
-import { requireConfigurationRole } from "./collab-access";
+import { requireConfigurationRole } from "./configuration-access";
 
 /**
  * Read-only share links. Editors and owners create and revoke them; anyone holding the token may
@@ -48,7 +49,7 @@ export async function createShareLink(
     if (!row) throw new Error("Share link insert returned no row.");
     await recordAudit(tx, {
       actorId: signedIn.id,
-      groupId: access.groupId,
+      groupId: access.row.groupId,
       action: "share_link.create",
       entityType: "share_link",
       entityId: row.id,
@@ -90,7 +91,7 @@ export async function revokeShareLink(actor: Actor | null, shareLinkId: string):
       await tx.update(shareLinks).set({ revokedAt }).where(eq(shareLinks.id, shareLinkId));
       await recordAudit(tx, {
         actorId: signedIn.id,
-        groupId: access.groupId,
+        groupId: access.row.groupId,
         action: "share_link.revoke",
         entityType: "share_link",
         entityId: shareLinkId,
@@ -132,5 +133,5 @@ export async function getSharedConfiguration(token: string): Promise<SharedConfi
     )
     .limit(1);
   if (!row) throw new NotFoundError("This share link does not exist or was revoked.");
-  return { ...row, revisionNumber: row.revisionNumber ?? 1, result: row.result ?? null };
+  return { ...row, revisionNumber: row.revisionNumber ?? 1, result: row.result === null ? null : readStoredResult(row.result) };
 }

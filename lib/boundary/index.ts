@@ -20,6 +20,7 @@ export {
   checkConfiguration,
   configurationWarnings,
   configurationLimits,
+  configurationCost,
   dimensionOf,
   describeStack,
   ConfigurationError,
@@ -34,6 +35,7 @@ export {
 } from "./classify";
 export { expandAxis, expandPair, bosonModing, fermionModing } from "./expansion";
 export { formatDecimal } from "./format";
+export { resultInputKey } from "./result-key";
 export {
   ENGINE_VERSION,
   CONVENTIONS_TEXT,

@@ -3,14 +3,7 @@
  * The browser reads and writes configurations only through these.
  */
 import { queryOptions, useMutation, useQueryClient } from "@tanstack/react-query";
-import type {
-  ConfigurationDto,
-  ConfigurationPage,
-  ConfigurationSummaryDto,
-  ResultDto,
-  RevisionDto,
-  RevisionSummaryDto,
-} from "@/db/queries/configurations";
+import type { ConfigurationDto, ConfigurationPage, ConfigurationSummaryDto, ResultDto, RevisionDto, RevisionSummaryDto } from "@/db/queries/configuration-dtos";
 import type { Configuration } from "@/lib/boundary/types";
 import { apiFetch, type Jsonified } from "@/lib/client/api-client";
 import type { ListConfigurationsQuery } from "@/lib/validations/configuration-api";
@@ -109,7 +102,7 @@ export function useUpdateConfiguration(id: string) {
 export function useForkConfiguration(id: string) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (input: { targetGroupId: string; revisionId?: string; title?: string }) =>
+    mutationFn: (input: { targetGroupId: string; revisionId?: string; title?: string; document?: Configuration }) =>
       apiFetch<ConfigurationJson>(`/api/configurations/${id}/fork`, {
         method: "POST",
         headers: { "content-type": "application/json" },

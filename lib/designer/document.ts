@@ -24,8 +24,6 @@ export const maxStacks = configurationLimits.maxStacks;
 /** Palette offered for stack colours (CSS hex). */
 export const stackPalette = ["#2f6f9f", "#b5542c", "#3f8f5a", "#7a4fa3", "#a8832a", "#2a8a8a", "#9c3d63", "#56606b"];
 
-export { dimensionOf };
-
 /** Spatial axes 1..D-1. */
 export function spatialAxes(config: Pick<Configuration, "theory" | "dimension">): number[] {
   return Array.from({ length: dimensionOf(config) - 1 }, (_, i) => i + 1);

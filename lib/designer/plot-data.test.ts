@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import type { Sector } from "@/lib/boundary/types";
-import { degeneracyRows, log10OfDecimal, massCurvePoints, massCurves } from "./plot-data";
+import { degeneracyRows, massCurvePoints, massCurves } from "./plot-data";
 
 function sector(pair: [string, string], separation: number, rows: Array<[string, string, string, "NS" | "R" | "bosonic"]>): Sector {
   return {
@@ -53,20 +53,6 @@ describe("massCurvePoints", () => {
     expect(rows).toHaveLength(5);
     expect(rows[0]).toEqual({ y: 0, "a|b": -0.5 });
     expect(rows[4]!["a|b"]).toBeCloseTo((yMax / (2 * Math.PI)) ** 2 - 0.5, 12);
-  });
-});
-
-describe("log10OfDecimal", () => {
-  it("matches Math.log10 where doubles are exact and counts digits beyond 2^53", () => {
-    expect(log10OfDecimal("1000")).toBeCloseTo(3, 12);
-    expect(log10OfDecimal("176256")).toBeCloseTo(Math.log10(176256), 12);
-    // 10^40 has 41 digits.
-    expect(log10OfDecimal(`1${"0".repeat(40)}`)).toBeCloseTo(40, 12);
-  });
-
-  it("returns -Infinity for zero and NaN for non-digits", () => {
-    expect(log10OfDecimal("0")).toBe(Number.NEGATIVE_INFINITY);
-    expect(log10OfDecimal("12a")).toBeNaN();
   });
 });
 

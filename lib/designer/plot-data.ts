@@ -3,7 +3,7 @@
  * separation y, and log10 of the degeneracy against the level.
  */
 import type { Sector, SectorKind } from "@/lib/boundary/types";
-import { isSurviving, parseRational } from "./spectrum-summary";
+import { formatPair, isSurviving, lightestLevel, log10OfStateCount, pairKey, parseResultNumber } from "@/lib/spectrum";
 
 /** One sector's lightest-state curve alpha' M^2(y) = (y / 2 pi)^2 + (N + a). */
 export interface MassCurve {
@@ -25,16 +25,14 @@ export interface MassCurve {
 export function massCurves(sectors: readonly Sector[]): MassCurve[] {
   const curves: MassCurve[] = [];
   for (const sector of sectors) {
-    let lightest = Number.POSITIVE_INFINITY;
-    for (const row of sector.levels) {
-      if (isSurviving(row)) lightest = Math.min(lightest, parseRational(row.massSquared));
-    }
+    const row = lightestLevel(sector);
+    const lightest = row ? parseResultNumber(row.massSquared) : Number.NaN;
     if (!Number.isFinite(lightest)) continue;
     const stretch = (sector.separation / (2 * Math.PI)) ** 2;
     const intercept = lightest - stretch;
     curves.push({
-      key: `${sector.pair[0]}|${sector.pair[1]}`,
-      label: `${sector.pair[0]}\u2013${sector.pair[1]}`,
+      key: pairKey(...sector.pair),
+      label: formatPair(sector.pair),
       intercept,
       separation: sector.separation,
       crossing: intercept < 0 ? 2 * Math.PI * Math.sqrt(-intercept) : null,
@@ -70,18 +68,6 @@ export function massCurvePoints(curves: readonly MassCurve[], options: MassCurve
   return { yMax, rows };
 }
 
-/**
- * log10 of a non-negative decimal integer string, exact in its digit count and accurate to
- * about 15 significant digits; -Infinity for "0".
- */
-export function log10OfDecimal(value: string): number {
-  const digits = value.replace(/^0+/, "");
-  if (digits === "") return Number.NEGATIVE_INFINITY;
-  if (!/^\d+$/.test(digits)) return Number.NaN;
-  const head = Number(`0.${digits.slice(0, 17)}`);
-  return digits.length + Math.log10(head);
-}
-
 /** One point of the degeneracy plot: the level and log10 of the states per sector kind. */
 export type DegeneracyRow = { level: number } & Partial<Record<SectorKind, number>>;
 
@@ -93,9 +79,9 @@ export function degeneracyRows(sector: Pick<Sector, "levels">): DegeneracyRow[] 
   const byLevel = new Map<number, DegeneracyRow>();
   for (const row of sector.levels) {
     if (!isSurviving(row)) continue;
-    const level = parseRational(row.level);
+    const level = parseResultNumber(row.level);
     const entry = byLevel.get(level) ?? { level };
-    entry[row.sector] = log10OfDecimal(row.withChanPaton);
+    entry[row.sector] = log10OfStateCount(row.withChanPaton);
     byLevel.set(level, entry);
   }
   return [...byLevel.values()].sort((a, b) => a.level - b.level);

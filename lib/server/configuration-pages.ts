@@ -1,7 +1,8 @@
 import "server-only";
 import { notFound } from "next/navigation";
 import { roleAtLeast, type Actor } from "@/db/queries/actor";
-import { getConfiguration, type ConfigurationDto } from "@/db/queries/configurations";
+import { getConfiguration } from "@/db/queries/configurations";
+import { type ConfigurationDto } from "@/db/queries/configuration-dtos";
 import { listGroupsForUser } from "@/db/queries/groups";
 import { NotFoundError } from "@/lib/errors";
 

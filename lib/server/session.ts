@@ -1,5 +1,6 @@
 import "server-only";
 import { getServerSession } from "next-auth";
+import { cookies } from "next/headers";
 import { redirect } from "next/navigation";
 import { cache } from "react";
 import { getActorById, type Actor } from "@/db/queries/actor";
@@ -11,6 +12,8 @@ import { authOptions } from "@/lib/server/auth";
  * rights at once instead of when its session expires.
  */
 export const getCurrentUser = cache(async (): Promise<Actor | null> => {
+  // Callers without a session cookie (scripts, the landing page's compute requests) skip next-auth.
+  if (!(await cookies()).getAll().some((cookie) => cookie.name.includes("next-auth.session-token"))) return null;
   const session = await getServerSession(authOptions);
   const id = session?.user?.id;
   if (!id) return null;

@@ -50,6 +50,8 @@ export const forkConfigurationBodySchema = z.object({
   targetGroupId: uuid,
   revisionId: uuid.optional(),
   title: z.string().trim().min(1).max(configurationTitleMaxLength).optional(),
+  /** An unsaved draft to start the fork from instead of the revision's document. */
+  document: configurationSchema.optional(),
 });
 export type ForkConfigurationBody = z.infer<typeof forkConfigurationBodySchema>;
 

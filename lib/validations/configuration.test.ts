@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { configurationSchema, configurationTitleMaxLength, formatIssues, formatJsonPath, spectrumRequestSchema } from "./configuration";
+import { formatJsonPath, ValidationError } from "@/lib/errors";
+import { configurationSchema, configurationTitleMaxLength, spectrumRequestSchema } from "./configuration";
 
 const valid = {
   format: 1,
@@ -15,7 +16,8 @@ const valid = {
 
 function issuesOf(input: unknown): { path: string; message: string }[] {
   const parsed = configurationSchema.safeParse(input);
-  return parsed.success ? [] : formatIssues(parsed.error);
+  if (parsed.success) return [];
+  return ValidationError.fromZod(parsed.error).issues.map((issue) => ({ path: formatJsonPath(issue.path), message: issue.message }));
 }
 
 describe("configurationSchema", () => {
@@ -56,14 +58,5 @@ describe("configurationSchema", () => {
   it("uses the same rules for the spectrum request body", () => {
     expect(spectrumRequestSchema.safeParse(valid).success).toBe(true);
     expect(spectrumRequestSchema.safeParse({ ...valid, levels: 201 }).success).toBe(false);
-  });
-});
-
-describe("formatJsonPath", () => {
-  it("writes indices in brackets and non-identifier keys quoted", () => {
-    expect(formatJsonPath(["stacks", 1, "worldvolume"])).toBe("stacks[1].worldvolume");
-    expect(formatJsonPath(["stacks", 0, "position", "9"])).toBe('stacks[0].position["9"]');
-    expect(formatJsonPath([])).toBe("");
-    expect(formatJsonPath([0])).toBe("[0]");
   });
 });

@@ -71,32 +71,3 @@ export const configurationSchema = configurationShapeSchema.superRefine((configu
 /** Body of `POST /api/spectrum`: the configuration document itself. */
 export const spectrumRequestSchema = configurationSchema;
 
-/** One validation problem with a readable JSON path such as `stacks[1].worldvolume`. */
-export interface FormattedIssue {
-  /** JSON path: `.key` for identifier keys, `["key"]` for others, `[n]` for indices; "" for the root. */
-  path: string;
-  message: string;
-}
-
-/**
- * Flattens a zod error into `{ path, message }` pairs with JSON paths.
- *
- * @example
- * formatIssues(error) // => [{ path: "stacks[1].worldvolume", message: "..." }]
- */
-export function formatIssues(error: z.ZodError): FormattedIssue[] {
-  return error.issues.map((issue) => ({ path: formatJsonPath(issue.path), message: issue.message }));
-}
-
-/**
- * Formats a path as JSON-path text: `["stacks", 0, "position", "9"]` -> `stacks[0].position["9"]`.
- */
-export function formatJsonPath(path: readonly PropertyKey[]): string {
-  let text = "";
-  for (const key of path) {
-    if (typeof key === "number") text += `[${key}]`;
-    else if (typeof key === "string" && /^[A-Za-z_$][\w$]*$/.test(key)) text += text ? `.${key}` : key;
-    else text += `[${JSON.stringify(String(key))}]`;
-  }
-  return text;
-}

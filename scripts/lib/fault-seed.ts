@@ -5,7 +5,6 @@ import { closeDatabase } from "@/db/index";
 import { createConfiguration } from "@/db/queries/configurations";
 import { getPersonalGroup } from "@/db/queries/groups";
 import { createUser } from "@/db/queries/users";
-import { computeSpectrum } from "@/lib/boundary";
 import { probeNearSevenBrane } from "@/lib/demo-configurations";
 
 async function main(): Promise<void> {
@@ -15,11 +14,10 @@ async function main(): Promise<void> {
   const account = await createUser(null, { email, name: "Fault run", password });
   const actor = { id: account.id, email: account.email, name: account.name, siteRole: "member" as const };
   const group = await getPersonalGroup(actor);
-  const result = computeSpectrum(probeNearSevenBrane);
   const configurationIds: string[] = [];
   for (let i = 0; i < howMany; i += 1) {
     const document = { ...probeNearSevenBrane, title: `fault run ${i + 1}` };
-    const created = await createConfiguration(actor, group.id, document, "seed", result, 1);
+    const created = await createConfiguration(actor, group.id, document, "seed");
     configurationIds.push(created.id);
   }
   await closeDatabase();

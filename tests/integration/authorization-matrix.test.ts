@@ -7,7 +7,6 @@ import { addComment } from "@/db/queries/comments";
 import { createConfiguration } from "@/db/queries/configurations";
 import { createInvitation } from "@/db/queries/invitations";
 import { createShareLink } from "@/db/queries/share-links";
-import { computeSpectrum } from "@/lib/boundary";
 import { probeNearSevenBrane } from "@/lib/demo-configurations";
 import { createTestGroup, createTestUser, type TestUser } from "@/tests/fixtures/users";
 import { idleState } from "@/lib/action-state";
@@ -80,7 +79,7 @@ async function createWorld(): Promise<World> {
     { actor: editor.actor, role: "editor" },
     { actor: target.actor, role: "viewer" },
   ]);
-  const configuration = await createConfiguration(owner.actor, group.id, probeNearSevenBrane, "first", computeSpectrum(probeNearSevenBrane), 1);
+  const configuration = await createConfiguration(owner.actor, group.id, probeNearSevenBrane, "first");
   const png = new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13, 73, 72, 68, 82]);
   const [attachment, comment, share, invitation, otherGroup] = await Promise.all([
     uploadAttachment(editor.actor, configuration.id, { fileName: "figure.png", data: png }),
@@ -322,6 +321,28 @@ const matrix: Record<string, RouteEntry> = {
       },
     },
   },
+  "configurations/[configurationId]/revisions/[revisionId]/result/overview/route.ts": {
+    methods: {
+      GET: {
+        request: (w) => ({
+          request: json("GET", `${configurationPath(w)}/revisions/${w.revisionId}/result/overview`),
+          params: { configurationId: w.configurationId, revisionId: w.revisionId },
+        }),
+        expect: membersRead,
+      },
+    },
+  },
+  "configurations/[configurationId]/revisions/[revisionId]/result/sectors/[sectorIndex]/route.ts": {
+    methods: {
+      GET: {
+        request: (w) => ({
+          request: json("GET", `${configurationPath(w)}/revisions/${w.revisionId}/result/sectors/0`),
+          params: { configurationId: w.configurationId, revisionId: w.revisionId, sectorIndex: "0" },
+        }),
+        expect: membersRead,
+      },
+    },
+  },
   "configurations/[configurationId]/export/route.ts": {
     methods: { GET: { request: (w) => ({ request: json("GET", `${configurationPath(w)}/export?format=csv`), params: configurationParams(w) }), expect: membersRead } },
   },
@@ -476,7 +497,7 @@ async function labConfiguration(world: World): Promise<{ id: string; slug: strin
     ],
     "lab",
   );
-  const created = await createConfiguration(world.users.owner.actor, lab.id, probeNearSevenBrane, "starter", computeSpectrum(probeNearSevenBrane), 1);
+  const created = await createConfiguration(world.users.owner.actor, lab.id, probeNearSevenBrane, "starter");
   return { id: created.id, slug: lab.slug };
 }
 

@@ -6,7 +6,6 @@ import { createInvitation } from "@/db/queries/invitations";
 import { createShareLink } from "@/db/queries/share-links";
 import { uploadAttachment } from "@/db/queries/attachments";
 import { braneAntibranePair } from "@/lib/demo-configurations";
-import { makeSector, makeSpectrumResult } from "@/tests/fixtures/spectrum-result-builders";
 import { createTestGroup, createTestUser } from "@/tests/fixtures/users";
 
 const session = vi.hoisted(() => ({ actor: null as Actor | null }));
@@ -65,8 +64,7 @@ async function world() {
     { actor: viewer.actor, role: "viewer" },
     { actor: otherViewer.actor, role: "viewer" },
   ]);
-  const result = makeSpectrumResult([makeSector(["brane", "anti"])]);
-  const configuration = await createConfiguration(owner.actor, group.id, braneAntibranePair, "First", result, 1);
+  const configuration = await createConfiguration(owner.actor, group.id, braneAntibranePair, "First");
   const invitation = await createInvitation(owner.actor, group.id, { email: "invitee@test.mooring", role: "viewer" });
   const comment = await addComment(otherViewer.actor, configuration.id, { body: "mine" });
   const share = await createShareLink(owner.actor, configuration.id);

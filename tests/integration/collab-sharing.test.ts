@@ -1,9 +1,11 @@
+import { ENGINE_VERSION } from "@/lib/boundary";
 import { eq } from "drizzle-orm";
 import { describe, expect, it, vi } from "vitest";
 import { db } from "@/db/index";
 import type { Actor } from "@/db/queries/actor";
 import { addComment, deleteComment, listComments } from "@/db/queries/comments";
-import { createConfiguration, forkConfiguration, setConfigurationStarter, updateConfiguration } from "@/db/queries/configurations";
+import { createConfiguration, setConfigurationStarter, updateConfiguration } from "@/db/queries/configurations";
+import { forkConfiguration } from "@/db/queries/forks";
 import { listStarterForks } from "@/db/queries/labs";
 import { createShareLink, getSharedConfiguration, listShareLinks, revokeShareLink } from "@/db/queries/share-links";
 import { listAuditLog } from "@/db/queries/audit-log";
@@ -12,7 +14,6 @@ import type { Configuration } from "@/lib/boundary/types";
 import { braneAntibranePair } from "@/lib/demo-configurations";
 import { ForbiddenError, NotFoundError, ValidationError } from "@/lib/errors";
 import { hashSecureToken } from "@/lib/server/secure-token";
-import { makeSector, makeSpectrumResult } from "@/tests/fixtures/spectrum-result-builders";
 import { createRoleGroup, createTestGroup, createTestUser } from "@/tests/fixtures/users";
 
 const session = vi.hoisted(() => ({ actor: null as Actor | null }));
@@ -20,11 +21,10 @@ vi.mock("@/lib/server/session", () => ({ getCurrentUser: async () => session.act
 const { DELETE: revokeRoute } = await import("@/app/api/share-links/[shareLinkId]/route");
 
 /** A hand-made result (shapes only; physics is tested in lib/boundary). */
-const result = makeSpectrumResult([makeSector(["brane", "anti"])]);
 
 async function scenario() {
   const { owner, editor, viewer, outsider, group } = await createRoleGroup();
-  const configuration = await createConfiguration(owner.actor, group.id, braneAntibranePair, "First", result, 1);
+  const configuration = await createConfiguration(owner.actor, group.id, braneAntibranePair, "First");
   return { owner, editor, viewer, outsider, group, configuration };
 }
 
@@ -38,7 +38,7 @@ describe("share links", () => {
 
     const shared = await getSharedConfiguration(token);
     expect(shared.title).toBe(braneAntibranePair.title);
-    expect(shared.result?.engineVersion).toBe(result.engineVersion);
+    expect(shared.result?.engineVersion).toBe(ENGINE_VERSION);
 
     await expect(createShareLink(viewer.actor, configuration.id)).rejects.toBeInstanceOf(ForbiddenError);
     await expect(listShareLinks(outsider.actor, configuration.id)).rejects.toBeInstanceOf(NotFoundError);
@@ -68,7 +68,7 @@ describe("comments", () => {
     expect(first.revisionNumber).toBe(1);
 
     const moved: Configuration = { ...braneAntibranePair, title: "Pair, moved apart" };
-    await updateConfiguration(editor.actor, configuration.id, { expectedVersion: 1, document: moved, message: "Apart", result, computeMs: 1 });
+    await updateConfiguration(editor.actor, configuration.id, { expectedVersion: 1, document: moved, message: "Apart" });
     const second = await addComment(editor.actor, configuration.id, { body: "Now beyond the critical separation." });
     expect(second.revisionNumber).toBe(2);
 
@@ -84,7 +84,7 @@ describe("comments", () => {
 
   it("refuses a revision of another configuration", async () => {
     const { owner, group, configuration } = await scenario();
-    const other = await createConfiguration(owner.actor, group.id, braneAntibranePair, "Other", result, 1);
+    const other = await createConfiguration(owner.actor, group.id, braneAntibranePair, "Other");
     await expect(
       addComment(owner.actor, configuration.id, { body: "x", revisionId: other.currentRevision!.id }),
     ).rejects.toBeInstanceOf(ValidationError);
@@ -106,14 +106,15 @@ describe("labs", () => {
       ],
       "lab",
     );
-    const starter = await createConfiguration(instructor.actor, lab.id, braneAntibranePair, "Starter", result, 1);
+    const starter = await createConfiguration(instructor.actor, lab.id, braneAntibranePair, "Starter");
     await setConfigurationStarter(instructor.actor, starter.id, true);
     await forkConfiguration(student.actor, starter.id, { targetGroupId: student.personalGroupId });
 
     const comparison = await listStarterForks(instructor.actor, lab.id);
     expect(comparison).toHaveLength(1);
     expect(comparison[0]?.forks.map((fork) => fork.student.id)).toEqual([student.actor.id]);
-    expect(comparison[0]?.forks[0]?.supersymmetric).toBe(true);
+    // A brane with an antibrane at nu = 0 preserves no supercharges (physics.md, "Stability and supersymmetry").
+    expect(comparison[0]?.forks[0]?.supersymmetric).toBe(false);
 
     await expect(listStarterForks(student.actor, lab.id)).rejects.toBeInstanceOf(ForbiddenError);
   });

@@ -7,7 +7,6 @@ import { attachments, configurations, revisions } from "@/db/schema";
 import { braneAntibranePair, probeNearSevenBrane } from "@/lib/demo-configurations";
 import { attachmentMaxBytes } from "@/lib/validations/attachment";
 import { importMaxBytes } from "@/lib/validations/import";
-import { makeSector, makeSpectrumResult } from "@/tests/fixtures/spectrum-result-builders";
 import { createTestGroup, createTestUser } from "@/tests/fixtures/users";
 
 const session = vi.hoisted(() => ({ actor: null as Actor | null }));
@@ -33,8 +32,7 @@ async function scenario() {
     createTestUser({ label: "outsider" }),
   ]);
   const group = await createTestGroup(owner.actor, [{ actor: viewer.actor, role: "viewer" }]);
-  const result = makeSpectrumResult([makeSector(["brane", "anti"])]);
-  const configuration = await createConfiguration(owner.actor, group.id, braneAntibranePair, "First", result, 1);
+  const configuration = await createConfiguration(owner.actor, group.id, braneAntibranePair, "First");
   const params = { params: Promise.resolve({ configurationId: configuration.id }) };
   return { owner, viewer, outsider, group, configuration, params };
 }

@@ -5,7 +5,6 @@ import type { Actor } from "@/db/queries/actor";
 import { createConfiguration } from "@/db/queries/configurations";
 import { acceptInvitation, createInvitation } from "@/db/queries/invitations";
 import { configurations, invitations, memberships, results, revisions } from "@/db/schema";
-import { computeSpectrum } from "@/lib/boundary";
 import type { Configuration } from "@/lib/boundary/types";
 import { probeNearSevenBrane } from "@/lib/demo-configurations";
 import { createTestGroup, createTestUser } from "@/tests/fixtures/users";
@@ -55,14 +54,7 @@ function save(actor: Actor, configurationId: string, version: number, client: nu
 async function scenario() {
   const [owner, editor] = await Promise.all([createTestUser({ label: "owner" }), createTestUser({ label: "editor" })]);
   const group = await createTestGroup(owner.actor, [{ actor: editor.actor, role: "editor" }]);
-  const configuration = await createConfiguration(
-    owner.actor,
-    group.id,
-    probeNearSevenBrane,
-    "first",
-    computeSpectrum(probeNearSevenBrane),
-    1,
-  );
+  const configuration = await createConfiguration(owner.actor, group.id, probeNearSevenBrane, "first");
   return { owner, editor, group, configuration };
 }
 

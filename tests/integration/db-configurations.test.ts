@@ -1,47 +1,24 @@
 import { eq, sql } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { db } from "@/db/index";
-import { auditLog, configurations, revisions } from "@/db/schema";
-import {
-  createConfiguration,
-  forkConfiguration,
-  getConfiguration,
-  getResultForRevision,
-  getRevision,
-  getRevisionByNumber,
-  listConfigurationsForGroup,
-  listConfigurationsForUser,
-  listForksOfConfiguration,
-  listRevisions,
-  restoreRevision,
-  setConfigurationStarter,
-  softDeleteConfiguration,
-  undeleteConfiguration,
-  updateConfiguration,
-} from "@/db/queries/configurations";
-import type { Configuration, SpectrumResult } from "@/lib/boundary/types";
+import { auditLog, configurations, results, revisions } from "@/db/schema";
+import { createConfiguration, getConfiguration, listConfigurationsForGroup, listConfigurationsForUser, setConfigurationStarter, softDeleteConfiguration, undeleteConfiguration, updateConfiguration } from "@/db/queries/configurations";
+import { forkConfiguration, listForksOfConfiguration } from "@/db/queries/forks";
+import { getResultForRevision } from "@/db/queries/result-reads";
+import { getRevision, getRevisionByNumber, listRevisions, restoreRevision } from "@/db/queries/revisions";
+import { ENGINE_VERSION } from "@/lib/boundary";
+import type { Configuration } from "@/lib/boundary/types";
 import { braneAntibranePair, twoTwoBraneStacks } from "@/lib/demo-configurations";
 import { ConflictError, ForbiddenError, NotFoundError, UnauthenticatedError } from "@/lib/errors";
-import { makeSector, makeSpectrumResult } from "@/tests/fixtures/spectrum-result-builders";
 import { createRoleGroup, createTestGroup, createTestUser } from "@/tests/fixtures/users";
 
-/** A hand-made result (shapes only; the engine's physics is tested in lib/boundary). */
-function fixtureResult(lightestMassSquared: string, tachyonic: boolean): SpectrumResult {
-  return makeSpectrumResult([makeSector(["brane", "anti"], { tachyonic })], {
-    engineVersion: "fixture-1",
-    supercharges: tachyonic ? 0 : 16,
-    lightest: [
-      {
-        pair: ["brane", "anti"],
-        sector: "NS",
-        level: "0",
-        massSquared: lightestMassSquared,
-        mass: null,
-        states: "1",
-        withChanPaton: "2",
-      },
-    ],
-  });
+/**
+ * alpha' M^2 of the lightest state of the D4-antiD4 pair at separation y: the NS ground state,
+ * (y / 2 pi)^2 - 1/2 (physics.md "Mass formula" and "Zero-point energies": a = -1/2 at nu = 0; the
+ * brane-antibrane GSO keeps it, Banks and Susskind 1995, from memory).
+ */
+function braneAntibraneLightest(y: number): number {
+  return (y / (2 * Math.PI)) ** 2 - 1 / 2;
 }
 
 function moved(document: Configuration, y: number): Configuration {
@@ -64,8 +41,6 @@ async function scenario() {
     group.id,
     braneAntibranePair,
     "First sketch",
-    fixtureResult("-0.443", true),
-    1.25,
   );
   return { owner, editor, viewer, outsider, admin, group, configuration };
 }
@@ -90,7 +65,6 @@ describe("createConfiguration", () => {
       theory: "IIA",
       version: 1,
       stackCount: 2,
-      lightestMassSquared: -0.443,
       tachyonic: true,
       supercharges: 0,
       role: "editor",
@@ -99,10 +73,13 @@ describe("createConfiguration", () => {
       author: { id: editor.actor.id, name: editor.actor.name },
       group: { id: group.id, slug: group.slug },
     });
+    expect(configuration.lightestMassSquared).toBeCloseTo(braneAntibraneLightest(1.5), 10);
     expect(configuration.currentRevision?.number).toBe(1);
+    // The DAL computed and stored the result itself, with the running engine's version.
     const result = await getResultForRevision(editor.actor, configuration.currentRevision?.id ?? "");
-    expect(result).toMatchObject({ engineVersion: "fixture-1", computeMs: 1.25 });
-    expect(result.result.lightest[0]?.massSquared).toBe("-0.443");
+    expect(result.engineVersion).toBe(ENGINE_VERSION);
+    expect(result.computeMs).toBeGreaterThan(0);
+    expect(Number(result.result.lightest[0]?.massSquared)).toBeCloseTo(braneAntibraneLightest(1.5), 10);
     const history = await listRevisions(editor.actor, configuration.id);
     expect(history.map((revision) => [revision.number, revision.message, revision.isCurrent])).toEqual([
       [1, "First sketch", true],
@@ -113,7 +90,7 @@ describe("createConfiguration", () => {
     const { viewer, outsider, group } = await scenario();
     const before = await listConfigurationsForGroup(viewer.actor, group.id);
     const attempt = (actor: typeof viewer.actor | null) =>
-      createConfiguration(actor, group.id, twoTwoBraneStacks, "", fixtureResult("0", false), 1);
+      createConfiguration(actor, group.id, twoTwoBraneStacks, "");
     await expect(attempt(viewer.actor)).rejects.toBeInstanceOf(ForbiddenError);
     await expect(attempt(outsider.actor)).rejects.toBeInstanceOf(NotFoundError);
     await expect(attempt(null)).rejects.toBeInstanceOf(UnauthenticatedError);
@@ -140,10 +117,11 @@ describe("updateConfiguration", () => {
       expectedVersion: 1,
       document: moved(braneAntibranePair, 5),
       message: "Pulled apart",
-      result: fixtureResult("0.133", false),
-      computeMs: 2,
     });
-    expect(saved).toMatchObject({ version: 2, tachyonic: false, lightestMassSquared: 0.133 });
+    // Past y_c = pi sqrt(2) the stretched tachyon is massive (braneAntibraneLightest(5) > 0), so the
+    // lightest states are the massless vectors of each stack with itself.
+    expect(braneAntibraneLightest(5)).toBeGreaterThan(0);
+    expect(saved).toMatchObject({ version: 2, tachyonic: false, lightestMassSquared: 0 });
     expect(saved.currentRevision?.number).toBe(2);
     const second = await getRevisionByNumber(owner.actor, configuration.id, 2);
     expect(second.document.stacks[1]?.position["9"]).toBe(5);
@@ -160,16 +138,12 @@ describe("updateConfiguration", () => {
       expectedVersion: 1,
       document: moved(braneAntibranePair, 2),
       message: "Editor's change",
-      result: fixtureResult("-0.1", true),
-      computeMs: 1,
     });
     const before = await countRows(configuration.id);
     const stale = updateConfiguration(owner.actor, configuration.id, {
       expectedVersion: 1,
       document: moved(braneAntibranePair, 9),
       message: "Owner's stale change",
-      result: fixtureResult("1", false),
-      computeMs: 1,
     });
     await expect(stale).rejects.toBeInstanceOf(ConflictError);
     await expect(stale).rejects.toMatchObject({ currentVersion: 2, status: 409 });
@@ -187,8 +161,6 @@ describe("updateConfiguration", () => {
           expectedVersion: 1,
           document: moved(braneAntibranePair, y),
           message: `Try ${y}`,
-          result: fixtureResult("0", false),
-          computeMs: 1,
         }),
       ),
     );
@@ -205,8 +177,6 @@ describe("updateConfiguration", () => {
       expectedVersion: 1,
       document: moved(braneAntibranePair, 3),
       message: "Not allowed",
-      result: fixtureResult("0", false),
-      computeMs: 1,
     };
     const before = await countRows(configuration.id);
     await expect(updateConfiguration(viewer.actor, configuration.id, input)).rejects.toBeInstanceOf(ForbiddenError);
@@ -223,8 +193,6 @@ describe("forkConfiguration", () => {
       expectedVersion: 1,
       document: moved(braneAntibranePair, 7),
       message: "Later change",
-      result: fixtureResult("1", false),
-      computeMs: 1,
     });
     const fork = await forkConfiguration(viewer.actor, configuration.id, {
       targetGroupId: viewer.personalGroupId,
@@ -246,9 +214,26 @@ describe("forkConfiguration", () => {
     expect(fork.document).toEqual(braneAntibranePair);
     const [revision] = await listRevisions(viewer.actor, fork.id);
     expect(revision?.message).toBe(`Forked from "${braneAntibranePair.title}", revision 1`);
-    expect((await getResultForRevision(viewer.actor, revision?.id ?? "")).result.lightest[0]?.massSquared).toBe(
-      "-0.443",
-    );
+    const forkResult = (await getResultForRevision(viewer.actor, revision?.id ?? "")).result;
+    expect(Number(forkResult.lightest[0]?.massSquared)).toBeCloseTo(braneAntibraneLightest(1.5), 10);
+  });
+
+  it("starts a fork from an unsaved draft in the same call, with the draft's own result", async () => {
+    const { viewer, configuration } = await scenario();
+    const draft = moved(braneAntibranePair, 6);
+    const fork = await forkConfiguration(viewer.actor, configuration.id, {
+      targetGroupId: viewer.personalGroupId,
+      title: "My variant",
+      document: draft,
+    });
+    expect(fork.document).toEqual({ ...draft, title: "My variant" });
+    expect(fork.forkedFrom?.revisionNumber).toBe(1);
+    const history = await listRevisions(viewer.actor, fork.id);
+    expect(history.map((revision) => revision.message)).toEqual([
+      `Forked from "${braneAntibranePair.title}", revision 1, with unsaved changes`,
+    ]);
+    // y = 6 is past y_c: the draft's result, not the source's tachyonic one.
+    expect(fork).toMatchObject({ tachyonic: false, lightestMassSquared: 0 });
   });
 
   it("needs read access to the source and editor access to the target", async () => {
@@ -273,11 +258,10 @@ describe("restoreRevision", () => {
       expectedVersion: 1,
       document: moved(braneAntibranePair, 6),
       message: "Apart",
-      result: fixtureResult("0.5", false),
-      computeMs: 1,
     });
     const restored = await restoreRevision(editor.actor, configuration.id, first, { expectedVersion: 2 });
-    expect(restored).toMatchObject({ version: 3, tachyonic: true, lightestMassSquared: -0.443 });
+    expect(restored).toMatchObject({ version: 3, tachyonic: true });
+    expect(restored.lightestMassSquared).toBeCloseTo(braneAntibraneLightest(1.5), 10);
     expect(restored.document).toEqual(braneAntibranePair);
     const history = await listRevisions(editor.actor, configuration.id);
     expect(history.map((revision) => [revision.number, revision.message])).toEqual([
@@ -288,6 +272,20 @@ describe("restoreRevision", () => {
     await expect(
       restoreRevision(editor.actor, configuration.id, first, { expectedVersion: 2 }),
     ).rejects.toBeInstanceOf(ConflictError);
+  });
+
+  it("recomputes a result stored by an older engine version instead of copying it", async () => {
+    const { editor, configuration } = await scenario();
+    const first = configuration.currentRevision?.id ?? "";
+    await db
+      .update(results)
+      // As a row stored by an older engine, before results carried content hashes.
+      .set({ engineVersion: "0.9.0", contentHash: null, result: sql`jsonb_set(${results.result}, '{engineVersion}', '"0.9.0"')` })
+      .where(eq(results.revisionId, first));
+    const restored = await restoreRevision(editor.actor, configuration.id, first, { expectedVersion: 1 });
+    const stored = await getResultForRevision(editor.actor, restored.currentRevision?.id ?? "");
+    expect(stored.engineVersion).toBe(ENGINE_VERSION);
+    expect(Number(stored.result.lightest[0]?.massSquared)).toBeCloseTo(braneAntibraneLightest(1.5), 10);
   });
 
   it("refuses viewers", async () => {
@@ -316,11 +314,14 @@ describe("soft deletion", () => {
 describe("lists", () => {
   it("lists a group's configurations for members only, with search and sorting", async () => {
     const { editor, viewer, outsider, group } = await scenario();
-    await createConfiguration(editor.actor, group.id, twoTwoBraneStacks, "Second", fixtureResult("1/2", false), 1);
+    await createConfiguration(editor.actor, group.id, twoTwoBraneStacks, "Second");
     const byTitle = await listConfigurationsForGroup(viewer.actor, group.id, { sort: "title" });
     expect(byTitle.items.map((item) => item.title)).toEqual([braneAntibranePair.title, twoTwoBraneStacks.title]);
     const byLightest = await listConfigurationsForGroup(viewer.actor, group.id, { sort: "lightest", direction: "asc" });
-    expect(byLightest.items.map((item) => item.lightestMassSquared)).toEqual([-0.443, 0.5]);
+    // Two D2 stacks of the same orientation: the lightest states are massless (the aa vector).
+    const lightest = byLightest.items.map((item) => item.lightestMassSquared ?? Number.NaN);
+    expect(lightest[0]).toBeCloseTo(braneAntibraneLightest(1.5), 10);
+    expect(lightest[1]).toBe(0);
     const searched = await listConfigurationsForGroup(viewer.actor, group.id, { search: "d2 STACK" });
     expect(searched.items.map((item) => item.title)).toEqual([twoTwoBraneStacks.title]);
     await expect(listConfigurationsForGroup(outsider.actor, group.id)).rejects.toBeInstanceOf(NotFoundError);
@@ -345,8 +346,6 @@ describe("lab starters", () => {
       lab.id,
       twoTwoBraneStacks,
       "Starter",
-      fixtureResult("1/4", false),
-      1,
       { isStarter: true },
     );
     expect(starter.isStarter).toBe(true);
@@ -360,9 +359,7 @@ describe("lab starters", () => {
   it("refuses starters outside lab groups", async () => {
     const { owner, group } = await scenario();
     await expect(
-      createConfiguration(owner.actor, group.id, twoTwoBraneStacks, "", fixtureResult("0", false), 1, {
-        isStarter: true,
-      }),
+      createConfiguration(owner.actor, group.id, twoTwoBraneStacks, "", { isStarter: true }),
     ).rejects.toMatchObject({ status: 422, issues: [{ path: ["isStarter"] }] });
     expect((await listConfigurationsForGroup(owner.actor, group.id)).total).toBe(1);
   });

@@ -2,7 +2,8 @@
 
 import { revalidatePath } from "next/cache";
 import { redirect } from "next/navigation";
-import { forkConfiguration, setConfigurationStarter } from "@/db/queries/configurations";
+import { setConfigurationStarter } from "@/db/queries/configurations";
+import { forkConfiguration } from "@/db/queries/forks";
 import { createGroup, getPersonalGroup } from "@/db/queries/groups";
 import { errorState, invalidState, readFields, type ActionState, type FieldsOf } from "@/lib/action-state";
 import { getCurrentUser } from "@/lib/server/session";

@@ -1,43 +1,41 @@
 import { getConfiguration, softDeleteConfiguration, updateConfiguration } from "@/db/queries/configurations";
-import { computeAuthoritativeResult, readJsonBody } from "@/lib/server/configuration-handlers";
-import { UnauthenticatedError, ValidationError, toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/server/session";
+import { z } from "zod";
+import { getConfigurationWithResultText } from "@/db/queries/result-reads";
+import { ValidationError } from "@/lib/errors";
+import { route } from "@/lib/server/route";
 import {
   configurationBodyLimitBytes,
   parseIfMatch,
   updateConfigurationBodySchema,
 } from "@/lib/validations/configuration-api";
 
-interface ConfigurationRouteContext {
-  params: Promise<{ configurationId: string }>;
-}
+const readQuerySchema = z.object({
+  include: z.enum(["result"], { error: 'include may only be "result".' }).optional(),
+});
 
-/** GET /api/configurations/[configurationId]: the configuration with its current document; ETag is the version. */
-export async function GET(_request: Request, context: ConfigurationRouteContext): Promise<Response> {
-  try {
-    const { configurationId } = await context.params;
-    const actor = await getCurrentUser();
-    if (!actor) throw new UnauthenticatedError();
-    const configuration = await getConfiguration(actor, configurationId);
-    return Response.json(configuration, {
-      headers: { etag: `"${configuration.version}"`, "cache-control": "private, no-store" },
-    });
-  } catch (error) {
-    return toErrorResponse(error);
+/**
+ * GET /api/configurations/[configurationId][?include=result]: the configuration with its current
+ * document; ETag is the version. With `include=result` it also carries `result`, the current
+ * revision's stored result `{ revisionId, engineVersion, computeMs, createdAt, result }` (null before
+ * the first save), sent as stored.
+ */
+export const GET = route({ params: ["configurationId"], query: readQuerySchema }, async ({ actor, params, query }) => {
+  if (query.include === "result") {
+    const { text, version } = await getConfigurationWithResultText(actor, params.configurationId);
+    return new Response(text, { headers: { "content-type": "application/json", etag: `"${version}"` } });
   }
-}
+  const configuration = await getConfiguration(actor, params.configurationId);
+  return Response.json(configuration, { headers: { etag: `"${configuration.version}"` } });
+});
 
 /**
  * PUT /api/configurations/[configurationId] `{ document, message?, expectedVersion? }` with the
  * version in `If-Match` or `expectedVersion`: saves a new revision with a server-computed result.
  * 409 `{ error, currentVersion }` when someone saved in between; nothing is written then.
  */
-export async function PUT(request: Request, context: ConfigurationRouteContext): Promise<Response> {
-  try {
-    const { configurationId } = await context.params;
-    const actor = await getCurrentUser();
-    if (!actor) throw new UnauthenticatedError();
-    const body = updateConfigurationBodySchema.parse(await readJsonBody(request, configurationBodyLimitBytes));
+export const PUT = route(
+  { params: ["configurationId"], body: updateConfigurationBodySchema, bodyLimitBytes: configurationBodyLimitBytes },
+  async ({ request, actor, params, body }) => {
     const fromHeader = parseIfMatch(request.headers.get("if-match"));
     if (fromHeader !== null && Number.isNaN(fromHeader)) {
       throw ValidationError.at(["If-Match"], "If-Match must name the version you edited, e.g. \"3\".");
@@ -46,29 +44,17 @@ export async function PUT(request: Request, context: ConfigurationRouteContext):
     if (expectedVersion === undefined) {
       throw ValidationError.at(["expectedVersion"], "Say which version you edited (If-Match header or expectedVersion).");
     }
-    const { result, computeMs } = computeAuthoritativeResult(body.document);
-    const updated = await updateConfiguration(actor, configurationId, {
+    const updated = await updateConfiguration(actor, params.configurationId, {
       expectedVersion,
       document: body.document,
       message: body.message,
-      result,
-      computeMs,
     });
     return Response.json(updated, { headers: { etag: `"${updated.version}"` } });
-  } catch (error) {
-    return toErrorResponse(error);
-  }
-}
+  },
+);
 
 /** DELETE /api/configurations/[configurationId]: soft delete (editors and owners); 204. */
-export async function DELETE(_request: Request, context: ConfigurationRouteContext): Promise<Response> {
-  try {
-    const { configurationId } = await context.params;
-    const actor = await getCurrentUser();
-    if (!actor) throw new UnauthenticatedError();
-    await softDeleteConfiguration(actor, configurationId);
-    return new Response(null, { status: 204 });
-  } catch (error) {
-    return toErrorResponse(error);
-  }
-}
+export const DELETE = route({ params: ["configurationId"] }, async ({ actor, params }) => {
+  await softDeleteConfiguration(actor, params.configurationId);
+  return new Response(null, { status: 204 });
+});

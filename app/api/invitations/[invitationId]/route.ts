@@ -1,17 +1,7 @@
 import { revokeInvitation } from "@/db/queries/invitations";
-import { toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/server/session";
-
-interface InvitationRouteContext {
-  params: Promise<{ invitationId: string }>;
-}
+import { route } from "@/lib/server/route";
 
 /** DELETE /api/invitations/[invitationId]: revokes the invitation (owners only); its link stops working. */
-export async function DELETE(_request: Request, context: InvitationRouteContext): Promise<Response> {
-  try {
-    const { invitationId } = await context.params;
-    return Response.json(await revokeInvitation(await getCurrentUser(), invitationId));
-  } catch (error) {
-    return toErrorResponse(error);
-  }
-}
+export const DELETE = route({ params: ["invitationId"] }, async ({ actor, params }) =>
+  Response.json(await revokeInvitation(actor, params.invitationId)),
+);

@@ -1,7 +1,6 @@
 import { acceptInvitation, acceptInvitationWithNewAccount } from "@/db/queries/invitations";
-import { readJsonBody } from "@/lib/server/configuration-handlers";
-import { toErrorResponse, ValidationError } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/server/session";
+import { ValidationError } from "@/lib/errors";
+import { route } from "@/lib/server/route";
 import { acceptInvitationSchema } from "@/lib/validations/invitation";
 
 /**
@@ -10,23 +9,20 @@ import { acceptInvitationSchema } from "@/lib/validations/invitation";
  * Expired, revoked and used links answer 409 with `error` = invitation_expired | invitation_revoked |
  * invitation_used; a different signed-in account, 409 invitation_wrong_account.
  */
-export async function POST(request: Request): Promise<Response> {
-  try {
-    const actor = await getCurrentUser();
-    const input = acceptInvitationSchema.parse(await readJsonBody(request, 4 * 1024));
+export const POST = route(
+  { auth: "optional", body: acceptInvitationSchema, bodyLimitBytes: 4 * 1024 },
+  async ({ actor, body }) => {
     if (actor) {
-      const accepted = await acceptInvitation(actor, input.token);
+      const accepted = await acceptInvitation(actor, body.token);
       return Response.json({ groupSlug: accepted.groupSlug, role: accepted.role });
     }
-    if (!input.name || !input.password) {
+    if (!body.name || !body.password) {
       throw new ValidationError([
-        ...(input.name ? [] : [{ path: ["name"], message: "Enter your name, or sign in if you have an account." }]),
-        ...(input.password ? [] : [{ path: ["password"], message: "Choose a password." }]),
+        ...(body.name ? [] : [{ path: ["name"], message: "Enter your name, or sign in if you have an account." }]),
+        ...(body.password ? [] : [{ path: ["password"], message: "Choose a password." }]),
       ]);
     }
-    const accepted = await acceptInvitationWithNewAccount(input.token, { name: input.name, password: input.password });
+    const accepted = await acceptInvitationWithNewAccount(body.token, { name: body.name, password: body.password });
     return Response.json({ groupSlug: accepted.groupSlug, role: accepted.role, email: accepted.email }, { status: 201 });
-  } catch (error) {
-    return toErrorResponse(error);
-  }
-}
+  },
+);

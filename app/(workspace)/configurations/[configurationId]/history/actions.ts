@@ -1,14 +1,13 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
-import { getRevision, restoreRevision } from "@/db/queries/configurations";
-import { computeAuthoritativeResult } from "@/lib/server/configuration-handlers";
+import { restoreRevision } from "@/db/queries/revisions";
 import { errorState } from "@/lib/action-state";
 import { getCurrentUser } from "@/lib/server/session";
 
 /**
- * Restores an old revision as a new revision (editors and owners), recomputing its result with
- * the current engine. `expectedVersion` guards against restoring over a save made meanwhile.
+ * Restores an old revision as a new revision (editors and owners); the DAL reuses its stored result
+ * when the current engine computed it and recomputes it otherwise. `expectedVersion` guards against restoring over a save made meanwhile.
  */
 export async function restoreRevisionAction(
   configurationId: string,
@@ -17,9 +16,7 @@ export async function restoreRevisionAction(
 ): Promise<{ error: string } | { restoredAs: number }> {
   try {
     const actor = await getCurrentUser();
-    const revision = await getRevision(actor, revisionId);
-    const { result, computeMs } = computeAuthoritativeResult(revision.document);
-    const restored = await restoreRevision(actor, configurationId, revisionId, { expectedVersion, result, computeMs });
+    const restored = await restoreRevision(actor, configurationId, revisionId, { expectedVersion });
     revalidatePath(`/configurations/${configurationId}`, "layout");
     return { restoredAs: restored.version };
   } catch (error) {

@@ -11,13 +11,10 @@ import { Label } from "@/components/ui/label";
 import { PageHeader } from "@/components/ui/page-header";
 import { Select } from "@/components/ui/select";
 import { Table, TableBody, TableCell, TableHead, TableHeader, TableRow } from "@/components/ui/table";
-import {
-  getConfiguration,
-  getResultForRevision,
-  getRevisionByNumber,
-  listRevisions,
-  type RevisionSummaryDto,
-} from "@/db/queries/configurations";
+import { getConfiguration } from "@/db/queries/configurations";
+import { type RevisionSummaryDto } from "@/db/queries/configuration-dtos";
+import { getResultForRevision } from "@/db/queries/result-reads";
+import { getRevisionByNumber, listRevisions } from "@/db/queries/revisions";
 import { NotFoundError } from "@/lib/errors";
 import { formatDateTime } from "@/lib/format-date";
 import { diffConfigurations, diffSpectra } from "@/lib/revisions/diff";

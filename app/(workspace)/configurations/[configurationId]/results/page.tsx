@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
-import { getResultForRevision, listRevisions } from "@/db/queries/configurations";
+import { getResultForRevision } from "@/db/queries/result-reads";
+import { listRevisions } from "@/db/queries/revisions";
 import { ConfigurationCollaboration } from "@/components/collaboration/configuration-collaboration";
 import { ResultsView } from "@/components/results/results-view";
 import { EmptyState } from "@/components/ui/empty-state";

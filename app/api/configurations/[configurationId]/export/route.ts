@@ -1,14 +1,12 @@
 import { z } from "zod";
-import { getConfiguration, getResultForRevision, getRevision } from "@/db/queries/configurations";
-import { contentDisposition } from "@/lib/server/content-disposition";
-import { NotFoundError, toErrorResponse } from "@/lib/errors";
+import { getConfiguration } from "@/db/queries/configurations";
+import { getResultForRevision } from "@/db/queries/result-reads";
+import { getRevisionOfConfiguration } from "@/db/queries/revisions";
+import { NotFoundError } from "@/lib/errors";
 import { spectrumToCsv } from "@/lib/export/csv";
 import { spectrumToLatexTable } from "@/lib/export/latex-table";
-import { getCurrentUser } from "@/lib/server/session";
-
-interface ExportRouteContext {
-  params: Promise<{ configurationId: string }>;
-}
+import { contentDisposition } from "@/lib/server/content-disposition";
+import { route } from "@/lib/server/route";
 
 const exportQuerySchema = z.object({
   format: z.enum(["json", "csv", "tex"], { error: "Choose json, csv or tex." }),
@@ -26,43 +24,35 @@ const mediaTypes = {
  * configuration file (JSON, re-importable) or its stored spectrum as CSV or a LaTeX table, of the
  * current revision unless `revision` names another. Any member. Downloads as an attachment.
  */
-export async function GET(request: Request, context: ExportRouteContext): Promise<Response> {
-  try {
-    const { configurationId } = await context.params;
-    const actor = await getCurrentUser();
-    const query = exportQuerySchema.parse(Object.fromEntries(new URL(request.url).searchParams));
-    const configuration = await getConfiguration(actor, configurationId);
-    let document = configuration.document;
-    let revision = configuration.currentRevision;
-    if (query.revision) {
-      const picked = await getRevision(actor, query.revision);
-      if (picked.configurationId !== configuration.id) throw new NotFoundError("No such revision.");
-      document = picked.document;
-      revision = { id: picked.id, number: picked.number };
-    }
-    const base = `${fileStem(document.title)}-r${revision?.number ?? 1}`;
-    let body: string;
-    if (query.format === "json") {
-      body = `${JSON.stringify(document, null, 2)}\n`;
-    } else {
-      if (!revision) throw new NotFoundError("This configuration has no saved result yet.");
-      const { result } = await getResultForRevision(actor, revision.id);
-      body =
-        query.format === "csv"
-          ? spectrumToCsv(result, { title: document.title })
-          : spectrumToLatexTable(result, { title: document.title, label: `tab:${fileStem(document.title)}` });
-    }
-    return new Response(body, {
-      headers: {
-        "content-type": mediaTypes[query.format],
-        "content-disposition": contentDisposition("attachment", `${base}.${query.format}`),
-        "cache-control": "private, no-store",
-      },
-    });
-  } catch (error) {
-    return toErrorResponse(error);
+export const GET = route({ params: ["configurationId"], query: exportQuerySchema }, async ({ actor, params, query }) => {
+  const configuration = await getConfiguration(actor, params.configurationId);
+  let document = configuration.document;
+  let revision = configuration.currentRevision;
+  if (query.revision) {
+    const picked = await getRevisionOfConfiguration(actor, configuration.id, query.revision);
+    document = picked.document;
+    revision = { id: picked.id, number: picked.number };
   }
-}
+  const base = `${fileStem(document.title)}-r${revision?.number ?? 1}`;
+  let body: string;
+  if (query.format === "json") {
+    body = `${JSON.stringify(document, null, 2)}\n`;
+  } else {
+    if (!revision) throw new NotFoundError("This configuration has no saved result yet.");
+    const { result } = await getResultForRevision(actor, revision.id);
+    body =
+      query.format === "csv"
+        ? spectrumToCsv(result, { title: document.title })
+        : spectrumToLatexTable(result, { title: document.title, label: `tab:${fileStem(document.title)}` });
+  }
+  return new Response(body, {
+    headers: {
+      "content-type": mediaTypes[query.format],
+      "content-disposition": contentDisposition("attachment", `${base}.${query.format}`),
+      "cache-control": "private, no-store",
+    },
+  });
+});
 
 /** A lowercase, hyphenated file name stem from a title ("Probe D4 near a wall" -> "probe-d4-near-a-wall"). */
 function fileStem(title: string): string {

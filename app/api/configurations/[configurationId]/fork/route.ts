@@ -1,27 +1,17 @@
-import { forkConfiguration } from "@/db/queries/configurations";
-import { readJsonBody } from "@/lib/server/configuration-handlers";
-import { UnauthenticatedError, toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/server/session";
+import { forkConfiguration } from "@/db/queries/forks";
+import { route } from "@/lib/server/route";
 import { configurationBodyLimitBytes, forkConfigurationBodySchema } from "@/lib/validations/configuration-api";
 
-interface ForkRouteContext {
-  params: Promise<{ configurationId: string }>;
-}
-
 /**
- * POST /api/configurations/[configurationId]/fork `{ targetGroupId, revisionId?, title? }`: copies
- * a revision (the current one by default) into a group where the user may write, recording its
- * source configuration and revision. 201 with the new configuration.
+ * POST /api/configurations/[configurationId]/fork `{ targetGroupId, revisionId?, title?, document? }`:
+ * copies a revision (the current one by default) into a group where the user may write, recording
+ * its source configuration and revision; with `document` (an unsaved draft) the fork starts from that
+ * document instead, in the same request. 201 with the new configuration.
  */
-export async function POST(request: Request, context: ForkRouteContext): Promise<Response> {
-  try {
-    const { configurationId } = await context.params;
-    const actor = await getCurrentUser();
-    if (!actor) throw new UnauthenticatedError();
-    const body = forkConfigurationBodySchema.parse(await readJsonBody(request, configurationBodyLimitBytes));
-    const fork = await forkConfiguration(actor, configurationId, body);
+export const POST = route(
+  { params: ["configurationId"], body: forkConfigurationBodySchema, bodyLimitBytes: configurationBodyLimitBytes },
+  async ({ actor, params, body }) => {
+    const fork = await forkConfiguration(actor, params.configurationId, body);
     return Response.json(fork, { status: 201, headers: { location: `/api/configurations/${fork.id}` } });
-  } catch (error) {
-    return toErrorResponse(error);
-  }
-}
+  },
+);

@@ -1,11 +1,6 @@
 import { z } from "zod";
 import { listAuditLog } from "@/db/queries/audit-log";
-import { toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/server/session";
-
-interface AuditRouteContext {
-  params: Promise<{ groupId: string }>;
-}
+import { route } from "@/lib/server/route";
 
 const auditQuerySchema = z.object({
   limit: z.coerce.number().int().min(1).max(200).default(100),
@@ -13,12 +8,6 @@ const auditQuerySchema = z.object({
 });
 
 /** GET /api/groups/[groupId]/audit?limit=&before=: the group's audit log, newest first (owners only). */
-export async function GET(request: Request, context: AuditRouteContext): Promise<Response> {
-  try {
-    const { groupId } = await context.params;
-    const query = auditQuerySchema.parse(Object.fromEntries(new URL(request.url).searchParams));
-    return Response.json(await listAuditLog(await getCurrentUser(), groupId, query));
-  } catch (error) {
-    return toErrorResponse(error);
-  }
-}
+export const GET = route({ params: ["groupId"], query: auditQuerySchema }, async ({ actor, params, query }) =>
+  Response.json(await listAuditLog(actor, params.groupId, query)),
+);

@@ -1,17 +1,5 @@
 import { listMembers } from "@/db/queries/groups";
-import { toErrorResponse } from "@/lib/errors";
-import { getCurrentUser } from "@/lib/server/session";
-
-interface MembersRouteContext {
-  params: Promise<{ groupId: string }>;
-}
+import { route } from "@/lib/server/route";
 
 /** GET /api/groups/[groupId]/members: the members table (any member). */
-export async function GET(_request: Request, context: MembersRouteContext): Promise<Response> {
-  try {
-    const { groupId } = await context.params;
-    return Response.json(await listMembers(await getCurrentUser(), groupId));
-  } catch (error) {
-    return toErrorResponse(error);
-  }
-}
+export const GET = route({ params: ["groupId"] }, async ({ actor, params }) => Response.json(await listMembers(actor, params.groupId)));

@@ -1,0 +1,104 @@
+import "server-only";
+import { and, eq } from "drizzle-orm";
+import type { Configuration } from "../../lib/boundary/types";
+import { ForbiddenError, NotFoundError, ValidationError } from "../../lib/errors";
+import { db } from "../index";
+import { configurations, revisions } from "../schema";
+import { assertUuid, getGroupRole, requireActor, roleAtLeast, type Actor } from "./actor";
+import { recordAudit } from "./audit";
+import { requireConfigurationRole } from "./configuration-access";
+import { toConfigurationDto, type ConfigurationDto, type ConfigurationPage, type ListConfigurationsOptions } from "./configuration-dtos";
+import { listConfigurations } from "./configurations";
+import { resultForDocument } from "./results";
+import { addRevision, documentColumns } from "./revision-writes";
+
+/** Input of `forkConfiguration`. */
+export interface ForkConfigurationInput {
+  /** The group (e.g. the actor's personal space) that receives the fork; editor or better. */
+  targetGroupId: string;
+  /** Revision to fork; the current one when omitted. */
+  revisionId?: string;
+  /** Title of the fork; the source title when omitted. */
+  title?: string;
+  /**
+   * An edited document to start the fork from (the designer's unsaved draft); the fork still records
+   * the revision it was based on. Without it the fork starts from that revision's document.
+   */
+  document?: Configuration;
+}
+
+/**
+ * Forks a configuration (viewer or better on the source) into a group where the actor is editor
+ * or better, in one transaction. The fork starts at revision 1, with the source revision's document
+ * (or the given draft) and its result, and records the source configuration and revision.
+ */
+export async function forkConfiguration(
+  actor: Actor | null,
+  configurationId: string,
+  input: ForkConfigurationInput,
+): Promise<ConfigurationDto> {
+  const author = requireActor(actor);
+  assertUuid(input.targetGroupId, "group");
+  if (input.revisionId !== undefined) assertUuid(input.revisionId, "revision");
+  return db.transaction(async (tx) => {
+    const { row: source } = await requireConfigurationRole(tx, actor, configurationId, "viewer");
+    const targetRole = await getGroupRole(tx, actor, input.targetGroupId);
+    if (!targetRole) throw ValidationError.at(["targetGroupId"], "Choose a space you belong to.");
+    if (!roleAtLeast(targetRole, "editor")) {
+      throw new ForbiddenError("You can only fork into a space where you are an editor or owner.");
+    }
+    const revisionId = input.revisionId ?? source.currentRevisionId;
+    const [revision] = revisionId
+      ? await tx
+          .select()
+          .from(revisions)
+          .where(and(eq(revisions.id, revisionId), eq(revisions.configurationId, source.id)))
+          .limit(1)
+      : [];
+    if (!revision) throw new NotFoundError("No such revision.");
+
+    const title = input.title?.trim() || (input.document ?? revision.document).title;
+    const document: Configuration = { ...(input.document ?? revision.document), title };
+    // The title is not part of the physics, so an untouched document keeps the source's result.
+    const result = await resultForDocument(tx, document, input.document === undefined ? { sameAs: { revisionId: revision.id } } : {});
+    const [created] = await tx
+      .insert(configurations)
+      .values({
+        groupId: input.targetGroupId,
+        ...documentColumns(document, result.summary),
+        version: 1,
+        forkedFromConfigurationId: source.id,
+        forkedFromRevisionId: revision.id,
+        createdBy: author.id,
+      })
+      .returning();
+    if (!created) throw new Error("Configuration insert returned no row");
+    const message = input.document
+      ? `Forked from "${source.title}", revision ${revision.number}, with unsaved changes`
+      : `Forked from "${source.title}", revision ${revision.number}`;
+    const row = await addRevision(tx, created, author.id, message, result);
+    await recordAudit(tx, {
+      actorId: author.id,
+      groupId: input.targetGroupId,
+      action: "configuration.fork",
+      entityType: "configuration",
+      entityId: row.id,
+      details: { sourceConfigurationId: source.id, sourceRevisionId: revision.id, withDraft: input.document !== undefined },
+    });
+    return toConfigurationDto(tx, actor, row, targetRole);
+  });
+}
+
+/**
+ * Direct forks of a configuration, for the owners and editors of its group (a lab instructor
+ * comparing students' forks of a starter). Summaries only, wherever the forks live.
+ */
+export async function listForksOfConfiguration(
+  actor: Actor | null,
+  configurationId: string,
+  options: ListConfigurationsOptions = {},
+): Promise<ConfigurationPage> {
+  await requireConfigurationRole(db, actor, configurationId, "editor");
+  return listConfigurations(eq(configurations.forkedFromConfigurationId, configurationId), options);
+}
+
