@@ -8,7 +8,14 @@
 
 export type * from "./types";
 
-export { computeSpectrum, computeSector, createSectorContext, type SectorContext } from "./spectrum";
+export {
+  computeSpectrum,
+  tryComputeSpectrum,
+  computeSector,
+  createSectorContext,
+  type SectorContext,
+  type SpectrumAttempt,
+} from "./spectrum";
 export {
   checkConfiguration,
   configurationWarnings,

@@ -37,8 +37,8 @@ function sector(pair: [string, string], separation: number, rows: Array<[string,
 
 describe("massCurves", () => {
   it("takes N + a exactly from the lightest row and finds the brane-antibrane tachyon crossing", () => {
-    // Brane-antibrane NS ground state: N + a = -1/2, y_c = pi sqrt(2) ~ 4.443 (physics.md; Banks and
-    // Susskind 1995, from memory).
+    // Brane-antibrane NS ground state: N + a = -1/2, y_c = pi sqrt(2) ~ 4.443 (Banks and Susskind 1995,
+    // hep-th/9511194, from memory).
     const overview = resultOverview(computeSpectrum(braneAntibranePair));
     const curves = massCurves(overview.sectors.filter((s) => s.pair[0] !== s.pair[1]));
     expect(curves.map((curve) => curve.interceptText)).toEqual(["-1/2"]);
