@@ -3,6 +3,7 @@ import { getApiTokenCaller, type ApiTokenCaller } from "@/db/queries/api-tokens"
 import type { ApiTokenScope } from "@/db/schema";
 import { ForbiddenError, RateLimitError, UnauthenticatedError } from "@/lib/errors";
 import { consumeRateLimit, type RateLimitOptions } from "@/lib/server/rate-limit";
+import { acceptsApiTokens } from "@/lib/validations/api-token";
 
 /**
  * Personal API tokens on route handlers (`route()` in lib/server/route.ts calls this when a
@@ -17,20 +18,6 @@ export type Credential = { kind: "session" } | { kind: "token"; tokenId: string;
 
 /** Requests per minute one token may make, on top of the compute budget of POST /api/spectrum. */
 export const apiTokenRequestBudget: RateLimitOptions = { limit: 300, windowMs: 60_000 };
-
-/** The routes that accept a token: the configuration routes and the stateless compute. */
-const tokenRoutePattern = /^\/api\/(?:configurations(?:\/.*)?|spectrum)$/;
-
-/**
- * True when the route at `pathname` accepts `Authorization: Bearer <token>`.
- *
- * @example
- * acceptsApiTokens("/api/configurations/3f0c.../revisions") // => true
- * acceptsApiTokens("/api/groups") // => false
- */
-export function acceptsApiTokens(pathname: string): boolean {
-  return tokenRoutePattern.test(pathname);
-}
 
 /**
  * The caller named by the request's Authorization header, checked against the route: 401 for a

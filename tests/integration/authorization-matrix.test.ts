@@ -11,6 +11,7 @@ import { createShareLink } from "@/db/queries/share-links";
 import { probeNearSevenBrane } from "@/lib/demo-configurations";
 import { createTestGroup, createTestUser, type TestUser } from "@/tests/fixtures/users";
 import { idleState } from "@/lib/action-state";
+import { handlersOf, routeFiles, routeMethods, type RouteMethod } from "@/tests/support/route-files";
 
 // Every route handler under app/api against every kind of caller, from ONE table. The route files
 // are found on disk when the test runs: a new route.ts, or a new exported method, without an entry
@@ -44,8 +45,8 @@ const { runAs } = (await import("@/lib/server/session")) as unknown as {
 
 const roles = ["anonymous", "nonMember", "viewer", "editor", "owner", "admin"] as const;
 type Role = (typeof roles)[number];
-const methods = ["GET", "POST", "PUT", "PATCH", "DELETE"] as const;
-type Method = (typeof methods)[number];
+const methods = routeMethods;
+type Method = RouteMethod;
 
 /** A research group with one member per role, a site admin outside it, and one of every kind of record. */
 interface World {
@@ -162,6 +163,7 @@ const matrix: Record<string, RouteEntry> = {
     excluded: "next-auth's own handler (sign-in, session, CSRF token); its cookies and limits are tested in security.test.ts and sign-in-limit.test.ts",
   },
   "health/route.ts": { methods: { GET: { request: () => ({ request: json("GET", "/api/health") }), expect: everyone(200) } } },
+  "openapi.json/route.ts": { methods: { GET: { request: () => ({ request: json("GET", "/api/openapi.json") }), expect: everyone(200) } } },
   "spectrum/route.ts": {
     methods: {
       POST: {
@@ -388,28 +390,12 @@ const matrix: Record<string, RouteEntry> = {
   },
 };
 
-const apiRoot = path.resolve(import.meta.dirname, "..", "..", "app", "api");
-
-/** Every route.ts under app/api, relative to it, found on disk. */
-function routeFiles(): string[] {
-  return (readdirSync(apiRoot, { recursive: true }) as string[])
-    .map((file) => file.split(path.sep).join("/"))
-    .filter((file) => file === "route.ts" || file.endsWith("/route.ts"))
-    .sort();
-}
 
 /**
  * A cell that succeeds with PUT, PATCH or DELETE changes or removes the record it is about, so it
  * gets a world of its own.
  */
 const needsOwnWorld = (method: Method, status: number) => method !== "GET" && method !== "POST" && status < 400;
-
-type Handler = (request: Request, context: { params: Promise<Params> }) => Promise<Response>;
-
-async function handlersOf(file: string): Promise<Partial<Record<Method, Handler>>> {
-  const module = (await import(/* @vite-ignore */ path.join(apiRoot, file))) as Record<string, unknown>;
-  return Object.fromEntries(methods.filter((method) => typeof module[method] === "function").map((method) => [method, module[method] as Handler]));
-}
 
 describe("authorization matrix", () => {
   it("the table covers every route handler file under app/api and every method it exports", async () => {
@@ -454,7 +440,7 @@ describe("authorization matrix", () => {
 // read-only and read-write tokens in `Authorization: Bearer` (and no session). Routes that take
 // tokens (the configuration routes and the compute) answer as they answer the owner's session,
 // except that a read-only token is refused (403) by every route that writes; every other route
-// refuses tokens (403), apart from the health check, which reads no caller at all. With a session
+// refuses tokens (403), apart from the health check and the API document, which read no caller at all. With a session
 // cookie too, the token alone counts.
 // ---------------------------------------------------------------------------------------------
 
@@ -470,7 +456,7 @@ describe("authorization matrix with API tokens", () => {
     describe(file, () => {
       for (const [method, cell] of Object.entries(entry.methods) as [Method, Cell][]) {
         for (const scope of ["read", "write"] as const) {
-          const ignoresCaller = file === "health/route.ts";
+          const ignoresCaller = file === "health/route.ts" || file === "openapi.json/route.ts";
           const status = !ignoresCaller && (!tokenRoutes(file) || (scope === "read" && writes(file, method))) ? 403 : cell.expect.owner;
           it(`${method} with the owner's ${scope} token -> ${status}`, async () => {
             const world = needsOwnWorld(method, status) ? await createWorld() : await (shared ??= createWorld());
