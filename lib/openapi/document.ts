@@ -548,12 +548,7 @@ function toRouteConfig(operation: Operation): Parameters<OpenAPIRegistry["regist
     path: operation.path,
     tags: [tags[operation.tag].name],
     summary: operation.summary,
-    description: [
-      operation.description,
-      tokens ? `API tokens: ${scope === "read" ? "read-only or read and write" : "read and write only"}.` : undefined,
-    ]
-      .filter(Boolean)
-      .join("\n\n"),
+    description: operation.description,
     security,
     "x-token-scope": tokens ? scope : undefined,
     request: {
