@@ -109,8 +109,8 @@ function OperationView({ path, method, operation, id }: { path: string; method: 
     <article aria-labelledby={id} className="grid gap-4 rounded-lg border border-border bg-surface-raised p-4">
       <header className="grid gap-1.5">
         <h3 id={id} className="flex flex-wrap items-center gap-2 text-base font-semibold">
-          <Badge variant={methodVariant[method] ?? "neutral"} className="font-mono uppercase">
-            {method}
+          <Badge variant={methodVariant[method] ?? "neutral"} className="font-mono">
+            {method.toUpperCase()}
           </Badge>
           <code className="font-mono text-sm break-all">{path}</code>
         </h3>
