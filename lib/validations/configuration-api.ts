@@ -39,13 +39,19 @@ export const updateConfigurationBodySchema = z.object({
 });
 export type UpdateConfigurationBody = z.infer<typeof updateConfigurationBodySchema>;
 
-/** Body of `POST /api/configurations/[configurationId]/fork`. */
+/** Query of `GET /api/configurations/[configurationId]/export`: the format, and a revision other than the current one. */
+export const exportQuerySchema = z.object({
+  format: z.enum(["json", "csv", "tex"], { error: "Choose json, csv or tex." }),
+  revision: z.uuid({ error: "Not a valid revision id." }).optional(),
+});
+
 /** The dashboard's `?deleted=<id>&title=<title>` after a delete, which offers an undo. */
 export const deletedNoticeSchema = z.object({
   deleted: uuid,
   title: z.string().max(configurationTitleMaxLength).catch(""),
 });
 
+/** Body of `POST /api/configurations/[configurationId]/fork`. */
 export const forkConfigurationBodySchema = z.object({
   targetGroupId: uuid,
   revisionId: uuid.optional(),
