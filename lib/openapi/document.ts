@@ -24,8 +24,11 @@ import {
   exportQuerySchema,
   forkConfigurationBodySchema,
   listConfigurationsQuerySchema,
+  readConfigurationQuerySchema,
+  sectorPageQuerySchema,
   updateConfigurationBodySchema,
 } from "@/lib/validations/configuration-api";
+import { storedSectorSchema } from "@/lib/validations/spectrum-result";
 import { auditQuerySchema, changeRoleSchema, createGroupSchema } from "@/lib/validations/group";
 import { importFieldsSchema } from "@/lib/validations/import";
 import { acceptInvitationSchema, createInvitationSchema } from "@/lib/validations/invitation";
@@ -155,8 +158,10 @@ const operations: Operation[] = [
     path: "/api/configurations/{configurationId}",
     tag: "configurations",
     summary: "Read a configuration",
-    description: "The configuration with its current document. The ETag header is its version.",
+    description:
+      "The configuration with its current document. The ETag header is its version. With `include=result` it also carries `result`: the current revision's stored result `{ revisionId, engineVersion, computeMs, createdAt, result }` (null before the first save), sent as stored.",
     access: "signed-in",
+    query: readConfigurationQuerySchema,
     success: { status: 200, description: "The configuration.", schema: configurationResponseSchema },
   },
   {
@@ -223,6 +228,36 @@ const operations: Operation[] = [
     description: "The spectrum the server computed when the revision was saved.",
     access: "signed-in",
     success: { status: 200, description: "The stored result.", schema: revisionResultResponseSchema },
+  },
+  {
+    method: "get",
+    path: "/api/configurations/{configurationId}/revisions/{revisionId}/result/overview",
+    tag: "configurations",
+    summary: "Read the head of a stored result",
+    description:
+      "What the results page opens with: `{ revisionId, engineVersion, computeMs, createdAt, result, facts, massCurves, showGeV, firstPage }`: the result without its sectors, the summary facts, the lightest-state curves against the separation (one per exact N + a), and the first 100 sector overviews (each sector without its level rows, with its lightest row and row count).",
+    access: "signed-in",
+    success: { status: 200, description: "The head of the result." },
+  },
+  {
+    method: "get",
+    path: "/api/configurations/{configurationId}/revisions/{revisionId}/result/sectors",
+    tag: "configurations",
+    summary: "Page the sector overviews of a stored result",
+    description:
+      "`{ items, total, offset }`: sector overviews in result order, filtered by a stack id or label (`search`) and by `tachyonic=true`.",
+    access: "signed-in",
+    query: sectorPageQuerySchema,
+    success: { status: 200, description: "A page of sector overviews." },
+  },
+  {
+    method: "get",
+    path: "/api/configurations/{configurationId}/revisions/{revisionId}/result/sectors/{sectorIndex}",
+    tag: "configurations",
+    summary: "Read one sector of a stored result",
+    description: "The sector at `sectorIndex` (its position in the result, the overview's `index`) with its level rows, mode expansions, massless content and notes.",
+    access: "signed-in",
+    success: { status: 200, description: "The sector.", schema: storedSectorSchema },
   },
   {
     method: "get",

@@ -70,3 +70,16 @@ export function parseIfMatch(header: string | null): number | null {
   const match = /^\s*(?:W\/)?"?(\d{1,9})"?\s*$/.exec(header);
   return match ? Number(match[1]) : Number.NaN;
 }
+
+/** Query of `GET /api/configurations/[configurationId]`: `include=result` adds the current revision's stored result. */
+export const readConfigurationQuerySchema = z.object({
+  include: z.enum(["result"], { error: 'include may only be "result".' }).optional(),
+});
+
+/** Query of `GET .../revisions/[revisionId]/result/sectors`: a page of sector overviews, filtered. */
+export const sectorPageQuerySchema = z.object({
+  offset: z.coerce.number({ error: "offset must be a whole number." }).int().min(0).max(1_000_000).default(0),
+  limit: z.coerce.number({ error: "limit must be a whole number." }).int().min(1).max(500).default(100),
+  search: z.string().trim().max(120).optional(),
+  tachyonic: z.enum(["true", "false"]).transform((value) => value === "true").optional(),
+});
