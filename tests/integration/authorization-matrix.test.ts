@@ -8,6 +8,7 @@ import { createConfiguration } from "@/db/queries/configurations";
 import { createInvitation } from "@/db/queries/invitations";
 import { createShareLink } from "@/db/queries/share-links";
 import { probeNearSevenBrane } from "@/lib/demo-configurations";
+import { clientAddressHeader } from "@/scripts/lib/client-address.mjs";
 import { createTestGroup, createTestUser, type TestUser } from "@/tests/fixtures/users";
 import { idleState } from "@/lib/action-state";
 
@@ -161,7 +162,7 @@ const matrix: Record<string, RouteEntry> = {
       POST: {
         request: (_w, role) => {
           const request = json("POST", "/api/spectrum", probeNearSevenBrane);
-          request.headers.set("x-forwarded-for", `matrix-${role}-${Math.random()}`);
+          request.headers.set(clientAddressHeader, `matrix-${role}-${Math.random()}`);
           return { request };
         },
         expect: everyone(200),
@@ -493,6 +494,7 @@ const actionMatrix: Record<string, ActionEntry> = {
           action(...([idleState(), form({ currentPassword: "", newPassword: "a brand new password", confirmPassword: "a brand new password" })] as never[])),
         expect: okFor(signedInRoles),
       },
+      signOutEverywhereAction: { call: (action) => action(...([] as never[])), expect: okFor(signedInRoles) },
     },
   },
   "(workspace)/admin/actions.ts": {

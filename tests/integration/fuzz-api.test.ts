@@ -12,6 +12,7 @@ import {
   probeNearSevenBrane,
   zeroFourBoundState,
 } from "@/lib/demo-configurations";
+import { clientAddressHeader } from "@/scripts/lib/client-address.mjs";
 import { createTestUser } from "@/tests/fixtures/users";
 
 // Fuzzing of the two routes that take a whole configuration document from outside: random JSON,
@@ -227,7 +228,7 @@ describe("POST /api/spectrum fuzzing", () => {
         const headers: Record<string, string> = { "content-type": "application/json" };
         // Signed-in callers skip the rate limit; anonymous ones come from a fresh address each time.
         if (signedIn) headers.cookie = "next-auth.session-token=fuzz";
-        else headers["x-forwarded-for"] = `fuzz-${randomUUID()}`;
+        else headers[clientAddressHeader] = `fuzz-${randomUUID()}`;
         const response = await spectrumRoute.POST(
           new Request("http://127.0.0.1/api/spectrum", { method: "POST", headers, body: text }),
         );

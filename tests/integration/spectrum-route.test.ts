@@ -1,6 +1,7 @@
 import { beforeEach, describe, expect, it, vi } from "vitest";
 import type { SpectrumResult } from "@/lib/boundary/types";
 import { resetRateLimits } from "@/lib/server/rate-limit";
+import { clientAddressHeader } from "@/scripts/lib/client-address.mjs";
 
 // The compute route needs no database; only the session lookup is replaced.
 const session = vi.hoisted(() => ({ signedIn: false }));
@@ -16,7 +17,7 @@ function post(body: string, headers: Record<string, string> = {}): Promise<Respo
   return POST(
     new Request("http://127.0.0.1/api/spectrum", {
       method: "POST",
-      headers: { "content-type": "application/json", "x-forwarded-for": "198.51.100.7", ...headers },
+      headers: { "content-type": "application/json", [clientAddressHeader]: "198.51.100.7", ...headers },
       body,
     }),
   );
@@ -102,14 +103,14 @@ describe("POST /api/spectrum", () => {
     vi.setSystemTime(new Date("2030-01-01T00:00:01Z"));
     try {
       let last: Response | undefined;
-      for (let i = 0; i < 121; i += 1) last = await post(body, { "x-forwarded-for": "203.0.113.5" });
+      for (let i = 0; i < 121; i += 1) last = await post(body, { [clientAddressHeader]: "203.0.113.5" });
       expect(last?.status).toBe(429);
       expect(Number(last?.headers.get("retry-after"))).toBeGreaterThan(0);
       // Another address still gets through.
-      expect((await post(body, { "x-forwarded-for": "203.0.113.6" })).status).toBe(200);
+      expect((await post(body, { [clientAddressHeader]: "203.0.113.6" })).status).toBe(200);
       // A signed-in caller from the limited address is not counted.
       session.signedIn = true;
-      const signedIn = await post(body, { "x-forwarded-for": "203.0.113.5", cookie: "next-auth.session-token=abc" });
+      const signedIn = await post(body, { [clientAddressHeader]: "203.0.113.5", cookie: "next-auth.session-token=abc" });
       expect(signedIn.status).toBe(200);
     } finally {
       vi.useRealTimers();

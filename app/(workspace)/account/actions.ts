@@ -1,6 +1,7 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
+import { signOutEverywhere } from "@/db/queries/sessions";
 import { updateAccount } from "@/db/queries/users";
 import { errorState, invalidState, readFields, type ActionState, type FieldsOf } from "@/lib/action-state";
 import { getCurrentUser } from "@/lib/server/session";
@@ -34,5 +35,22 @@ export async function changePasswordAction(_previous: ChangePasswordState, formD
   } catch (error) {
     return errorState(error);
   }
-  return { status: "success", message: "Your password has been changed.", fieldErrors: {}, values: {} };
+  return {
+    status: "success",
+    message: "Your password has been changed. Every other device that was signed in has been signed out.",
+    fieldErrors: {},
+    values: {},
+  };
+}
+
+export type SignOutEverywhereState = ActionState<never>;
+
+/** Ends every session of the account, this one included; the client then clears its own cookie. */
+export async function signOutEverywhereAction(): Promise<SignOutEverywhereState> {
+  try {
+    await signOutEverywhere(await getCurrentUser());
+  } catch (error) {
+    return errorState(error);
+  }
+  return { status: "success", message: null, fieldErrors: {}, values: {} };
 }

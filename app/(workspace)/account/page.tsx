@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { AccountNameForm } from "@/components/account/account-name-form";
 import { ChangePasswordForm } from "@/components/account/change-password-form";
+import { SignOutEverywhereForm } from "@/components/account/sign-out-everywhere-form";
 import { RoleBadge } from "@/components/dashboard/role-badge";
 import { PageContainer } from "@/components/layout/page-container";
 import { Card, CardContent, CardDescription, CardHeader, CardTitle } from "@/components/ui/card";
@@ -57,6 +58,18 @@ export default async function AccountPage() {
           </CardHeader>
           <CardContent>
             <ChangePasswordForm hasPassword={account.hasPassword} />
+          </CardContent>
+        </Card>
+        <Card aria-labelledby="account-sessions-title">
+          <CardHeader>
+            <CardTitle id="account-sessions-title">Signed-in devices</CardTitle>
+            <CardDescription>
+              Signs out every browser and device where this account is signed in, this one included. Changing or resetting the
+              password does the same for the other devices.
+            </CardDescription>
+          </CardHeader>
+          <CardContent>
+            <SignOutEverywhereForm />
           </CardContent>
         </Card>
       </div>
