@@ -56,8 +56,9 @@ type Parsed<T> = T extends z.ZodType ? z.output<T> : undefined;
  * before anything else is read), the route params, the `before` checks, the query and the JSON body (read with a byte
  * count, 400 for malformed JSON, 413 past the limit, 422 with every zod issue at its JSON path),
  * then the handler. Thrown errors become their status (lib/errors.ts `toErrorResponse`); anything
- * unexpected is logged and answered 500. Responses to signed-in callers are `private, no-store`
- * unless the handler sets Cache-Control itself.
+ * unexpected is logged and answered 500. Every response to a caller with a session (errors
+ * included, and whatever the handler set) is `Cache-Control: private, no-store`: it may hold
+ * what only that user may see, and no cache, shared or the browser's, should keep it.
  *
  * @example
  * export const GET = route({ params: ["thingId"] }, async ({ actor, params }) =>
@@ -94,10 +95,10 @@ export function route<
         body: body as Parsed<TBody>,
         query: query as Parsed<TQuery>,
       });
-      return actor ? withPrivateCaching(response) : response;
+      return actor || hasSessionCookie(request) ? withPrivateCaching(response) : response;
     } catch (error) {
       const response = toErrorResponse(error);
-      return actor ? withPrivateCaching(response) : response;
+      return actor || hasSessionCookie(request) ? withPrivateCaching(response) : response;
     }
   };
 }
@@ -128,8 +129,13 @@ async function resolveActor(request: Request, options: { anonymousWhenSessionUna
   }
 }
 
-/** Marks a response to a signed-in caller as not cacheable by shared caches, unless it says otherwise. */
+/** Marks a response to a signed-in caller as cacheable by nobody. */
 function withPrivateCaching(response: Response): Response {
-  if (!response.headers.has("cache-control")) response.headers.set("cache-control", "private, no-store");
+  response.headers.set("cache-control", "private, no-store");
   return response;
+}
+
+/** True when the request carries a next-auth session cookie (plain, __Secure- or chunked). */
+function hasSessionCookie(request: Request): boolean {
+  return /(?:^|;\s*)(?:__Secure-)?next-auth\.session-token(?:\.\d+)?=/.test(request.headers.get("cookie") ?? "");
 }

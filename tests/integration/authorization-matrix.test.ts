@@ -433,6 +433,8 @@ describe("authorization matrix", () => {
             const response = await runAs(actorOf(world, role), () => handler(request, { params: Promise.resolve(params) }));
             const body = response.status >= 400 ? await response.text() : "";
             expect({ status: response.status, body: body.slice(0, 200) }).toMatchObject({ status });
+            // Whatever a signed-in caller gets back, success or refusal, no cache may keep it.
+            if (role !== "anonymous") expect(response.headers.get("cache-control")).toBe("private, no-store");
           });
         }
       }
