@@ -3,7 +3,7 @@
 import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import { confirmSignUp, issuePasswordResetToken, issueSignInLinkToken, requestSignUp, resetPasswordWithToken } from "@/db/queries/users";
-import { errorState, invalidState, readFields, type ActionState, type FieldsOf } from "@/lib/action-state";
+import { errorState, invalidState, parseFields, readFields, type ActionState, type FieldsOf } from "@/lib/action-state";
 import { toCallbackQuery, toSafeCallbackPath } from "@/lib/safe-redirect";
 import {
   sendExistingAccountMail,
@@ -34,7 +34,7 @@ function signUpSentMessage(email: string): string {
 export async function signUpAction(_previous: SignUpState, formData: FormData): Promise<SignUpState> {
   const fields = readFields(formData, ["name", "email", "password", "confirmPassword", "callbackPath"]);
   const kept = { name: fields.name, email: fields.email };
-  const parsed = signUpSchema.safeParse(fields);
+  const parsed = parseFields(signUpSchema, fields);
   if (!parsed.success) return invalidState(parsed.error.issues, kept);
   try {
     const refused = (await limitSignUps(clientAddress(await headers()))) ?? (await limitEmailedLinks(parsed.data.email));
@@ -58,7 +58,7 @@ export async function signUpAction(_previous: SignUpState, formData: FormData): 
 export async function confirmSignUpAction(_previous: ConfirmSignUpState, formData: FormData): Promise<ConfirmSignUpState> {
   const fields = readFields(formData, ["token", "password"]);
   const kept = { token: fields.token };
-  const parsed = confirmSignUpSchema.safeParse(fields);
+  const parsed = parseFields(confirmSignUpSchema, fields);
   if (!parsed.success) return invalidState(parsed.error.issues, kept);
   try {
     await confirmSignUp(null, parsed.data.token, parsed.data.password);
@@ -94,7 +94,7 @@ export async function requestPasswordResetAction(_previous: EmailRequestState, f
 export async function resetPasswordAction(_previous: PasswordResetState, formData: FormData): Promise<PasswordResetState> {
   const fields = readFields(formData, ["token", "password", "confirmPassword"]);
   const kept = { token: fields.token };
-  const parsed = passwordResetSchema.safeParse(fields);
+  const parsed = parseFields(passwordResetSchema, fields);
   if (!parsed.success) return invalidState(parsed.error.issues, kept);
   try {
     await resetPasswordWithToken(null, parsed.data.token, parsed.data.password);
@@ -116,7 +116,7 @@ async function requestEmailedLink(
   issueAndSend: (email: string) => Promise<void>,
 ): Promise<EmailRequestState> {
   const fields = readFields(formData, ["email"]);
-  const parsed = emailRequestSchema.safeParse(fields);
+  const parsed = parseFields(emailRequestSchema, fields);
   if (!parsed.success) return invalidState(parsed.error.issues, fields);
   try {
     // At most a few links per address per quarter hour (lib/server/sign-in-limit.ts), account or not.

@@ -4,6 +4,7 @@ import { and, asc, count, eq, gt, ilike, isNull, lt, or, sql } from "drizzle-orm
 import { NotFoundError, UnauthenticatedError, ValidationError } from "../../lib/errors";
 import { comparePassword, hashPassword } from "../../lib/server/password-hashing";
 import { createSecureToken, hashSecureToken } from "../../lib/server/secure-token";
+import { isStorableText } from "../../lib/storable-text";
 import { db, type Executor, type Transaction } from "../index";
 import { authTokens, pendingSignUps, users, type AuthTokenKind, type SiteRole } from "../schema";
 import { assertUuid, requireActor, requireSiteAdmin, type Actor } from "./actor";
@@ -370,6 +371,8 @@ export async function listUsers(
 ): Promise<{ items: UserSummaryDto[]; total: number }> {
   requireSiteAdmin(actor);
   const search = options.search?.trim();
+  // No account holds text the database cannot store, so such a search matches nothing.
+  if (search && !isStorableText(search)) return { items: [], total: 0 };
   const pattern = search ? `%${search.replace(/[\\%_]/g, (c) => `\\${c}`)}%` : null;
   const where = and(
     isNull(users.deletedAt),

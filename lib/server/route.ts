@@ -53,8 +53,9 @@ type Parsed<T> = T extends z.ZodType ? z.output<T> : undefined;
 
 /**
  * The one wrapper of Mooring's route handlers. In order: the actor (401 when required and missing,
- * before anything else is read), the route params, the `before` checks, the query and the JSON body (read with a byte
- * count, 400 for malformed JSON, 413 past the limit, 422 with every zod issue at its JSON path),
+ * before anything else is read), the query string (422 for NUL characters or unpaired surrogates,
+ * on every route), the route params, the `before` checks, the query schema and the JSON body (read
+ * with a byte count, 400 for malformed JSON, 413 past the limit, 422 with every zod issue at its JSON path),
  * then the handler. Thrown errors become their status (lib/errors.ts `toErrorResponse`); anything
  * unexpected is logged and answered 500. Every response to a caller with a session (errors
  * included, and whatever the handler set) is `Cache-Control: private, no-store`: it may hold
@@ -81,10 +82,12 @@ export function route<
     try {
       actor = await resolveActor(request, options);
       if (!actor && (options.auth ?? "required") === "required") throw new UnauthenticatedError();
+      // Every route refuses a query string the database could not store, whether it reads it or not.
+      const rawQuery = readQuery(request);
       const params = await readParams(context, options.params ?? []);
       const typedActor = actor as TAuth extends "optional" ? Actor | null : Actor;
       await options.before?.({ request, actor: typedActor, params });
-      const query = options.query ? options.query.parse(readQuery(request)) : undefined;
+      const query = options.query ? options.query.parse(rawQuery) : undefined;
       const body = options.body
         ? options.body.parse(await readJsonBody(request, options.bodyLimitBytes ?? defaultBodyLimitBytes))
         : undefined;

@@ -1,5 +1,3 @@
-import { readdirSync, readFileSync } from "node:fs";
-import path from "node:path";
 import { describe, expect, it, vi } from "vitest";
 import type { Actor } from "@/db/queries/actor";
 import { uploadAttachment } from "@/db/queries/attachments";
@@ -10,6 +8,7 @@ import { createShareLink } from "@/db/queries/share-links";
 import { probeNearSevenBrane } from "@/lib/demo-configurations";
 import { clientAddressHeader } from "@/scripts/lib/client-address.mjs";
 import { createTestGroup, createTestUser, type TestUser } from "@/tests/fixtures/users";
+import { actionFiles, actionsOf, handlersOf, routeFiles, type Method } from "@/tests/support/app-modules";
 import { idleState } from "@/lib/action-state";
 
 // Every route handler under app/api against every kind of caller, from ONE table. The route files
@@ -44,8 +43,6 @@ const { runAs } = (await import("@/lib/server/session")) as unknown as {
 
 const roles = ["anonymous", "nonMember", "viewer", "editor", "owner", "admin"] as const;
 type Role = (typeof roles)[number];
-const methods = ["GET", "POST", "PUT", "PATCH", "DELETE"] as const;
-type Method = (typeof methods)[number];
 
 /** A research group with one member per role, a site admin outside it, and one of every kind of record. */
 interface World {
@@ -383,23 +380,6 @@ const matrix: Record<string, RouteEntry> = {
   },
 };
 
-const apiRoot = path.resolve(import.meta.dirname, "..", "..", "app", "api");
-
-/** Every route.ts under app/api, relative to it, found on disk. */
-function routeFiles(): string[] {
-  return (readdirSync(apiRoot, { recursive: true }) as string[])
-    .map((file) => file.split(path.sep).join("/"))
-    .filter((file) => file === "route.ts" || file.endsWith("/route.ts"))
-    .sort();
-}
-
-type Handler = (request: Request, context: { params: Promise<Params> }) => Promise<Response>;
-
-async function handlersOf(file: string): Promise<Partial<Record<Method, Handler>>> {
-  const module = (await import(/* @vite-ignore */ path.join(apiRoot, file))) as Record<string, unknown>;
-  return Object.fromEntries(methods.filter((method) => typeof module[method] === "function").map((method) => [method, module[method] as Handler]));
-}
-
 describe("authorization matrix", () => {
   it("the table covers every route handler file under app/api and every method it exports", async () => {
     const files = routeFiles();
@@ -533,23 +513,6 @@ const actionMatrix: Record<string, ActionEntry> = {
     },
   },
 };
-
-const appRoot = path.resolve(import.meta.dirname, "..", "..", "app");
-
-/** Every file under app/ that starts with "use server", found on disk. */
-function actionFiles(): string[] {
-  return (readdirSync(appRoot, { recursive: true }) as string[])
-    .map((file) => file.split(path.sep).join("/"))
-    .filter((file) => /\.tsx?$/.test(file) && /^\s*["']use server["']/.test(readFileSync(path.join(appRoot, file), "utf8")))
-    .sort();
-}
-
-async function actionsOf(file: string): Promise<Record<string, (...args: never[]) => Promise<unknown>>> {
-  const module = (await import(/* @vite-ignore */ path.join(appRoot, file))) as Record<string, unknown>;
-  return Object.fromEntries(
-    Object.entries(module).filter((entry): entry is [string, (...args: never[]) => Promise<unknown>] => typeof entry[1] === "function"),
-  );
-}
 
 /** "ok" or "refused", from what an action returned or threw. */
 async function outcomeOf(run: () => Promise<unknown>): Promise<{ outcome: Outcome; detail: string }> {

@@ -220,6 +220,11 @@ describe("admin functions", () => {
     expect((await getActorById(member.actor.id))?.siteRole).toBe("admin");
   });
 
+  it("let a search for text no account can hold match nothing instead of failing", async () => {
+    const admin = await createTestUser({ label: "admin", siteRole: "admin" });
+    expect(await listUsers(admin.actor, { search: "ada\u0000" })).toEqual({ items: [], total: 0 });
+  });
+
   it("treat a malformed user id as not found", async () => {
     const admin = await createTestUser({ label: "admin", siteRole: "admin" });
     await expect(setSiteRole(admin.actor, "not-a-uuid", "admin")).rejects.toMatchObject({ status: 404 });

@@ -3,7 +3,7 @@
 import { revalidatePath } from "next/cache";
 import { signOutEverywhere } from "@/db/queries/sessions";
 import { updateAccount } from "@/db/queries/users";
-import { errorState, invalidState, readFields, type ActionState, type FieldsOf } from "@/lib/action-state";
+import { errorState, invalidState, parseFields, readFields, type ActionState, type FieldsOf } from "@/lib/action-state";
 import { getCurrentUser } from "@/lib/server/session";
 import { accountNameSchema, changePasswordSchema } from "@/lib/validations/auth";
 
@@ -12,7 +12,7 @@ export type ChangePasswordState = ActionState<FieldsOf<typeof changePasswordSche
 
 export async function updateAccountNameAction(_previous: AccountNameState, formData: FormData): Promise<AccountNameState> {
   const fields = readFields(formData, ["name"]);
-  const parsed = accountNameSchema.safeParse(fields);
+  const parsed = parseFields(accountNameSchema, fields);
   if (!parsed.success) return invalidState(parsed.error.issues, fields);
   try {
     await updateAccount(await getCurrentUser(), { name: parsed.data.name });
@@ -25,7 +25,7 @@ export async function updateAccountNameAction(_previous: AccountNameState, formD
 
 export async function changePasswordAction(_previous: ChangePasswordState, formData: FormData): Promise<ChangePasswordState> {
   const fields = readFields(formData, ["currentPassword", "newPassword", "confirmPassword"]);
-  const parsed = changePasswordSchema.safeParse(fields);
+  const parsed = parseFields(changePasswordSchema, fields);
   if (!parsed.success) return invalidState(parsed.error.issues);
   try {
     await updateAccount(await getCurrentUser(), {
