@@ -37,6 +37,17 @@ describe("CSRF protection in proxy.ts", () => {
     }
   });
 
+  it("refuses a cross-site server action with 403, on any page, and lets a same-origin one through", async () => {
+    for (const pathname of ["/sign-up", "/account", "/groups/some-group"]) {
+      const forged = await call(pathname, "POST", { "next-action": "7f00aa", origin: "https://evil.example", "sec-fetch-site": "cross-site" });
+      expect(forged.status).toBe(403);
+      expect(((await forged.json()) as { error: string }).error).toBe("cross_site_request");
+      expect((await call(pathname, "POST", { "next-action": "7f00aa", origin: "https://evil.example" })).status).toBe(403);
+      const own = await call(pathname, "POST", { "next-action": "7f00aa", origin: app, "sec-fetch-site": "same-origin" });
+      expect(own.headers.get("x-middleware-next")).toBe("1");
+    }
+  });
+
   it("passes same-origin mutations, reads from anywhere, and next-auth's own routes on to the handlers", async () => {
     const passes = (response: Response) => response.headers.get("x-middleware-next") === "1";
     expect(passes(await call("/api/configurations", "POST", { origin: app, "sec-fetch-site": "same-origin" }))).toBe(true);
@@ -63,6 +74,12 @@ describe("which /api requests reach the CSRF check (proxy.ts matcher)", () => {
     expect(matches("/api/configurations", { "sec-fetch-site": "none", origin: "https://evil.example" })).toBe(true);
     expect(matches("/api/spectrum", { origin: "https://evil.example" })).toBe(true);
     expect(matches("/api/spectrum", { origin: "null" })).toBe(true);
+  });
+
+  it("runs the check for server actions on every page", () => {
+    expect(matches("/sign-up", { "next-action": "7f00aa", origin: "https://evil.example" })).toBe(true);
+    expect(matches("/", { "next-action": "7f00aa" })).toBe(true);
+    expect(matches("/sign-up", {})).toBe(false);
   });
 
   it("skips the app's own requests and clients without browser headers", () => {
