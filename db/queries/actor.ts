@@ -86,16 +86,6 @@ export async function requireGroupRole(
 }
 
 /**
- * Loads the Actor for a user id, or null when the account no longer exists or was deleted. It
- * authorizes nothing; sessions go through {@link getActorForSession}.
- */
-export async function getActorById(userId: string): Promise<Actor | null> {
-  if (!isUuid(userId)) return null;
-  const [row] = await actorByIdStatement.execute({ userId });
-  return row ?? null;
-}
-
-/**
  * Loads the Actor of a session token's user and session id, or null when the session was revoked
  * (signed out, a password change or reset) or the account is gone. This is how every request
  * obtains its actor; one prepared query.
@@ -120,13 +110,6 @@ function selectGroupRole(executor: Executor, groupId: string | Placeholder, user
 }
 
 const groupRoleStatement = selectGroupRole(db, sql.placeholder("groupId"), sql.placeholder("userId")).prepare("group_role");
-
-const actorByIdStatement = db
-  .select({ id: users.id, email: users.email, name: users.name, siteRole: users.siteRole })
-  .from(users)
-  .where(and(eq(users.id, sql.placeholder("userId")), isNull(users.deletedAt)))
-  .limit(1)
-  .prepare("actor_by_id");
 
 const actorBySessionStatement = db
   .select({ id: users.id, email: users.email, name: users.name, siteRole: users.siteRole })

@@ -18,7 +18,7 @@ type PasswordJob = { kind: "hash"; password: string; cost: number } | { kind: "c
 export interface PasswordHasherOptions {
   /** Worker threads (default: one per core but one, between 1 and 4). */
   threads?: number;
-  /** Jobs that may wait for a thread; one more is refused with ServiceBusyError (default 16 per thread). */
+  /** Jobs that may wait for a thread; one more is refused with ServiceBusyError (default 32 per thread, about 8 s of work at cost 12). */
   maxQueue?: number;
 }
 
@@ -63,7 +63,7 @@ interface Thread {
 /** A pool of hashing threads; the app uses one shared pool (see {@link hashPassword}). */
 export function createPasswordHasher(options: PasswordHasherOptions = {}): PasswordHasher {
   const size = Math.max(1, Math.floor(options.threads ?? Math.min(4, Math.max(1, availableParallelism() - 1))));
-  const maxQueue = Math.max(0, Math.floor(options.maxQueue ?? size * 16));
+  const maxQueue = Math.max(0, Math.floor(options.maxQueue ?? size * 32));
   const threads: Thread[] = [];
   const queue: Pending[] = [];
   let nextId = 1;

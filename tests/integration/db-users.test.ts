@@ -3,7 +3,8 @@ import { eq, sql } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { db } from "@/db/index";
 import { authTokens, groups, users } from "@/db/schema";
-import { getActorById } from "@/db/queries/actor";
+import { getActorForSession } from "@/db/queries/actor";
+import { startSession } from "@/db/queries/sessions";
 import {
   consumeSignInLinkToken,
   createUser,
@@ -127,6 +128,26 @@ describe("sign-in link tokens", () => {
     });
   });
 
+  it("takes the password and sessions from a never-verified account at its first link sign-in", async () => {
+    // As sign-ups were before they were confirmed by mail: anyone could have chosen this password.
+    const squatted = await createTestUser({ label: "squatted", password: "chosen-by-someone-1" });
+    const squatterSession = await startSession(squatted.actor.id);
+    const issued = await issueSignInLinkToken(null, squatted.actor.email);
+    await expect(consumeSignInLinkToken(null, issued?.token ?? "")).resolves.toEqual(squatted.actor);
+    const [row] = await db.select().from(users).where(eq(users.id, squatted.actor.id));
+    expect(row).toMatchObject({ passwordHash: null, emailVerifiedAt: expect.any(Date) });
+    expect(await getActorForSession(squatted.actor.id, squatterSession)).toBeNull();
+    await expect(verifyPassword(null, squatted.actor.email, "chosen-by-someone-1")).rejects.toBeInstanceOf(UnauthenticatedError);
+
+    // A verified account keeps its password and sessions.
+    const owner = await createTestUser({ label: "verified", password: "owners-own-password" });
+    await db.update(users).set({ emailVerifiedAt: new Date() }).where(eq(users.id, owner.actor.id));
+    const ownerSession = await startSession(owner.actor.id);
+    await consumeSignInLinkToken(null, (await issueSignInLinkToken(null, owner.actor.email))?.token ?? "");
+    expect(await getActorForSession(owner.actor.id, ownerSession)).toMatchObject({ id: owner.actor.id });
+    await expect(verifyPassword(null, owner.actor.email, "owners-own-password")).resolves.toEqual(owner.actor);
+  });
+
   it("explains an expired link and an unknown one", async () => {
     const user = await createTestUser({ label: "expired" });
     const issued = await issueSignInLinkToken(null, user.actor.email);
@@ -215,9 +236,12 @@ describe("admin functions", () => {
     expect(page.items.map((item) => item.id)).toEqual([member.actor.id]);
     expect(page.total).toBe(1);
 
+    // A session opened before the change sees the new role on its next request.
+    const session = await startSession(member.actor.id);
+    expect((await getActorForSession(member.actor.id, session))?.siteRole).toBe("member");
     const promoted = await setSiteRole(admin.actor, member.actor.id, "admin");
     expect(promoted.siteRole).toBe("admin");
-    expect((await getActorById(member.actor.id))?.siteRole).toBe("admin");
+    expect((await getActorForSession(member.actor.id, session))?.siteRole).toBe("admin");
   });
 
   it("let a search for text no account can hold match nothing instead of failing", async () => {
