@@ -15,7 +15,7 @@ const repoRoot = fileURLToPath(new URL("..", import.meta.url));
 
 const { values } = parseArgs({
   options: {
-    hostname: { type: "string", short: "H", default: process.env.HOSTNAME || "127.0.0.1" },
+    hostname: { type: "string", short: "H", default: "127.0.0.1" },
     port: { type: "string", short: "p", default: process.env.PORT || "3000" },
   },
 });
