@@ -16,7 +16,9 @@ import {
   unique,
   uuid,
 } from "drizzle-orm/pg-core";
-import type { Configuration, SpectrumResult } from "../lib/boundary/types";
+import type { Configuration } from "../lib/boundary/types";
+import type { ResultOverview } from "../lib/spectrum/overview";
+import type { StoredSpectrumResult } from "../lib/validations/spectrum-result";
 
 /*
  * Mooring's tables. Conventions:
@@ -306,17 +308,30 @@ export const revisions = pgTable(
 );
 
 /** The engine's authoritative result for one revision. */
-export const results = pgTable("results", {
-  id: uuid("id").primaryKey().defaultRandom(),
-  revisionId: uuid("revision_id")
-    .notNull()
-    .unique()
-    .references(() => revisions.id, { onDelete: "cascade" }),
-  engineVersion: text("engine_version").notNull(),
-  result: jsonb("result").$type<SpectrumResult>().notNull(),
-  computeMs: doublePrecision("compute_ms").notNull(),
-  createdAt: createdAt(),
-});
+export const results = pgTable(
+  "results",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    revisionId: uuid("revision_id")
+      .notNull()
+      .unique()
+      .references(() => revisions.id, { onDelete: "cascade" }),
+    engineVersion: text("engine_version").notNull(),
+    /**
+     * SHA-256 of the engine version and the document's result-relevant content
+     * (lib/boundary/result-key.ts): a save of an unchanged document reuses the stored result. Null
+     * for results stored before content addressing.
+     */
+    contentHash: text("content_hash"),
+    /** Read it through `readStoredResult` (lib/validations/spectrum-result.ts), which upgrades older results. */
+    result: jsonb("result").$type<StoredSpectrumResult>().notNull(),
+    /** The result without per-sector detail (lib/spectrum/overview.ts), for the results page; null for older rows. */
+    overview: jsonb("overview").$type<ResultOverview>(),
+    computeMs: doublePrecision("compute_ms").notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [index("results_content_hash_idx").on(t.contentHash)],
+);
 
 // ---------------------------------------------------------------------------------------------
 // Collaboration

@@ -166,20 +166,6 @@ export class ServiceUnavailableError extends DomainError {
   }
 }
 
-/** The server has too much of one kind of work queued (e.g. password checks) to take more now (503). */
-export class ServiceBusyError extends DomainError {
-  readonly status = 503;
-  readonly code = "busy";
-  readonly retryAfterSeconds = 2;
-  constructor(message = "The server is busy right now. Nothing was changed; please try again in a moment.") {
-    super(message);
-    this.name = "ServiceBusyError";
-  }
-  override toJSON() {
-    return { retryAfterSeconds: this.retryAfterSeconds };
-  }
-}
-
 /**
  * Maps any thrown value to a JSON Response: domain errors to their status, zod errors to 422 with
  * every issue's path, lost database connections to 503, anything else to a logged 500.
@@ -189,7 +175,7 @@ export function toErrorResponse(error: unknown): Response {
   const known = toDomainError(error);
   if (known) {
     const headers: Record<string, string> = {};
-    if (known instanceof RateLimitError || known instanceof ServiceBusyError) {
+    if (known instanceof RateLimitError) {
       headers["Retry-After"] = String(Math.max(1, Math.ceil(known.retryAfterSeconds)));
     }
     if (known instanceof ServiceUnavailableError) headers["Retry-After"] = "5";

@@ -1,12 +1,13 @@
 import Link from "next/link";
 import { StarterToggle } from "@/components/collaboration/starter-toggle";
 import { ForkToSpaceButton } from "@/components/collaboration/fork-to-space-button";
-import { formatMassSquared, SupersymmetryBadge, TachyonBadge } from "@/components/collaboration/result-badges";
+import { SupersymmetryBadge, TachyonBadge } from "@/components/collaboration/result-badges";
 import { Badge } from "@/components/ui/badge";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Table, TableBody, TableCaption, TableCell, TableHead, TableHeader, TableRow } from "@/components/ui/table";
 import type { ConfigurationSummaryDto } from "@/db/queries/configuration-dtos";
 import { formatDate } from "@/lib/format-date";
+import { formatMassSquared } from "@/lib/spectrum";
 
 export interface GroupConfigurationsTableProps {
   configurations: ConfigurationSummaryDto[];

@@ -1,6 +1,6 @@
 import type { ReactNode } from "react";
 import { Badge } from "@/components/ui/badge";
-import { formatMassSquared } from "@/lib/designer/spectrum-summary";
+import { formatMassSquared, formatPair, pairKey } from "@/lib/spectrum";
 import type { ConfigurationDiff, SpectrumDiff } from "@/lib/revisions/diff";
 
 export interface RevisionDiffViewProps {
@@ -105,19 +105,19 @@ export function RevisionDiffView({ fromNumber, toNumber, configurationDiff, spec
             ) : null}
             {spectrumDiff.bps ? <li>All stacks mutually supersymmetric: {spectrumDiff.bps.after ? "now yes" : "no longer"}</li> : null}
             {spectrumDiff.addedSectors.map((pair) => (
-              <li key={`as-${pair.join("-")}`}>
-                <Badge variant="success">new sector</Badge> {pair.join("–")}
+              <li key={`as-${pairKey(...pair)}`}>
+                <Badge variant="success">new sector</Badge> {formatPair(pair)}
               </li>
             ))}
             {spectrumDiff.removedSectors.map((pair) => (
-              <li key={`rs-${pair.join("-")}`}>
-                <Badge variant="danger">sector gone</Badge> {pair.join("–")}
+              <li key={`rs-${pairKey(...pair)}`}>
+                <Badge variant="danger">sector gone</Badge> {formatPair(pair)}
               </li>
             ))}
             {spectrumDiff.changedSectors.map((sector) => (
-              <li key={`cs-${sector.pair.join("-")}`} className="grid gap-0.5">
+              <li key={`cs-${pairKey(...sector.pair)}`} className="grid gap-0.5">
                 <span>
-                  Sector <strong>{sector.pair.join("–")}</strong>
+                  Sector <strong>{formatPair(sector.pair)}</strong>
                 </span>
                 <ul className="ml-6 list-disc text-muted-foreground">
                   {sector.lightest ? (

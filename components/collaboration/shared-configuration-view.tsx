@@ -1,10 +1,13 @@
+import { LightestStatesTable } from "@/components/results/lightest-states-table";
 import { SectorLevelsTable } from "@/components/results/sector-levels-table";
+import { SpectrumSummary } from "@/components/results/spectrum-summary";
 import { ConventionsNote } from "@/components/designer/conventions-note";
-import { Badge } from "@/components/ui/badge";
 import { Card, CardContent, CardDescription, CardHeader, CardTitle } from "@/components/ui/card";
-import { Table, TableBody, TableCaption, TableCell, TableHead, TableHeader, TableRow } from "@/components/ui/table";
+import { Table, TableBody, TableCell, TableHead, TableHeader, TableRow } from "@/components/ui/table";
 import type { SharedConfigurationDto } from "@/db/queries/share-links";
-import { formatMassSquared, formatNumber, stackKind } from "@/lib/designer/spectrum-summary";
+import { dimensionOf } from "@/lib/boundary";
+import { stackKind } from "@/lib/designer/stack-kind";
+import { formatNumber, formatPair, pairKey, summaryFacts } from "@/lib/spectrum";
 
 export interface SharedConfigurationViewProps {
   shared: SharedConfigurationDto;
@@ -13,7 +16,7 @@ export interface SharedConfigurationViewProps {
 /** A read-only view of a shared configuration and its stored result. */
 export function SharedConfigurationView({ shared }: SharedConfigurationViewProps) {
   const { document, result } = shared;
-  const dimension = document.dimension ?? (document.theory === "bosonic" ? 26 : 10);
+  const dimension = dimensionOf(document);
   return (
     <div className="grid gap-6">
       <Card aria-labelledby="stacks-title">
@@ -64,13 +67,7 @@ export function SharedConfigurationView({ shared }: SharedConfigurationViewProps
               <CardDescription>Stored result of revision {shared.revisionNumber}, engine {result.engineVersion}.</CardDescription>
             </CardHeader>
             <CardContent className="grid gap-4 text-sm">
-              <div className="flex flex-wrap gap-2">
-                <Badge variant="neutral">Gauge group {result.gaugeGroup}</Badge>
-                {result.supercharges === null ? null : (
-                  <Badge variant={result.supercharges > 0 ? "success" : "neutral"}>{result.supercharges} supercharges</Badge>
-                )}
-                {result.sectors.some((sector) => sector.tachyonic) ? <Badge variant="danger">tachyonic sectors</Badge> : <Badge variant="outline">no tachyons</Badge>}
-              </div>
+              <SpectrumSummary facts={summaryFacts(result)} />
               {result.warnings.length > 0 ? (
                 <ul className="list-disc pl-5 text-warning-soft-foreground">
                   {result.warnings.map((warning) => (
@@ -78,31 +75,10 @@ export function SharedConfigurationView({ shared }: SharedConfigurationViewProps
                   ))}
                 </ul>
               ) : null}
-              <Table>
-                <TableCaption>Lightest states over all sectors.</TableCaption>
-                <TableHeader>
-                  <TableRow>
-                    <TableHead>Sector</TableHead>
-                    <TableHead>Kind</TableHead>
-                    <TableHead>Level N</TableHead>
-                    <TableHead className="text-right">α′M²</TableHead>
-                    <TableHead className="text-right">M√α′</TableHead>
-                    <TableHead className="text-right">States (with Chan–Paton)</TableHead>
-                  </TableRow>
-                </TableHeader>
-                <TableBody>
-                  {result.lightest.map((state, index) => (
-                    <TableRow key={`${state.pair.join("-")}-${state.sector}-${state.level}-${index}`}>
-                      <TableCell>{state.pair.join("–")}</TableCell>
-                      <TableCell>{state.sector}</TableCell>
-                      <TableCell className="font-mono">{state.level}</TableCell>
-                      <TableCell className="text-right font-mono">{formatMassSquared(state.massSquared)}</TableCell>
-                      <TableCell className="text-right font-mono">{formatNumber(state.mass)}</TableCell>
-                      <TableCell className="text-right font-mono">{state.withChanPaton}</TableCell>
-                    </TableRow>
-                  ))}
-                </TableBody>
-              </Table>
+              <div className="grid gap-1">
+                <h3 className="text-sm font-semibold">Lightest states</h3>
+                <LightestStatesTable states={result.lightest} label="Lightest states over all sectors" />
+              </div>
             </CardContent>
           </Card>
 
@@ -112,9 +88,9 @@ export function SharedConfigurationView({ shared }: SharedConfigurationViewProps
             </CardHeader>
             <CardContent className="grid gap-5">
               {result.sectors.map((sector) => (
-                <section key={sector.pair.join("-")} className="grid gap-2">
+                <section key={pairKey(...sector.pair)} className="grid gap-2">
                   <h3 className="text-sm font-semibold">
-                    {sector.pair.join("–")}{" "}
+                    {formatPair(sector.pair)}{" "}
                     <span className="font-normal text-muted-foreground">
                       ν = {sector.nu}, y = {formatNumber(sector.separation)}, Chan–Paton {sector.chanPaton}
                       {sector.tachyonic ? ", tachyonic" : ""}
@@ -122,7 +98,7 @@ export function SharedConfigurationView({ shared }: SharedConfigurationViewProps
                     </span>
                   </h3>
                   <SectorLevelsTable
-                    caption={`Levels of the ${sector.pair.join("–")} sector`}
+                    caption={`Levels of the ${formatPair(sector.pair)} sector`}
                     rows={sector.levels}
                     kind="all"
                     maxLevel={document.levels}

@@ -1,8 +1,9 @@
-import { formatMassSquared, SupersymmetryBadge, TachyonBadge } from "@/components/collaboration/result-badges";
+import { SupersymmetryBadge, TachyonBadge } from "@/components/collaboration/result-badges";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Table, TableBody, TableCaption, TableCell, TableHead, TableHeader, TableRow } from "@/components/ui/table";
 import type { StarterComparisonDto } from "@/db/queries/labs";
 import { formatDateTime } from "@/lib/format-date";
+import { formatMassSquared } from "@/lib/spectrum";
 
 export interface StarterForksComparisonProps {
   comparison: StarterComparisonDto[];

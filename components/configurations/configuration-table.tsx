@@ -11,7 +11,6 @@ import {
 import Link from "next/link";
 import { useEffect, useMemo, useState } from "react";
 import type { Theory } from "@/lib/boundary/types";
-import { formatNumber } from "@/lib/designer/spectrum-summary";
 import { formatDate } from "@/lib/format-date";
 import {
   configurationQueries,
@@ -19,9 +18,11 @@ import {
   type ConfigurationPageJson,
   type ConfigurationSummaryJson,
 } from "@/lib/client/configurations";
+import { formatMassSquared } from "@/lib/spectrum";
 import { cn } from "@/lib/utils";
 import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
+import { SupersymmetryBadge } from "@/components/collaboration/result-badges";
 
 export interface ConfigurationTableProps {
   /** One group's configurations; without it, every configuration the user can see. */
@@ -106,7 +107,7 @@ export function ConfigurationTable({ groupId, scope = "accessible", label = "Con
             <span className="text-muted-foreground">&mdash;</span>
           ) : (
             <span className="font-mono whitespace-nowrap">
-              {formatNumber(row.original.lightestMassSquared)}
+              {formatMassSquared(row.original.lightestMassSquared)}
               {row.original.tachyonic ? <span className="ml-1 font-sans text-xs text-danger-soft-foreground">tachyon</span> : null}
             </span>
           ),
@@ -116,14 +117,7 @@ export function ConfigurationTable({ groupId, scope = "accessible", label = "Con
         accessorKey: "supercharges",
         header: "Supersymmetry",
         enableSorting: false,
-        cell: ({ row }) =>
-          row.original.supercharges === null ? (
-            <span className="text-muted-foreground">n/a</span>
-          ) : row.original.supercharges > 0 ? (
-            <Badge variant="success">{row.original.supercharges} supercharges</Badge>
-          ) : (
-            <span className="text-muted-foreground">none</span>
-          ),
+        cell: ({ row }) => <SupersymmetryBadge supercharges={row.original.supercharges} />,
       },
       {
         id: "updatedAt",

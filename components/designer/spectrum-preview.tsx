@@ -1,9 +1,10 @@
 "use client";
 
 import type { SpectrumResult } from "@/lib/boundary/types";
-import { formatMassSquared, formatNumber, lightestBySector, pairKey } from "@/lib/designer/spectrum-summary";
 import type { FieldIssue } from "@/lib/errors";
-import { Badge } from "@/components/ui/badge";
+import { LightestStatesTable } from "@/components/results/lightest-states-table";
+import { summaryFacts } from "@/lib/spectrum";
+import { SpectrumSummary } from "@/components/results/spectrum-summary";
 import { ConventionsNote } from "./conventions-note";
 
 export interface SpectrumPreviewProps {
@@ -50,109 +51,13 @@ export function SpectrumPreview({ result, issues, elapsedMs, lightestRows = 8 }:
 }
 
 function PreviewBody({ result, lightestRows }: { result: SpectrumResult; lightestRows: number }) {
-  const tachyonic = result.sectors.filter((s) => s.tachyonic);
-  const bySector = lightestBySector(result);
   return (
     <>
-      <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 text-xs" aria-label="Spectrum summary" data-testid="preview-summary">
-        <dt className="text-muted-foreground">Gauge group</dt>
-        <dd className="font-mono" data-testid="preview-gauge-group">{result.gaugeGroup || "none"}</dd>
-        <dt className="text-muted-foreground">Supersymmetry</dt>
-        <dd data-testid="preview-supersymmetry">
-          {result.supercharges === null ? (
-            "not applicable (bosonic)"
-          ) : (
-            <>
-              <span className="font-mono">{result.supercharges}</span> supercharges
-              {result.bps ? (
-                <Badge variant="success" className="ml-2">
-                  BPS
-                </Badge>
-              ) : (
-                <Badge variant="outline" className="ml-2">
-                  not BPS
-                </Badge>
-              )}
-            </>
-          )}
-        </dd>
-        <dt className="text-muted-foreground">Stability</dt>
-        <dd data-testid="preview-stability">
-          {tachyonic.length === 0 ? (
-            "no tachyons"
-          ) : (
-            <span className="font-medium text-danger-soft-foreground">
-              &#9888; {tachyonic.length} tachyonic sector{tachyonic.length > 1 ? "s" : ""}
-            </span>
-          )}
-        </dd>
-        <dt className="text-muted-foreground">Sectors</dt>
-        <dd className="font-mono">{result.sectors.length}</dd>
-      </dl>
-
-      {tachyonic.length > 0 ? (
-        <div>
-          <h3 className="mb-1 text-xs font-semibold">Tachyons and critical separations</h3>
-          <ul className="space-y-1 text-xs" data-testid="preview-tachyons">
-            {tachyonic.map((sector) => {
-              const info = bySector.get(pairKey(sector.pair[0], sector.pair[1]));
-              return (
-                <li key={sector.pair.join("|")} className="rounded border border-dashed border-danger/50 px-2 py-1">
-                  <span className="font-mono">
-                    {sector.pair[0]}&ndash;{sector.pair[1]}
-                  </span>
-                  : tachyon, &alpha;&prime;M&sup2; = <span className="font-mono">{info ? formatMassSquared(info.massSquared) : "?"}</span> at y ={" "}
-                  <span className="font-mono">{formatNumber(sector.separation)}</span>
-                  {sector.criticalSeparation !== null ? (
-                    <>
-                      ; massive beyond y<sub>c</sub> = <span className="font-mono">{formatNumber(sector.criticalSeparation)}</span>
-                    </>
-                  ) : null}
-                </li>
-              );
-            })}
-          </ul>
-        </div>
-      ) : null}
+      <SpectrumSummary facts={summaryFacts(result)} />
 
       <div>
         <h3 className="mb-1 text-xs font-semibold">Lightest states</h3>
-        <div className="overflow-x-auto rounded-md border border-border">
-          <table className="w-full border-collapse text-xs" aria-label="Lightest states">
-            <thead className="bg-surface-muted/70 text-muted-foreground">
-              <tr>
-                <th scope="col" className="px-1.5 py-1 text-left font-semibold">Sector</th>
-                <th scope="col" className="px-1.5 py-1 text-left font-semibold">NS/R</th>
-                <th scope="col" className="px-1.5 py-1 text-right font-semibold">Level</th>
-                <th scope="col" className="px-1.5 py-1 text-right font-semibold">&alpha;&prime;M&sup2;</th>
-                <th scope="col" className="px-1.5 py-1 text-right font-semibold">M&radic;&alpha;&prime;</th>
-                <th scope="col" className="px-1.5 py-1 text-right font-semibold">States</th>
-                <th scope="col" className="px-1.5 py-1 text-right font-semibold">With CP</th>
-              </tr>
-            </thead>
-            <tbody>
-              {result.lightest.slice(0, lightestRows).map((row, i) => {
-                const negative = row.massSquared.startsWith("-");
-                return (
-                  <tr key={`${row.pair.join("|")}-${row.sector}-${row.level}-${i}`} className="border-t border-border">
-                    <td className="px-1.5 py-1 font-mono whitespace-nowrap">
-                      {row.pair[0]}&ndash;{row.pair[1]}
-                    </td>
-                    <td className="px-2 py-1">{row.sector}</td>
-                    <td className="px-1.5 py-1 text-right font-mono">{row.level}</td>
-                    <td className="px-1.5 py-1 text-right font-mono whitespace-nowrap">
-                      {formatMassSquared(row.massSquared)}
-                      {negative ? <span className="ml-1 text-danger-soft-foreground">tachyon</span> : null}
-                    </td>
-                    <td className="px-1.5 py-1 text-right font-mono">{formatNumber(row.mass)}</td>
-                    <td className="px-1.5 py-1 text-right font-mono">{row.states ?? "\u2014"}</td>
-                    <td className="px-1.5 py-1 text-right font-mono">{row.withChanPaton}</td>
-                  </tr>
-                );
-              })}
-            </tbody>
-          </table>
-        </div>
+        <LightestStatesTable states={result.lightest.slice(0, lightestRows)} label="Lightest states" compact />
       </div>
 
       {result.warnings.length > 0 ? (

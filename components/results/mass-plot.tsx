@@ -2,13 +2,13 @@
 
 import { useMemo } from "react";
 import { CartesianGrid, Legend, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
-import type { Sector } from "@/lib/boundary/types";
-import { massCurvePoints, massCurves } from "@/lib/designer/plot-data";
-import { formatNumber } from "@/lib/designer/spectrum-summary";
+import { massCurvePoints, type MassCurve } from "@/lib/designer/plot-data";
+import { formatNumber } from "@/lib/spectrum";
 import { axisStyle, horizontalAxisLabel, tooltipContentStyle, verticalAxisLabel } from "./chart-style";
 
 export interface MassPlotProps {
-  sectors: Sector[];
+  /** `massCurves` of the pairs of distinct stacks (lib/designer/plot-data.ts); the server sends them with the result. */
+  curves: readonly MassCurve[];
 }
 
 /** Line colours and dash patterns, so curves differ without colour too. */
@@ -19,9 +19,10 @@ const dashes = ["", "6 3", "2 3", "10 3 2 3", "1 2", "12 4"];
  * alpha' M^2 of each sector's lightest state against the separation y, with the zero line,
  * the tachyon crossings y_c and the actual separations marked.
  */
-export function MassPlot({ sectors }: MassPlotProps) {
-  const curves = useMemo(() => massCurves(sectors.filter((s) => s.pair[0] !== s.pair[1])).slice(0, 12), [sectors]);
+export function MassPlot({ curves: allCurves }: MassPlotProps) {
+  const curves = useMemo(() => allCurves.slice(0, strokes.length * dashes.length), [allCurves]);
   const { rows, yMax } = useMemo(() => massCurvePoints(curves), [curves]);
+  const marks = useMemo(() => curves.flatMap((curve, index) => curve.sectors.map((sector) => ({ curve, index, sector }))), [curves]);
   if (curves.length === 0) {
     return <p className="text-sm text-muted-foreground">A single stack has no separations to plot.</p>;
   }
@@ -35,18 +36,18 @@ export function MassPlot({ sectors }: MassPlotProps) {
               dataKey="y"
               type="number"
               domain={[0, yMax]}
-              tickFormatter={(v: number) => formatNumber(v, 3)}
+              tickFormatter={(v: number) => formatNumber(v, { significantDigits: 3 })}
               label={horizontalAxisLabel("separation y (\u221a\u03b1\u2032)")}
               {...axisStyle}
             />
             <YAxis
-              tickFormatter={(v: number) => formatNumber(v, 3)}
+              tickFormatter={(v: number) => formatNumber(v, { significantDigits: 3 })}
               label={verticalAxisLabel("\u03b1\u2032M\u00b2")}
               {...axisStyle}
             />
             <Tooltip
-              formatter={(value) => (typeof value === "number" ? formatNumber(value, 4) : String(value))}
-              labelFormatter={(value) => `y = ${typeof value === "number" ? formatNumber(value, 4) : String(value)}`}
+              formatter={(value) => (typeof value === "number" ? formatNumber(value) : String(value))}
+              labelFormatter={(value) => `y = ${typeof value === "number" ? formatNumber(value) : String(value)}`}
               contentStyle={tooltipContentStyle}
             />
             <Legend verticalAlign="top" height={24} wrapperStyle={{ fontSize: 12 }} />
@@ -73,18 +74,18 @@ export function MassPlot({ sectors }: MassPlotProps) {
                   r={5}
                   fill="var(--danger)"
                   stroke="var(--surface)"
-                  label={{ value: `y_c = ${formatNumber(curve.crossing, 4)}`, position: "top", fontSize: 11, fill: "var(--danger)" }}
+                  label={{ value: `y_c = ${formatNumber(curve.crossing)}`, position: "top", fontSize: 11, fill: "var(--danger)" }}
                   ifOverflow="extendDomain"
                 />
               ) : null,
             )}
-            {curves.map((curve, i) => (
+            {marks.map(({ curve, index, sector }) => (
               <ReferenceDot
-                key={`y-${curve.key}`}
-                x={curve.separation}
-                y={(curve.separation / (2 * Math.PI)) ** 2 + curve.intercept}
+                key={`y-${curve.key}-${sector.key}`}
+                x={sector.separation}
+                y={(sector.separation / (2 * Math.PI)) ** 2 + curve.intercept}
                 r={4}
-                fill={strokes[i % strokes.length]}
+                fill={strokes[index % strokes.length]}
                 stroke="var(--surface)"
                 ifOverflow="extendDomain"
               />
@@ -93,11 +94,12 @@ export function MassPlot({ sectors }: MassPlotProps) {
         </ResponsiveContainer>
       </div>
       <figcaption className="text-xs text-muted-foreground">
-        Lightest state of each pair of distinct stacks: &alpha;&prime;M&sup2; = (y/2&pi;)&sup2; + N + a. Dots mark the actual separations;
+        Lightest state of each pair of distinct stacks: &alpha;&prime;M&sup2; = (y/2&pi;)&sup2; + N + a, one curve per value of N + a
+        (exact). Dots mark the actual separations (of up to 240 pairs);
         red dots mark tachyon crossings y<sub>c</sub> = 2&pi;&radic;(&minus;(N + a)), beyond which the state is massive.
         {curves
           .filter((c) => c.crossing !== null)
-          .map((c) => ` ${c.label}: y_c = ${formatNumber(c.crossing, 4)}.`)
+          .map((c) => ` ${c.label}: y_c = ${formatNumber(c.crossing)}.`)
           .join("")}
       </figcaption>
     </figure>

@@ -3,15 +3,15 @@
 import { useQuery } from "@tanstack/react-query";
 import dynamic from "next/dynamic";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
-import type { Sector, SectorKind } from "@/lib/boundary/types";
-import { formatMassSquared, formatNumber, parseRational } from "@/lib/designer/spectrum-summary";
+import { useDeferredValue, useState } from "react";
+import type { SectorKind } from "@/lib/boundary/types";
+import { formatNumber } from "@/lib/spectrum";
 import { formatDateTime } from "@/lib/format-date";
 import {
   configurationQueries,
   useForkConfiguration,
   type ConfigurationJson,
-  type ResultJson,
+  type ResultHeadJson,
   type RevisionSummaryJson,
 } from "@/lib/client/configurations";
 import { Badge } from "@/components/ui/badge";
@@ -20,12 +20,10 @@ import { ExportMenu } from "@/components/configurations/export-menu";
 import { ConventionsNote } from "@/components/designer/conventions-note";
 import { ForkDialog, type WritableGroup } from "@/components/designer/fork-dialog";
 import { ForkedFromNote } from "@/components/designer/forked-from-note";
-import { SectorLevelsTable } from "./sector-levels-table";
+import { LightestStatesTable } from "./lightest-states-table";
+import { SectorList } from "./sector-list";
+import { SpectrumSummary } from "./spectrum-summary";
 
-const ModeExpansions = dynamic(() => import("./mode-expansions").then((m) => m.ModeExpansions), {
-  ssr: false,
-  loading: () => <p className="text-xs text-muted-foreground">Typesetting&hellip;</p>,
-});
 const MassPlot = dynamic(() => import("./mass-plot").then((m) => m.MassPlot), {
   ssr: false,
   loading: () => <div className="h-72 animate-pulse rounded-md bg-border/50" />,
@@ -39,7 +37,7 @@ export interface ResultsViewProps {
   configuration: ConfigurationJson;
   revisions: RevisionSummaryJson[];
   revision: RevisionSummaryJson;
-  initialResult: ResultJson;
+  initialResult: ResultHeadJson;
   writableGroups: WritableGroup[];
 }
 
@@ -49,20 +47,18 @@ export interface ResultsViewProps {
  */
 export function ResultsView({ configuration, revisions, revision, initialResult, writableGroups }: ResultsViewProps) {
   const router = useRouter();
-  const { data: stored } = useQuery({ ...configurationQueries.result(configuration.id, revision.id), initialData: initialResult });
-  const result = stored.result;
+  const { data: stored } = useQuery({ ...configurationQueries.resultHead(configuration.id, revision.id), initialData: initialResult });
+  const { result, facts, massCurves, showGeV, firstPage } = stored;
   const [kind, setKind] = useState<SectorKind | "all">("all");
-  const [maxLevel, setMaxLevel] = useState(() => highestLevel(result.sectors));
+  // Oscillator level up to which the tables list rows; null lists every row.
+  const [maxLevel, setMaxLevel] = useState<number | null>(null);
   const [search, setSearch] = useState("");
   const [onlyTachyonic, setOnlyTachyonic] = useState(false);
   const [forkOpen, setForkOpen] = useState(false);
   const fork = useForkConfiguration(configuration.id);
   const kinds: SectorKind[] = result.theory === "bosonic" ? ["bosonic"] : ["NS", "R"];
-  const tachyonic = result.sectors.filter((s) => s.tachyonic);
-  const visibleSectors = result.sectors.filter(
-    (s) => (!onlyTachyonic || s.tachyonic) && (search.trim() === "" || s.pair.join(" ").toLowerCase().includes(search.trim().toLowerCase())),
-  );
-  const showGeV = result.sectors.some((s) => s.levels.some((l) => l.massGeV !== undefined && l.massGeV !== null));
+  // The list is filtered on the server; typing does not wait for it.
+  const deferredSearch = useDeferredValue(search.trim());
 
   return (
     <div className="mx-auto grid w-full max-w-7xl gap-6 px-4 py-6 sm:px-6">
@@ -77,7 +73,7 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
           <h1 className="text-2xl font-semibold tracking-tight">Results: {configuration.title}</h1>
           <p className="text-sm text-muted-foreground">
             Revision {revision.number} by {revision.author.name}, {formatDateTime(revision.createdAt)}
-            {revision.message ? ` \u2014 \u201c${revision.message}\u201d` : ""}. Engine {stored.engineVersion}, computed in {formatNumber(stored.computeMs, 3)} ms.
+            {revision.message ? ` \u2014 \u201c${revision.message}\u201d` : ""}. Engine {stored.engineVersion}, computed in {formatNumber(stored.computeMs)} ms.
           </p>
         </div>
         <div className="flex flex-wrap items-center gap-2">
@@ -107,42 +103,11 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
         </div>
       </header>
 
-      <section aria-labelledby="summary-title" className="grid gap-4 md:grid-cols-3">
+      <section aria-labelledby="summary-title">
         <h2 id="summary-title" className="sr-only">
           Summary
         </h2>
-        <div className="rounded-lg border border-border bg-surface p-4">
-          <h3 className="text-xs font-semibold tracking-wide text-muted-foreground uppercase">Supersymmetry</h3>
-          <p className="mt-1 text-lg font-semibold" data-testid="results-supercharges">
-            {result.supercharges === null ? "not applicable" : `${result.supercharges} supercharges`}
-          </p>
-          <p className="text-sm text-muted-foreground">
-            {result.supercharges === null
-              ? "The bosonic string has no spacetime supersymmetry."
-              : result.bps
-                ? "BPS: every pair of stacks is mutually supersymmetric."
-                : "Not BPS: some pairs break all supersymmetry between them."}
-          </p>
-        </div>
-        <div className="rounded-lg border border-border bg-surface p-4">
-          <h3 className="text-xs font-semibold tracking-wide text-muted-foreground uppercase">Stability</h3>
-          <p className="mt-1 text-lg font-semibold" data-testid="results-stability">
-            {tachyonic.length === 0 ? "No tachyons" : `${tachyonic.length} tachyonic sector${tachyonic.length > 1 ? "s" : ""}`}
-          </p>
-          <ul className="text-sm text-muted-foreground">
-            {tachyonic.map((s) => (
-              <li key={s.pair.join("|")}>
-                {s.pair[0]}&ndash;{s.pair[1]} at y = {formatNumber(s.separation)}
-                {s.criticalSeparation !== null ? `; stable beyond y_c = ${formatNumber(s.criticalSeparation)}` : ""}
-              </li>
-            ))}
-          </ul>
-        </div>
-        <div className="rounded-lg border border-border bg-surface p-4">
-          <h3 className="text-xs font-semibold tracking-wide text-muted-foreground uppercase">Gauge group</h3>
-          <p className="mt-1 font-mono text-lg font-semibold">{result.gaugeGroup || "none"}</p>
-          <p className="text-sm text-muted-foreground">{result.sectors.length} sectors</p>
-        </div>
+        <SpectrumSummary facts={facts} />
       </section>
 
       {result.warnings.length > 0 ? (
@@ -157,34 +122,7 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
         <h2 id="lightest-title" className="text-lg font-semibold">
           Lightest states
         </h2>
-        <div className="overflow-x-auto rounded-lg border border-border bg-surface">
-          <table className="w-full border-collapse text-sm" aria-labelledby="lightest-title" data-testid="lightest-table">
-            <thead className="bg-surface-muted/70 text-xs text-muted-foreground">
-              <tr>
-                {["Sector", "NS/R", "Level", "\u03b1\u2032M\u00b2", "M\u221a\u03b1\u2032", "States", "With Chan-Paton"].map((h, i) => (
-                  <th key={h} scope="col" className={i < 2 ? "px-3 py-1.5 text-left font-semibold" : "px-3 py-1.5 text-right font-semibold"}>
-                    {h}
-                  </th>
-                ))}
-              </tr>
-            </thead>
-            <tbody>
-              {result.lightest.map((row, i) => (
-                <tr key={`${row.pair.join("|")}-${row.sector}-${row.level}-${i}`} className="border-t border-border">
-                  <td className="px-3 py-1.5 font-mono">
-                    {row.pair[0]}&ndash;{row.pair[1]}
-                  </td>
-                  <td className="px-3 py-1.5">{row.sector}</td>
-                  <td className="px-3 py-1.5 text-right font-mono">{row.level}</td>
-                  <td className="px-3 py-1.5 text-right font-mono">{formatMassSquared(row.massSquared)}</td>
-                  <td className="px-3 py-1.5 text-right font-mono">{formatNumber(row.mass, 6)}</td>
-                  <td className="px-3 py-1.5 text-right font-mono">{row.states ?? "\u2014"}</td>
-                  <td className="px-3 py-1.5 text-right font-mono">{row.withChanPaton}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <LightestStatesTable states={result.lightest} label="Lightest states" data-testid="lightest-table" />
       </section>
 
       <section aria-labelledby="plots-title" className="grid gap-4">
@@ -194,11 +132,11 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
         <div className="grid gap-4 lg:grid-cols-2">
           <div className="rounded-lg border border-border bg-surface p-4">
             <h3 className="mb-2 text-sm font-semibold">&alpha;&prime;M&sup2; against separation</h3>
-            <MassPlot sectors={result.sectors} />
+            <MassPlot curves={massCurves} />
           </div>
           <div className="rounded-lg border border-border bg-surface p-4">
             <h3 className="mb-2 text-sm font-semibold">Degeneracy against level</h3>
-            <DegeneracyPlot sectors={result.sectors} />
+            <DegeneracyPlot configurationId={configuration.id} revisionId={revision.id} sectors={firstPage.items} total={firstPage.total} />
           </div>
         </div>
       </section>
@@ -237,8 +175,9 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
                 type="number"
                 min={0}
                 step={0.5}
-                value={maxLevel}
-                onChange={(event) => setMaxLevel(Number(event.target.value))}
+                value={maxLevel ?? ""}
+                placeholder="all"
+                onChange={(event) => setMaxLevel(event.target.value === "" ? null : Number(event.target.value))}
                 className="h-8 w-16 rounded border border-border-strong bg-surface px-2"
               />
             </label>
@@ -248,62 +187,16 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
             </label>
           </div>
         </div>
-        {visibleSectors.length === 0 ? <p className="text-sm text-muted-foreground">No sector matches the filters.</p> : null}
-        {visibleSectors.map((sector) => {
-          const title = `${sector.pair[0]}\u2013${sector.pair[1]}`;
-          return (
-            <details key={sector.pair.join("|")} open={visibleSectors.length <= 6} className="rounded-lg border border-border bg-surface" data-testid={`sector-${sector.pair.join("-")}`}>
-              <summary className="flex cursor-pointer flex-wrap items-center gap-x-4 gap-y-1 px-4 py-2 text-sm">
-                <span className="font-mono font-semibold">{title}</span>
-                <span className="text-muted-foreground">
-                  NN {sector.nn} &middot; DD {sector.dd} &middot; &nu; = {sector.nu} &middot; y = {formatNumber(sector.separation)} &middot; Chan-Paton {sector.chanPaton}
-                </span>
-                <span className="font-mono text-xs text-muted-foreground">
-                  a:{" "}
-                  {Object.entries(sector.zeroPoint)
-                    .map(([k, v]) => `${k} ${formatMassSquared(v)}`)
-                    .join(", ")}
-                </span>
-                {sector.tachyonic ? (
-                  <Badge variant="danger" className="border-dashed border-danger">
-                    tachyon{sector.criticalSeparation !== null ? `, y_c = ${formatNumber(sector.criticalSeparation)}` : ""}
-                  </Badge>
-                ) : null}
-                {result.supercharges !== null ? (
-                  <Badge variant={sector.supersymmetric ? "success" : "outline"}>{sector.supersymmetric ? "supersymmetric" : "no supersymmetry"}</Badge>
-                ) : null}
-              </summary>
-              <div className="grid gap-3 border-t border-border px-4 py-3">
-                <SectorLevelsTable caption={`Levels of sector ${title}`} rows={sector.levels} kind={kind} maxLevel={maxLevel} showGeV={showGeV} />
-                {sector.massless.length > 0 ? (
-                  <div className="text-xs">
-                    <h4 className="font-semibold">Massless content</h4>
-                    <ul className="list-disc pl-4 text-muted-foreground">
-                      {sector.massless.map((m) => (
-                        <li key={`${m.sector}-${m.description}`}>
-                          {m.sector}: {m.description} ({m.states} states{m.withChanPaton ? `, ${m.withChanPaton} with Chan-Paton` : ""})
-                        </li>
-                      ))}
-                    </ul>
-                  </div>
-                ) : null}
-                {sector.notes.length > 0 ? (
-                  <ul className="list-disc pl-4 text-xs text-muted-foreground">
-                    {sector.notes.map((n) => (
-                      <li key={n}>{n}</li>
-                    ))}
-                  </ul>
-                ) : null}
-                <details className="text-xs">
-                  <summary className="cursor-pointer font-semibold">Mode expansions</summary>
-                  <div className="mt-2 overflow-x-auto">
-                    <ModeExpansions axes={sector.axes} />
-                  </div>
-                </details>
-              </div>
-            </details>
-          );
-        })}
+        <SectorList
+          configurationId={configuration.id}
+          revisionId={revision.id}
+          filter={{ search: deferredSearch, tachyonicOnly: onlyTachyonic }}
+          firstPage={firstPage}
+          typeTwo={result.supercharges !== null}
+          kind={kind}
+          maxLevel={maxLevel ?? Number.POSITIVE_INFINITY}
+          showGeV={showGeV}
+        />
       </section>
 
       <ConventionsNote full />
@@ -324,10 +217,4 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
       ) : null}
     </div>
   );
-}
-
-function highestLevel(sectors: Sector[]): number {
-  let highest = 0;
-  for (const sector of sectors) for (const row of sector.levels) highest = Math.max(highest, parseRational(row.level));
-  return highest;
 }

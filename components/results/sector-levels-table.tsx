@@ -11,8 +11,9 @@ import {
 } from "@tanstack/react-table";
 import { useMemo, useState } from "react";
 import type { LevelRow, SectorKind } from "@/lib/boundary/types";
-import { formatMassSquared, formatNumber, parseRational } from "@/lib/designer/spectrum-summary";
+import { compareResultNumbers, compareStateCounts, formatNumber, parseResultNumber } from "@/lib/spectrum";
 import { cn } from "@/lib/utils";
+import { MassSquaredText, MassText } from "./mass-text";
 
 export interface SectorLevelsTableProps {
   /** Caption naming the sector, for assistive technology. */
@@ -25,15 +26,6 @@ export interface SectorLevelsTableProps {
   showGeV: boolean;
 }
 
-function compareDecimal(a: string | null, b: string | null): number {
-  if (a === b) return 0;
-  if (a === null) return -1;
-  if (b === null) return 1;
-  const x = BigInt(a);
-  const y = BigInt(b);
-  return x < y ? -1 : x > y ? 1 : 0;
-}
-
 /** The levels of one sector, sortable by any column, filtered by kind and level. */
 export function SectorLevelsTable({ caption, rows, kind, maxLevel, showGeV }: SectorLevelsTableProps) {
   const [sorting, setSorting] = useState<SortingState>([]);
@@ -43,34 +35,29 @@ export function SectorLevelsTable({ caption, rows, kind, maxLevel, showGeV }: Se
       {
         accessorKey: "level",
         header: "Level N",
-        sortingFn: (a, b) => parseRational(a.original.level) - parseRational(b.original.level),
-        filterFn: (row, _id, value: number) => parseRational(row.original.level) <= value,
+        sortingFn: (a, b) => compareResultNumbers(a.original.level, b.original.level),
+        filterFn: (row, _id, value: number) => parseResultNumber(row.original.level) <= value,
       },
       {
         accessorKey: "massSquared",
         header: "\u03b1\u2032M\u00b2",
-        sortingFn: (a, b) => parseRational(a.original.massSquared) - parseRational(b.original.massSquared),
-        cell: ({ row }) => (
-          <>
-            {formatMassSquared(row.original.massSquared)}
-            {parseRational(row.original.massSquared) < 0 ? <span className="ml-1 font-sans text-danger-soft-foreground">tachyon</span> : null}
-          </>
-        ),
+        sortingFn: (a, b) => compareResultNumbers(a.original.massSquared, b.original.massSquared),
+        cell: ({ row }) => <MassSquaredText value={row.original.massSquared} />,
       },
-      { accessorKey: "mass", header: "M\u221a\u03b1\u2032", cell: ({ row }) => formatNumber(row.original.mass, 6) },
+      { accessorKey: "mass", header: "M\u221a\u03b1\u2032", cell: ({ row }) => <MassText value={row.original.mass} /> },
       ...(showGeV
-        ? [{ accessorKey: "massGeV", header: "M (GeV)", cell: ({ row }) => formatNumber(row.original.massGeV ?? null, 6) } satisfies ColumnDef<LevelRow>]
+        ? [{ accessorKey: "massGeV", header: "M (GeV)", cell: ({ row }) => formatNumber(row.original.massGeV ?? null) } satisfies ColumnDef<LevelRow>]
         : []),
       {
         accessorKey: "states",
         header: "States",
-        sortingFn: (a, b) => compareDecimal(a.original.states, b.original.states),
+        sortingFn: (a, b) => compareStateCounts(a.original.states, b.original.states),
         cell: ({ row }) => row.original.states ?? <span title={row.original.note}>&mdash;</span>,
       },
       {
         accessorKey: "withChanPaton",
         header: "With Chan-Paton",
-        sortingFn: (a, b) => compareDecimal(a.original.withChanPaton, b.original.withChanPaton),
+        sortingFn: (a, b) => compareStateCounts(a.original.withChanPaton, b.original.withChanPaton),
       },
     ],
     [showGeV],

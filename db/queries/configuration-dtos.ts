@@ -3,6 +3,7 @@ import { eq, sql, type Placeholder } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import type { Configuration, SpectrumResult, Theory } from "../../lib/boundary/types";
 import { NotFoundError } from "../../lib/errors";
+import { readStoredResult } from "../../lib/validations/spectrum-result";
 import { db, type Executor } from "../index";
 import { configurations, groups, results, revisions, users, type ConfigurationRow, type GroupKind, type GroupRole } from "../schema";
 import { getGroupRole, roleAtLeast, type Actor } from "./actor";
@@ -73,13 +74,17 @@ export interface RevisionDto extends RevisionSummaryDto {
   document: Configuration;
 }
 
-/** The stored engine result of one revision. */
-export interface ResultDto {
+/** When and by which engine version a revision's result was computed. */
+export interface ResultMetaDto {
   revisionId: string;
   engineVersion: string;
-  result: SpectrumResult;
   computeMs: number;
   createdAt: Date;
+}
+
+/** The stored engine result of one revision. */
+export interface ResultDto extends ResultMetaDto {
+  result: SpectrumResult;
 }
 
 /** Options of the list functions (configurations and forks). */
@@ -221,7 +226,7 @@ export function toResultDto(row: typeof results.$inferSelect): ResultDto {
   return {
     revisionId: row.revisionId,
     engineVersion: row.engineVersion,
-    result: row.result,
+    result: readStoredResult(row.result),
     computeMs: row.computeMs,
     createdAt: row.createdAt,
   };

@@ -9,9 +9,8 @@ import { recordAudit } from "./audit";
 import { requireConfigurationRole } from "./configuration-access";
 import { toConfigurationDto, type ConfigurationDto, type ConfigurationPage, type ListConfigurationsOptions } from "./configuration-dtos";
 import { listConfigurations } from "./configurations";
-import { computeResult } from "./results";
+import { resultForDocument } from "./results";
 import { addRevision, documentColumns } from "./revision-writes";
-import { reusableResult } from "./revisions";
 
 /** Input of `forkConfiguration`. */
 export interface ForkConfigurationInput {
@@ -61,12 +60,12 @@ export async function forkConfiguration(
     const title = input.title?.trim() || (input.document ?? revision.document).title;
     const document: Configuration = { ...(input.document ?? revision.document), title };
     // The title is not part of the physics, so an untouched document keeps the source's result.
-    const computed = (input.document === undefined ? await reusableResult(tx, revision.id) : null) ?? computeResult(document);
+    const result = await resultForDocument(tx, document, input.document === undefined ? { sameAs: { revisionId: revision.id } } : {});
     const [created] = await tx
       .insert(configurations)
       .values({
         groupId: input.targetGroupId,
-        ...documentColumns(document, computed.result),
+        ...documentColumns(document, result.summary),
         version: 1,
         forkedFromConfigurationId: source.id,
         forkedFromRevisionId: revision.id,
@@ -77,7 +76,7 @@ export async function forkConfiguration(
     const message = input.document
       ? `Forked from "${source.title}", revision ${revision.number}, with unsaved changes`
       : `Forked from "${source.title}", revision ${revision.number}`;
-    const row = await addRevision(tx, created, author.id, message, computed);
+    const row = await addRevision(tx, created, author.id, message, result);
     await recordAudit(tx, {
       actorId: author.id,
       groupId: input.targetGroupId,

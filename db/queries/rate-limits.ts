@@ -1,5 +1,5 @@
 import "server-only";
-import { and, eq, like, lt, sql } from "drizzle-orm";
+import { and, eq, like, lt, lte, sql } from "drizzle-orm";
 import { db } from "../index";
 import { rateLimitBuckets } from "../schema";
 
@@ -10,20 +10,22 @@ import { rateLimitBuckets } from "../schema";
  */
 
 /**
- * Counts one hit for `key` in the window starting at `windowStart`, unless the window already
- * holds `limit` hits. One atomic statement (`insert ... on conflict do update ... where count <
- * limit returning count`), so concurrent hits from any number of instances are counted exactly.
+ * Counts `weight` hits (default 1, at most `limit`) for `key` in the window starting at
+ * `windowStart`, unless they would take the window past `limit`. One atomic statement (`insert ...
+ * on conflict do update ... where count + weight <= limit returning count`), so concurrent hits from
+ * any number of instances are counted exactly.
  *
  * @returns The window's count after this hit, or null when the window was full (nothing counted).
  */
-export async function hitRateLimitBucket(key: string, windowStart: Date, limit: number): Promise<number | null> {
+export async function hitRateLimitBucket(key: string, windowStart: Date, limit: number, weight = 1): Promise<number | null> {
+  const hits = Math.min(Math.max(1, Math.floor(weight)), limit);
   const [row] = await db
     .insert(rateLimitBuckets)
-    .values({ key, windowStart, count: 1 })
+    .values({ key, windowStart, count: hits })
     .onConflictDoUpdate({
       target: [rateLimitBuckets.key, rateLimitBuckets.windowStart],
-      set: { count: sql`${rateLimitBuckets.count} + 1` },
-      setWhere: lt(rateLimitBuckets.count, limit),
+      set: { count: sql`${rateLimitBuckets.count} + ${hits}` },
+      setWhere: lte(sql`${rateLimitBuckets.count} + ${hits}`, limit),
     })
     .returning({ count: rateLimitBuckets.count });
   return row?.count ?? null;

@@ -1,10 +1,12 @@
 import "server-only";
 import { and, eq, isNull, sql } from "drizzle-orm";
-import type { Configuration, SpectrumResult } from "../../lib/boundary/types";
+import type { Configuration } from "../../lib/boundary/types";
+import { configurationTitleMaxLength } from "../../lib/validations/configuration";
+import type { ResultSummary } from "../../lib/spectrum";
 import { ConflictError, NotFoundError, ValidationError } from "../../lib/errors";
 import type { Transaction } from "../index";
 import { configurations, revisions, type ConfigurationRow } from "../schema";
-import { storeResult, type ComputedResult } from "./results";
+import { storeResult, type RevisionResult } from "./results";
 
 /*
  * The steps every write of a configuration document shares (create, save, restore, fork): the
@@ -12,56 +14,26 @@ import { storeResult, type ComputedResult } from "./results";
  * its result. Internal to db/queries.
  */
 
-/** Longest configuration title, in characters. */
-const maxTitleLength = 200;
 
 /** The trimmed title of a document, or a 422 at `document.title`. */
 export function requireTitle(document: Configuration): string {
   const title = document.title.trim();
   if (!title) throw ValidationError.at(["document", "title"], "Give the configuration a title.");
-  if (title.length > maxTitleLength) {
-    throw ValidationError.at(["document", "title"], `Use at most ${maxTitleLength} characters.`);
+  if (title.length > configurationTitleMaxLength) {
+    throw ValidationError.at(["document", "title"], `Use at most ${configurationTitleMaxLength} characters.`);
   }
   return title;
 }
 
 /** The configuration columns a document and its result set (the list summary included). */
-export function documentColumns(document: Configuration, result: SpectrumResult) {
+export function documentColumns(document: Configuration, summary: ResultSummary) {
   return {
     title: requireTitle(document),
     description: document.description ?? "",
     theory: document.theory,
     document,
-    ...summarize(document, result),
+    ...summary,
   } satisfies Partial<typeof configurations.$inferInsert>;
-}
-
-/**
- * Summary columns derived from a result: stack count, the lightest alpha' M^2 (as a double, for
- * sorting), whether any sector is tachyonic, and the supercharges.
- */
-function summarize(
-  document: Configuration,
-  result: SpectrumResult,
-): Pick<ConfigurationRow, "stackCount" | "lightestMassSquared" | "tachyonic" | "supercharges"> {
-  const lightest = result.lightest[0];
-  const lightestMassSquared = lightest ? parseExactNumber(lightest.massSquared) : null;
-  return {
-    stackCount: document.stacks.length,
-    lightestMassSquared,
-    tachyonic:
-      result.sectors.some((sector) => sector.tachyonic) ||
-      (lightestMassSquared !== null && lightestMassSquared < 0),
-    supercharges: result.supercharges,
-  };
-}
-
-/** Parses "-1/2", "3" or a decimal string; null when it is not a finite number. */
-function parseExactNumber(text: string): number | null {
-  const [numerator, denominator, ...rest] = text.split("/");
-  const value =
-    denominator === undefined ? Number(numerator) : rest.length === 0 ? Number(numerator) / Number(denominator) : NaN;
-  return Number.isFinite(value) ? value : null;
 }
 
 /**
@@ -104,7 +76,7 @@ export async function addRevision(
   row: ConfigurationRow,
   authorId: string,
   message: string,
-  computed: ComputedResult,
+  result: RevisionResult,
 ): Promise<ConfigurationRow> {
   const [revision] = await tx
     .insert(revisions)
@@ -117,7 +89,7 @@ export async function addRevision(
     })
     .returning({ id: revisions.id });
   if (!revision) throw new Error("Revision insert returned no row");
-  await storeResult(tx, revision.id, computed);
+  await storeResult(tx, revision.id, result);
   const [updated] = await tx
     .update(configurations)
     .set({ currentRevisionId: revision.id })

@@ -1,8 +1,7 @@
 import "server-only";
 import { and, desc, eq, type SQL } from "drizzle-orm";
-import { ENGINE_VERSION } from "../../lib/boundary";
 import { NotFoundError } from "../../lib/errors";
-import { db, type Transaction } from "../index";
+import { db } from "../index";
 import { results, revisions, users } from "../schema";
 import { assertUuid, requireActor, type Actor } from "./actor";
 import { recordAudit } from "./audit";
@@ -16,7 +15,7 @@ import {
   type RevisionDto,
   type RevisionSummaryDto,
 } from "./configuration-dtos";
-import { computeResult, type ComputedResult } from "./results";
+import { resultForDocument } from "./results";
 import { addRevision, bumpVersion, documentColumns } from "./revision-writes";
 
 /** Options of `restoreRevision`. */
@@ -75,22 +74,6 @@ export async function getRevisionByNumber(
   );
 }
 
-/** The stored engine result of a revision (viewer or better on its configuration). */
-export async function getResultForRevision(actor: Actor | null, revisionId: string): Promise<ResultDto> {
-  requireActor(actor);
-  assertUuid(revisionId, "revision");
-  const [found] = await db
-    .select({ configurationId: revisions.configurationId, stored: results })
-    .from(revisions)
-    .leftJoin(results, eq(results.revisionId, revisions.id))
-    .where(eq(revisions.id, revisionId))
-    .limit(1);
-  if (!found) throw new NotFoundError("No such revision.");
-  await requireConfigurationRole(db, actor, found.configurationId, "viewer");
-  if (!found.stored) throw new NotFoundError("This revision has no stored result yet.");
-  return toResultDto(found.stored);
-}
-
 /** A revision that belongs to the given configuration (404 otherwise, also for revisions of others). */
 export async function getRevisionOfConfiguration(
   actor: Actor | null,
@@ -123,14 +106,14 @@ export async function restoreRevision(
       .where(and(eq(revisions.id, revisionId), eq(revisions.configurationId, configurationId)))
       .limit(1);
     if (!old) throw new NotFoundError("No such revision.");
-    const computed = (await reusableResult(tx, old.id)) ?? computeResult(old.document);
+    const result = await resultForDocument(tx, old.document, { sameAs: { revisionId: old.id } });
     const bumped = await bumpVersion(
       tx,
       configurationId,
       options.expectedVersion ?? current.version,
-      documentColumns(old.document, computed.result),
+      documentColumns(old.document, result.summary),
     );
-    const row = await addRevision(tx, bumped, author.id, options.message?.trim() || `Restored revision ${old.number}`, computed);
+    const row = await addRevision(tx, bumped, author.id, options.message?.trim() || `Restored revision ${old.number}`, result);
     await recordAudit(tx, {
       actorId: author.id,
       groupId: row.groupId,
@@ -141,19 +124,6 @@ export async function restoreRevision(
     });
     return toConfigurationDto(tx, actor, row, role);
   });
-}
-
-/**
- * The stored result of a revision when the running engine version computed it, so that copying the
- * revision's unchanged document can copy its result too; null when it must be recomputed.
- */
-export async function reusableResult(tx: Transaction, revisionId: string): Promise<ComputedResult | null> {
-  const [stored] = await tx
-    .select({ result: results.result, computeMs: results.computeMs })
-    .from(results)
-    .where(and(eq(results.revisionId, revisionId), eq(results.engineVersion, ENGINE_VERSION)))
-    .limit(1);
-  return stored ?? null;
 }
 
 async function getRevisionWhere(

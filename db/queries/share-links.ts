@@ -1,4 +1,5 @@
 import "server-only";
+import { readStoredResult } from "../../lib/validations/spectrum-result";
 import { and, desc, eq, isNull } from "drizzle-orm";
 import type { Configuration, SpectrumResult } from "../../lib/boundary/types";
 import { NotFoundError } from "../../lib/errors";
@@ -132,5 +133,5 @@ export async function getSharedConfiguration(token: string): Promise<SharedConfi
     )
     .limit(1);
   if (!row) throw new NotFoundError("This share link does not exist or was revoked.");
-  return { ...row, revisionNumber: row.revisionNumber ?? 1, result: row.result ?? null };
+  return { ...row, revisionNumber: row.revisionNumber ?? 1, result: row.result === null ? null : readStoredResult(row.result) };
 }

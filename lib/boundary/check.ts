@@ -145,11 +145,7 @@ export function checkConfiguration(config: Configuration): ConfigurationProblem[
   }
 
   const sectorCount = (config.stacks.length * (config.stacks.length + 1)) / 2;
-  if (
-    levelsOk &&
-    config.stacks.length <= configurationLimits.maxStacks &&
-    sectorCount * (config.levels + 1) > configurationLimits.maxSectorLevels
-  ) {
+  if (levelsOk && config.stacks.length <= configurationLimits.maxStacks && configurationCost(config) > configurationLimits.maxSectorLevels) {
     const highest = Math.floor(configurationLimits.maxSectorLevels / sectorCount) - 1;
     problems.push({
       path: ["levels"],
@@ -174,6 +170,22 @@ export function checkConfiguration(config: Configuration): ConfigurationProblem[
   });
 
   return problems;
+}
+
+/**
+ * The work a configuration asks of the engine: sectors x (levels + 1), the quantity that
+ * `configurationLimits.maxSectorLevels` bounds. Rate limits and the choice to compute off the
+ * request thread are weighted by it.
+ *
+ * @param config - Only the number of stacks and `levels` are read.
+ * @returns n (n + 1) / 2 sectors for n stacks, times levels + 1 (at least 1 level counted).
+ * @example
+ * configurationCost({ stacks: [a, b, c], levels: 9 }) // => 60   (6 sectors x 10)
+ */
+export function configurationCost(config: Pick<Configuration, "stacks" | "levels">): number {
+  const sectors = (config.stacks.length * (config.stacks.length + 1)) / 2;
+  const levels = Number.isFinite(config.levels) ? Math.max(0, Math.floor(config.levels)) : 0;
+  return sectors * (levels + 1);
 }
 
 /** Orders stacks by id: the canonical order of sectors and warnings, whatever the order of the input. */

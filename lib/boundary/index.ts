@@ -8,11 +8,19 @@
 
 export type * from "./types";
 
-export { computeSpectrum, computeSector, createSectorContext, type SectorContext } from "./spectrum";
+export {
+  computeSpectrum,
+  tryComputeSpectrum,
+  computeSector,
+  createSectorContext,
+  type SectorContext,
+  type SpectrumAttempt,
+} from "./spectrum";
 export {
   checkConfiguration,
   configurationWarnings,
   configurationLimits,
+  configurationCost,
   dimensionOf,
   describeStack,
   ConfigurationError,
@@ -27,6 +35,7 @@ export {
 } from "./classify";
 export { expandAxis, expandPair, bosonModing, fermionModing } from "./expansion";
 export { formatDecimal } from "./format";
+export { resultInputKey } from "./result-key";
 export {
   ENGINE_VERSION,
   CONVENTIONS_TEXT,

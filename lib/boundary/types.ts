@@ -128,6 +128,11 @@ export interface Sector {
   levels: LevelRow[];
   massless: MasslessContent[];
   notes: string[];
+  /**
+   * Set (true) on sectors of a paged API response whose `levels` and `axes` were left out to keep
+   * the response small; the engine itself never sets it.
+   */
+  detailOmitted?: boolean;
 }
 
 export interface LightestState {

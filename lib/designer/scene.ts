@@ -9,7 +9,8 @@ import { estimateTextWidth, placeLabels, stackLabelAnchor } from "@/lib/canvas/l
 import { isNeumann, positionOn, projectStack, type DisplayAxes, type ProjectedShape } from "@/lib/canvas/projection";
 import { gridLines } from "@/lib/canvas/snap";
 import { fitToPoints, toScreen, toWorld, visibleWorldRect, type Point, type Viewport } from "@/lib/canvas/viewport";
-import { formatMassSquared, lightestBySector, pairKey, stackKind } from "./spectrum-summary";
+import { formatMassSquared, lightestBySector, pairKey } from "@/lib/spectrum";
+import { stackKind } from "./stack-kind";
 
 /** Font size of canvas labels in pixels. */
 export const sceneFontSize = 12;
@@ -113,7 +114,7 @@ export function buildScene(input: BuildSceneInput): Scene {
     };
   });
 
-  const lightest = result ? lightestBySector(result) : new Map();
+  const lightest = lightestBySector(result ?? { sectors: [] });
   const pairs: Array<[number, number]> = [];
   for (let i = 0; i < document.stacks.length; i++) {
     for (let j = i + 1; j < document.stacks.length; j++) pairs.push([i, j]);
@@ -139,12 +140,12 @@ export function buildScene(input: BuildSceneInput): Scene {
     });
     const info = lightest.get(pairKey(a.id, b.id));
     const mid = curveMidpoint(curve);
-    const label = info ? `\u03b1\u2032M\u00b2 = ${formatMassSquared(info.massSquared)}${info.tachyonic ? "  tachyon" : ""}` : "";
+    const label = info ? `\u03b1\u2032M\u00b2 = ${formatMassSquared(info.row.massSquared)}${info.sector.tachyonic ? "  tachyon" : ""}` : "";
     return {
       key: pairKey(a.id, b.id),
       pair: [a.id, b.id],
       points: curveToPoints(curve),
-      tachyonic: info?.tachyonic ?? false,
+      tachyonic: info?.sector.tachyonic ?? false,
       label,
       labelAt: { x: mid.x + 4, y: mid.y - sceneFontSize - 2 },
     };

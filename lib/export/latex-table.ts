@@ -4,6 +4,7 @@
  * caption and a leading comment.
  */
 import type { SpectrumResult } from "@/lib/boundary/types";
+import { parseExactRational, parseResultNumber } from "@/lib/spectrum";
 import { conventionsLine, exportCaution } from "./caution";
 
 export interface SpectrumToLatexTableOptions {
@@ -35,7 +36,7 @@ export function spectrumToLatexTable(result: SpectrumResult, options: SpectrumTo
   ];
   for (const sector of result.sectors) {
     const rows = sector.levels.filter(
-      (row) => options.maxLevel === undefined || rationalValue(row.level) <= options.maxLevel,
+      (row) => options.maxLevel === undefined || parseResultNumber(row.level) <= options.maxLevel,
     );
     for (const row of rows) {
       lines.push(
@@ -43,7 +44,7 @@ export function spectrumToLatexTable(result: SpectrumResult, options: SpectrumTo
           [
             `${escapeLatex(sector.pair[0])}--${escapeLatex(sector.pair[1])}`,
             `$${sector.nu}$`,
-            `$${formatNumber(sector.separation)}$`,
+            `$${formatSeparation(sector.separation)}$`,
             row.sector,
             `$${toLatexNumber(row.level)}$`,
             `$${toLatexNumber(row.massSquared)}$`,
@@ -75,9 +76,12 @@ export function spectrumToLatexTable(result: SpectrumResult, options: SpectrumTo
  * toLatexNumber("-3/2") // => "-\\tfrac{3}{2}"
  */
 export function toLatexNumber(value: string): string {
-  const match = /^(-?)(\d+)\/(\d+)$/.exec(value.trim());
-  if (!match) return value.trim();
-  return `${match[1]}\\tfrac{${match[2]}}{${match[3]}}`;
+  const exact = parseExactRational(value);
+  if (!exact) return value.trim();
+  if (exact.den === 1n) return exact.num.toString();
+  const sign = exact.num < 0n ? "-" : "";
+  const magnitude = exact.num < 0n ? -exact.num : exact.num;
+  return `${sign}\\tfrac{${magnitude}}{${exact.den}}`;
 }
 
 /**
@@ -102,12 +106,7 @@ export function escapeLatex(text: string): string {
   return text.replace(/[\\{}#$%&_~^]/g, (char) => replacements[char] ?? char);
 }
 
-function rationalValue(value: string): number {
-  const match = /^(-?\d+)\/(\d+)$/.exec(value.trim());
-  return match ? Number(match[1]) / Number(match[2]) : Number(value);
-}
-
-function formatNumber(value: number): string {
+function formatSeparation(value: number): string {
   // Four significant decimals are plenty for a table; exact integers print as integers.
   return Number.isInteger(value) ? String(value) : String(Number(value.toFixed(4)));
 }

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import type { Configuration } from "@/lib/boundary/types";
 import { makeSector as sector, makeSpectrumResult as result } from "@/tests/fixtures/spectrum-result-builders";
-import { diffConfigurations, diffSpectra, parseRationalString } from "./diff";
+import { diffConfigurations, diffSpectra } from "./diff";
 
 const base: Configuration = {
   format: 1,
@@ -161,18 +161,5 @@ describe("diffSpectra", () => {
       const diff = diffSpectra(result([sector(["w", "p"])]), result([projected]));
       expect(diff.changedSectors).toEqual([]);
     });
-  });
-});
-
-describe("parseRationalString", () => {
-  it("parses fractions, integers and decimals", () => {
-    expect(parseRationalString("-1/2")).toBe(-0.5);
-    expect(parseRationalString("3")).toBe(3);
-    expect(parseRationalString("0.25")).toBe(0.25);
-  });
-
-  it("returns NaN for anything else", () => {
-    expect(parseRationalString("one half")).toBeNaN();
-    expect(parseRationalString("")).toBeNaN();
   });
 });

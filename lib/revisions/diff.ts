@@ -5,7 +5,9 @@
  * Pure: plain documents in, plain descriptions out; inputs are never mutated.
  * Stacks are matched by their `id`; a stack whose id changed shows as removed + added.
  */
+import { dimensionOf } from "@/lib/boundary";
 import type { Configuration, SpectrumResult, Stack, Sector, SectorKind } from "@/lib/boundary/types";
+import { lightestLevel, pairKey, parseResultNumber } from "@/lib/spectrum";
 
 /** Boundary condition of one stack on one spatial axis. */
 export type Boundary = "N" | "D";
@@ -53,7 +55,7 @@ export interface ConfigurationDiff {
 }
 
 /** The lightest surviving state of one sector, as shown in the diff. */
-export interface SectorLightest {
+export interface LightestStateSummary {
   sector: SectorKind;
   level: string;
   massSquared: string;
@@ -62,7 +64,7 @@ export interface SectorLightest {
 /** A sector (pair of stacks) whose headline physics changed. */
 export interface SectorChange {
   pair: [string, string];
-  lightest: { before: SectorLightest | null; after: SectorLightest | null } | null;
+  lightest: { before: LightestStateSummary | null; after: LightestStateSummary | null } | null;
   tachyonic: { before: boolean; after: boolean } | null;
   supersymmetric: { before: boolean; after: boolean } | null;
 }
@@ -140,15 +142,15 @@ export function diffConfigurations(before: Configuration, after: Configuration):
  * diffSpectra(r, r).identical // => true
  */
 export function diffSpectra(before: SpectrumResult, after: SpectrumResult): SpectrumDiff {
-  const beforeSectors = new Map(before.sectors.map((sector) => [pairKey(sector.pair), sector]));
-  const afterSectors = new Map(after.sectors.map((sector) => [pairKey(sector.pair), sector]));
+  const beforeSectors = new Map(before.sectors.map((sector) => [pairKey(...sector.pair), sector]));
+  const afterSectors = new Map(after.sectors.map((sector) => [pairKey(...sector.pair), sector]));
 
-  const addedSectors = after.sectors.filter((s) => !beforeSectors.has(pairKey(s.pair))).map((s) => s.pair);
-  const removedSectors = before.sectors.filter((s) => !afterSectors.has(pairKey(s.pair))).map((s) => s.pair);
+  const addedSectors = after.sectors.filter((s) => !beforeSectors.has(pairKey(...s.pair))).map((s) => s.pair);
+  const removedSectors = before.sectors.filter((s) => !afterSectors.has(pairKey(...s.pair))).map((s) => s.pair);
 
   const changedSectors: SectorChange[] = [];
   for (const next of after.sectors) {
-    const previous = beforeSectors.get(pairKey(next.pair));
+    const previous = beforeSectors.get(pairKey(...next.pair));
     if (!previous) continue;
     const lightestBefore = lightestOf(previous);
     const lightestAfter = lightestOf(next);
@@ -187,23 +189,6 @@ export function diffSpectra(before: SpectrumResult, after: SpectrumResult): Spec
   };
 }
 
-/**
- * Parses an exact rational string ("-1/2", "3") or a decimal string ("0.3097") to a number.
- *
- * @returns the value, or NaN for anything else
- * @example
- * parseRationalString("-1/2") // => -0.5
- */
-export function parseRationalString(value: string): number {
-  const match = /^\s*(-?\d+)\s*\/\s*(\d+)\s*$/.exec(value);
-  if (match) return Number(match[1]) / Number(match[2]);
-  return /^\s*-?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?\s*$/.test(value) ? Number(value) : Number.NaN;
-}
-
-function dimensionOf(configuration: Configuration): number {
-  return configuration.dimension ?? (configuration.theory === "bosonic" ? 26 : 10);
-}
-
 function boundaryOf(stack: Stack, axis: number): Boundary {
   return stack.worldvolume.includes(axis) ? "N" : "D";
 }
@@ -239,29 +224,15 @@ function diffStack(before: Stack, after: Stack, spatialAxes: number): StackChang
   return hasChange ? change : null;
 }
 
-function pairKey(pair: [string, string]): string {
-  return [...pair].sort().join("\u0000");
+function lightestOf(sector: Sector): LightestStateSummary | null {
+  const row = lightestLevel(sector);
+  return row ? { sector: row.sector, level: row.level, massSquared: row.massSquared } : null;
 }
 
-function lightestOf(sector: Sector): SectorLightest | null {
-  let best: SectorLightest | null = null;
-  let bestValue = Number.POSITIVE_INFINITY;
-  for (const row of sector.levels) {
-    // A row whose states were all projected out is not a state of the spectrum.
-    if (row.withChanPaton === "0") continue;
-    const value = parseRationalString(row.massSquared);
-    if (value < bestValue) {
-      bestValue = value;
-      best = { sector: row.sector, level: row.level, massSquared: row.massSquared };
-    }
-  }
-  return best;
-}
-
-function sameLightest(a: SectorLightest | null, b: SectorLightest | null): boolean {
+function sameLightest(a: LightestStateSummary | null, b: LightestStateSummary | null): boolean {
   if (a === null || b === null) return a === b;
   // Relative tolerance: decimal strings of irrational masses are rounded by the engine.
-  const x = parseRationalString(a.massSquared);
-  const y = parseRationalString(b.massSquared);
+  const x = parseResultNumber(a.massSquared);
+  const y = parseResultNumber(b.massSquared);
   return Math.abs(x - y) <= 1e-9 * Math.max(1, Math.abs(x), Math.abs(y));
 }

@@ -1,14 +1,15 @@
 import "server-only";
 import { availableParallelism } from "node:os";
 import { Worker } from "node:worker_threads";
-import { ServiceBusyError } from "@/lib/errors";
+import { ServiceUnavailableError } from "@/lib/errors";
 
 /**
  * bcrypt off the main thread. bcryptjs is plain JavaScript: at cost 12 one hash or check is about a
  * quarter of a second of CPU, and its async API only slices that work into chunks on the event loop,
  * so a flood of sign-ins would starve every other request. Here the work runs in a small pool of
- * worker threads with a bounded queue; past the queue a caller gets ServiceBusyError (503, "try
- * again") at once instead of waiting without end.
+ * worker threads with a bounded queue; past the queue a caller gets a ServiceUnavailableError (503
+ * with Retry-After, "busy, try again") at once instead of waiting without end, as the spectrum
+ * compute pool does (lib/server/compute/pool.ts).
  */
 
 /** One job for a hashing thread. */
@@ -18,7 +19,7 @@ type PasswordJob = { kind: "hash"; password: string; cost: number } | { kind: "c
 export interface PasswordHasherOptions {
   /** Worker threads (default: one per core but one, between 1 and 4). */
   threads?: number;
-  /** Jobs that may wait for a thread; one more is refused with ServiceBusyError (default 32 per thread, about 8 s of work at cost 12). */
+  /** Jobs that may wait for a thread; one more is refused with a 503 (default 32 per thread, about 8 s of work at cost 12). */
   maxQueue?: number;
 }
 
@@ -48,6 +49,8 @@ parentPort.on("message", ({ id, job }) => {
   }
 });
 `;
+
+const busyMessage = "The server is busy checking other passwords. Nothing was changed; please try again in a moment.";
 
 interface Pending {
   job: PasswordJob;
@@ -109,7 +112,7 @@ export function createPasswordHasher(options: PasswordHasherOptions = {}): Passw
 
   function run(job: PasswordJob): Promise<string | boolean> {
     const busyThreads = threads.filter((thread) => thread.current !== null).length;
-    if (busyThreads >= size && queue.length >= maxQueue) return Promise.reject(new ServiceBusyError());
+    if (busyThreads >= size && queue.length >= maxQueue) return Promise.reject(new ServiceUnavailableError(busyMessage));
     return new Promise((resolve, reject) => {
       queue.push({ job, resolve, reject });
       dispatch();
@@ -133,12 +136,12 @@ function sharedHasher(): PasswordHasher {
   return shared;
 }
 
-/** A bcrypt hash of `password` at `cost`, computed on the shared pool; ServiceBusyError when it is full. */
+/** A bcrypt hash of `password` at `cost`, computed on the shared pool; a 503 when it is full. */
 export function hashPassword(password: string, cost: number): Promise<string> {
   return sharedHasher().hash(password, cost);
 }
 
-/** True when `password` matches `hash`, checked on the shared pool; ServiceBusyError when it is full. */
+/** True when `password` matches `hash`, checked on the shared pool; a 503 when it is full. */
 export function comparePassword(password: string, hash: string): Promise<boolean> {
   return sharedHasher().compare(password, hash);
 }

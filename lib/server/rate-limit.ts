@@ -46,18 +46,21 @@ const sweepIntervalMs = 10 * 60 * 1000;
 let lastSweep = 0;
 
 /**
- * Counts one request for `key` and says whether it is within the limit.
+ * Counts one request for `key`, weighing `weight` requests (an expensive computation counts for
+ * several), and says whether it is within the limit.
  *
  * @param key - What is limited, e.g. `spectrum:203.0.113.9`.
  * @param options - Limit per window and window length.
+ * @param weight - How many requests this one counts for (default 1; capped at the limit, so one
+ *   request is always possible in a fresh window).
  * @returns `{ ok, remaining, retryAfterSeconds }`; refused requests are not counted.
  */
-export async function consumeRateLimit(key: string, options: RateLimitOptions): Promise<RateLimitResult> {
+export async function consumeRateLimit(key: string, options: RateLimitOptions, weight = 1): Promise<RateLimitResult> {
   const now = Date.now();
   const windowStart = windowStartAt(now, options.windowMs);
   let count: number | null;
   try {
-    count = await hitRateLimitBucket(key, windowStart, Math.max(1, options.limit));
+    count = await hitRateLimitBucket(key, windowStart, Math.max(1, options.limit), weight);
   } catch (error) {
     if (options.whenUnavailable === "allow" && isDatabaseUnavailable(error)) {
       console.error(`Rate limit "${key}" not checked: the database is unavailable; letting the request through.`);

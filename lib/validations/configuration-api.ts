@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { configurationSchema } from "./configuration";
+import { configurationSchema, configurationTitleMaxLength } from "./configuration";
 
 /** Largest request body accepted by the configuration routes, in bytes. */
 export const configurationBodyLimitBytes = 256 * 1024;
@@ -11,7 +11,7 @@ const theory = z.enum(["bosonic", "IIA", "IIB"]);
 export const listConfigurationsQuerySchema = z.object({
   groupId: uuid.optional(),
   scope: z.enum(["accessible", "created"]).default("accessible"),
-  search: z.string().trim().max(120).optional(),
+  search: z.string().trim().max(configurationTitleMaxLength).optional(),
   theory: theory.optional(),
   starter: z.enum(["true", "false"]).transform((value) => value === "true").optional(),
   sort: z.enum(["updated", "created", "title", "lightest", "stacks"]).default("updated"),
@@ -43,13 +43,13 @@ export type UpdateConfigurationBody = z.infer<typeof updateConfigurationBodySche
 /** The dashboard's `?deleted=<id>&title=<title>` after a delete, which offers an undo. */
 export const deletedNoticeSchema = z.object({
   deleted: uuid,
-  title: z.string().max(200).catch(""),
+  title: z.string().max(configurationTitleMaxLength).catch(""),
 });
 
 export const forkConfigurationBodySchema = z.object({
   targetGroupId: uuid,
   revisionId: uuid.optional(),
-  title: z.string().trim().min(1).max(120).optional(),
+  title: z.string().trim().min(1).max(configurationTitleMaxLength).optional(),
   /** An unsaved draft to start the fork from instead of the revision's document. */
   document: configurationSchema.optional(),
 });

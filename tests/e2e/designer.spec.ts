@@ -1,7 +1,7 @@
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test, type Locator, type Page } from "@playwright/test";
 import { computeSpectrum } from "@/lib/boundary";
 import type { Configuration } from "@/lib/boundary/types";
-import { formatMassSquared, parseRational } from "@/lib/designer/spectrum-summary";
+import { formatMassSquared, parseResultNumber } from "@/lib/spectrum";
 import { demoAccounts, signIn } from "./helpers/accounts";
 
 // The designer end to end: Konva draws to a <canvas>, so every assertion goes through the
@@ -26,6 +26,15 @@ function twoStackDocument(title: string): Configuration {
 
 function unique(label: string): string {
   return `${label} ${Date.now().toString(36)}${Math.random().toString(36).slice(2, 6)}`;
+}
+
+/** True when the Konva stage inside the canvas frame has the frame's current size in CSS pixels. */
+async function stageMatchesFrame(canvas: Locator): Promise<boolean> {
+  return canvas.evaluate((frame) => {
+    const stage = frame.querySelector("canvas");
+    const box = frame.getBoundingClientRect();
+    return stage !== null && stage.style.width === `${Math.floor(box.width)}px` && stage.style.height === `${Math.floor(box.height)}px`;
+  });
 }
 
 /** Creates a configuration in the shared demo group through the API; returns its id. */
@@ -65,14 +74,14 @@ test.describe("designer", () => {
     await page.getByRole("radio", { name: /Type IIA/ }).check();
     await page.getByRole("button", { name: "Create and open the designer" }).click();
     await expect(page).toHaveURL(/\/configurations\/[0-9a-f-]{36}$/);
-    await expect(page.getByTestId("preview-gauge-group")).toHaveText("U(1)");
+    await expect(page.getByTestId("spectrum-gauge-group")).toHaveText("U(1)");
     await expect(page.getByRole("combobox", { name: "Vertical display axis" })).toHaveValue("9");
     await expect(page.getByRole("combobox", { name: "Horizontal display axis" })).toHaveValue("8");
 
     // Canvas: add a stack at the centre of the view and move it with the keyboard (one grid step = 0.5).
     await page.getByRole("button", { name: "Add stack (A)" }).click();
     await expect(page.getByLabel("Select stack s1")).toBeChecked();
-    await expect(page.getByTestId("preview-gauge-group")).toHaveText("U(1) x U(1)");
+    await expect(page.getByTestId("spectrum-gauge-group")).toHaveText("U(1) x U(1)");
     const canvas = page.getByRole("application", { name: /Canvas showing/ });
     await canvas.focus();
     for (let i = 0; i < 4; i++) await page.keyboard.press("ArrowUp");
@@ -80,15 +89,10 @@ test.describe("designer", () => {
 
     // Canvas: drag the new D0 two units to the right. The view was fitted to the starting stack at
     // the origin (80 px per unit, origin at the centre), so s1 is drawn 160 px above the centre.
-    // The preview beside the canvas grows as stacks are added and the canvas refits after a resize:
-    // wait until its box holds still before aiming at a stack by pixels.
-    let box = await canvas.boundingBox();
-    await expect(async () => {
-      const before = await canvas.boundingBox();
-      await page.waitForTimeout(250);
-      box = await canvas.boundingBox();
-      expect(box).toEqual(before);
-    }).toPass({ timeout: 10_000 });
+    // Aim by pixels only once the stage is drawn at the canvas's current size (the layout around it
+    // changes as stacks are added, and the stage follows a resize one render later).
+    await expect.poll(() => stageMatchesFrame(canvas)).toBe(true);
+    const box = await canvas.boundingBox();
     if (!box) throw new Error("the canvas has no box");
     const cx = box.x + box.width / 2;
     const cy = box.y + box.height / 2;
@@ -107,9 +111,11 @@ test.describe("designer", () => {
     await page.getByRole("button", { name: "Stack s2 is an antibrane" }).click();
     await page.getByLabel("Position of stack s2 on x9").fill("1");
     await expect(page.getByTestId("stack-kind-s2")).toHaveText("anti-D4");
-    await expect(page.getByTestId("preview-gauge-group")).toHaveText("U(2) x U(1) x U(1)");
-    await expect(page.getByTestId("preview-stability")).toContainText("tachyonic sector");
-    await expect(page.getByTestId("preview-tachyons")).toContainText("a\u2013s2");
+    // U(N) per separated stack; an anti-D4 one unit from a D4 is inside y_c = pi sqrt(2), so tachyonic
+    // (common practice; Banks and Susskind 1995, hep-th/9511194, from memory).
+    await expect(page.getByTestId("spectrum-gauge-group")).toHaveText("U(2) x U(1) x U(1)");
+    await expect(page.getByTestId("spectrum-stability")).toContainText("tachyonic sector");
+    await expect(page.getByTestId("spectrum-tachyons")).toContainText("a\u2013s2");
 
     // An odd p is not allowed in IIA: shown inline, and saving is blocked until it is fixed.
     await page.getByRole("button", { name: "Stack s2, axis x5: Dirichlet" }).click();
@@ -130,7 +136,7 @@ test.describe("designer", () => {
     await expect(page.getByTestId("stack-kind-s2")).toHaveText("anti-D4");
     await expect(page.getByLabel("Number of branes N in stack s2")).toHaveValue("2");
     await expect(page.getByLabel("Position of stack s2 on x9")).toHaveValue("1");
-    await expect(page.getByTestId("preview-gauge-group")).toHaveText("U(2) x U(1) x U(1)");
+    await expect(page.getByTestId("spectrum-gauge-group")).toHaveText("U(2) x U(1) x U(1)");
   });
 
   test("keeps an unsaved draft across a reload", async ({ page }) => {
@@ -203,16 +209,16 @@ test.describe("designer", () => {
       await expect(cells.nth(3)).toHaveText(formatMassSquared(state.massSquared));
       await expect(cells.nth(6)).toHaveText(state.withChanPaton);
     }
-    await expect(page.getByTestId("results-supercharges")).toHaveText(`${expected.supercharges} supercharges`);
+    await expect(page.getByTestId("spectrum-supersymmetry")).toHaveText(`${expected.supercharges} supercharges`);
     const tachyonic = expected.sectors.filter((s) => s.tachyonic).length;
-    await expect(page.getByTestId("results-stability")).toHaveText(tachyonic === 0 ? "No tachyons" : new RegExp(`^${tachyonic} tachyonic sector`));
+    await expect(page.getByTestId("spectrum-stability")).toHaveText(tachyonic === 0 ? "No tachyons" : new RegExp(`^${tachyonic} tachyonic sector`));
 
     // The per-sector table of the brane-antibrane sector sorts by alpha' M^2.
     const sector = page.getByTestId("sector-a-c");
     await sector.getByRole("button", { name: /M²/ }).first().click();
     const firstRow = sector.getByRole("table").first().getByRole("row").nth(1);
     const lightestAc = expected.sectors.find((s) => s.pair.join("-") === "a-c")!;
-    const minimum = [...lightestAc.levels].sort((x, y) => parseRational(x.massSquared) - parseRational(y.massSquared))[0]!;
+    const minimum = [...lightestAc.levels].sort((x, y) => parseResultNumber(x.massSquared) - parseResultNumber(y.massSquared))[0]!;
     await expect(firstRow.getByRole("cell").nth(2)).toContainText(formatMassSquared(minimum.massSquared));
     await expect(page.getByText(/Caution/).first()).toBeVisible();
   });
@@ -293,7 +299,7 @@ test.describe("designer", () => {
     await count.focus();
     await page.keyboard.press("ArrowUp");
     await expect(count).toHaveValue("2");
-    await expect(page.getByTestId("preview-gauge-group")).toHaveText(/U\(2\)/);
+    await expect(page.getByTestId("spectrum-gauge-group")).toHaveText(/U\(2\)/);
 
     await page.keyboard.press("Control+s");
     const dialog = page.getByRole("dialog", { name: "Save a revision" });

@@ -319,6 +319,39 @@ const matrix: Record<string, RouteEntry> = {
       },
     },
   },
+  "configurations/[configurationId]/revisions/[revisionId]/result/overview/route.ts": {
+    methods: {
+      GET: {
+        request: (w) => ({
+          request: json("GET", `${configurationPath(w)}/revisions/${w.revisionId}/result/overview`),
+          params: { configurationId: w.configurationId, revisionId: w.revisionId },
+        }),
+        expect: membersRead,
+      },
+    },
+  },
+  "configurations/[configurationId]/revisions/[revisionId]/result/sectors/route.ts": {
+    methods: {
+      GET: {
+        request: (w) => ({
+          request: json("GET", `${configurationPath(w)}/revisions/${w.revisionId}/result/sectors?limit=5`),
+          params: { configurationId: w.configurationId, revisionId: w.revisionId },
+        }),
+        expect: membersRead,
+      },
+    },
+  },
+  "configurations/[configurationId]/revisions/[revisionId]/result/sectors/[sectorIndex]/route.ts": {
+    methods: {
+      GET: {
+        request: (w) => ({
+          request: json("GET", `${configurationPath(w)}/revisions/${w.revisionId}/result/sectors/0`),
+          params: { configurationId: w.configurationId, revisionId: w.revisionId, sectorIndex: "0" },
+        }),
+        expect: membersRead,
+      },
+    },
+  },
   "configurations/[configurationId]/export/route.ts": {
     methods: { GET: { request: (w) => ({ request: json("GET", `${configurationPath(w)}/export?format=csv`), params: configurationParams(w) }), expect: membersRead } },
   },

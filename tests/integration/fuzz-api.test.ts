@@ -1,7 +1,7 @@
 import { randomUUID } from "node:crypto";
 import { count, eq } from "drizzle-orm";
 import fc from "fast-check";
-import { beforeAll, describe, expect, it, vi } from "vitest";
+import { beforeAll, beforeEach, describe, expect, it, vi } from "vitest";
 import { db } from "@/db/index";
 import type { Actor } from "@/db/queries/actor";
 import { createConfiguration } from "@/db/queries/configurations";
@@ -14,8 +14,9 @@ import {
   probeNearSevenBrane,
   zeroFourBoundState,
 } from "@/lib/demo-configurations";
-import { clientAddressHeader } from "@/scripts/lib/client-address.mjs";
+import { resetRateLimits } from "@/lib/server/rate-limit";
 import { unstorableTextMessage } from "@/lib/storable-text";
+import { clientAddressHeader } from "@/scripts/lib/client-address.mjs";
 import { createTestGroup, createTestUser } from "@/tests/fixtures/users";
 import { actionFiles, actionsOf, handlersOf, paramNamesOf, routeFiles, type Method, type RouteHandler, type ServerAction } from "@/tests/support/app-modules";
 
@@ -224,13 +225,17 @@ beforeAll(async () => {
 });
 
 describe("POST /api/spectrum fuzzing", () => {
+  beforeEach(async () => {
+    await resetRateLimits("spectrum:");
+  });
+
   it(`answers ${runs} random and malformed bodies with 200 or a deliberate 4xx naming JSON paths`, async () => {
     session.actor = owner;
     const statuses = new Map<number, number>();
     await fc.assert(
       fc.asyncProperty(anyBody, fc.boolean(), async (text, signedIn) => {
         const headers: Record<string, string> = { "content-type": "application/json" };
-        // Signed-in callers skip the rate limit; anonymous ones come from a fresh address each time.
+        // Signed-in callers spend the account's compute budget; anonymous ones come from a fresh address each time.
         if (signedIn) headers.cookie = "next-auth.session-token=fuzz";
         else headers[clientAddressHeader] = `fuzz-${randomUUID()}`;
         const response = await spectrumRoute.POST(

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { getConfiguration } from "@/db/queries/configurations";
-import { getResultForRevision, getRevisionOfConfiguration } from "@/db/queries/revisions";
+import { getResultForRevision } from "@/db/queries/result-reads";
+import { getRevisionOfConfiguration } from "@/db/queries/revisions";
 import { NotFoundError } from "@/lib/errors";
 import { spectrumToCsv } from "@/lib/export/csv";
 import { spectrumToLatexTable } from "@/lib/export/latex-table";

@@ -1,0 +1,93 @@
+import { describe, expect, it } from "vitest";
+import { displaySignificantDigits, formatMassSquared, formatNumber, formatPair } from "./format";
+
+const minus = "\u2212";
+
+describe("formatNumber", () => {
+  it("keeps four significant digits", () => {
+    expect(displaySignificantDigits).toBe(4);
+    // y_c = pi sqrt(2) ~ 4.443 for a brane-antibrane pair (physics.md, Banks and Susskind 1995, from memory).
+    expect(formatNumber(Math.PI * Math.SQRT2)).toBe("4.443");
+    expect(formatNumber(0.310264088)).toBe("0.3103");
+  });
+
+  it("drops only the zeros after the decimal point", () => {
+    expect(formatNumber(1230.4)).toBe("1230");
+    expect(formatNumber(1000.2)).toBe("1000");
+    expect(formatNumber(120)).toBe("120");
+    expect(formatNumber(3.5)).toBe("3.5");
+    expect(formatNumber(2.00004)).toBe("2");
+  });
+
+  it("writes a true minus sign", () => {
+    expect(formatNumber(-0.5)).toBe(`${minus}0.5`);
+    expect(formatNumber(-1230.4)).toBe(`${minus}1230`);
+  });
+
+  it("switches to an exponent below 1e-4 and from 1e6", () => {
+    expect(formatNumber(2.5330295911e10)).toBe("2.533e10");
+    expect(formatNumber(1e6)).toBe("1e6");
+    expect(formatNumber(999_999)).toBe("1000000");
+    expect(formatNumber(-1.5e-7)).toBe(`${minus}1.5e${minus}7`);
+    expect(formatNumber(0.0001234)).toBe("0.0001234");
+  });
+
+  it("takes another number of significant digits", () => {
+    expect(formatNumber(Math.PI, { significantDigits: 3 })).toBe("3.14");
+    expect(formatNumber(1230.4, { significantDigits: 6 })).toBe("1230.4");
+  });
+
+  describe("edge cases", () => {
+    it("shows zero and negative zero as 0", () => {
+      expect(formatNumber(0)).toBe("0");
+      expect(formatNumber(-0)).toBe("0");
+    });
+
+    it("shows an em dash where there is no number", () => {
+      expect(formatNumber(null)).toBe("\u2014");
+      expect(formatNumber(Number.NaN)).toBe("\u2014");
+      expect(formatNumber(Number.POSITIVE_INFINITY)).toBe("\u2014");
+    });
+
+    it("throws a RangeError for an impossible number of digits", () => {
+      expect(() => formatNumber(1, { significantDigits: 0 })).toThrow(RangeError);
+    });
+  });
+});
+
+describe("formatMassSquared", () => {
+  it("keeps exact rationals exact, with a true minus sign", () => {
+    // NS ground state of a brane-antibrane pair: alpha' M^2 = -1/2 (physics.md, from memory).
+    expect(formatMassSquared("-1/2")).toBe(`${minus}1/2`);
+    expect(formatMassSquared("3/2")).toBe("3/2");
+    expect(formatMassSquared("-1")).toBe(`${minus}1`);
+    expect(formatMassSquared("0")).toBe("0");
+  });
+
+  it("rounds the engine's decimal strings", () => {
+    expect(formatMassSquared("0.310264088")).toBe("0.3103");
+    expect(formatMassSquared("-0.189735912")).toBe(`${minus}0.1897`);
+    expect(formatMassSquared("1230.40000001")).toBe("1230");
+  });
+
+  it("formats the doubles stored for lists without cutting zeros before the point", () => {
+    expect(formatMassSquared(1230.4)).toBe("1230");
+    expect(formatMassSquared(1000.2)).toBe("1000");
+    expect(formatMassSquared(-0.5)).toBe(`${minus}0.5`);
+    expect(formatMassSquared(0.133)).toBe("0.133");
+  });
+
+  describe("edge cases", () => {
+    it("shows an em dash for a missing value and other text as it is", () => {
+      expect(formatMassSquared(null)).toBe("\u2014");
+      expect(formatMassSquared("unknown")).toBe("unknown");
+    });
+  });
+});
+
+describe("formatPair", () => {
+  it("joins the two stack ids with an en dash", () => {
+    expect(formatPair(["wall", "probe"])).toBe("wall\u2013probe");
+    expect(formatPair(["a", "a"])).toBe("a\u2013a");
+  });
+});

@@ -1,0 +1,138 @@
+import { describe, expect, it } from "vitest";
+import { computeSpectrum } from "@/lib/boundary";
+import { CONVENTIONS_TEXT } from "@/lib/boundary/constants";
+import type { Configuration } from "@/lib/boundary/types";
+import { readStoredResult, StoredResultError } from "./spectrum-result";
+
+/**
+ * A D0 separated from a D8 in IIA (nu = 8: the R ground state sits in one orientation, so its rows
+ * carry notes), plus a string scale so that masses in GeV are present: every optional field of a
+ * result appears.
+ */
+const document: Configuration = {
+  format: 1,
+  title: "Point and wall",
+  theory: "IIA",
+  stringScaleGeV: 1e16,
+  levels: 2,
+  stacks: [
+    { id: "wall", label: "", count: 1, anti: false, worldvolume: [1, 2, 3, 4, 5, 6, 7, 8], position: { "9": 0 } },
+    { id: "point", label: "", count: 2, anti: false, worldvolume: [], position: { "9": 1.5 } },
+  ],
+};
+
+/** What the database hands back: the result after a JSON round trip. */
+function stored(): Record<string, unknown> {
+  return JSON.parse(JSON.stringify(computeSpectrum(document))) as Record<string, unknown>;
+}
+
+/** A stored result as an older engine would have written it: without the fields added since. */
+function olderEngineResult(): Record<string, unknown> {
+  const result = stored();
+  const sectors = result.sectors as Array<Record<string, unknown>>;
+  for (const sector of sectors) {
+    delete sector.supersymmetric;
+    delete sector.massless;
+    delete sector.notes;
+  }
+  delete result.warnings;
+  delete result.conventions;
+  return { ...result, engineVersion: "0.9.0" };
+}
+
+describe("readStoredResult", () => {
+  it("reads a result of the current engine back unchanged, every optional field included", () => {
+    const result = computeSpectrum(document);
+    const levels = result.sectors.flatMap((sector) => sector.levels);
+    // The fixture must exercise the optional fields, or stripping one would go unnoticed.
+    expect(levels.some((row) => row.note !== undefined)).toBe(true);
+    expect(levels.some((row) => typeof row.massGeV === "number")).toBe(true);
+    expect(result.sectors.some((sector) => sector.massless.some((m) => m.withChanPaton !== undefined))).toBe(true);
+    expect(readStoredResult(stored())).toEqual(result);
+  });
+
+  it("keeps the engine version that computed the result", () => {
+    expect(readStoredResult({ ...stored(), engineVersion: "0.9.0" }).engineVersion).toBe("0.9.0");
+  });
+
+  describe("a result of an older engine version", () => {
+    const upgraded = readStoredResult(olderEngineResult());
+
+    it("gives every sector the lists and flags the older engine did not store", () => {
+      for (const sector of upgraded.sectors) {
+        expect(sector.massless).toEqual([]);
+        expect(sector.notes).toEqual([]);
+        expect(sector.supersymmetric).toBe(false);
+      }
+    });
+
+    it("states the conventions, which have not changed since the first engine (alpha' = 1)", () => {
+      expect(upgraded.conventions).toBe(CONVENTIONS_TEXT);
+    });
+
+    it("warns that supersymmetry and massless content were not recorded instead of presenting the defaults as physics", () => {
+      expect(upgraded.warnings).toEqual([
+        "Stored by engine 0.9.0, which did not record which sectors are supersymmetric or the massless content of each sector; " +
+          "save the configuration again to recompute the result with the current engine.",
+      ]);
+    });
+
+    it("keeps everything the older engine did store", () => {
+      const current = computeSpectrum(document);
+      expect(upgraded.sectors.map((sector) => sector.levels)).toEqual(current.sectors.map((sector) => sector.levels));
+      expect(upgraded.lightest).toEqual(current.lightest);
+      expect(upgraded.gaugeGroup).toBe(current.gaugeGroup);
+    });
+  });
+
+  describe("edge cases", () => {
+    it("does not warn about supersymmetry for the bosonic string, which has none", () => {
+      const bosonic: Configuration = {
+        ...document,
+        theory: "bosonic",
+        stacks: [{ id: "a", label: "", count: 1, anti: false, worldvolume: [1, 2, 3], position: {} }],
+      };
+      const result = JSON.parse(JSON.stringify(computeSpectrum(bosonic))) as Record<string, unknown>;
+      for (const sector of result.sectors as Array<Record<string, unknown>>) delete sector.supersymmetric;
+      const upgraded = readStoredResult(result);
+      expect(upgraded.sectors[0]?.supersymmetric).toBe(false);
+      expect(upgraded.warnings.some((warning) => warning.startsWith("Stored by engine"))).toBe(false);
+    });
+
+    it("does not mutate the stored value", () => {
+      const older = olderEngineResult();
+      const before = structuredClone(older);
+      readStoredResult(older);
+      expect(older).toEqual(before);
+    });
+
+    it("throws a StoredResultError naming the path of an unreadable number", () => {
+      const result = stored();
+      const sectors = result.sectors as Array<{ levels: Array<Record<string, unknown>> }>;
+      sectors[0]!.levels[0]!.massSquared = "about one";
+      expect(() => readStoredResult(result)).toThrow(StoredResultError);
+      expect(() => readStoredResult(result)).toThrow(/sectors\.0\.levels\.0\.massSquared/);
+    });
+
+    it("checks the level and counts of the lightest states too", () => {
+      const result = stored();
+      const lightest = result.lightest as Array<Record<string, unknown>>;
+      lightest[0]!.level = "0.5";
+      lightest[1]!.withChanPaton = "-2";
+      expect(() => readStoredResult(result)).toThrow(
+        expect.objectContaining({
+          name: "StoredResultError",
+          issues: [expect.objectContaining({ path: ["lightest", 0, "level"] }), expect.objectContaining({ path: ["lightest", 1, "withChanPaton"] })],
+        }),
+      );
+    });
+
+    it("throws a StoredResultError for a result without an engine version or a value that is no result", () => {
+      const unversioned = stored();
+      delete unversioned.engineVersion;
+      expect(() => readStoredResult(unversioned)).toThrow(StoredResultError);
+      expect(() => readStoredResult(null)).toThrow(StoredResultError);
+      expect(() => readStoredResult("result")).toThrow(StoredResultError);
+    });
+  });
+});
