@@ -68,9 +68,6 @@ export const users = pgTable(
     passwordHash: text("password_hash"),
     siteRole: siteRoleEnum("site_role").notNull().default("member"),
     emailVerifiedAt: timestamptz("email_verified_at"),
-    /** Consecutive failed password sign-ins; reset on success. */
-    failedSignIns: integer("failed_sign_ins").notNull().default(0),
-    lockedUntil: timestamptz("locked_until"),
     createdAt: createdAt(),
     deletedAt: timestamptz("deleted_at"),
   },
@@ -121,6 +118,68 @@ export const apiTokens = pgTable(
     revokedAt: timestamptz("revoked_at"),
   },
   (t) => [index("api_tokens_user_id_idx").on(t.userId, t.createdAt)],
+);
+
+/**
+ * One signed-in session (a browser or device), named by the `sid` its JWT carries. Every request
+ * checks that the row exists and is not revoked, so signing out, a password change or a reset ends
+ * sessions at once rather than when their tokens expire.
+ */
+export const sessions = pgTable(
+  "sessions",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    createdAt: createdAt(),
+    revokedAt: timestamptz("revoked_at"),
+  },
+  (t) => [index("sessions_user_id_idx").on(t.userId)],
+);
+
+/**
+ * A sign-up waiting for its e-mail address to be confirmed. The account is created only when the
+ * link mailed to the address is opened and the password chosen at sign-up is entered again, so
+ * nobody can hold an account under someone else's address. Several may exist for one address.
+ */
+export const pendingSignUps = pgTable(
+  "pending_sign_ups",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    /** Lowercased e-mail the confirmation link was sent to. */
+    email: text("email").notNull(),
+    name: text("name").notNull(),
+    /** bcrypt hash of the password chosen at sign-up. */
+    passwordHash: text("password_hash").notNull(),
+    /** SHA-256 hex digest of the token in the confirmation link. */
+    tokenHash: text("token_hash").notNull().unique(),
+    expiresAt: timestamptz("expires_at").notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [index("pending_sign_ups_email_idx").on(t.email), index("pending_sign_ups_expires_idx").on(t.expiresAt)],
+);
+
+/**
+ * Failed password sign-ins per (e-mail address, client address), for progressive delays: after a
+ * few failures each further attempt from that client for that address must wait longer. Strangers
+ * elsewhere slow down only themselves, so nobody can lock an owner out.
+ */
+export const signInThrottles = pgTable(
+  "sign_in_throttles",
+  {
+    /** Lowercased e-mail as typed (whether or not an account has it). */
+    email: text("email").notNull(),
+    clientAddress: text("client_address").notNull(),
+    failures: integer("failures").notNull().default(0),
+    /** The next attempt from this client for this address is refused before this moment. */
+    blockedUntil: timestamptz("blocked_until").notNull().defaultNow(),
+    updatedAt: timestamptz("updated_at").notNull().defaultNow(),
+  },
+  (t) => [
+    primaryKey({ name: "sign_in_throttles_pk", columns: [t.email, t.clientAddress] }),
+    index("sign_in_throttles_updated_idx").on(t.updatedAt),
+  ],
 );
 
 // ---------------------------------------------------------------------------------------------
@@ -433,6 +492,8 @@ export type GroupRole = (typeof groupRoleEnum.enumValues)[number];
 
 export type UserRow = typeof users.$inferSelect;
 export type NewUserRow = typeof users.$inferInsert;
+export type SessionRow = typeof sessions.$inferSelect;
+export type PendingSignUpRow = typeof pendingSignUps.$inferSelect;
 export type AuthTokenRow = typeof authTokens.$inferSelect;
 export type NewAuthTokenRow = typeof authTokens.$inferInsert;
 export type ApiTokenRow = typeof apiTokens.$inferSelect;

@@ -208,7 +208,7 @@ async function main() {
       (await step(`seed demo data into ${e2eDb}`, () => runNpmScriptIfPresent("db:seed", e2eEnv, "demo data"))) &&
       (await step("next build", () => buildApp(e2eEnv)));
     if (ready) {
-      const serving = await step("next start", async () => {
+      const serving = await step("serve the build", async () => {
         await startApp({ port: appPort, env: e2eEnv, services });
         await clearMailbox(e2eEnv.MAILBOX_URL);
         console.log(`[test] app on ${e2eEnv.NEXTAUTH_URL}, mailbox on ${e2eEnv.MAILBOX_URL}, browser ${chromiumPath}`);

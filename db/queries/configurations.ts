@@ -4,7 +4,7 @@ import type { Configuration } from "../../lib/boundary/types";
 import { parseConfigurationFile } from "../../lib/validations/import";
 import { ForbiddenError, NotFoundError, ValidationError } from "../../lib/errors";
 import { db, type Executor } from "../index";
-import { configurations, groups, memberships, users, type GroupRole } from "../schema";
+import { configurations, groups, memberships, shareLinks, users, type GroupRole } from "../schema";
 import { assertUuid, requireActor, requireGroupRole, type Actor } from "./actor";
 import { recordAudit } from "./audit";
 import { getPersonalGroup } from "./groups";
@@ -175,27 +175,37 @@ export async function updateConfiguration(
   });
 }
 
-/** Moves a configuration to the bin (editor or better); `undeleteConfiguration` brings it back. */
+/**
+ * Moves a configuration to the bin (editor or better); `undeleteConfiguration` brings it back. Its
+ * share links are revoked with it and stay revoked after an undelete: a link someone handed out
+ * for the old configuration should not start working again without anyone deciding so.
+ */
 export async function softDeleteConfiguration(actor: Actor | null, configurationId: string): Promise<void> {
   const signedIn = requireActor(actor);
   await db.transaction(async (tx) => {
     const { row } = await requireConfigurationRole(tx, actor, configurationId, "editor");
+    const now = new Date();
     await tx
       .update(configurations)
-      .set({ deletedAt: new Date() })
+      .set({ deletedAt: now })
       .where(and(eq(configurations.id, row.id), isNull(configurations.deletedAt)));
+    const revoked = await tx
+      .update(shareLinks)
+      .set({ revokedAt: now })
+      .where(and(eq(shareLinks.configurationId, row.id), isNull(shareLinks.revokedAt)))
+      .returning({ id: shareLinks.id });
     await recordAudit(tx, {
       actorId: signedIn.id,
       groupId: row.groupId,
       action: "configuration.delete",
       entityType: "configuration",
       entityId: row.id,
-      details: { title: row.title },
+      details: { title: row.title, revokedShareLinks: revoked.length },
     });
   });
 }
 
-/** Restores a soft-deleted configuration (editor or better in its group). */
+/** Restores a soft-deleted configuration (editor or better in its group); its share links stay revoked. */
 export async function undeleteConfiguration(
   actor: Actor | null,
   configurationId: string,

@@ -72,11 +72,14 @@ type Parsed<T> = T extends z.ZodType ? z.output<T> : undefined;
 /**
  * The one wrapper of Mooring's route handlers. In order: the actor (401 when required and missing,
  * before anything else is read; from the cookie session, or from a personal API token in
- * `Authorization: Bearer`, checked against the route's `scope`), the route params, the `before` checks, the query and the JSON body (read with a byte
- * count, 400 for malformed JSON, 413 past the limit, 422 with every zod issue at its JSON path),
+ * `Authorization: Bearer`, checked against the route's `scope`), the query string (422 for NUL
+ * characters or unpaired surrogates, on every route), the route params, the `before` checks, the
+ * query schema and the JSON body (read with a byte count, 400 for malformed JSON, 413 past the
+ * limit, 422 with every zod issue at its JSON path),
  * then the handler. Thrown errors become their status (lib/errors.ts `toErrorResponse`); anything
- * unexpected is logged and answered 500. Responses to signed-in callers are `private, no-store`
- * unless the handler sets Cache-Control itself.
+ * unexpected is logged and answered 500. Every response to a caller with a session (errors
+ * included, and whatever the handler set) is `Cache-Control: private, no-store`: it may hold
+ * what only that user may see, and no cache, shared or the browser's, should keep it.
  *
  * @example
  * export const GET = route({ params: ["thingId"] }, async ({ actor, params }) =>
@@ -101,10 +104,12 @@ export function route<
       actor = caller.actor;
       const { credential } = caller;
       if (!actor && (options.auth ?? "required") === "required") throw new UnauthenticatedError();
+      // Every route refuses a query string the database could not store, whether it reads it or not.
+      const rawQuery = readQuery(request);
       const params = await readParams(context, options.params ?? []);
       const typedActor = actor as TAuth extends "optional" ? Actor | null : Actor;
       await options.before?.({ request, actor: typedActor, credential, params });
-      const query = options.query ? options.query.parse(readQuery(request)) : undefined;
+      const query = options.query ? options.query.parse(rawQuery) : undefined;
       const body = options.body
         ? options.body.parse(await readJsonBody(request, options.bodyLimitBytes ?? defaultBodyLimitBytes))
         : undefined;
@@ -116,10 +121,10 @@ export function route<
         body: body as Parsed<TBody>,
         query: query as Parsed<TQuery>,
       });
-      return actor ? withPrivateCaching(response) : response;
+      return actor || hasSessionCookie(request) ? withPrivateCaching(response) : response;
     } catch (error) {
       const response = toErrorResponse(error);
-      return actor ? withPrivateCaching(response) : response;
+      return actor || hasSessionCookie(request) ? withPrivateCaching(response) : response;
     }
   };
 }
@@ -164,8 +169,13 @@ async function resolveCaller(
   }
 }
 
-/** Marks a response to a signed-in caller as not cacheable by shared caches, unless it says otherwise. */
+/** Marks a response to a signed-in caller as cacheable by nobody. */
 function withPrivateCaching(response: Response): Response {
-  if (!response.headers.has("cache-control")) response.headers.set("cache-control", "private, no-store");
+  response.headers.set("cache-control", "private, no-store");
   return response;
+}
+
+/** True when the request carries a next-auth session cookie (plain, __Secure- or chunked). */
+function hasSessionCookie(request: Request): boolean {
+  return /(?:^|;\s*)(?:__Secure-)?next-auth\.session-token(?:\.\d+)?=/.test(request.headers.get("cookie") ?? "");
 }

@@ -73,11 +73,12 @@ export async function clearMailbox(mailboxUrl) {
 }
 
 /**
- * Starts `next start` on 127.0.0.1:port from the build in `.next` (or NEXT_DIST_DIR), pushes its
- * handle on `services`, and waits until it answers.
+ * Serves the build in `.next` (or NEXT_DIST_DIR) on 127.0.0.1:port through scripts/serve.mjs (the
+ * custom server that resolves client addresses), pushes its handle on `services`, and waits until
+ * it answers.
  */
 export async function startApp({ port, env, services, inherit = false }) {
-  const handle = startService("app", bin("next"), ["start", "-H", "127.0.0.1", "-p", String(port)], {
+  const handle = startService("app", process.execPath, [path.join(repoRoot, "scripts", "serve.mjs"), "-H", "127.0.0.1", "-p", String(port)], {
     env: { ...env, NODE_ENV: "production" },
     inherit,
   });

@@ -1,5 +1,3 @@
-import { readdirSync, readFileSync } from "node:fs";
-import path from "node:path";
 import { describe, expect, it, vi } from "vitest";
 import type { Actor } from "@/db/queries/actor";
 import { createApiToken } from "@/db/queries/api-tokens";
@@ -9,9 +7,10 @@ import { createConfiguration } from "@/db/queries/configurations";
 import { createInvitation } from "@/db/queries/invitations";
 import { createShareLink } from "@/db/queries/share-links";
 import { probeNearSevenBrane } from "@/lib/demo-configurations";
+import { clientAddressHeader } from "@/scripts/lib/client-address.mjs";
 import { createTestGroup, createTestUser, type TestUser } from "@/tests/fixtures/users";
+import { actionFiles, actionsOf, handlersOf, methods, routeFiles, type Method } from "@/tests/support/app-modules";
 import { idleState } from "@/lib/action-state";
-import { handlersOf, routeFiles, routeMethods, type RouteMethod } from "@/tests/support/route-files";
 
 // Every route handler under app/api against every kind of caller, from ONE table. The route files
 // are found on disk when the test runs: a new route.ts, or a new exported method, without an entry
@@ -45,8 +44,6 @@ const { runAs } = (await import("@/lib/server/session")) as unknown as {
 
 const roles = ["anonymous", "nonMember", "viewer", "editor", "owner", "admin"] as const;
 type Role = (typeof roles)[number];
-const methods = routeMethods;
-type Method = RouteMethod;
 
 /** A research group with one member per role, a site admin outside it, and one of every kind of record. */
 interface World {
@@ -169,7 +166,7 @@ const matrix: Record<string, RouteEntry> = {
       POST: {
         request: (_w, role) => {
           const request = json("POST", "/api/spectrum", probeNearSevenBrane);
-          request.headers.set("x-forwarded-for", `matrix-${role}-${Math.random()}`);
+          request.headers.set(clientAddressHeader, `matrix-${role}-${Math.random()}`);
           return { request };
         },
         expect: everyone(200),
@@ -461,6 +458,11 @@ describe("authorization matrix", () => {
             const response = await runAs(actorOf(world, role), () => handler(request, { params: Promise.resolve(params) }));
             const body = response.status >= 400 ? await response.text() : "";
             expect({ status: response.status, body: body.slice(0, 200) }).toMatchObject({ status });
+            // Whatever a signed-in caller gets back, success or refusal, no cache may keep it. The
+            // OpenAPI document reads no caller: everyone gets the same public document.
+            if (role !== "anonymous" && file !== "openapi.json/route.ts") {
+              expect(response.headers.get("cache-control")).toBe("private, no-store");
+            }
           });
         }
       }
@@ -575,6 +577,7 @@ const actionMatrix: Record<string, ActionEntry> = {
           action(...([idleState(), form({ currentPassword: "", newPassword: "a brand new password", confirmPassword: "a brand new password" })] as never[])),
         expect: okFor(signedInRoles),
       },
+      signOutEverywhereAction: { call: (action) => action(...([] as never[])), expect: okFor(signedInRoles) },
     },
   },
   "(workspace)/admin/actions.ts": {
@@ -611,23 +614,6 @@ const actionMatrix: Record<string, ActionEntry> = {
     },
   },
 };
-
-const appRoot = path.resolve(import.meta.dirname, "..", "..", "app");
-
-/** Every file under app/ that starts with "use server", found on disk. */
-function actionFiles(): string[] {
-  return (readdirSync(appRoot, { recursive: true }) as string[])
-    .map((file) => file.split(path.sep).join("/"))
-    .filter((file) => /\.tsx?$/.test(file) && /^\s*["']use server["']/.test(readFileSync(path.join(appRoot, file), "utf8")))
-    .sort();
-}
-
-async function actionsOf(file: string): Promise<Record<string, (...args: never[]) => Promise<unknown>>> {
-  const module = (await import(/* @vite-ignore */ path.join(appRoot, file))) as Record<string, unknown>;
-  return Object.fromEntries(
-    Object.entries(module).filter((entry): entry is [string, (...args: never[]) => Promise<unknown>] => typeof entry[1] === "function"),
-  );
-}
 
 /** "ok" or "refused", from what an action returned or threw. */
 async function outcomeOf(run: () => Promise<unknown>): Promise<{ outcome: Outcome; detail: string }> {

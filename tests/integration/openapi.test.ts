@@ -18,7 +18,7 @@ import { createCommentSchema } from "@/lib/validations/comment";
 import { changeRoleSchema, createGroupSchema } from "@/lib/validations/group";
 import { acceptInvitationSchema, createInvitationSchema } from "@/lib/validations/invitation";
 import { createTestUser } from "@/tests/fixtures/users";
-import { handlersOf, routeFiles, urlPathOf } from "@/tests/support/route-files";
+import { handlersOf, routeFiles, urlPathOf } from "@/tests/support/app-modules";
 
 // The OpenAPI document (lib/openapi/document.ts) against the app: every route handler found on
 // disk is in it with exactly its methods, its request schemas accept the examples (its own and the

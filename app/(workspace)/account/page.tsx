@@ -4,6 +4,7 @@ import { AccountNameForm } from "@/components/account/account-name-form";
 import { ApiTokenList } from "@/components/account/api-token-list";
 import { ChangePasswordForm } from "@/components/account/change-password-form";
 import { CreateApiTokenForm } from "@/components/account/create-api-token-form";
+import { SignOutEverywhereForm } from "@/components/account/sign-out-everywhere-form";
 import { RoleBadge } from "@/components/dashboard/role-badge";
 import { PageContainer } from "@/components/layout/page-container";
 import { Card, CardContent, CardDescription, CardHeader, CardTitle } from "@/components/ui/card";
@@ -79,6 +80,18 @@ export default async function AccountPage() {
           <CardContent className="grid gap-6">
             <CreateApiTokenForm />
             <ApiTokenList tokens={tokens.map((token) => ({ ...token, status: statusOf(token, now) }))} />
+          </CardContent>
+        </Card>
+        <Card aria-labelledby="account-sessions-title">
+          <CardHeader>
+            <CardTitle id="account-sessions-title">Signed-in devices</CardTitle>
+            <CardDescription>
+              Signs out every browser and device where this account is signed in, this one included. Changing or resetting the
+              password does the same for the other devices.
+            </CardDescription>
+          </CardHeader>
+          <CardContent>
+            <SignOutEverywhereForm />
           </CardContent>
         </Card>
       </div>
