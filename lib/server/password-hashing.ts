@@ -1,7 +1,7 @@
 import "server-only";
 import { availableParallelism } from "node:os";
 import { Worker } from "node:worker_threads";
-import { ServiceUnavailableError } from "@/lib/errors";
+import { createWorkerPool } from "@/lib/server/worker-pool";
 
 /**
  * bcrypt off the main thread. bcryptjs is plain JavaScript: at cost 12 one hash or check is about a
@@ -52,80 +52,20 @@ parentPort.on("message", ({ id, job }) => {
 
 const busyMessage = "The server is busy checking other passwords. Nothing was changed; please try again in a moment.";
 
-interface Pending {
-  job: PasswordJob;
-  resolve: (value: string | boolean) => void;
-  reject: (error: Error) => void;
-}
-
-interface Thread {
-  worker: Worker;
-  current: (Pending & { id: number }) | null;
-}
-
 /** A pool of hashing threads; the app uses one shared pool (see {@link hashPassword}). */
 export function createPasswordHasher(options: PasswordHasherOptions = {}): PasswordHasher {
   const size = Math.max(1, Math.floor(options.threads ?? Math.min(4, Math.max(1, availableParallelism() - 1))));
-  const maxQueue = Math.max(0, Math.floor(options.maxQueue ?? size * 32));
-  const threads: Thread[] = [];
-  const queue: Pending[] = [];
-  let nextId = 1;
-
-  function startThread(): Thread {
-    const thread: Thread = { worker: new Worker(workerSource, { eval: true }), current: null };
-    thread.worker.unref();
-    thread.worker.on("message", (message: { id: number; value?: string | boolean; error?: string }) => {
-      const current = thread.current;
-      if (!current || current.id !== message.id) return;
-      thread.current = null;
-      if (message.error !== undefined) current.reject(new Error(`Password hashing failed: ${message.error}`));
-      else current.resolve(message.value as string | boolean);
-      dispatch();
-    });
-    const fail = (error: Error) => {
-      const index = threads.indexOf(thread);
-      if (index >= 0) threads.splice(index, 1);
-      thread.current?.reject(error);
-      thread.current = null;
-      dispatch();
-    };
-    thread.worker.on("error", (error) => fail(error));
-    thread.worker.on("exit", (code) => fail(new Error(`A password hashing thread stopped (exit code ${code}).`)));
-    threads.push(thread);
-    return thread;
-  }
-
-  function dispatch(): void {
-    while (queue.length > 0) {
-      const idle = threads.find((thread) => thread.current === null) ?? (threads.length < size ? startThread() : undefined);
-      if (!idle) break;
-      const pending = queue.shift() as Pending;
-      const id = nextId++;
-      idle.current = { ...pending, id };
-      // A thread with work keeps the process alive (a script awaiting a hash must not exit early);
-      // an idle one does not.
-      idle.worker.ref();
-      idle.worker.postMessage({ id, job: pending.job });
-    }
-    for (const thread of threads) if (thread.current === null) thread.worker.unref();
-  }
-
-  function run(job: PasswordJob): Promise<string | boolean> {
-    const busyThreads = threads.filter((thread) => thread.current !== null).length;
-    if (busyThreads >= size && queue.length >= maxQueue) return Promise.reject(new ServiceUnavailableError(busyMessage));
-    return new Promise((resolve, reject) => {
-      queue.push({ job, resolve, reject });
-      dispatch();
-    });
-  }
-
+  const pool = createWorkerPool<PasswordJob, string | boolean>({
+    start: () => new Worker(workerSource, { eval: true }),
+    size,
+    maxQueue: Math.max(0, Math.floor(options.maxQueue ?? size * 32)),
+    busyMessage,
+    name: "password hashing",
+  });
   return {
-    hash: async (password, cost) => (await run({ kind: "hash", password, cost })) as string,
-    compare: async (password, hash) => (await run({ kind: "compare", password, hash })) as boolean,
-    close: async () => {
-      const stopping = threads.splice(0, threads.length);
-      await Promise.all(stopping.map((thread) => thread.worker.terminate()));
-    },
+    hash: async (password, cost) => (await pool.run({ kind: "hash", password, cost })) as string,
+    compare: async (password, hash) => (await pool.run({ kind: "compare", password, hash })) as boolean,
+    close: () => pool.close(),
   };
 }
 
