@@ -40,14 +40,26 @@ interface CapturedMessage {
   text?: string;
 }
 
-/** Messages to `address` captured by the fake mail server that the test run provides (once mail in flight is sent). */
-async function mailTo(address: string): Promise<CapturedMessage[]> {
+/**
+ * Messages to `address` captured by the fake mail server that the test run provides, once mail in
+ * flight is sent and at least `atLeast` of them have reached the mailbox (the server stores a message
+ * a moment after accepting it).
+ */
+async function mailTo(address: string, atLeast = 1): Promise<CapturedMessage[]> {
   await settleBackgroundMail();
   const base = process.env.MAILBOX_URL;
   if (!base) throw new Error("MAILBOX_URL is not set: run through `node scripts/test.mjs integration`");
-  const response = await fetch(`${base.replace(/\/$/, "")}/email`);
-  const messages = (await response.json()) as CapturedMessage[];
-  return messages.filter((message) => message.to.some((to) => to.address === address));
+  let found: CapturedMessage[] = [];
+  await vi.waitFor(
+    async () => {
+      const response = await fetch(`${base.replace(/\/$/, "")}/email`);
+      const messages = (await response.json()) as CapturedMessage[];
+      found = messages.filter((message) => message.to.some((to) => to.address === address));
+      expect(found.length).toBeGreaterThanOrEqual(atLeast);
+    },
+    { timeout: 10_000, interval: 100 },
+  );
+  return found;
 }
 
 /** The token at the end of the first app link in a message. */
@@ -123,7 +135,7 @@ describe("signUpAction and confirmSignUpAction", () => {
     await signUpAction(idleState(), signUpForm(email, "attacker-password-1"));
     const [attackersMail] = await mailTo(email);
     await signUpAction(idleState(), signUpForm(email, "owner-password-1"));
-    const ownersMail = (await mailTo(email)).find((message) => message.text !== attackersMail?.text);
+    const ownersMail = (await mailTo(email, 2)).find((message) => message.text !== attackersMail?.text);
     // Whoever opens the first mail cannot finish it without the password someone else chose.
     const attackersToken = tokenIn(attackersMail, "/sign-up/confirm");
     const blocked = await confirmSignUpAction(idleState(), form({ token: attackersToken, password: "owner-password-1" }));
@@ -185,7 +197,7 @@ describe("requestSignInLinkAction", () => {
     expect(messages).toHaveLength(1);
     expect(messages[0]?.subject).toBe("Your Mooring sign-in link");
     expect(messages[0]?.text).toContain(`${process.env.NEXTAUTH_URL}/sign-in/link/`);
-    expect(await mailTo(unknownEmail)).toHaveLength(0);
+    expect(await mailTo(unknownEmail, 0)).toHaveLength(0);
   });
 
   it("answers a malformed e-mail on the email field and issues nothing", async () => {
