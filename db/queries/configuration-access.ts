@@ -1,9 +1,9 @@
 import "server-only";
 import { and, eq, isNull, sql, type Placeholder } from "drizzle-orm";
-import { alias } from "drizzle-orm/pg-core";
+import { alias, type PgSelect } from "drizzle-orm/pg-core";
 import { NotFoundError, ForbiddenError } from "../../lib/errors";
 import { db, type Executor } from "../index";
-import { configurations, groups, memberships, revisions, users, type ConfigurationRow, type GroupRole } from "../schema";
+import { configurations, groups, memberships, results, revisions, users, type ConfigurationRow, type GroupRole } from "../schema";
 import { assertUuid, requireActor, roleAtLeast, type Actor } from "./actor";
 
 /** Where a fork came from, as far as the reader may see it. */
@@ -34,24 +34,47 @@ const sourceGroup = alias(groups, "source_group");
 const sourceMembership = alias(memberships, "source_membership");
 const sourceRevision = alias(revisions, "source_revision");
 
+/** What the access check reads. */
+const accessColumns = {
+  row: configurations,
+  group: groups,
+  authorName: users.name,
+  memberRole: memberships.role,
+  sourceTitle: sourceConfiguration.title,
+  sourceIsStarter: sourceConfiguration.isStarter,
+  sourceGroupKind: sourceGroup.kind,
+  sourceMemberRole: sourceMembership.role,
+  sourceRevisionNumber: sourceRevision.number,
+};
+
+/** The current revision's stored result, as text, for reads that send it along. */
+const resultColumns = {
+  resultText: sql<string | null>`${results.result}::text`,
+  resultEngineVersion: results.engineVersion,
+  resultComputeMs: results.computeMs,
+  resultCreatedAt: results.createdAt,
+};
+
 /**
  * The configuration, its group, author and fork source, with the actor's membership in the group
  * and in the source's group, in one statement.
  */
 function selectAccess(executor: Executor, configurationId: string | Placeholder, userId: string | Placeholder) {
-  return executor
-    .select({
-      row: configurations,
-      group: groups,
-      authorName: users.name,
-      memberRole: memberships.role,
-      sourceTitle: sourceConfiguration.title,
-      sourceIsStarter: sourceConfiguration.isStarter,
-      sourceGroupKind: sourceGroup.kind,
-      sourceMemberRole: sourceMembership.role,
-      sourceRevisionNumber: sourceRevision.number,
-    })
+  return withAccessJoins(executor.select(accessColumns).from(configurations).$dynamic(), configurationId, userId);
+}
+
+/** {@link selectAccess} with the current revision's stored result as text. */
+function selectAccessWithResult(executor: Executor, configurationId: string | Placeholder, userId: string | Placeholder) {
+  const query = executor
+    .select({ ...accessColumns, ...resultColumns })
     .from(configurations)
+    .leftJoin(results, eq(results.revisionId, configurations.currentRevisionId))
+    .$dynamic();
+  return withAccessJoins(query, configurationId, userId);
+}
+
+function withAccessJoins<TQuery extends PgSelect>(query: TQuery, configurationId: string | Placeholder, userId: string | Placeholder) {
+  return query
     .innerJoin(groups, and(eq(groups.id, configurations.groupId), isNull(groups.deletedAt)))
     .innerJoin(users, eq(users.id, configurations.createdBy))
     .leftJoin(memberships, and(eq(memberships.groupId, configurations.groupId), eq(memberships.userId, userId)))
@@ -72,6 +95,9 @@ function selectAccess(executor: Executor, configurationId: string | Placeholder,
  * on their own connection.
  */
 const accessStatement = selectAccess(db, sql.placeholder("configurationId"), sql.placeholder("userId")).prepare("configuration_access");
+const accessWithResultStatement = selectAccessWithResult(db, sql.placeholder("configurationId"), sql.placeholder("userId")).prepare(
+  "configuration_access_with_result",
+);
 
 /**
  * The one access check for a configuration, in one statement: loads it (not deleted, in a group
@@ -95,8 +121,42 @@ export async function requireConfigurationRole(
     executor === db
       ? await accessStatement.execute({ configurationId, userId: signedIn.id })
       : await selectAccess(executor, configurationId, signedIn.id);
+  return resolveAccess(found, signedIn, minimum);
+}
+
+/** The current revision's stored result as JSON text, with when and by which engine it was computed. */
+export interface StoredResultText {
+  text: string;
+  engineVersion: string;
+  computeMs: number;
+  createdAt: Date;
+}
+
+/**
+ * {@link requireConfigurationRole} (viewer or better) with the current revision's stored result as
+ * text, in the same statement; `result` is null before the first save.
+ */
+export async function readConfigurationWithResult(
+  actor: Actor | null,
+  configurationId: string,
+): Promise<ConfigurationAccess & { result: StoredResultText | null }> {
+  const signedIn = requireActor(actor);
+  assertUuid(configurationId, "configuration");
+  const [found] = await accessWithResultStatement.execute({ configurationId, userId: signedIn.id });
+  const access = resolveAccess(found, signedIn, "viewer");
+  const result =
+    found?.resultText != null && found.resultEngineVersion !== null && found.resultComputeMs !== null && found.resultCreatedAt !== null
+      ? { text: found.resultText, engineVersion: found.resultEngineVersion, computeMs: found.resultComputeMs, createdAt: found.resultCreatedAt }
+      : null;
+  return { ...access, result };
+}
+
+type AccessRow = Awaited<ReturnType<typeof selectAccess>>[number];
+
+/** The effective role and DTO context of an access row (see {@link requireConfigurationRole}). */
+function resolveAccess(found: AccessRow | undefined, actor: Actor, minimum: GroupRole): ConfigurationAccess {
   if (!found) throw new NotFoundError("No such configuration.");
-  const admin = signedIn.siteRole === "admin";
+  const admin = actor.siteRole === "admin";
   const instructor = found.sourceIsStarter === true && found.sourceGroupKind === "lab" && roleAtLeast(found.sourceMemberRole, "editor");
   const role: GroupRole | null = admin ? "owner" : (found.memberRole ?? (instructor ? "viewer" : null));
   if (!role) throw new NotFoundError("No such configuration.");

@@ -1,10 +1,11 @@
 import "server-only";
+import { randomUUID } from "node:crypto";
 import { and, asc, count, eq, ilike, inArray, isNull, sql, type SQL } from "drizzle-orm";
 import type { Configuration } from "../../lib/boundary/types";
 import { parseConfigurationFile } from "../../lib/validations/import";
-import { ForbiddenError, NotFoundError, ValidationError } from "../../lib/errors";
-import { db, type Executor } from "../index";
-import { configurations, groups, memberships, shareLinks, users, type GroupRole } from "../schema";
+import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from "../../lib/errors";
+import { db } from "../index";
+import { auditLog, configurations, groups, memberships, results, revisions, shareLinks, users, type GroupRole } from "../schema";
 import { assertUuid, requireActor, requireGroupRole, type Actor } from "./actor";
 import { recordAudit } from "./audit";
 import { getPersonalGroup } from "./groups";
@@ -17,7 +18,7 @@ import {
   type ListConfigurationsOptions,
 } from "./configuration-dtos";
 import { resultForDocument, type RevisionResult } from "./results";
-import { addRevision, bumpVersion, documentColumns } from "./revision-writes";
+import { addRevision, documentColumns } from "./revision-writes";
 
 /** Options of `createConfiguration`. */
 export interface CreateConfigurationOptions {
@@ -152,6 +153,10 @@ async function insertConfiguration(
  * Saves a new revision (editor or better) with a result the server computes. The update only
  * applies when the stored version equals `expectedVersion`; otherwise ConflictError (with the
  * current version) and nothing is written, so concurrent saves never overwrite each other.
+ *
+ * The write is one statement (see `saveRevisionStatement`): the role and version checks, the new
+ * revision, its result, the configuration's new columns and the audit entry land together or not
+ * at all. Only when it writes nothing is the reason looked up (404, 403 or 409).
  */
 export async function updateConfiguration(
   actor: Actor | null,
@@ -159,22 +164,93 @@ export async function updateConfiguration(
   input: UpdateConfigurationInput,
 ): Promise<ConfigurationDto> {
   const author = requireActor(actor);
+  assertUuid(configurationId, "configuration");
+  assertExpectedVersion(input.expectedVersion);
   const computed = await resultForDocument(db, input.document);
   const columns = documentColumns(input.document, computed.summary);
-  return db.transaction(async (tx) => {
-    const { role, context } = await requireConfigurationRole(tx, actor, configurationId, "editor");
-    const bumped = await bumpVersion(tx, configurationId, input.expectedVersion, columns);
-    const row = await addRevision(tx, bumped, author.id, input.message, computed);
-    await recordAudit(tx, {
-      actorId: author.id,
-      groupId: row.groupId,
-      action: "configuration.update",
-      entityType: "configuration",
-      entityId: row.id,
-      details: { version: row.version },
-    });
-    return toConfigurationDto(row, context, role);
-  });
+  let saved = false;
+  try {
+    saved = await saveRevisionStatement(author, configurationId, input, columns, computed);
+  } catch (error) {
+    // Two saves from the same version: the later one meets the earlier one's revision number.
+    if (!isUniqueViolation(error)) throw error;
+  }
+  const access = await requireConfigurationRole(db, actor, configurationId, saved ? "viewer" : "editor");
+  if (!saved) throw new ConflictError(access.row.version);
+  return toConfigurationDto(access.row, access.context, access.role);
+}
+
+/** Refuses an `expectedVersion` that is not a positive whole number (422). */
+function assertExpectedVersion(expectedVersion: number): void {
+  if (!Number.isInteger(expectedVersion) || expectedVersion < 1) {
+    throw ValidationError.at(["expectedVersion"], "expectedVersion must be a positive whole number.");
+  }
+}
+
+/**
+ * The save as one statement of data-modifying CTEs: the revision (numbered expected + 1) is
+ * inserted only where the configuration is live, in a live group, at the expected version, and the
+ * author may edit it (editor, owner or site admin); its result, the configuration's update (which
+ * again requires the expected version) and the audit entry follow from it. Returns whether the
+ * configuration was updated. A concurrent save from the same version fails on the revision's
+ * unique number (23505) and writes nothing.
+ */
+async function saveRevisionStatement(
+  author: Actor,
+  configurationId: string,
+  input: UpdateConfigurationInput,
+  columns: ReturnType<typeof documentColumns>,
+  result: RevisionResult,
+): Promise<boolean> {
+  const revisionId = randomUUID();
+  const document = JSON.stringify(columns.document);
+  const mayEdit =
+    author.siteRole === "admin"
+      ? sql`true`
+      : sql`exists (select 1 from ${memberships} m where m.group_id = c.group_id and m.user_id = ${author.id} and m.role in ('editor', 'owner'))`;
+  const storeResult =
+    result.source === "fresh"
+      ? sql`select rev.id, ${result.engineVersion}, ${result.contentHash}, ${result.json}::jsonb, ${result.overviewJson}::jsonb, ${result.computeMs} from rev`
+      : sql`select rev.id, s.engine_version, s.content_hash, s.result, s.overview, s.compute_ms from rev, ${results} s where s.id = ${result.resultId}`;
+  const outcome = await db.execute<{ version: number }>(sql`
+    with rev as (
+      insert into ${revisions} (id, configuration_id, number, document, author_id, message)
+      select ${revisionId}, c.id, c.version + 1, ${document}::jsonb, ${author.id}, ${input.message.trim()}
+      from ${configurations} c
+      join ${groups} g on g.id = c.group_id and g.deleted_at is null
+      where c.id = ${configurationId} and c.version = ${input.expectedVersion} and c.deleted_at is null and ${mayEdit}
+      returning id, configuration_id, number
+    ),
+    res as (
+      insert into ${results} (revision_id, engine_version, content_hash, result, overview, compute_ms)
+      ${storeResult}
+    ),
+    upd as (
+      update ${configurations} c
+      set title = ${columns.title}, description = ${columns.description}, theory = ${columns.theory},
+          document = ${document}::jsonb, stack_count = ${columns.stackCount},
+          lightest_mass_squared = ${columns.lightestMassSquared}, tachyonic = ${columns.tachyonic},
+          supercharges = ${columns.supercharges}, version = rev.number, current_revision_id = rev.id, updated_at = now()
+      from rev
+      where c.id = rev.configuration_id and c.version = ${input.expectedVersion}
+      returning c.id, c.group_id, c.version
+    ),
+    aud as (
+      insert into ${auditLog} (actor_id, group_id, action, entity_type, entity_id, details)
+      select ${author.id}, upd.group_id, 'configuration.update', 'configuration', upd.id, jsonb_build_object('version', upd.version)
+      from upd
+    )
+    select version from upd`);
+  return outcome.rows.length === 1;
+}
+
+/** PostgreSQL's unique_violation (23505). */
+function isUniqueViolation(error: unknown): boolean {
+  for (let current = error, depth = 0; current && typeof current === "object" && depth < 5; depth += 1) {
+    if ("code" in current && current.code === "23505") return true;
+    current = "cause" in current ? current.cause : undefined;
+  }
+  return false;
 }
 
 /**

@@ -68,8 +68,12 @@ export const configurationSchema = configurationShapeSchema.superRefine((configu
   }
 }) satisfies z.ZodType<Configuration>;
 
-/** Body of `POST /api/spectrum`: the configuration document itself. */
-export const spectrumRequestSchema = configurationSchema;
+/**
+ * Body of `POST /api/spectrum`: the configuration document itself, checked for shape here; the
+ * physics rules (p parity, axis ranges, limits, unique ids) are checked by the engine as it
+ * computes, in the same pass, and answered with the same 422 and JSON paths.
+ */
+export const spectrumRequestSchema = configurationShapeSchema;
 
 
 /** Query of `POST /api/spectrum`: sectors from `sectorOffset` keep their level rows until `maxRows` rows. */
