@@ -16,8 +16,8 @@
  * The read and save cases sign in (next-auth credentials) and work on scratch configurations
  * created for the run in the account's personal space, one per connection so that saves do not
  * conflict; they are soft-deleted at the end. Cases whose route is missing are reported as not
- * measured. The server's compute budgets must be raised for the run (SPECTRUM_BUDGET_PER_MINUTE,
- * see the README), or the spectrum case measures 429s.
+ * measured. Start the server with raised compute budgets (SPECTRUM_BUDGET_ANONYMOUS and
+ * SPECTRUM_BUDGET_ACCOUNT, e.g. 100000000), or the spectrum case measures 429s.
  *
  * Environment: BENCH_URL, BENCH_DURATION (seconds per case, default 10), BENCH_CONNECTIONS
  * (default 16), BENCH_EMAIL and BENCH_PASSWORD (default: the seed's demo researcher

@@ -11,6 +11,10 @@ const envSchema = z.object({
   MAIL_FROM: z.string().min(1).default("Mooring <no-reply@mooring.test>"),
   /** Web address of the local fake mailbox's API; set only when the fake SMTP server is in use. */
   MAILBOX_URL: z.url().optional(),
+  /** Compute budget of POST /api/spectrum per minute, in units of about 500 sector-levels: per anonymous client address. */
+  SPECTRUM_BUDGET_ANONYMOUS: z.coerce.number().int().min(1).default(120),
+  /** The same per signed-in account and per API token. */
+  SPECTRUM_BUDGET_ACCOUNT: z.coerce.number().int().min(1).default(600),
 });
 
 /** Server environment, parsed once. */

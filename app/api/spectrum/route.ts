@@ -2,6 +2,7 @@ import { configurationCost } from "@/lib/boundary";
 import { RateLimitError } from "@/lib/errors";
 import type { Credential } from "@/lib/server/api-token";
 import { computeSpectrumJob } from "@/lib/server/compute/pool";
+import { getEnv } from "@/lib/server/env";
 import { clientAddress, consumeRateLimit, type RateLimitOptions } from "@/lib/server/rate-limit";
 import { route } from "@/lib/server/route";
 import { spectrumQuerySchema, spectrumRequestSchema } from "@/lib/validations/configuration";
@@ -9,12 +10,19 @@ import { spectrumQuerySchema, spectrumRequestSchema } from "@/lib/validations/co
 /**
  * Compute budget per minute, in units of about 500 sector-levels (sectors x (levels + 1)): an
  * ordinary configuration costs one unit, the largest accepted one about forty. Anonymous callers
- * are counted per client address, signed-in users per account, and an API token has a budget of
- * its own (a script cannot use up its owner's budget in the browser). Computing needs no database, so
- * while PostgreSQL (which holds the counters) is down the limits are not enforced.
+ * are counted per client address (SPECTRUM_BUDGET_ANONYMOUS, default 120), signed-in users per
+ * account and each API token on its own (SPECTRUM_BUDGET_ACCOUNT, default 600; a script cannot use
+ * up its owner's budget in the browser). Computing needs no database, so while PostgreSQL (which
+ * holds the counters) is down the limits are not enforced.
  */
-const anonymousBudget: RateLimitOptions = { limit: 120, windowMs: 60_000, whenUnavailable: "allow" };
-const signedInBudget: RateLimitOptions = { limit: 600, windowMs: 60_000, whenUnavailable: "allow" };
+function budget(kind: "anonymous" | "account"): RateLimitOptions {
+  const env = getEnv();
+  return {
+    limit: kind === "anonymous" ? env.SPECTRUM_BUDGET_ANONYMOUS : env.SPECTRUM_BUDGET_ACCOUNT,
+    windowMs: 60_000,
+    whenUnavailable: "allow",
+  };
+}
 const sectorLevelsPerUnit = 500;
 
 /**
@@ -49,9 +57,9 @@ export const POST = route(
 
 /** The rate-limit key and budget of the caller: its API token, its account or its address. */
 function budgetOf(request: Request, userId: string | null, credential: Credential | null): { key: string; budget: RateLimitOptions } {
-  if (credential?.kind === "token") return { key: `spectrum:token:${credential.tokenId}`, budget: signedInBudget };
-  if (userId) return { key: `spectrum:user:${userId}`, budget: signedInBudget };
-  return { key: `spectrum:${clientAddress(request)}`, budget: anonymousBudget };
+  if (credential?.kind === "token") return { key: `spectrum:token:${credential.tokenId}`, budget: budget("account") };
+  if (userId) return { key: `spectrum:user:${userId}`, budget: budget("account") };
+  return { key: `spectrum:${clientAddress(request)}`, budget: budget("anonymous") };
 }
 
 async function spendBudget({ key, budget }: { key: string; budget: RateLimitOptions }, units: number): Promise<void> {
