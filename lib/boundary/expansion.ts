@@ -10,11 +10,30 @@
  * - DD: X = x_a + (x_b - x_a) sigma / pi + sqrt(2 alpha') sum_{n != 0} (alpha_n / n) e^{-i n tau} sin(n sigma)
  * - ND: X = x_b + i sqrt(2 alpha') sum_{r in Z + 1/2} (alpha_r / r) e^{-i r tau} cos(r sigma)
  * - DN: X = x_a + sqrt(2 alpha') sum_{r in Z + 1/2} (alpha_r / r) e^{-i r tau} sin(r sigma)
+ *
+ * Worldsheet fermions (type II), boundary-sign convention: at sigma = 0, psi = +psi~ on a Neumann
+ * end and psi = -psi~ on a Dirichlet end; at sigma = pi the same sign times +1 in the R sector and
+ * -1 in the NS sector (Polchinski vol. 2, sections 10.1 and 13.4, from memory). With
+ * psi(tau, sigma) = sum_r psi_r e^{-i r (tau - sigma)} the boundary conditions fix
+ * psi~(tau, sigma) = eta_0 sum_r psi_r e^{-i r (tau + sigma)}, eta_0 = +1 (N at sigma = 0) or -1 (D),
+ * and e^{2 pi i r} = (sign at sigma = pi) eta_0, which gives r in Z + 1/2 in NS and r in Z in R on NN
+ * and DD axes, and the other way on ND and DN axes. Normalisations are left out.
+ *
+ * Light-cone axis: the counting pairs time with one spatial axis of the pair, x^(+-) = x^0 +- x^k.
+ * The engine takes the lowest NN axis, else the lowest DD axis (with no common Neumann axis the
+ * light-cone gauge is formal and the counts are trace counts); a bosonic pair whose axes are all ND
+ * has none (it is counted covariantly).
  */
 
 import type { AxisClassification, PairClassification } from "./classify";
 import { formatDecimal } from "./format";
 import type { AxisExpansion, AxisType, Moding, Theory } from "./types";
+
+/** Options of `expandAxis`. */
+export interface ExpandAxisOptions {
+  /** True when this axis is paired with time in the light-cone gauge (see the module doc). */
+  lightCone?: boolean;
+}
 
 /**
  * Moding of the boson X on an axis: integer on NN and DD, half-integer on ND and DN.
@@ -46,16 +65,19 @@ export function fermionModing(type: AxisType): { NS: Moding; R: Moding } {
  * Mode expansion of one spatial axis of an ordered pair, with the endpoint positions substituted.
  *
  * @param axis - The classified axis (from `classifyPair`); positions in units of sqrt(alpha').
- * @param theory - Fermion modings and fermion zero modes are given for IIA/IIB only.
+ * @param theory - Fermion modings, fermion zero modes and fermion expansions are given for IIA/IIB only.
+ * @param options - `lightCone`: mark the axis as the light-cone partner of time (default false).
  * @returns Axis type, boson moding, fermion moding per sector (type II), the zero modes present
  *   ("x" and "p" on NN axes; for type II also the fermion zero modes "psi_0 (R)" on NN/DD axes or
- *   "psi_0 (NS)" on ND/DN axes), and X^axis(tau, sigma) as LaTeX. Positions print compactly
- *   (12 significant digits, trailing zeros trimmed; negative ones in parentheses when subtracted).
+ *   "psi_0 (NS)" on ND/DN axes), X^axis(tau, sigma) as LaTeX, the fermions psi and psi~ per sector
+ *   as LaTeX (type II, in the boundary-sign convention of the module doc) and the light-cone mark.
+ *   Positions print compactly (12 significant digits, trailing zeros trimmed; negative ones in
+ *   parentheses when subtracted).
  * @example
  * expandAxis({ axis: 5, type: "DD", positionA: 0, positionB: 3.5 }, "bosonic").latex
  * // => "X^{5}(\\tau,\\sigma) = 0 + (3.5 - 0)\\frac{\\sigma}{\\pi} + \\sqrt{2\\alpha'}\\sum_{n\\neq0}\\frac{\\alpha_n}{n}e^{-in\\tau}\\sin n\\sigma"
  */
-export function expandAxis(axis: AxisClassification, theory: Theory): AxisExpansion {
+export function expandAxis(axis: AxisClassification, theory: Theory, options: ExpandAxisOptions = {}): AxisExpansion {
   const { type } = axis;
   const superstring = theory !== "bosonic";
   const zeroModes = type === "NN" ? ["x", "p"] : [];
@@ -66,9 +88,30 @@ export function expandAxis(axis: AxisClassification, theory: Theory): AxisExpans
     bosonModing: bosonModing(type),
     zeroModes,
     latex: expansionLatex(axis),
+    lightCone: options.lightCone ?? false,
   };
-  if (superstring) expansion.fermionModing = fermionModing(type);
+  if (superstring) {
+    const modings = fermionModing(type);
+    expansion.fermionModing = modings;
+    expansion.fermionLatex = { NS: fermionLatex(axis, modings.NS), R: fermionLatex(axis, modings.R) };
+  }
   return expansion;
+}
+
+/**
+ * The light-cone partner of time for a classified pair: the lowest NN axis, else the lowest DD axis,
+ * else none (every spatial axis ND: counted covariantly).
+ *
+ * @param classification - From `classifyPair(a, b, D)`.
+ * @returns The axis number, or null.
+ * @example
+ * lightConeAxis(classifyPair(d3, d7, 10)) // => 1
+ * lightConeAxis(classifyPair(d0, d0, 10)) // => 1 (a DD axis: the light-cone gauge is formal)
+ */
+export function lightConeAxis(classification: Pick<PairClassification, "axes">): number | null {
+  const nn = classification.axes.find((axis) => axis.type === "NN");
+  if (nn) return nn.axis;
+  return classification.axes.find((axis) => axis.type === "DD")?.axis ?? null;
 }
 
 /**
@@ -76,12 +119,13 @@ export function expandAxis(axis: AxisClassification, theory: Theory): AxisExpans
  *
  * @param classification - From `classifyPair(a, b, D)`.
  * @param theory - The configuration's theory.
- * @returns One `AxisExpansion` per spatial axis 1..D-1.
+ * @returns One `AxisExpansion` per spatial axis 1..D-1; the axis of `lightConeAxis` is marked.
  * @example
  * expandPair(classifyPair(a, a, 10), "IIB").length // => 9
  */
 export function expandPair(classification: Pick<PairClassification, "axes">, theory: Theory): AxisExpansion[] {
-  return classification.axes.map((axis) => expandAxis(axis, theory));
+  const partner = lightConeAxis(classification);
+  return classification.axes.map((axis) => expandAxis(axis, theory, { lightCone: axis.axis === partner }));
 }
 
 function expansionLatex(axis: AxisClassification): string {
@@ -98,6 +142,19 @@ function expansionLatex(axis: AxisClassification): string {
     case "DN":
       return `${lhs} = ${xa} + \\sqrt{2\\alpha'}\\sum_{r\\in\\mathbb{Z}+1/2}\\frac{\\alpha_r}{r}e^{-ir\\tau}\\sin r\\sigma`;
   }
+}
+
+/** psi and psi~ on one axis in one sector (module doc: boundary-sign convention). */
+function fermionLatex(axis: AxisClassification, moding: Moding): string {
+  const index = moding === "integer" ? "n" : "r";
+  const range = moding === "integer" ? "\\mathbb{Z}" : "\\mathbb{Z}+1/2";
+  const sum = `\\sum_{${index}\\in${range}}\\psi^{${axis.axis}}_{${index}}`;
+  // eta_0: + for a Neumann end at sigma = 0, - for a Dirichlet end.
+  const sign = axis.type === "NN" || axis.type === "ND" ? "" : "-";
+  return (
+    `\\psi^{${axis.axis}}(\\tau,\\sigma) = ${sum}e^{-i${index}(\\tau-\\sigma)},\\quad ` +
+    `\\tilde\\psi^{${axis.axis}}(\\tau,\\sigma) = ${sign}${sum}e^{-i${index}(\\tau+\\sigma)}`
+  );
 }
 
 function parenthesiseNegative(text: string): string {

@@ -26,8 +26,8 @@ export {
   type PairClassification,
   type SeparationComponent,
 } from "./classify";
-export { expandAxis, expandPair, bosonModing, fermionModing } from "./expansion";
-export { formatDecimal } from "./format";
+export { expandAxis, expandPair, bosonModing, fermionModing, lightConeAxis } from "./expansion";
+export { formatDecimal, listInWords } from "./format";
 export {
   ENGINE_VERSION,
   CONVENTIONS_TEXT,
@@ -36,5 +36,12 @@ export {
 } from "./constants";
 export { zeroPointEnergy, zeroPointContributions } from "./zero-point";
 export { oscillatorDegeneracies, projectedDegeneracies } from "./degeneracy";
-export { countSupercharges, pairPreservesSupersymmetry } from "./supersymmetry";
+export {
+  countSupercharges,
+  pairPreservesSupersymmetry,
+  worldvolumeSupersymmetry,
+  nameSupersymmetry,
+  type WorldvolumeSupersymmetry,
+} from "./supersymmetry";
+export { describeWorldvolumes, type DescribeWorldvolumesInput, type PairSummary } from "./worldvolume";
 export { parseRational, formatRational, rationalToNumber, compareRational, type Rational } from "./rational";

@@ -24,6 +24,7 @@ function sector(pair: [string, string], separation: number, rows: Array<[string,
       withChanPaton,
     })),
     massless: [],
+    multiplet: null,
     notes: [],
   };
 }
