@@ -11,4 +11,6 @@ export { pairKey } from "./pair-key";
 export { lightestBySector, lightestLevel, type SectorLightest } from "./lightest";
 export { isTachyonicState, tachyonicSectors, type TachyonicSector } from "./tachyons";
 export { summarizeResult, type ResultSummary } from "./summary";
+export { highestUnstretchedMassSquared, unstretchedMassSquared, unstretchedMassSquaredText } from "./mass-cap";
+export { formatWorldvolume, stringCreationSectors, worldvolumeKey } from "./worldvolumes";
 export { displaySignificantDigits, formatMassSquared, formatNumber, formatPair, type FormatNumberOptions } from "./format";
