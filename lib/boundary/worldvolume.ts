@@ -223,7 +223,9 @@ function describeMatter(partner: Partner, context: MatterContext): string {
   const value = summary.stretch + rationalToNumber(lowest as Rational);
   const massClause = summary.coincident || value < 0 ? "" : ` of mass M sqrt(alpha') = ${short(Math.sqrt(value))}`;
   const tachyonic = value < 0;
-  const lightest = `${tachyonic ? "a tachyon at" : "lightest"} alpha' M^2 = ${massSquaredText(summary)}`;
+  // Prose keeps four significant digits of a decimal; `massSquared` keeps the engine's full text.
+  const shown = summary.coincident ? massSquaredText(summary) : short(value);
+  const lightest = `${tachyonic ? "a tachyon at" : "lightest"} alpha' M^2 = ${shown}`;
 
   if (role === "gauge") {
     const bifundamental = `the bifundamental of U(${context.rank}) x U(${other})`;
