@@ -4,8 +4,8 @@ import { useQuery } from "@tanstack/react-query";
 import dynamic from "next/dynamic";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import type { Sector, SectorKind } from "@/lib/boundary/types";
-import { formatMassSquared, formatNumber, formatPair, pairKey, parseResultNumber } from "@/lib/spectrum";
+import type { SectorKind } from "@/lib/boundary/types";
+import { formatEngineProse, formatMassSquared, formatNumber, formatPair, highestUnstretchedMassSquared, pairKey } from "@/lib/spectrum";
 import { formatDateTime } from "@/lib/format-date";
 import {
   configurationQueries,
@@ -23,6 +23,7 @@ import { ForkedFromNote } from "@/components/designer/forked-from-note";
 import { LightestStatesTable } from "./lightest-states-table";
 import { SectorLevelsTable } from "./sector-levels-table";
 import { SpectrumSummary } from "./spectrum-summary";
+import { WorldvolumeTable } from "./worldvolume-table";
 
 const ModeExpansions = dynamic(() => import("./mode-expansions").then((m) => m.ModeExpansions), {
   ssr: false,
@@ -54,7 +55,7 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
   const { data: stored } = useQuery({ ...configurationQueries.result(configuration.id, revision.id), initialData: initialResult });
   const result = stored.result;
   const [kind, setKind] = useState<SectorKind | "all">("all");
-  const [maxLevel, setMaxLevel] = useState(() => highestLevel(result.sectors));
+  const [massCap, setMassCap] = useState(() => highestUnstretchedMassSquared(result.sectors));
   const [search, setSearch] = useState("");
   const [onlyTachyonic, setOnlyTachyonic] = useState(false);
   const [forkOpen, setForkOpen] = useState(false);
@@ -113,6 +114,13 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
           Summary
         </h2>
         <SpectrumSummary result={result} />
+      </section>
+
+      <section aria-labelledby="worldvolumes-title" className="grid gap-2">
+        <h2 id="worldvolumes-title" className="text-lg font-semibold">
+          Worldvolume theories
+        </h2>
+        <WorldvolumeTable worldvolumes={result.worldvolumes} />
       </section>
 
       {result.warnings.length > 0 ? (
@@ -175,14 +183,15 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
               </select>
             </label>
             <label className="flex items-center gap-1">
-              <span className="text-muted-foreground">Up to level</span>
+              <span className="text-muted-foreground">Up to &alpha;&prime;M&sup2; at y = 0</span>
               <input
                 type="number"
-                min={0}
+                min={-1}
                 step={0.5}
-                value={maxLevel}
-                onChange={(event) => setMaxLevel(Number(event.target.value))}
+                value={massCap}
+                onChange={(event) => setMassCap(Number(event.target.value))}
                 className="h-8 w-16 rounded border border-border-strong bg-surface px-2"
+                aria-label="Show levels up to alpha' M squared at zero separation"
               />
             </label>
             <label className="flex items-center gap-1">
@@ -217,23 +226,38 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
                 ) : null}
               </summary>
               <div className="grid gap-3 border-t border-border px-4 py-3">
-                <SectorLevelsTable caption={`Levels of sector ${title}`} rows={sector.levels} kind={kind} maxLevel={maxLevel} showGeV={showGeV} />
+                <SectorLevelsTable
+                  caption={`Levels of sector ${title}`}
+                  rows={sector.levels}
+                  zeroPoint={sector.zeroPoint}
+                  kind={kind}
+                  massCap={massCap}
+                  showGeV={showGeV}
+                />
                 {sector.massless.length > 0 ? (
                   <div className="text-xs">
                     <h4 className="font-semibold">Massless content</h4>
                     <ul className="list-disc pl-4 text-muted-foreground">
                       {sector.massless.map((m) => (
                         <li key={`${m.sector}-${m.description}`}>
-                          {m.sector}: {m.description} ({m.states} states{m.withChanPaton ? `, ${m.withChanPaton} with Chan-Paton` : ""})
+                          {m.sector}: {formatEngineProse(m.description)} (light-cone trace count {m.states}
+                          {m.withChanPaton ? `, ${m.withChanPaton} with Chan-Paton` : ""})
                         </li>
                       ))}
                     </ul>
                   </div>
                 ) : null}
+                {sector.multiplet ? (
+                  <p className="text-xs" data-testid={`multiplet-${sector.pair.join("-")}`}>
+                    <span className="font-semibold">Lightest multiplet:</span> {sector.multiplet.name} in {sector.multiplet.dimension} dimensions:{" "}
+                    {sector.multiplet.content} ({sector.multiplet.states} states, light-cone trace count), M&radic;&alpha;&prime; ={" "}
+                    <span className="font-mono">{formatNumber(sector.multiplet.mass)}</span>
+                  </p>
+                ) : null}
                 {sector.notes.length > 0 ? (
                   <ul className="list-disc pl-4 text-xs text-muted-foreground">
                     {sector.notes.map((n) => (
-                      <li key={n}>{n}</li>
+                      <li key={n}>{formatEngineProse(n)}</li>
                     ))}
                   </ul>
                 ) : null}
@@ -267,10 +291,4 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
       ) : null}
     </div>
   );
-}
-
-function highestLevel(sectors: Sector[]): number {
-  let highest = 0;
-  for (const sector of sectors) for (const row of sector.levels) highest = Math.max(highest, parseResultNumber(row.level));
-  return highest;
 }

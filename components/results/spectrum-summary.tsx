@@ -1,7 +1,8 @@
 import type { ReactNode } from "react";
 import type { SpectrumResult } from "@/lib/boundary/types";
-import { formatNumber, formatPair, pairKey, tachyonicSectors } from "@/lib/spectrum";
+import { formatEngineProse, formatNumber, formatPair, pairKey, stringCreationSectors, tachyonicSectors, worldvolumeKey } from "@/lib/spectrum";
 import { Badge } from "@/components/ui/badge";
+import { cn } from "@/lib/utils";
 import { MassSquaredText } from "./mass-text";
 
 export interface SpectrumSummaryProps {
@@ -9,16 +10,18 @@ export interface SpectrumSummaryProps {
 }
 
 /**
- * The headline of a spectrum: supersymmetry, tachyons, gauge group and the lightest state.
- * The one summary of the designer preview, the results page and the shared view; it lays
- * itself out by the width it is given (a list in a side panel, cards across a page).
+ * The headline of a spectrum: supersymmetry, tachyons, the lightest state and the theory on each
+ * worldvolume (gauge and flavour groups, light matter, supersymmetry in that dimension). The one
+ * summary of the designer preview, the results page and the shared view; it lays itself out by
+ * the width it is given (a list in a side panel, cards across a page).
  */
 export function SpectrumSummary({ result }: SpectrumSummaryProps) {
   const tachyons = tachyonicSectors(result);
   const lightest = result.lightest[0] ?? null;
+  const created = result.bps ? stringCreationSectors(result) : [];
   return (
     <div className="@container">
-      <dl className="grid gap-2 text-sm @2xl:grid-cols-2 @2xl:gap-3 @5xl:grid-cols-4" aria-label="Spectrum summary">
+      <dl className="grid gap-2 text-sm @2xl:grid-cols-3 @2xl:gap-3" aria-label="Spectrum summary">
         <SummaryItem
           term="Supersymmetry"
           value={
@@ -27,18 +30,31 @@ export function SpectrumSummary({ result }: SpectrumSummaryProps) {
                 {result.supercharges === null ? "not applicable" : `${result.supercharges} supercharges`}
               </span>
               {result.supercharges === null ? null : (
-                <Badge variant={result.bps ? "success" : "outline"} className="ml-2 align-middle">
-                  {result.bps ? "BPS" : "not BPS"}
+                <Badge variant={result.bps ? (created.length > 0 ? "warning" : "success") : "outline"} className="ml-2 align-middle">
+                  {result.bps ? (created.length > 0 ? "BPS with a stretched string" : "BPS") : "not BPS"}
                 </Badge>
               )}
             </>
           }
           detail={
-            result.supercharges === null
-              ? "The bosonic string has no spacetime supersymmetry."
-              : result.bps
-                ? "Every pair of stacks is mutually supersymmetric."
-                : "Some pairs break all supersymmetry between them."
+            result.supercharges === null ? (
+              "The bosonic string has no spacetime supersymmetry."
+            ) : !result.bps ? (
+              "Some pairs break all supersymmetry between them."
+            ) : created.length > 0 ? (
+              <span data-testid="spectrum-string-creation">
+                Supersymmetric only with a fundamental string stretched between{" "}
+                {created.map((sector, index) => (
+                  <span key={pairKey(...sector.pair)}>
+                    {index > 0 ? "; " : ""}
+                    <span className="font-mono">{sector.pair[0]}</span> and <span className="font-mono">{sector.pair[1]}</span>
+                  </span>
+                ))}{" "}
+                (&nu; = 8: a string is created when the stacks cross); without it they feel a constant force.
+              </span>
+            ) : (
+              "Every pair of stacks is mutually supersymmetric."
+            )
           }
         />
         <SummaryItem
@@ -70,15 +86,6 @@ export function SpectrumSummary({ result }: SpectrumSummaryProps) {
           }
         />
         <SummaryItem
-          term="Gauge group"
-          value={
-            <span className="font-mono" data-testid="spectrum-gauge-group">
-              {result.gaugeGroup || "none"}
-            </span>
-          }
-          detail={`${result.sectors.length} sector${result.sectors.length === 1 ? "" : "s"} of open strings.`}
-        />
-        <SummaryItem
           term="Lightest state"
           value={
             lightest ? (
@@ -91,8 +98,40 @@ export function SpectrumSummary({ result }: SpectrumSummaryProps) {
           }
           detail={
             lightest
-              ? `${formatPair(lightest.pair)}, ${lightest.sector} at level ${lightest.level}: ${lightest.withChanPaton} states with Chan-Paton factors.`
-              : "No level up to the highest one computed keeps a state."
+              ? `${formatPair(lightest.pair)}, ${lightest.sector} at oscillator level N = ${lightest.level}: ${lightest.withChanPaton} states with Chan-Paton factors.`
+              : "No state up to the mass cap survives."
+          }
+        />
+        <SummaryItem
+          term="Worldvolumes"
+          className="@2xl:col-span-3"
+          value={
+            result.worldvolumes.length === 0 ? (
+              <span className="text-sm font-normal" data-testid="spectrum-worldvolumes">
+                {result.sectors.length === 0 ? "none" : "not recorded by the engine that stored this result"}
+              </span>
+            ) : (
+              <ul className="grid gap-0.5 text-sm font-normal" data-testid="spectrum-worldvolumes">
+                {result.worldvolumes.map((worldvolume) => (
+                  <li key={worldvolumeKey(worldvolume)} data-testid={`worldvolume-${worldvolume.stacks.join("-")}`}>
+                    <span>{formatEngineProse(worldvolume.summary)}</span>{" "}
+                    <Badge variant={worldvolume.supercharges ? "success" : "outline"} className="align-middle">
+                      {worldvolume.supersymmetry}
+                    </Badge>
+                  </li>
+                ))}
+              </ul>
+            )
+          }
+          detail={
+            <>
+              Gauge factors over all worldvolumes:{" "}
+              <span className="font-mono" data-testid="spectrum-gauge-group">
+                {result.gaugeGroup || "none"}
+              </span>
+              ; each is gauged only on its own worldvolume, and a higher-dimensional stack&apos;s group is a flavour symmetry of
+              the lower-dimensional theory. {result.sectors.length} sector{result.sectors.length === 1 ? "" : "s"} of open strings.
+            </>
           }
         />
       </dl>
@@ -100,9 +139,14 @@ export function SpectrumSummary({ result }: SpectrumSummaryProps) {
   );
 }
 
-function SummaryItem({ term, value, detail }: { term: string; value: ReactNode; detail: ReactNode }) {
+function SummaryItem({ term, value, detail, className }: { term: string; value: ReactNode; detail: ReactNode; className?: string }) {
   return (
-    <div className="grid grid-cols-[7.5rem_minmax(0,1fr)] gap-x-3 gap-y-0.5 @2xl:grid-cols-1 @2xl:content-start @2xl:rounded-lg @2xl:border @2xl:border-border @2xl:bg-surface @2xl:p-4">
+    <div
+      className={cn(
+        "grid grid-cols-[7.5rem_minmax(0,1fr)] gap-x-3 gap-y-0.5 @2xl:grid-cols-1 @2xl:content-start @2xl:rounded-lg @2xl:border @2xl:border-border @2xl:bg-surface @2xl:p-4",
+        className,
+      )}
+    >
       <dt className="text-xs text-muted-foreground @2xl:font-semibold @2xl:tracking-wide @2xl:uppercase">{term}</dt>
       <dd className="font-medium @2xl:text-lg @2xl:font-semibold">{value}</dd>
       <dd className="col-start-2 text-xs text-muted-foreground @2xl:col-start-1 @2xl:text-sm">{detail}</dd>

@@ -13,4 +13,11 @@ export { isTachyonicState, tachyonicSectors, type TachyonicSector } from "./tach
 export { summarizeResult, type ResultSummary } from "./summary";
 export { highestUnstretchedMassSquared, unstretchedMassSquared, unstretchedMassSquaredText } from "./mass-cap";
 export { formatWorldvolume, stringCreationSectors, worldvolumeKey } from "./worldvolumes";
-export { displaySignificantDigits, formatMassSquared, formatNumber, formatPair, type FormatNumberOptions } from "./format";
+export {
+  displaySignificantDigits,
+  formatEngineProse,
+  formatMassSquared,
+  formatNumber,
+  formatPair,
+  type FormatNumberOptions,
+} from "./format";
