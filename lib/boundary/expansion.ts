@@ -91,9 +91,8 @@ export function expandAxis(axis: AxisClassification, theory: Theory, options: Ex
     lightCone: options.lightCone ?? false,
   };
   if (superstring) {
-    const modings = fermionModing(type);
-    expansion.fermionModing = modings;
-    expansion.fermionLatex = { NS: fermionLatex(axis, modings.NS), R: fermionLatex(axis, modings.R) };
+    expansion.fermionModing = fermionModing(type);
+    expansion.fermionLatex = fermionExpansions(axis);
   }
   return expansion;
 }
@@ -142,6 +141,21 @@ function expansionLatex(axis: AxisClassification): string {
     case "DN":
       return `${lhs} = ${xa} + \\sqrt{2\\alpha'}\\sum_{r\\in\\mathbb{Z}+1/2}\\frac{\\alpha_r}{r}e^{-ir\\tau}\\sin r\\sigma`;
   }
+}
+
+/** Fermion expansions depend only on the axis number and type (no positions): built once each. */
+const fermionCache = new Map<string, { NS: string; R: string }>();
+
+function fermionExpansions(axis: AxisClassification): { NS: string; R: string } {
+  const key = `${axis.axis}${axis.type}`;
+  let cached = fermionCache.get(key);
+  if (!cached) {
+    const modings = fermionModing(axis.type);
+    cached = { NS: fermionLatex(axis, modings.NS), R: fermionLatex(axis, modings.R) };
+    fermionCache.set(key, cached);
+  }
+  // A copy per axis, so that a caller changing one result cannot change another.
+  return { NS: cached.NS, R: cached.R };
 }
 
 /** psi and psi~ on one axis in one sector (module doc: boundary-sign convention). */

@@ -129,6 +129,8 @@ export interface LevelTemplate {
   exactText: string;
   /** N + a as a number. */
   exactValue: number;
+  /** N + a = 0: massless at zero separation. */
+  massless: boolean;
   /** States of the string from stack a to stack b, per Chan-Paton label. */
   ab: bigint;
   /** States of the string from stack b to stack a, per Chan-Paton label. */
@@ -295,7 +297,7 @@ function buildSector(a: Stack, b: Stack, configuration: Configuration, context: 
     for (let index = 0; index < series.listed; index += 1) {
       const template = series.levels[index] as LevelTemplate;
       const row = buildRow(template, rowContext);
-      if (isZeroRational(template.exact)) {
+      if (template.massless) {
         if (coincident) massless.push(describeMassless(row, template, classification, { self, sameOrientation, a, b }));
         zeroRows.push(row);
       }
@@ -384,6 +386,7 @@ function buildSeries(kind: SectorKind, zeroPoint: Rational, counts: readonly Ori
       exact,
       exactText: formatRational(exact),
       exactValue: rationalToNumber(exact),
+      massless: isZeroRational(exact),
       ab: count.ab,
       ba: count.ba,
       abText: count.ab.toString(),
