@@ -17,7 +17,7 @@ export default defineConfig({
         extends: true,
         test: {
           name: "unit",
-          include: ["lib/**/*.test.ts", "components/**/*.test.ts"],
+          include: ["lib/**/*.test.ts", "components/**/*.test.ts", "components/**/*.test.tsx"],
           environment: "node",
         },
       },

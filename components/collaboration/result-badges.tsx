@@ -6,7 +6,13 @@ export function SupersymmetryBadge({ supercharges }: { supercharges: number | nu
   return supercharges > 0 ? <Badge variant="success">{supercharges} supercharges</Badge> : <Badge variant="neutral">none</Badge>;
 }
 
-/** Tachyon status of a summary row. */
+/** Tachyon status of a summary row; the dashed danger border matches the tachyonic sectors on the results page. */
 export function TachyonBadge({ tachyonic }: { tachyonic: boolean }) {
-  return tachyonic ? <Badge variant="danger">tachyon</Badge> : <Badge variant="outline">stable</Badge>;
+  return tachyonic ? (
+    <Badge variant="danger" className="border-dashed border-danger">
+      tachyon
+    </Badge>
+  ) : (
+    <Badge variant="outline">stable</Badge>
+  );
 }

@@ -7,7 +7,7 @@ import { Table, TableBody, TableCell, TableHead, TableHeader, TableRow } from "@
 import type { SharedConfigurationDto } from "@/db/queries/share-links";
 import { dimensionOf } from "@/lib/boundary";
 import { stackKind } from "@/lib/designer/stack-kind";
-import { formatNumber, formatPair, pairKey } from "@/lib/spectrum";
+import { formatNumber, formatPair, pairKey, summaryFacts } from "@/lib/spectrum";
 
 export interface SharedConfigurationViewProps {
   shared: SharedConfigurationDto;
@@ -67,7 +67,7 @@ export function SharedConfigurationView({ shared }: SharedConfigurationViewProps
               <CardDescription>Stored result of revision {shared.revisionNumber}, engine {result.engineVersion}.</CardDescription>
             </CardHeader>
             <CardContent className="grid gap-4 text-sm">
-              <SpectrumSummary result={result} />
+              <SpectrumSummary facts={summaryFacts(result)} />
               {result.warnings.length > 0 ? (
                 <ul className="list-disc pl-5 text-warning-soft-foreground">
                   {result.warnings.map((warning) => (

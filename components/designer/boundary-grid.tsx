@@ -2,21 +2,7 @@
 
 import { useState } from "react";
 import type { Configuration, Stack } from "@/lib/boundary/types";
-import {
-  addStack,
-  deleteStacks,
-  duplicateStacks,
-  maxStackCount,
-  renameProblem,
-  renameStack,
-  setAnti,
-  setColour,
-  setCount,
-  setLabel,
-  setPosition,
-  spatialAxes,
-  toggleAxis,
-} from "@/lib/designer/document";
+import { maxStackCount, renameProblem, spatialAxes } from "@/lib/designer/document";
 import { stackKind } from "@/lib/designer/stack-kind";
 import type { FieldIssue } from "@/lib/errors";
 import { selectDocument, useDesignerStore } from "@/lib/client/designer-store";
@@ -39,13 +25,8 @@ export function BoundaryGrid({ issuesByStack, readOnly = false }: BoundaryGridPr
   const document = useDesignerStore(selectDocument);
   const selection = useDesignerStore((s) => s.selection);
   const displayAxes = useDesignerStore((s) => s.displayAxes);
-  const edit = useDesignerStore((s) => s.edit);
-  const select = useDesignerStore((s) => s.select);
+  const { addStack, select } = useDesignerStore.getState();
   const axes = spatialAxes(document);
-
-  function addRow() {
-    edit((doc) => addStack(doc));
-  }
 
   return (
     <section aria-labelledby="boundary-grid-title" className="flex min-h-0 flex-col gap-2">
@@ -57,7 +38,7 @@ export function BoundaryGrid({ issuesByStack, readOnly = false }: BoundaryGridPr
           </span>
         </h2>
         {!readOnly ? (
-          <Button size="sm" variant="secondary" onClick={addRow}>
+          <Button size="sm" variant="secondary" onClick={() => addStack()}>
             Add stack
           </Button>
         ) : null}
@@ -113,7 +94,6 @@ export function BoundaryGrid({ issuesByStack, readOnly = false }: BoundaryGridPr
                   issues={issuesByStack.get(index) ?? []}
                   readOnly={readOnly}
                   onSelect={(on) => select([stack.id], on ? "add" : "toggle")}
-                  edit={edit}
                 />
               ))}
             </tbody>
@@ -133,10 +113,11 @@ interface StackRowsProps {
   issues: FieldIssue[];
   readOnly: boolean;
   onSelect: (on: boolean) => void;
-  edit: (change: (doc: Configuration) => Configuration, options?: { gesture?: string }) => void;
 }
 
-function StackRows({ stack, index, document, axes, selected, issues, readOnly, onSelect, edit }: StackRowsProps) {
+function StackRows({ stack, index, document, axes, selected, issues, readOnly, onSelect }: StackRowsProps) {
+  const { deleteStacks, duplicateStacks, renameStack, setAnti, setColour, setCount, setLabel, setPosition, toggleAxis } =
+    useDesignerStore.getState();
   const [idDraft, setIdDraft] = useState(stack.id);
   const idProblem = renameProblem(document, stack.id, idDraft.trim());
   const issueId = `stack-${index}-issues`;
@@ -145,7 +126,7 @@ function StackRows({ stack, index, document, axes, selected, issues, readOnly, o
 
   function commitId() {
     const next = idDraft.trim();
-    if (idProblem === null && next !== stack.id) edit((doc) => renameStack(doc, stack.id, next));
+    if (idProblem === null && next !== stack.id) renameStack(stack.id, next);
     else setIdDraft(stack.id);
   }
 
@@ -190,7 +171,7 @@ function StackRows({ stack, index, document, axes, selected, issues, readOnly, o
             value={stack.label}
             disabled={readOnly}
             maxLength={64}
-            onChange={(event) => edit((doc) => setLabel(doc, stack.id, event.target.value), { gesture: `label-${stack.id}` })}
+            onChange={(event) => setLabel(stack.id, event.target.value)}
             aria-label={`Label of stack ${stack.id}`}
             className="h-7 w-24 rounded border border-border-strong bg-surface px-1.5 text-xs"
           />
@@ -205,7 +186,7 @@ function StackRows({ stack, index, document, axes, selected, issues, readOnly, o
             min={1}
             max={maxStackCount}
             disabled={readOnly}
-            onCommit={(count) => edit((doc) => setCount(doc, stack.id, count), { gesture: `count-${stack.id}` })}
+            onCommit={(count) => setCount(stack.id, count)}
             aria-label={`Number of branes N in stack ${stack.id}`}
             className="w-12"
           />
@@ -217,7 +198,7 @@ function StackRows({ stack, index, document, axes, selected, issues, readOnly, o
             aria-pressed={stack.anti}
             aria-label={`Stack ${stack.id} is an antibrane`}
             title={document.theory === "bosonic" ? "The bosonic theory has no antibranes" : "Switch brane / antibrane"}
-            onClick={() => edit((doc) => setAnti(doc, stack.id, !stack.anti))}
+            onClick={() => setAnti(stack.id, !stack.anti)}
             className={cn(
               "h-7 rounded border px-2 text-xs font-medium",
               stack.anti ? "border-foreground bg-foreground text-background" : "border-border-strong bg-surface text-foreground",
@@ -238,7 +219,7 @@ function StackRows({ stack, index, document, axes, selected, issues, readOnly, o
                   disabled={readOnly}
                   aria-label={`Stack ${stack.id}, axis x${axis}: ${neumann ? "Neumann" : "Dirichlet"}`}
                   title={`Make x${axis} ${neumann ? "Dirichlet" : "Neumann"} for ${name}`}
-                  onClick={() => edit((doc) => toggleAxis(doc, stack.id, axis))}
+                  onClick={() => toggleAxis(stack.id, axis)}
                   className={cn(
                     "h-7 w-6 rounded font-mono text-xs font-semibold",
                     neumann
@@ -255,7 +236,7 @@ function StackRows({ stack, index, document, axes, selected, issues, readOnly, o
                     value={position}
                     step={0.5}
                     disabled={readOnly}
-                    onCommit={(value) => edit((doc) => setPosition(doc, stack.id, axis, value), { gesture: `pos-${stack.id}-${axis}` })}
+                    onCommit={(value) => setPosition(stack.id, axis, value)}
                     aria-label={`Position of stack ${stack.id} on x${axis}`}
                     className="w-11"
                   />
@@ -269,7 +250,7 @@ function StackRows({ stack, index, document, axes, selected, issues, readOnly, o
             type="color"
             value={stack.colour ?? "#2f6f9f"}
             disabled={readOnly}
-            onChange={(event) => edit((doc) => setColour(doc, stack.id, event.target.value), { gesture: `colour-${stack.id}` })}
+            onChange={(event) => setColour(stack.id, event.target.value)}
             aria-label={`Colour of stack ${stack.id}`}
             className="h-7 w-8 cursor-pointer rounded border border-border-strong bg-surface p-0.5"
           />
@@ -279,7 +260,7 @@ function StackRows({ stack, index, document, axes, selected, issues, readOnly, o
             <div className="flex gap-0.5">
               <button
                 type="button"
-                onClick={() => edit((doc) => duplicateStacks(doc, [stack.id]).config)}
+                onClick={() => duplicateStacks([stack.id])}
                 aria-label={`Duplicate stack ${stack.id}`}
                 title="Duplicate"
                 className="grid size-7 place-items-center rounded text-muted-foreground hover:bg-surface-muted hover:text-foreground"
@@ -291,7 +272,7 @@ function StackRows({ stack, index, document, axes, selected, issues, readOnly, o
               </button>
               <button
                 type="button"
-                onClick={() => edit((doc) => deleteStacks(doc, [stack.id]))}
+                onClick={() => deleteStacks([stack.id])}
                 aria-label={`Delete stack ${stack.id}`}
                 title="Delete"
                 className="grid size-7 place-items-center rounded text-danger-soft-foreground hover:bg-danger-soft"

@@ -2,9 +2,9 @@
 
 import dynamic from "next/dynamic";
 import { useCallback, useEffect, useRef, useState } from "react";
-import type { Configuration, SpectrumResult } from "@/lib/boundary/types";
+import type { SpectrumResult } from "@/lib/boundary/types";
 import { baseScale, zoomAt, type Viewport } from "@/lib/canvas/viewport";
-import { addStack, deleteStacks, duplicateStacks, moveStacks, spatialAxes } from "@/lib/designer/document";
+import { spatialAxes } from "@/lib/designer/document";
 import { fitSceneViewport } from "@/lib/designer/scene";
 import { snapValue } from "@/lib/canvas/snap";
 import { toWorld } from "@/lib/canvas/viewport";
@@ -40,12 +40,12 @@ export function DesignerCanvas({ result, readOnly = false, onSaveShortcut, class
   const tool = useDesignerStore((s) => s.tool);
   const canUndo = useDesignerStore(selectCanUndo);
   const canRedo = useDesignerStore(selectCanRedo);
-  const { edit, endGesture, select, setViewport, setDisplayAxes, setSnapping, setTool, undo, redo } = useDesignerStore.getState();
+  const { addStack, deleteStacks, dragStacks, duplicateStacks, endGesture, moveStacks, select, setViewport, setDisplayAxes, setSnapping, setTool, undo, redo } =
+    useDesignerStore.getState();
 
   const frameRef = useRef<HTMLDivElement>(null);
   const [size, setSize] = useState({ width: 0, height: 0 });
   const [helpOpen, setHelpOpen] = useState(false);
-  const dragBase = useRef<{ gesture: string; document: Configuration } | null>(null);
 
   useEffect(() => {
     const element = frameRef.current;
@@ -81,29 +81,19 @@ export function DesignerCanvas({ result, readOnly = false, onSaveShortcut, class
       [String(state.displayAxes.horizontal)]: step > 0 ? snapValue(centre.x, step) : centre.x,
       [String(state.displayAxes.vertical)]: step > 0 ? snapValue(centre.y, step) : centre.y,
     };
-    const before = new Set(state.history.present.stacks.map((s) => s.id));
-    edit((doc) => addStack(doc, { position }));
-    const added = useDesignerStore.getState().history.present.stacks.find((s) => !before.has(s.id));
-    if (added) select([added.id]);
-  }, [edit, select, size]);
+    addStack({ position, select: true });
+  }, [addStack, size]);
 
   const duplicateSelection = useCallback(() => {
     const state = useDesignerStore.getState();
     if (state.selection.length === 0) return;
-    let newIds: string[] = [];
     const shift = { [String(state.displayAxes.horizontal)]: state.gridStep * 2, [String(state.displayAxes.vertical)]: state.gridStep * 2 };
-    edit((doc) => {
-      const out = duplicateStacks(doc, state.selection, { shift });
-      newIds = out.newIds;
-      return out.config;
-    });
-    if (newIds.length > 0) select(newIds);
-  }, [edit, select]);
+    duplicateStacks(state.selection, { shift, select: true });
+  }, [duplicateStacks]);
 
   const deleteSelection = useCallback(() => {
-    const ids = useDesignerStore.getState().selection;
-    if (ids.length > 0) edit((doc) => deleteStacks(doc, ids));
-  }, [edit]);
+    deleteStacks(useDesignerStore.getState().selection);
+  }, [deleteStacks]);
 
   useEffect(() => {
     function onKeyDown(event: KeyboardEvent) {
@@ -199,7 +189,7 @@ export function DesignerCanvas({ result, readOnly = false, onSaveShortcut, class
           const delta: Record<string, number> = {};
           if (dx !== 0) delta[String(state.displayAxes.horizontal)] = dx;
           if (dy !== 0) delta[String(state.displayAxes.vertical)] = dy;
-          edit((doc) => moveStacks(doc, state.selection, delta, { snapStep: state.snapping ? state.gridStep : undefined }));
+          moveStacks(state.selection, delta);
           break;
         }
         default:
@@ -208,7 +198,7 @@ export function DesignerCanvas({ result, readOnly = false, onSaveShortcut, class
     }
     window.addEventListener("keydown", onKeyDown);
     return () => window.removeEventListener("keydown", onKeyDown);
-  }, [addAtCentre, deleteSelection, duplicateSelection, edit, onSaveShortcut, readOnly, redo, select, setSnapping, setTool, setViewport, undo, zoom]);
+  }, [addAtCentre, deleteSelection, duplicateSelection, moveStacks, onSaveShortcut, readOnly, redo, select, setSnapping, setTool, setViewport, undo, zoom]);
 
   const axes = spatialAxes(document);
   const zoomPercent = viewport ? Math.round((viewport.scale / baseScale) * 100) : 100;
@@ -308,14 +298,7 @@ export function DesignerCanvas({ result, readOnly = false, onSaveShortcut, class
               select(ids, mode);
               frameRef.current?.focus({ preventScroll: true });
             }}
-            onMove={(ids, delta, gesture) => {
-              // Deltas are measured from where the drag began, so apply them to that document.
-              if (dragBase.current?.gesture !== gesture) {
-                dragBase.current = { gesture, document: useDesignerStore.getState().history.present };
-              }
-              const base = dragBase.current.document;
-              edit(() => moveStacks(base, ids, delta, { snapStep: snapping ? gridStep : undefined }), { gesture });
-            }}
+            onMove={dragStacks}
             onGestureEnd={endGesture}
           />
         ) : null}

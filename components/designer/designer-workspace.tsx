@@ -4,11 +4,11 @@ import { useQuery, useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useState } from "react";
-import { setTitle } from "@/lib/designer/document";
 import { clearDraft, readDraft, writeDraft } from "@/lib/designer/draft-storage";
 import { configurationQueries, useDeleteConfiguration, useForkConfiguration, useUpdateConfiguration, type ConfigurationJson } from "@/lib/client/configurations";
 import { ApiError } from "@/lib/client/api-client";
 import { selectDocument, useDesignerStore } from "@/lib/client/designer-store";
+import { configurationTitleMaxLength } from "@/lib/validations/configuration";
 import { Alert } from "@/components/ui/alert";
 import { Badge } from "@/components/ui/badge";
 import { Button, ButtonLink } from "@/components/ui/button";
@@ -44,7 +44,7 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
   const document = useDesignerStore(selectDocument);
   const dirty = useDesignerStore((s) => s.dirty);
   const baseVersion = useDesignerStore((s) => s.baseVersion);
-  const { load, markSaved, edit } = useDesignerStore.getState();
+  const { load, markSaved, setTitle } = useDesignerStore.getState();
 
   const [recoveredAt, setRecoveredAt] = useState<number | null>(null);
   const [saveOpen, setSaveOpen] = useState(false);
@@ -183,8 +183,8 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
             id="configuration-title"
             value={document.title}
             readOnly={!canEdit}
-            maxLength={120}
-            onChange={(event) => edit((doc) => setTitle(doc, event.target.value), { gesture: "title" })}
+            maxLength={configurationTitleMaxLength}
+            onChange={(event) => setTitle(event.target.value)}
             className="-ml-1 w-full rounded px-1 text-xl font-semibold tracking-tight hover:bg-surface-muted focus:bg-surface focus-visible:outline-2 focus-visible:outline-ring"
           />
         </div>

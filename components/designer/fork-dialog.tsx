@@ -1,6 +1,7 @@
 "use client";
 
 import { useState } from "react";
+import { configurationTitleMaxLength } from "@/lib/validations/configuration";
 import { Button } from "@/components/ui/button";
 import { Dialog } from "@/components/ui/dialog";
 import { Field } from "@/components/ui/field";
@@ -75,7 +76,7 @@ export function ForkDialog({ open, onOpenChange, groups, defaultTitle, sourceLab
             <SpaceSelect groups={groups} value={groupId} onChange={(event) => setGroupId(event.target.value)} />
           </Field>
           <Field id="fork-title" label="Title" error={error}>
-            <Input value={title} maxLength={120} onChange={(event) => setTitle(event.target.value)} />
+            <Input value={title} maxLength={configurationTitleMaxLength} onChange={(event) => setTitle(event.target.value)} />
           </Field>
         </form>
       )}

@@ -6,6 +6,7 @@ import type { Theory } from "@/lib/boundary/types";
 import { starterDocument } from "@/lib/designer/starter-document";
 import { useCreateConfiguration } from "@/lib/client/configurations";
 import { ApiError } from "@/lib/client/api-client";
+import { configurationTitleMaxLength } from "@/lib/validations/configuration";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
@@ -45,7 +46,7 @@ export function NewConfigurationForm({ groups, defaultGroupId }: NewConfiguratio
       }}
     >
       <Field id="new-title" label="Title" error={titleError}>
-        <Input value={title} maxLength={120} required onChange={(event) => setTitle(event.target.value)} placeholder="e.g. Probe D3 near a D7 wall" />
+        <Input value={title} maxLength={configurationTitleMaxLength} required onChange={(event) => setTitle(event.target.value)} placeholder="e.g. Probe D3 near a D7 wall" />
       </Field>
       <Field id="new-group" label="Space">
         <SpaceSelect groups={groups} value={groupId} onChange={(event) => setGroupId(event.target.value)} />

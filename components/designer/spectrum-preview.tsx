@@ -3,6 +3,7 @@
 import type { SpectrumResult } from "@/lib/boundary/types";
 import type { FieldIssue } from "@/lib/errors";
 import { LightestStatesTable } from "@/components/results/lightest-states-table";
+import { summaryFacts } from "@/lib/spectrum";
 import { SpectrumSummary } from "@/components/results/spectrum-summary";
 import { ConventionsNote } from "./conventions-note";
 
@@ -52,7 +53,7 @@ export function SpectrumPreview({ result, issues, elapsedMs, lightestRows = 8 }:
 function PreviewBody({ result, lightestRows }: { result: SpectrumResult; lightestRows: number }) {
   return (
     <>
-      <SpectrumSummary result={result} />
+      <SpectrumSummary facts={summaryFacts(result)} />
 
       <div>
         <h3 className="mb-1 text-xs font-semibold">Lightest states</h3>

@@ -1,14 +1,20 @@
 "use client";
 
+import { useQuery } from "@tanstack/react-query";
 import { useMemo, useState } from "react";
 import { CartesianGrid, Legend, Line, LineChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
-import type { Sector } from "@/lib/boundary/types";
+import { configurationQueries } from "@/lib/client/configurations";
 import { degeneracyRows } from "@/lib/designer/plot-data";
-import { formatNumber, formatPair, pairKey } from "@/lib/spectrum";
+import { formatNumber, formatPair, pairKey, type SectorOverview } from "@/lib/spectrum";
 import { axisStyle, horizontalAxisLabel, tooltipContentStyle, verticalAxisLabel } from "./chart-style";
 
 export interface DegeneracyPlotProps {
-  sectors: Sector[];
+  configurationId: string;
+  revisionId: string;
+  /** The sectors to choose from (the first page of the result's sectors). */
+  sectors: SectorOverview[];
+  /** How many sectors the result has in all. */
+  total: number;
 }
 
 const kinds = [
@@ -17,12 +23,13 @@ const kinds = [
   { key: "bosonic", stroke: "#3f8f5a", dash: "" },
 ] as const;
 
-/** log10 of the number of states (with Chan-Paton factors) against the level, for a chosen sector. */
-export function DegeneracyPlot({ sectors }: DegeneracyPlotProps) {
+/** log10 of the number of states (with Chan-Paton factors) against the level, for a chosen sector (loaded on its own). */
+export function DegeneracyPlot({ configurationId, revisionId, sectors, total }: DegeneracyPlotProps) {
   const [index, setIndex] = useState(0);
-  const sector = sectors[Math.min(index, sectors.length - 1)];
-  const rows = useMemo(() => (sector ? degeneracyRows(sector) : []), [sector]);
-  if (!sector) return null;
+  const chosen = sectors[Math.min(index, sectors.length - 1)];
+  const detail = useQuery({ ...configurationQueries.resultSector(configurationId, revisionId, chosen?.index ?? 0), enabled: chosen !== undefined });
+  const rows = useMemo(() => (detail.data ? degeneracyRows(detail.data) : []), [detail.data]);
+  if (!chosen) return null;
   const present = kinds.filter((k) => rows.some((r) => r[k.key] !== undefined));
   return (
     <figure className="grid gap-2">
@@ -39,8 +46,14 @@ export function DegeneracyPlot({ sectors }: DegeneracyPlotProps) {
             </option>
           ))}
         </select>
+        {total > sectors.length ? <span className="text-muted-foreground">(the first {sectors.length} of {total}; open any sector below for its table)</span> : null}
       </label>
-      <div className="h-64 w-full">
+      {detail.isError ? (
+        <p className="text-xs text-danger-soft-foreground" role="alert">
+          The levels of {formatPair(chosen.pair)} could not be loaded ({detail.error.message}).
+        </p>
+      ) : null}
+      <div className="h-64 w-full" aria-busy={detail.isPending}>
         <ResponsiveContainer width="100%" height="100%">
           <LineChart data={rows} margin={{ top: 8, right: 24, bottom: 28, left: 8 }}>
             <CartesianGrid strokeDasharray="2 4" stroke="var(--border)" />

@@ -2,13 +2,13 @@
 
 import { useMemo } from "react";
 import { CartesianGrid, Legend, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
-import type { Sector } from "@/lib/boundary/types";
-import { massCurvePoints, massCurves } from "@/lib/designer/plot-data";
+import { massCurvePoints, type MassCurve } from "@/lib/designer/plot-data";
 import { formatNumber } from "@/lib/spectrum";
 import { axisStyle, horizontalAxisLabel, tooltipContentStyle, verticalAxisLabel } from "./chart-style";
 
 export interface MassPlotProps {
-  sectors: Sector[];
+  /** `massCurves` of the pairs of distinct stacks (lib/designer/plot-data.ts); the server sends them with the result. */
+  curves: readonly MassCurve[];
 }
 
 /** Line colours and dash patterns, so curves differ without colour too. */
@@ -19,9 +19,10 @@ const dashes = ["", "6 3", "2 3", "10 3 2 3", "1 2", "12 4"];
  * alpha' M^2 of each sector's lightest state against the separation y, with the zero line,
  * the tachyon crossings y_c and the actual separations marked.
  */
-export function MassPlot({ sectors }: MassPlotProps) {
-  const curves = useMemo(() => massCurves(sectors.filter((s) => s.pair[0] !== s.pair[1])).slice(0, 12), [sectors]);
+export function MassPlot({ curves: allCurves }: MassPlotProps) {
+  const curves = useMemo(() => allCurves.slice(0, strokes.length * dashes.length), [allCurves]);
   const { rows, yMax } = useMemo(() => massCurvePoints(curves), [curves]);
+  const marks = useMemo(() => curves.flatMap((curve, index) => curve.sectors.map((sector) => ({ curve, index, sector }))), [curves]);
   if (curves.length === 0) {
     return <p className="text-sm text-muted-foreground">A single stack has no separations to plot.</p>;
   }
@@ -78,13 +79,13 @@ export function MassPlot({ sectors }: MassPlotProps) {
                 />
               ) : null,
             )}
-            {curves.map((curve, i) => (
+            {marks.map(({ curve, index, sector }) => (
               <ReferenceDot
-                key={`y-${curve.key}`}
-                x={curve.separation}
-                y={(curve.separation / (2 * Math.PI)) ** 2 + curve.intercept}
+                key={`y-${curve.key}-${sector.key}`}
+                x={sector.separation}
+                y={(sector.separation / (2 * Math.PI)) ** 2 + curve.intercept}
                 r={4}
-                fill={strokes[i % strokes.length]}
+                fill={strokes[index % strokes.length]}
                 stroke="var(--surface)"
                 ifOverflow="extendDomain"
               />
@@ -93,7 +94,8 @@ export function MassPlot({ sectors }: MassPlotProps) {
         </ResponsiveContainer>
       </div>
       <figcaption className="text-xs text-muted-foreground">
-        Lightest state of each pair of distinct stacks: &alpha;&prime;M&sup2; = (y/2&pi;)&sup2; + N + a. Dots mark the actual separations;
+        Lightest state of each pair of distinct stacks: &alpha;&prime;M&sup2; = (y/2&pi;)&sup2; + N + a, one curve per value of N + a
+        (exact). Dots mark the actual separations (of up to 240 pairs);
         red dots mark tachyon crossings y<sub>c</sub> = 2&pi;&radic;(&minus;(N + a)), beyond which the state is massive.
         {curves
           .filter((c) => c.crossing !== null)

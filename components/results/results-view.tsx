@@ -3,15 +3,15 @@
 import { useQuery } from "@tanstack/react-query";
 import dynamic from "next/dynamic";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
+import { useDeferredValue, useState } from "react";
 import type { SectorKind } from "@/lib/boundary/types";
-import { formatEngineProse, formatMassSquared, formatNumber, formatPair, highestUnstretchedMassSquared, pairKey } from "@/lib/spectrum";
+import { formatNumber } from "@/lib/spectrum";
 import { formatDateTime } from "@/lib/format-date";
 import {
   configurationQueries,
   useForkConfiguration,
   type ConfigurationJson,
-  type ResultJson,
+  type ResultHeadJson,
   type RevisionSummaryJson,
 } from "@/lib/client/configurations";
 import { Badge } from "@/components/ui/badge";
@@ -21,14 +21,10 @@ import { ConventionsNote } from "@/components/designer/conventions-note";
 import { ForkDialog, type WritableGroup } from "@/components/designer/fork-dialog";
 import { ForkedFromNote } from "@/components/designer/forked-from-note";
 import { LightestStatesTable } from "./lightest-states-table";
-import { SectorLevelsTable } from "./sector-levels-table";
+import { SectorList } from "./sector-list";
 import { SpectrumSummary } from "./spectrum-summary";
 import { WorldvolumeTable } from "./worldvolume-table";
 
-const ModeExpansions = dynamic(() => import("./mode-expansions").then((m) => m.ModeExpansions), {
-  ssr: false,
-  loading: () => <p className="text-xs text-muted-foreground">Typesetting&hellip;</p>,
-});
 const MassPlot = dynamic(() => import("./mass-plot").then((m) => m.MassPlot), {
   ssr: false,
   loading: () => <div className="h-72 animate-pulse rounded-md bg-border/50" />,
@@ -42,7 +38,7 @@ export interface ResultsViewProps {
   configuration: ConfigurationJson;
   revisions: RevisionSummaryJson[];
   revision: RevisionSummaryJson;
-  initialResult: ResultJson;
+  initialResult: ResultHeadJson;
   writableGroups: WritableGroup[];
 }
 
@@ -52,19 +48,18 @@ export interface ResultsViewProps {
  */
 export function ResultsView({ configuration, revisions, revision, initialResult, writableGroups }: ResultsViewProps) {
   const router = useRouter();
-  const { data: stored } = useQuery({ ...configurationQueries.result(configuration.id, revision.id), initialData: initialResult });
-  const result = stored.result;
+  const { data: stored } = useQuery({ ...configurationQueries.resultHead(configuration.id, revision.id), initialData: initialResult });
+  const { result, facts, massCurves, showGeV, firstPage } = stored;
   const [kind, setKind] = useState<SectorKind | "all">("all");
-  const [massCap, setMassCap] = useState(() => highestUnstretchedMassSquared(result.sectors));
+  // alpha' M^2 at zero separation (N + a) up to which the tables list rows; null lists every row.
+  const [massCap, setMassCap] = useState<number | null>(null);
   const [search, setSearch] = useState("");
   const [onlyTachyonic, setOnlyTachyonic] = useState(false);
   const [forkOpen, setForkOpen] = useState(false);
   const fork = useForkConfiguration(configuration.id);
   const kinds: SectorKind[] = result.theory === "bosonic" ? ["bosonic"] : ["NS", "R"];
-  const visibleSectors = result.sectors.filter(
-    (s) => (!onlyTachyonic || s.tachyonic) && (search.trim() === "" || s.pair.join(" ").toLowerCase().includes(search.trim().toLowerCase())),
-  );
-  const showGeV = result.sectors.some((s) => s.levels.some((l) => l.massGeV !== undefined && l.massGeV !== null));
+  // The list is filtered on the server; typing does not wait for it.
+  const deferredSearch = useDeferredValue(search.trim());
 
   return (
     <div className="mx-auto grid w-full max-w-7xl gap-6 px-4 py-6 sm:px-6">
@@ -113,7 +108,7 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
         <h2 id="summary-title" className="sr-only">
           Summary
         </h2>
-        <SpectrumSummary result={result} />
+        <SpectrumSummary facts={facts} />
       </section>
 
       <section aria-labelledby="worldvolumes-title" className="grid gap-2">
@@ -145,11 +140,11 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
         <div className="grid gap-4 lg:grid-cols-2">
           <div className="rounded-lg border border-border bg-surface p-4">
             <h3 className="mb-2 text-sm font-semibold">&alpha;&prime;M&sup2; against separation</h3>
-            <MassPlot sectors={result.sectors} />
+            <MassPlot curves={massCurves} />
           </div>
           <div className="rounded-lg border border-border bg-surface p-4">
             <h3 className="mb-2 text-sm font-semibold">Degeneracy against level</h3>
-            <DegeneracyPlot sectors={result.sectors} />
+            <DegeneracyPlot configurationId={configuration.id} revisionId={revision.id} sectors={firstPage.items} total={firstPage.total} />
           </div>
         </div>
       </section>
@@ -188,8 +183,9 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
                 type="number"
                 min={-1}
                 step={0.5}
-                value={massCap}
-                onChange={(event) => setMassCap(Number(event.target.value))}
+                value={massCap ?? ""}
+                placeholder="all"
+                onChange={(event) => setMassCap(event.target.value === "" ? null : Number(event.target.value))}
                 className="h-8 w-16 rounded border border-border-strong bg-surface px-2"
                 aria-label="Show levels up to alpha' M squared at zero separation"
               />
@@ -200,77 +196,16 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
             </label>
           </div>
         </div>
-        {visibleSectors.length === 0 ? <p className="text-sm text-muted-foreground">No sector matches the filters.</p> : null}
-        {visibleSectors.map((sector) => {
-          const title = formatPair(sector.pair);
-          return (
-            <details key={pairKey(...sector.pair)} open={visibleSectors.length <= 6} className="rounded-lg border border-border bg-surface" data-testid={`sector-${sector.pair.join("-")}`}>
-              <summary className="flex cursor-pointer flex-wrap items-center gap-x-4 gap-y-1 px-4 py-2 text-sm">
-                <span className="font-mono font-semibold">{title}</span>
-                <span className="text-muted-foreground">
-                  NN {sector.nn} &middot; DD {sector.dd} &middot; &nu; = {sector.nu} &middot; y = {formatNumber(sector.separation)} &middot; Chan-Paton {sector.chanPaton}
-                </span>
-                <span className="font-mono text-xs text-muted-foreground">
-                  a:{" "}
-                  {Object.entries(sector.zeroPoint)
-                    .map(([k, v]) => `${k} ${formatMassSquared(v)}`)
-                    .join(", ")}
-                </span>
-                {sector.tachyonic ? (
-                  <Badge variant="danger" className="border-dashed border-danger">
-                    tachyon{sector.criticalSeparation !== null ? `, y_c = ${formatNumber(sector.criticalSeparation)}` : ""}
-                  </Badge>
-                ) : null}
-                {result.supercharges !== null ? (
-                  <Badge variant={sector.supersymmetric ? "success" : "outline"}>{sector.supersymmetric ? "supersymmetric" : "no supersymmetry"}</Badge>
-                ) : null}
-              </summary>
-              <div className="grid gap-3 border-t border-border px-4 py-3">
-                <SectorLevelsTable
-                  caption={`Levels of sector ${title}`}
-                  rows={sector.levels}
-                  zeroPoint={sector.zeroPoint}
-                  kind={kind}
-                  massCap={massCap}
-                  showGeV={showGeV}
-                />
-                {sector.massless.length > 0 ? (
-                  <div className="text-xs">
-                    <h4 className="font-semibold">Massless content</h4>
-                    <ul className="list-disc pl-4 text-muted-foreground">
-                      {sector.massless.map((m) => (
-                        <li key={`${m.sector}-${m.description}`}>
-                          {m.sector}: {formatEngineProse(m.description)} (light-cone trace count {m.states}
-                          {m.withChanPaton ? `, ${m.withChanPaton} with Chan-Paton` : ""})
-                        </li>
-                      ))}
-                    </ul>
-                  </div>
-                ) : null}
-                {sector.multiplet ? (
-                  <p className="text-xs" data-testid={`multiplet-${sector.pair.join("-")}`}>
-                    <span className="font-semibold">Lightest multiplet:</span> {sector.multiplet.name} in {sector.multiplet.dimension} dimensions:{" "}
-                    {sector.multiplet.content} ({sector.multiplet.states} states, light-cone trace count), M&radic;&alpha;&prime; ={" "}
-                    <span className="font-mono">{formatNumber(sector.multiplet.mass)}</span>
-                  </p>
-                ) : null}
-                {sector.notes.length > 0 ? (
-                  <ul className="list-disc pl-4 text-xs text-muted-foreground">
-                    {sector.notes.map((n) => (
-                      <li key={n}>{formatEngineProse(n)}</li>
-                    ))}
-                  </ul>
-                ) : null}
-                <details className="text-xs">
-                  <summary className="cursor-pointer font-semibold">Mode expansions</summary>
-                  <div className="mt-2 overflow-x-auto">
-                    <ModeExpansions axes={sector.axes} />
-                  </div>
-                </details>
-              </div>
-            </details>
-          );
-        })}
+        <SectorList
+          configurationId={configuration.id}
+          revisionId={revision.id}
+          filter={{ search: deferredSearch, tachyonicOnly: onlyTachyonic }}
+          firstPage={firstPage}
+          typeTwo={result.supercharges !== null}
+          kind={kind}
+          massCap={massCap ?? Number.POSITIVE_INFINITY}
+          showGeV={showGeV}
+        />
       </section>
 
       <ConventionsNote full />

@@ -1,12 +1,12 @@
 import type { ReactNode } from "react";
-import type { SpectrumResult } from "@/lib/boundary/types";
-import { formatEngineProse, formatNumber, formatPair, pairKey, stringCreationSectors, tachyonicSectors, worldvolumeKey } from "@/lib/spectrum";
+import { formatEngineProse, formatNumber, formatPair, pairKey, type SummaryFacts } from "@/lib/spectrum";
 import { Badge } from "@/components/ui/badge";
 import { cn } from "@/lib/utils";
 import { MassSquaredText } from "./mass-text";
 
 export interface SpectrumSummaryProps {
-  result: SpectrumResult;
+  /** `summaryFacts(result)` of a full result, or the facts the server sends with a result's overview. */
+  facts: SummaryFacts;
 }
 
 /**
@@ -15,10 +15,9 @@ export interface SpectrumSummaryProps {
  * summary of the designer preview, the results page and the shared view; it lays itself out by
  * the width it is given (a list in a side panel, cards across a page).
  */
-export function SpectrumSummary({ result }: SpectrumSummaryProps) {
-  const tachyons = tachyonicSectors(result);
-  const lightest = result.lightest[0] ?? null;
-  const created = result.bps ? stringCreationSectors(result) : [];
+export function SpectrumSummary({ facts }: SpectrumSummaryProps) {
+  const { tachyons, tachyonCount, lightest, worldvolumes, worldvolumeCount, stringCreation } = facts;
+  const result = facts;
   return (
     <div className="@container">
       <dl className="grid gap-2 text-sm @2xl:grid-cols-3 @2xl:gap-3" aria-label="Spectrum summary">
@@ -30,8 +29,8 @@ export function SpectrumSummary({ result }: SpectrumSummaryProps) {
                 {result.supercharges === null ? "not applicable" : `${result.supercharges} supercharges`}
               </span>
               {result.supercharges === null ? null : (
-                <Badge variant={result.bps ? (created.length > 0 ? "warning" : "success") : "outline"} className="ml-2 align-middle">
-                  {result.bps ? (created.length > 0 ? "BPS with a stretched string" : "BPS") : "not BPS"}
+                <Badge variant={result.bps ? (stringCreation.length > 0 ? "warning" : "success") : "outline"} className="ml-2 align-middle">
+                  {result.bps ? (stringCreation.length > 0 ? "BPS with a stretched string" : "BPS") : "not BPS"}
                 </Badge>
               )}
             </>
@@ -41,13 +40,13 @@ export function SpectrumSummary({ result }: SpectrumSummaryProps) {
               "The bosonic string has no spacetime supersymmetry."
             ) : !result.bps ? (
               "Some pairs break all supersymmetry between them."
-            ) : created.length > 0 ? (
+            ) : stringCreation.length > 0 ? (
               <span data-testid="spectrum-string-creation">
                 Supersymmetric only with a fundamental string stretched between{" "}
-                {created.map((sector, index) => (
-                  <span key={pairKey(...sector.pair)}>
+                {stringCreation.map((pair, index) => (
+                  <span key={pairKey(...pair)}>
                     {index > 0 ? "; " : ""}
-                    <span className="font-mono">{sector.pair[0]}</span> and <span className="font-mono">{sector.pair[1]}</span>
+                    <span className="font-mono">{pair[0]}</span> and <span className="font-mono">{pair[1]}</span>
                   </span>
                 ))}{" "}
                 (&nu; = 8: a string is created when the stacks cross); without it they feel a constant force.
@@ -61,7 +60,7 @@ export function SpectrumSummary({ result }: SpectrumSummaryProps) {
           term="Stability"
           value={
             <span data-testid="spectrum-stability" className={tachyons.length > 0 ? "text-danger-soft-foreground" : undefined}>
-              {tachyons.length === 0 ? "No tachyons" : `${tachyons.length} tachyonic sector${tachyons.length > 1 ? "s" : ""}`}
+              {tachyonCount === 0 ? "No tachyons" : `${tachyonCount} tachyonic sector${tachyonCount > 1 ? "s" : ""}`}
             </span>
           }
           detail={
@@ -81,6 +80,7 @@ export function SpectrumSummary({ result }: SpectrumSummaryProps) {
                     ) : null}
                   </li>
                 ))}
+                {tachyonCount > tachyons.length ? <li>and {tachyonCount - tachyons.length} more (see the sectors below)</li> : null}
               </ul>
             )
           }
@@ -106,20 +106,21 @@ export function SpectrumSummary({ result }: SpectrumSummaryProps) {
           term="Worldvolumes"
           className="@2xl:col-span-3"
           value={
-            result.worldvolumes.length === 0 ? (
+            worldvolumes === null || worldvolumes.length === 0 ? (
               <span className="text-sm font-normal" data-testid="spectrum-worldvolumes">
-                {result.sectors.length === 0 ? "none" : "not recorded by the engine that stored this result"}
+                {worldvolumes === null ? "not recorded by the engine that stored this result" : "none"}
               </span>
             ) : (
               <ul className="grid gap-0.5 text-sm font-normal" data-testid="spectrum-worldvolumes">
-                {result.worldvolumes.map((worldvolume) => (
-                  <li key={worldvolumeKey(worldvolume)} data-testid={`worldvolume-${worldvolume.stacks.join("-")}`}>
+                {worldvolumes.map((worldvolume) => (
+                  <li key={worldvolume.key} data-testid={`worldvolume-${worldvolume.stacks.join("-")}`}>
                     <span>{formatEngineProse(worldvolume.summary)}</span>{" "}
                     <Badge variant={worldvolume.supercharges ? "success" : "outline"} className="align-middle">
                       {worldvolume.supersymmetry}
                     </Badge>
                   </li>
                 ))}
+                {worldvolumeCount > worldvolumes.length ? <li>and {worldvolumeCount - worldvolumes.length} more</li> : null}
               </ul>
             )
           }
@@ -130,7 +131,7 @@ export function SpectrumSummary({ result }: SpectrumSummaryProps) {
                 {result.gaugeGroup || "none"}
               </span>
               ; each is gauged only on its own worldvolume, and a higher-dimensional stack&apos;s group is a flavour symmetry of
-              the lower-dimensional theory. {result.sectors.length} sector{result.sectors.length === 1 ? "" : "s"} of open strings.
+              the lower-dimensional theory. {facts.sectorCount} sector{facts.sectorCount === 1 ? "" : "s"} of open strings.
             </>
           }
         />

@@ -74,13 +74,17 @@ export interface RevisionDto extends RevisionSummaryDto {
   document: Configuration;
 }
 
-/** The stored engine result of one revision. */
-export interface ResultDto {
+/** When and by which engine version a revision's result was computed. */
+export interface ResultMetaDto {
   revisionId: string;
   engineVersion: string;
-  result: SpectrumResult;
   computeMs: number;
   createdAt: Date;
+}
+
+/** The stored engine result of one revision. */
+export interface ResultDto extends ResultMetaDto {
+  result: SpectrumResult;
 }
 
 /** Options of the list functions (configurations and forks). */

@@ -16,7 +16,7 @@ import {
   type ConfigurationPage,
   type ListConfigurationsOptions,
 } from "./configuration-dtos";
-import { computeResult, type FreshResult } from "./results";
+import { resultForDocument, type RevisionResult } from "./results";
 import { addRevision, bumpVersion, documentColumns } from "./revision-writes";
 
 /** Options of `createConfiguration`. */
@@ -89,7 +89,7 @@ export async function createConfiguration(
 ): Promise<ConfigurationDto> {
   requireActor(actor);
   assertUuid(groupId, "group");
-  return insertConfiguration(actor, groupId, document, message, await computeResult(document), options);
+  return insertConfiguration(actor, groupId, document, message, await resultForDocument(db, document), options);
 }
 
 /** Input of `importConfiguration`: a configuration file as uploaded. */
@@ -110,7 +110,7 @@ export async function importConfiguration(actor: Actor | null, input: ImportConf
   const signedIn = requireActor(actor);
   if (input.groupId !== undefined) assertUuid(input.groupId, "group");
   const document = parseConfigurationFile(input.text);
-  const computed = await computeResult(document, { problemsAt: [] });
+  const computed = await resultForDocument(db, document, { problemsAt: [] });
   const groupId = input.groupId ?? (await getPersonalGroup(signedIn)).id;
   return insertConfiguration(actor, groupId, document, `Imported from ${input.fileName || "a file"}`, computed, {});
 }
@@ -120,7 +120,7 @@ async function insertConfiguration(
   groupId: string,
   document: Configuration,
   message: string,
-  computed: FreshResult,
+  computed: RevisionResult,
   options: CreateConfigurationOptions,
 ): Promise<ConfigurationDto> {
   const author = requireActor(actor);
@@ -157,7 +157,7 @@ export async function updateConfiguration(
   input: UpdateConfigurationInput,
 ): Promise<ConfigurationDto> {
   const author = requireActor(actor);
-  const computed = await computeResult(input.document);
+  const computed = await resultForDocument(db, input.document);
   const columns = documentColumns(input.document, computed.summary);
   return db.transaction(async (tx) => {
     const { role } = await requireConfigurationRole(tx, actor, configurationId, "editor");

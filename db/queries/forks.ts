@@ -9,7 +9,7 @@ import { recordAudit } from "./audit";
 import { requireConfigurationRole } from "./configuration-access";
 import { toConfigurationDto, type ConfigurationDto, type ConfigurationPage, type ListConfigurationsOptions } from "./configuration-dtos";
 import { listConfigurations } from "./configurations";
-import { computeResult, reusableResult } from "./results";
+import { resultForDocument } from "./results";
 import { addRevision, documentColumns } from "./revision-writes";
 
 /** Input of `forkConfiguration`. */
@@ -60,7 +60,7 @@ export async function forkConfiguration(
     const title = input.title?.trim() || (input.document ?? revision.document).title;
     const document: Configuration = { ...(input.document ?? revision.document), title };
     // The title is not part of the physics, so an untouched document keeps the source's result.
-    const result = (input.document === undefined ? await reusableResult(tx, revision.id, document) : null) ?? (await computeResult(document));
+    const result = await resultForDocument(tx, document, input.document === undefined ? { sameAs: { revisionId: revision.id } } : {});
     const [created] = await tx
       .insert(configurations)
       .values({

@@ -1,71 +1,130 @@
 import "server-only";
-import { and, eq, sql } from "drizzle-orm";
-import { ENGINE_VERSION } from "../../lib/boundary";
+import { createHash } from "node:crypto";
+import { and, eq, sql, type SQL } from "drizzle-orm";
+import { ENGINE_VERSION, resultInputKey } from "../../lib/boundary";
 import type { Configuration } from "../../lib/boundary/types";
 import { computeSpectrumJob } from "../../lib/server/compute/pool";
 import { parseResultNumber, type ResultSummary } from "../../lib/spectrum";
-import type { Transaction } from "../index";
+import type { Executor, Transaction } from "../index";
 import { results } from "../schema";
+
+/*
+ * Results are content-addressed: the SHA-256 of the engine version and the document's
+ * result-relevant content (lib/boundary/result-key.ts) is stored with each result, and a write of a
+ * document whose hash is already stored copies that result row inside PostgreSQL instead of
+ * computing it again. A result is never taken from the caller.
+ */
 
 /** A result the server just computed, as JSON text ready to store. */
 export interface FreshResult {
   source: "fresh";
+  contentHash: string;
   json: string;
+  overviewJson: string;
   summary: ResultSummary;
   engineVersion: string;
   /** Milliseconds, to the microsecond. */
   computeMs: number;
 }
 
-/** The stored result of another revision with the same document, copied row to row inside PostgreSQL. */
+/** A stored result with the same content, copied row to row inside PostgreSQL. */
 export interface StoredResult {
   source: "stored";
-  revisionId: string;
+  resultId: string;
   summary: ResultSummary;
 }
 
 /** The result a new revision gets. */
 export type RevisionResult = FreshResult | StoredResult;
 
-/** Options of {@link computeResult}. */
-export interface ComputeResultOptions {
+/** Options of {@link resultForDocument}. */
+export interface ResultForDocumentOptions {
   /** Where the document sits in the request, for the paths of engine problems (default `["document"]`). */
   problemsAt?: (string | number)[];
+  /** A revision with the same document whose result may be reused even if it predates content hashes. */
+  sameAs?: { revisionId: string };
 }
 
 /**
- * Computes the authoritative result of a document on the server. Every write of a document (create,
- * save, import, restore, fork of a changed draft) calls this itself: a result never comes from the
- * caller, so a browser's live preview is never trusted. Large documents are computed off the
- * request thread (lib/server/compute/pool.ts). Engine problems (a D3 in IIA, ...) become a 422 with
- * every JSON path under `document`.
+ * The authoritative result for a document: a stored result with the same content hash when there
+ * is one (or the `sameAs` revision's, when the running engine computed it), else a fresh computation
+ * (off the request thread for large documents, lib/server/compute/pool.ts). Engine problems (a D3 in
+ * IIA, ...) become a 422 with every JSON path under `problemsAt`.
  */
-export async function computeResult(document: Configuration, options: ComputeResultOptions = {}): Promise<FreshResult> {
-  const outcome = await computeSpectrumJob({ document }, { problemsAt: options.problemsAt ?? ["document"] });
-  return { source: "fresh", json: outcome.json, summary: outcome.summary, engineVersion: outcome.engineVersion, computeMs: outcome.computeMs };
+export async function resultForDocument(
+  executor: Executor,
+  document: Configuration,
+  options: ResultForDocumentOptions = {},
+): Promise<RevisionResult> {
+  const contentHash = hashDocument(document);
+  const stored =
+    (await findStoredResult(executor, eq(results.contentHash, contentHash), document)) ??
+    (options.sameAs
+      ? await findStoredResult(executor, and(eq(results.revisionId, options.sameAs.revisionId), eq(results.engineVersion, ENGINE_VERSION)), document)
+      : null);
+  if (stored) return stored;
+  const outcome = await computeSpectrumJob({ document, overview: true }, { problemsAt: options.problemsAt ?? ["document"] });
+  return {
+    source: "fresh",
+    contentHash,
+    json: outcome.json,
+    overviewJson: outcome.overviewJson ?? "null",
+    summary: outcome.summary,
+    engineVersion: outcome.engineVersion,
+    computeMs: outcome.computeMs,
+  };
 }
 
 /**
- * The stored result of a revision when the running engine version computed it, so that copying the
- * revision's unchanged document can copy its result too; null when it must be recomputed. The
- * summary is read inside PostgreSQL, so the result itself never travels.
+ * SHA-256 (hex) of the running engine version and the document's result-relevant content.
+ *
+ * @example
+ * hashDocument({ ...document, title: "another" }) === hashDocument(document) // => true
  */
-export async function reusableResult(tx: Transaction, revisionId: string, document: Configuration): Promise<StoredResult | null> {
-  const [stored] = await tx
+export function hashDocument(document: Configuration): string {
+  return createHash("sha256").update(`${ENGINE_VERSION}\n${resultInputKey(document)}`).digest("hex");
+}
+
+/** Stores the result of a new revision inside the revision's transaction. */
+export async function storeResult(tx: Transaction, revisionId: string, result: RevisionResult): Promise<void> {
+  if (result.source === "fresh") {
+    await tx.insert(results).values({
+      revisionId,
+      engineVersion: result.engineVersion,
+      contentHash: result.contentHash,
+      // The JSON text goes to PostgreSQL as it is: no parse and re-serialise on the request thread.
+      result: sql`${result.json}::jsonb`,
+      overview: sql`${result.overviewJson}::jsonb`,
+      computeMs: Number.isFinite(result.computeMs) && result.computeMs >= 0 ? result.computeMs : 0,
+    });
+    return;
+  }
+  await tx.execute(sql`
+    insert into ${results} (revision_id, engine_version, content_hash, result, overview, compute_ms)
+    select ${revisionId}, engine_version, content_hash, result, overview, compute_ms from ${results} where id = ${result.resultId}`);
+}
+
+/**
+ * A stored result matching `where`, with the summary columns read inside PostgreSQL so the result
+ * itself never travels.
+ */
+async function findStoredResult(executor: Executor, where: SQL | undefined, document: Configuration): Promise<StoredResult | null> {
+  const [stored] = await executor
     .select({
+      id: results.id,
       lightest: sql<string | null>`${results.result} -> 'lightest' -> 0 ->> 'massSquared'`,
       supercharges: sql<number | null>`(${results.result} ->> 'supercharges')::int`,
       tachyonic: sql<boolean>`jsonb_path_exists(${results.result}, '$.sectors[*] ? (@.tachyonic == true)')`,
     })
     .from(results)
-    .where(and(eq(results.revisionId, revisionId), eq(results.engineVersion, ENGINE_VERSION)))
+    .where(where)
     .limit(1);
   if (!stored) return null;
   const lightest = stored.lightest === null ? Number.NaN : parseResultNumber(stored.lightest);
   const lightestMassSquared = Number.isFinite(lightest) ? lightest : null;
   return {
     source: "stored",
-    revisionId,
+    resultId: stored.id,
     summary: {
       stackCount: document.stacks.length,
       lightestMassSquared,
@@ -75,19 +134,3 @@ export async function reusableResult(tx: Transaction, revisionId: string, docume
   };
 }
 
-/** Stores the result of a new revision inside the revision's transaction. */
-export async function storeResult(tx: Transaction, revisionId: string, result: RevisionResult): Promise<void> {
-  if (result.source === "fresh") {
-    await tx.insert(results).values({
-      revisionId,
-      engineVersion: result.engineVersion,
-      // The JSON text goes to PostgreSQL as it is: no parse and re-serialise on the request thread.
-      result: sql`${result.json}::jsonb`,
-      computeMs: Number.isFinite(result.computeMs) && result.computeMs >= 0 ? result.computeMs : 0,
-    });
-    return;
-  }
-  await tx.execute(sql`
-    insert into ${results} (revision_id, engine_version, result, compute_ms)
-    select ${revisionId}, engine_version, result, compute_ms from ${results} where revision_id = ${result.revisionId}`);
-}

@@ -1,6 +1,7 @@
 import "server-only";
 import { and, eq, isNull, sql } from "drizzle-orm";
 import type { Configuration } from "../../lib/boundary/types";
+import { configurationTitleMaxLength } from "../../lib/validations/configuration";
 import type { ResultSummary } from "../../lib/spectrum";
 import { ConflictError, NotFoundError, ValidationError } from "../../lib/errors";
 import type { Transaction } from "../index";
@@ -13,15 +14,13 @@ import { storeResult, type RevisionResult } from "./results";
  * its result. Internal to db/queries.
  */
 
-/** Longest configuration title, in characters. */
-const maxTitleLength = 200;
 
 /** The trimmed title of a document, or a 422 at `document.title`. */
 export function requireTitle(document: Configuration): string {
   const title = document.title.trim();
   if (!title) throw ValidationError.at(["document", "title"], "Give the configuration a title.");
-  if (title.length > maxTitleLength) {
-    throw ValidationError.at(["document", "title"], `Use at most ${maxTitleLength} characters.`);
+  if (title.length > configurationTitleMaxLength) {
+    throw ValidationError.at(["document", "title"], `Use at most ${configurationTitleMaxLength} characters.`);
   }
   return title;
 }

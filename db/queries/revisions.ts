@@ -15,7 +15,7 @@ import {
   type RevisionDto,
   type RevisionSummaryDto,
 } from "./configuration-dtos";
-import { computeResult, reusableResult } from "./results";
+import { resultForDocument } from "./results";
 import { addRevision, bumpVersion, documentColumns } from "./revision-writes";
 
 /** Options of `restoreRevision`. */
@@ -74,22 +74,6 @@ export async function getRevisionByNumber(
   );
 }
 
-/** The stored engine result of a revision (viewer or better on its configuration). */
-export async function getResultForRevision(actor: Actor | null, revisionId: string): Promise<ResultDto> {
-  requireActor(actor);
-  assertUuid(revisionId, "revision");
-  const [found] = await db
-    .select({ configurationId: revisions.configurationId, stored: results })
-    .from(revisions)
-    .leftJoin(results, eq(results.revisionId, revisions.id))
-    .where(eq(revisions.id, revisionId))
-    .limit(1);
-  if (!found) throw new NotFoundError("No such revision.");
-  await requireConfigurationRole(db, actor, found.configurationId, "viewer");
-  if (!found.stored) throw new NotFoundError("This revision has no stored result yet.");
-  return toResultDto(found.stored);
-}
-
 /** A revision that belongs to the given configuration (404 otherwise, also for revisions of others). */
 export async function getRevisionOfConfiguration(
   actor: Actor | null,
@@ -122,7 +106,7 @@ export async function restoreRevision(
       .where(and(eq(revisions.id, revisionId), eq(revisions.configurationId, configurationId)))
       .limit(1);
     if (!old) throw new NotFoundError("No such revision.");
-    const result = (await reusableResult(tx, old.id, old.document)) ?? (await computeResult(old.document));
+    const result = await resultForDocument(tx, old.document, { sameAs: { revisionId: old.id } });
     const bumped = await bumpVersion(
       tx,
       configurationId,

@@ -29,7 +29,7 @@ describe("checkConfiguration", () => {
     expect(checkConfiguration(config())).toEqual([]);
   });
 
-  it("rejects odd p in IIA and names the stack (physics.md: IIA even p only)", () => {
+  it("rejects odd p in IIA and names the stack (IIA has BPS Dp-branes for even p only: common practice; Polchinski vol. 2, chapter 13, from memory)", () => {
     const problems = checkConfiguration(config({ stacks: [stack("odd", [1, 2, 3], { label: "probe" })] }));
     expect(problems).toEqual([
       {
@@ -39,7 +39,7 @@ describe("checkConfiguration", () => {
     ]);
   });
 
-  it("rejects even p in IIB (physics.md: IIB odd p only)", () => {
+  it("rejects even p in IIB (IIB has BPS Dp-branes for odd p only: common practice; Polchinski vol. 2, chapter 13, from memory)", () => {
     const problems = checkConfiguration(config({ theory: "IIB", stacks: [stack("d0", [])] }));
     expect(problems).toHaveLength(1);
     expect(problems[0]?.message).toContain('"d0"');
@@ -167,7 +167,7 @@ describe("checkConfiguration", () => {
 });
 
 describe("configurationWarnings", () => {
-  it("cautions about D8 and D9 stacks (physics.md)", () => {
+  it("cautions about D8 and D9 stacks (RR tadpoles and a varying dilaton: common practice)", () => {
     const warnings = configurationWarnings(config());
     expect(warnings).toHaveLength(1);
     expect(warnings[0]).toContain('Stack "w" is a D8');
@@ -176,7 +176,7 @@ describe("configurationWarnings", () => {
     expect(d9[0]).toContain("tadpole");
   });
 
-  it("warns about a non-critical bosonic dimension (physics.md)", () => {
+  it("warns about a non-critical bosonic dimension (the level-1 vector is massless only at D = 26: Polchinski vol. 1, section 1.3, from memory)", () => {
     const warnings = configurationWarnings(config({ theory: "bosonic", dimension: 6, stacks: [] }));
     expect(warnings).toHaveLength(1);
     expect(warnings[0]).toContain("D = 6");

@@ -19,7 +19,7 @@ describe("classifyPair", () => {
     expect(r.dd).toBe(1);
     expect(r.nd).toBe(4);
     expect(r.dn).toBe(0);
-    // nu counts every axis that is N for one stack and D for the other (physics.md).
+    // nu counts every axis that is N for one stack and D for the other (Polchinski vol. 2, section 13.4, from memory).
     expect(r.nu).toBe(4);
     expect(r.separationVector).toEqual([{ axis: 9, delta: 3.5 }]);
     expect(r.separation).toBe(3.5);
@@ -41,7 +41,7 @@ describe("classifyPair", () => {
     expect(r.axes[8]).toEqual({ axis: 9, type: "DD", positionA: 0, positionB: 3.5 });
   });
 
-  it("measures y over DD axes only, ignoring offsets along ND axes (physics.md)", () => {
+  it("measures y over DD axes only, ignoring offsets along ND axes (the Neumann end slides freely: common practice)", () => {
     // A D0 at x1 = 5 and a D1 along axis 1: the D0 sits on the D1's line, so y = 0 despite the offset.
     const d0 = { worldvolume: [], position: { "1": 5, "2": 3, "3": 4 } };
     const d1 = { worldvolume: [1], position: {} };

@@ -4,7 +4,7 @@ import { bosonModing, expandAxis, expandPair, fermionModing } from "./expansion"
 import { formatDecimal } from "./format";
 
 describe("bosonModing", () => {
-  it("is integer on NN/DD and half-integer on ND/DN (physics.md; Polchinski vol. 2, 13.4, from memory)", () => {
+  it("is integer on NN/DD and half-integer on ND/DN (Polchinski vol. 2, section 13.4, from memory)", () => {
     expect(bosonModing("NN")).toBe("integer");
     expect(bosonModing("DD")).toBe("integer");
     expect(bosonModing("ND")).toBe("half-integer");
@@ -13,7 +13,7 @@ describe("bosonModing", () => {
 });
 
 describe("fermionModing", () => {
-  it("is NS half-integer / R integer on NN and DD, swapped on ND and DN (physics.md)", () => {
+  it("is NS half-integer / R integer on NN and DD, swapped on ND and DN (Polchinski vol. 2, section 13.4, from memory)", () => {
     expect(fermionModing("NN")).toEqual({ NS: "half-integer", R: "integer" });
     expect(fermionModing("DD")).toEqual({ NS: "half-integer", R: "integer" });
     expect(fermionModing("ND")).toEqual({ NS: "integer", R: "half-integer" });
@@ -22,7 +22,7 @@ describe("fermionModing", () => {
 });
 
 describe("expandAxis", () => {
-  it("substitutes the endpoints into the DD expansion (physics.md, DD form)", () => {
+  it("substitutes the endpoints into the DD expansion (physics.md DD form; Polchinski vol. 1, chapter 8, from memory)", () => {
     const expansion = expandAxis({ axis: 5, type: "DD", positionA: 0, positionB: 3.5 }, "bosonic");
     expect(expansion.latex).toBe(
       "X^{5}(\\tau,\\sigma) = 0 + (3.5 - 0)\\frac{\\sigma}{\\pi} + \\sqrt{2\\alpha'}\\sum_{n\\neq0}\\frac{\\alpha_n}{n}e^{-in\\tau}\\sin n\\sigma",

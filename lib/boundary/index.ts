@@ -8,7 +8,14 @@
 
 export type * from "./types";
 
-export { computeSpectrum, computeSector, createSectorContext, type SectorContext } from "./spectrum";
+export {
+  computeSpectrum,
+  tryComputeSpectrum,
+  computeSector,
+  createSectorContext,
+  type SectorContext,
+  type SpectrumAttempt,
+} from "./spectrum";
 export {
   checkConfiguration,
   configurationWarnings,
@@ -28,6 +35,7 @@ export {
 } from "./classify";
 export { expandAxis, expandPair, bosonModing, fermionModing, lightConeAxis } from "./expansion";
 export { formatDecimal, listInWords } from "./format";
+export { resultInputKey } from "./result-key";
 export {
   ENGINE_VERSION,
   CONVENTIONS_TEXT,

@@ -122,7 +122,7 @@ describe("seriesProduct", () => {
 
   it("satisfies Jacobi's identity theta_3^4 = theta_2^4 + theta_4^4 exactly to order t^400", () => {
     // Divided by prod (1 - t^2n)^4: prod (1 + t^(2n-1))^8 - prod (1 - t^(2n-1))^8 = 16 t prod (1 + t^2n)^8
-    // (Whittaker and Watson 21.36; Green, Schwarz and Witten vol. 1, from memory).
+    // (Whittaker and Watson 21.36; Green, Schwarz and Witten vol. 1, chapter 4; both from memory).
     const maxIndex = 400;
     const theta3Part = seriesProduct(modeFactors("half-integer", 1, 8, maxIndex), maxIndex);
     const theta4Part = seriesProduct(modeFactors("half-integer", -1, 8, maxIndex), maxIndex);

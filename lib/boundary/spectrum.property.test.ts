@@ -175,7 +175,7 @@ describe("computeSpectrum properties", () => {
     );
   });
 
-  it("gives NS and R the same totals at every alpha' M^2 for nu = 0 and 4 with equal orientation (physics.md)", () => {
+  it("gives NS and R the same totals at every alpha' M^2 for nu = 0 and 4 with equal orientation (Green, Schwarz and Witten vol. 1, chapter 4; Polchinski vol. 2, section 13.4; both from memory)", () => {
     fc.assert(
       fc.property(pairWithNu([0, 4]), ({ theory, a, b }) => {
         const levels = 4;
@@ -193,7 +193,7 @@ describe("computeSpectrum properties", () => {
     );
   });
 
-  it("gives NS and R the same totals at nu = 8 except for the single R ground state (physics.md)", () => {
+  it("gives NS and R the same totals at nu = 8 except for the single R ground state (Polchinski vol. 2, section 13.4, from memory)", () => {
     fc.assert(
       fc.property(pairWithNu([8]), ({ theory, a, b }) => {
         const result = computeSpectrum(configurationOf(theory, [a, b], 4));

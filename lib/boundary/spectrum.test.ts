@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { ConfigurationError } from "./check";
+import { ConfigurationError, checkConfiguration } from "./check";
 import { parseRational, rationalToNumber } from "./rational";
-import { computeSpectrum } from "./spectrum";
+import { computeSpectrum, tryComputeSpectrum } from "./spectrum";
 import type { Configuration, Sector, Stack } from "./types";
 
 const axes = (from: number, to: number): number[] => Array.from({ length: to - from + 1 }, (_, i) => from + i);
@@ -29,7 +29,7 @@ describe("computeSpectrum", () => {
   describe("bosonic string, D = 26", () => {
     const d25 = config("bosonic", [stack("a", axes(1, 25))], { levels: 3 });
 
-    it("gives the tachyon at alpha' M^2 = -1 and 24 massless vector states at level 1 (Polchinski vol. 1, common practice, from memory)", () => {
+    it("gives the tachyon at alpha' M^2 = -1 and 24 massless vector states at level 1 (Polchinski vol. 1, section 1.3, from memory)", () => {
       const [sector] = computeSpectrum(d25).sectors;
       expect(sector?.zeroPoint).toEqual({ bosonic: "-1" });
       expect(sector?.levels[0]?.massSquared).toBe("-1");
@@ -53,7 +53,7 @@ describe("computeSpectrum", () => {
       ]);
     });
 
-    it("splits the 24 massless states of a D3 into 2 vector polarisations and 22 position scalars (physics.md: NN vector, DD scalar)", () => {
+    it("splits the 24 massless states of a D3 into 2 vector polarisations and 22 position scalars (NN vector, DD scalar: Polchinski vol. 1, chapter 8, from memory)", () => {
       const [sector] = computeSpectrum(config("bosonic", [stack("d3", [1, 2, 3])])).sectors;
       expect(sector?.massless[0]?.description).toBe(
         "vector with 2 polarisations (NN axes 1-3 less one light-cone direction) and 22 scalars (positions on DD axes 4-25)",
@@ -65,7 +65,7 @@ describe("computeSpectrum", () => {
       const result = computeSpectrum(config("bosonic", [stack("a", [1, 2]), stack("b", [1, 2], { anti: true })]));
       expect(result.supercharges).toBeNull();
       expect(result.bps).toBe(false);
-      // Coincident and the flag ignored: U(1) x U(1) -> U(2) (physics.md, Chan-Paton factors).
+      // Coincident and the flag ignored: U(1) x U(1) -> U(2) (Chan-Paton factors, common practice; Polchinski vol. 1, chapter 8, from memory).
       expect(result.gaugeGroup).toBe("U(2)");
       expect(result.warnings.some((warning) => warning.includes("antibrane flag"))).toBe(true);
     });
@@ -74,8 +74,9 @@ describe("computeSpectrum", () => {
   describe("type II, nu = 0", () => {
     const single = config("IIB", [stack("d3", [1, 2, 3])], { levels: 3 });
 
-    it("gives 8, 128, 1152 states at alpha' M^2 = 0, 1, 2 in both NS and R (Green, Schwarz and Witten vol. 1, from memory)", () => {
+    it("gives 8, 128, 1152 states at alpha' M^2 = 0, 1, 2 in both NS and R (Green, Schwarz and Witten vol. 1, chapter 4, from memory)", () => {
       const [sector] = computeSpectrum(single).sectors;
+      // a_NS = -1/2, a_R = 0 at nu = 0 (Polchinski vol. 2, section 13.4, from memory).
       expect(sector?.zeroPoint).toEqual({ NS: "-1/2", R: "0" });
       const expected = [
         ["0", "8"],
@@ -89,21 +90,22 @@ describe("computeSpectrum", () => {
       expect(sector?.tachyonic).toBe(false);
     });
 
-    it("keeps 16 supercharges for one stack (physics.md check value)", () => {
+    it("keeps 16 supercharges for one stack: a D-brane is half-BPS (Polchinski vol. 2, section 13.4, from memory)", () => {
       const result = computeSpectrum(single);
       expect(result.supercharges).toBe(16);
       expect(result.bps).toBe(true);
       expect(result.sectors[0]?.supersymmetric).toBe(true);
     });
 
-    it("gives the brane-antibrane NS ground state at -1/2 and y_c = pi sqrt 2 ~ 4.443 (Banks and Susskind 1995, from memory)", () => {
+    it("gives the brane-antibrane NS ground state at -1/2 and y_c = pi sqrt 2 ~ 4.443 (Banks and Susskind 1995, hep-th/9511194, from memory)", () => {
       const result = computeSpectrum(
         config("IIB", [stack("b", [1, 2, 3]), stack("c", [1, 2, 3], { anti: true, position: { "9": 1 } })]),
       );
       const pair = sectorOf(result.sectors, "b", "c");
       expect(pair.criticalSeparation).toBeCloseTo(Math.PI * Math.SQRT2, 12);
       expect(pair.criticalSeparation).toBeCloseTo(4.443, 3);
-      // y = 1 < y_c: still tachyonic; alpha' M^2 = 1 / (4 pi^2) - 1/2 (physics.md mass formula).
+      // y = 1 < y_c: still tachyonic; alpha' M^2 = (y / 2 pi)^2 - 1/2 = 1 / (4 pi^2) - 1/2 (stretched-string
+      // mass formula, Polchinski vol. 1, chapter 8, from memory).
       expect(pair.tachyonic).toBe(true);
       expect(Number(pair.levels[0]?.massSquared)).toBeCloseTo(1 / (4 * Math.PI ** 2) - 0.5, 11);
       expect(pair.levels[0]?.level).toBe("0");
@@ -113,12 +115,13 @@ describe("computeSpectrum", () => {
       const coincident = computeSpectrum(config("IIB", [stack("b", [1, 2, 3]), stack("c", [1, 2, 3], { anti: true })]));
       const exact = sectorOf(coincident.sectors, "b", "c");
       expect(rowsOf(exact, "NS")[0]).toEqual(["-1/2", "1"]);
-      // The GSO projection of the opposite orientation removes the massless vector (physics.md).
+      // The GSO projection of the opposite orientation keeps the NS tachyon and removes the massless vector
+      // (Banks and Susskind 1995, from memory; Polchinski vol. 2, section 13.4, from memory).
       expect(exact.massless.map((content) => content.sector)).toEqual(["R"]);
       expect(coincident.gaugeGroup).toBe("U(1) x U(1)");
     });
 
-    it("enhances coincident stacks of the same orientation to U(N_a + N_b) (physics.md)", () => {
+    it("enhances coincident stacks of the same orientation to U(N_a + N_b) (common practice; Polchinski vol. 1, chapter 8, from memory)", () => {
       const result = computeSpectrum(
         config("IIB", [stack("x", [1, 2, 3], { count: 2 }), stack("y", [1, 2, 3], { position: { "9": 0 } })]),
       );
@@ -126,12 +129,12 @@ describe("computeSpectrum", () => {
       const pair = sectorOf(result.sectors, "x", "y");
       expect(pair.notes).toContain("Coincident stacks: U(2) x U(1) is enhanced to U(3).");
       expect(pair.massless[0]?.description).toContain("bifundamental vector with 2 polarisations");
-      // Chan-Paton: 2 N_a N_b = 4 over both orientations; 8 states each (physics.md).
+      // Chan-Paton: N_a N_b = 2 per orientation, 4 over both; 8 massless states each (common practice).
       expect(pair.chanPaton).toBe(4);
       expect(pair.levels[0]?.withChanPaton).toBe("32");
     });
 
-    it("gives W-boson-like masses M = y / (2 pi alpha') for separated stacks (physics.md)", () => {
+    it("gives W-boson-like masses M = y / (2 pi alpha') for separated stacks (string tension 1 / (2 pi alpha'); Polchinski vol. 1, chapter 8, from memory)", () => {
       const y = 2 * Math.PI;
       const result = computeSpectrum(
         config("IIB", [stack("x", [1, 2, 3], { count: 2 }), stack("y", [1, 2, 3], { position: { "6": y } })], {
@@ -151,7 +154,7 @@ describe("computeSpectrum", () => {
   });
 
   describe("type II, nu > 0", () => {
-    it("gives 8 supercharges and equal NS and R counts at nu = 4 (physics.md; Polchinski vol. 2 section 13.4, from memory)", () => {
+    it("gives 8 supercharges and equal NS and R counts at nu = 4 (Polchinski vol. 2, section 13.4, from memory)", () => {
       const result = computeSpectrum(config("IIA", [stack("w", axes(1, 8)), stack("p", axes(1, 4))], { levels: 2 }));
       const pair = sectorOf(result.sectors, "p", "w");
       expect(pair.nu).toBe(4);
@@ -160,7 +163,7 @@ describe("computeSpectrum", () => {
       expect(pair.supersymmetric).toBe(true);
     });
 
-    it("puts the single R ground state at nu = 8 in one orientation and says so (physics.md; Polchinski vol. 2 section 13.4, from memory)", () => {
+    it("puts the single R ground state at nu = 8 in one orientation and says so (Polchinski vol. 2, section 13.4, from memory)", () => {
       const result = computeSpectrum(config("IIA", [stack("w", axes(1, 8)), stack("z", [])], { levels: 1 }));
       const pair = sectorOf(result.sectors, "w", "z");
       expect(pair.zeroPoint).toEqual({ NS: "1/2", R: "0" });
@@ -169,14 +172,14 @@ describe("computeSpectrum", () => {
       expect(ground?.withChanPaton).toBe("1");
       expect(ground?.note).toContain("unpaired R ground state");
       expect(pair.massless).toEqual([expect.objectContaining({ sector: "R", states: "1" })]);
-      expect(result.supercharges).toBe(8);
+      expect(result.supercharges).toBe(8); // nu = 8 preserves a quarter (Polchinski vol. 2, section 13.4, from memory)
     });
 
-    it("finds a tachyon at nu = 2 with a = -1/4 and no supersymmetry (physics.md; Polchinski vol. 2 section 13.4, from memory)", () => {
+    it("finds a tachyon at nu = 2 with a = -1/2 + nu/8 = -1/4 and no supersymmetry (Polchinski vol. 2, section 13.4, from memory)", () => {
       const result = computeSpectrum(config("IIA", [stack("d2", [1, 2]), stack("d0", [], { position: { "5": 1 } })]));
       const pair = sectorOf(result.sectors, "d0", "d2");
       expect(pair.zeroPoint.NS).toBe("-1/4");
-      // y_c = 2 pi sqrt(1/4) = pi.
+      // y_c = 2 pi sqrt(-a) = 2 pi sqrt(1/4) = pi, where (y / 2 pi)^2 + a reaches 0 (mass formula above).
       expect(pair.criticalSeparation).toBeCloseTo(Math.PI, 12);
       expect(pair.supersymmetric).toBe(false);
       expect(result.supercharges).toBe(0);
@@ -244,12 +247,12 @@ describe("computeSpectrum", () => {
       const result = computeSpectrum(config("IIA", []));
       expect(result.sectors).toEqual([]);
       expect(result.gaugeGroup).toBe("none");
-      expect(result.supercharges).toBe(32);
+      expect(result.supercharges).toBe(32); // type II in empty space (common practice)
       expect(result.bps).toBe(false);
       expect(result.warnings).toContain("The configuration has no stacks yet, so there are no open strings.");
     });
 
-    it("handles a D0 with itself: 9 position directions, 8 light-cone states", () => {
+    it("handles a D0 with itself: 9 position directions, 8 light-cone states (common practice: D - 2 transverse polarisations)", () => {
       const [sector] = computeSpectrum(config("IIA", [stack("z", [])])).sectors;
       expect(sector?.nn).toBe(0);
       expect(sector?.dd).toBe(9);
@@ -261,7 +264,7 @@ describe("computeSpectrum", () => {
       const d9 = computeSpectrum(config("IIB", [stack("f", axes(1, 9), { count: 32 })]));
       expect(d9.warnings[0]).toContain("D9");
       expect(d9.sectors[0]?.dd).toBe(0);
-      expect(d9.sectors[0]?.chanPaton).toBe(1024);
+      expect(d9.sectors[0]?.chanPaton).toBe(1024); // N^2 = 32^2 states of the U(32) adjoint (common practice)
       expect(d9.sectors[0]?.massless[0]?.description).toBe(
         "vector with 8 polarisations (NN axes 1-9 less one light-cone direction)",
       );
@@ -273,7 +276,7 @@ describe("computeSpectrum", () => {
       const brane = computeSpectrum(config("IIA", [stack("a", [1, 2])]));
       const anti = computeSpectrum(config("IIA", [stack("a", [1, 2], { anti: true })]));
       expect(anti.sectors).toEqual(brane.sectors);
-      expect(anti.supercharges).toBe(16);
+      expect(anti.supercharges).toBe(16); // an anti-D-brane alone is half-BPS too (Polchinski vol. 2, section 13.4, from memory)
     });
 
     it("keeps Chan-Paton totals exact for large counts", () => {
@@ -297,13 +300,13 @@ describe("computeSpectrum", () => {
       }
     });
 
-    it("warns about a non-critical bosonic dimension and uses a = -(D - 2)/24 (physics.md; Polchinski vol. 2 section 13.4, from memory)", () => {
+    it("warns about a non-critical bosonic dimension and uses a = -(D - 2)/24 (Polchinski vol. 1, section 1.3, from memory)", () => {
       const result = computeSpectrum(config("bosonic", [stack("a", [1, 2])], { dimension: 6, levels: 1 }));
       expect(result.warnings[0]).toContain("D = 6");
       expect(result.dimension).toBe(6);
       const [sector] = result.sectors;
       expect(sector?.zeroPoint.bosonic).toBe("-1/6");
-      // Level 1 has D - 2 = 4 states and is massive away from D = 26.
+      // D = 6: a = -4/24 = -1/6; level 1 has D - 2 = 4 states alpha_{-1}^i and is massive away from D = 26.
       expect(rowsOf(sector as Sector, "bosonic")).toEqual([
         ["-1/6", "1"],
         ["5/6", "4"],
@@ -327,5 +330,26 @@ describe("computeSpectrum", () => {
       ]);
       expect(sector?.massless.map((content) => content.sector)).toEqual(["NS", "R"]);
     });
+  });
+});
+
+describe("tryComputeSpectrum", () => {
+  it("returns the result computeSpectrum gives for a valid configuration, with no problems", () => {
+    const valid = config("IIA", [stack("a", axes(1, 4)), stack("b", axes(1, 4), { anti: true, position: { "9": 2 } })]);
+    const attempt = tryComputeSpectrum(valid);
+    expect(attempt.problems).toEqual([]);
+    expect(attempt.result).toEqual(computeSpectrum(valid));
+  });
+
+  it("returns every problem checkConfiguration finds instead of throwing, and no result", () => {
+    const bad = config("IIA", [stack("a", [1]), stack("a", [1, 2])], { levels: 500 });
+    const attempt = tryComputeSpectrum(bad);
+    expect(attempt.result).toBeNull();
+    expect(attempt.problems).toEqual(checkConfiguration(bad));
+    expect(attempt.problems.length).toBeGreaterThan(1);
+  });
+
+  it("still throws a RangeError for an invalid lightestCount", () => {
+    expect(() => tryComputeSpectrum(config("IIB", []), { lightestCount: 1.5 })).toThrow(RangeError);
   });
 });

@@ -14,7 +14,15 @@
  * the document nor anything else outside the configuration changes the result.
  */
 
-import { ConfigurationError, checkConfiguration, compareStackIds, configurationWarnings, describeStack, dimensionOf } from "./check";
+import {
+  ConfigurationError,
+  checkConfiguration,
+  compareStackIds,
+  configurationWarnings,
+  describeStack,
+  dimensionOf,
+  type ConfigurationProblem,
+} from "./check";
 import { classifyPair, type PairClassification } from "./classify";
 import { CONVENTIONS_TEXT, ENGINE_VERSION } from "./constants";
 import { oscillatorDegeneracies, projectedDegeneracies, type OrientedCounts } from "./degeneracy";
@@ -69,8 +77,39 @@ const defaultLightestCount = 10;
  * result.sectors[0].levels.map((row) => [row.massSquared, row.states]) // => [["-1", "1"], ["0", "24"]]
  */
 export function computeSpectrum(configuration: Configuration, options: ComputeSpectrumOptions = {}): SpectrumResult {
+  const attempt = tryComputeSpectrum(configuration, options);
+  if (attempt.result === null) throw new ConfigurationError(attempt.problems);
+  return attempt.result;
+}
+
+/** What {@link tryComputeSpectrum} returns: either the problems found, or the result. */
+export type SpectrumAttempt =
+  | { problems: ConfigurationProblem[]; result: null }
+  | { problems: []; result: SpectrumResult };
+
+/**
+ * Checks a configuration once and computes its spectrum when it has no problems: the same checks
+ * and result as `computeSpectrum`, for callers that show the problems instead of catching them
+ * (the designer's live preview validates each keystroke with this single pass).
+ *
+ * @param configuration - A configuration document (format 1); it is validated first and not mutated.
+ * @param options - As for `computeSpectrum`.
+ * @returns `{ problems, result: null }` with every problem `checkConfiguration` finds (at least
+ *   one), or `{ problems: [], result }` with the result `computeSpectrum` would return.
+ * @throws RangeError for an invalid `lightestCount` (problems of the configuration are returned, not thrown).
+ * @example
+ * tryComputeSpectrum({ format: 1, title: "t", theory: "IIA", stringScaleGeV: null, levels: 1,
+ *   stacks: [{ id: "a", label: "", count: 1, anti: false, worldvolume: [1], position: {} }] }).problems[0]?.path
+ * // => ["stacks", 0, "worldvolume"]
+ */
+export function tryComputeSpectrum(configuration: Configuration, options: ComputeSpectrumOptions = {}): SpectrumAttempt {
   const problems = checkConfiguration(configuration);
-  if (problems.length > 0) throw new ConfigurationError(problems);
+  if (problems.length > 0) return { problems, result: null };
+  return { problems: [], result: computeCheckedSpectrum(configuration, options) };
+}
+
+/** The spectrum of a configuration that `checkConfiguration` has just passed. */
+function computeCheckedSpectrum(configuration: Configuration, options: ComputeSpectrumOptions): SpectrumResult {
   const lightestCount = options.lightestCount ?? defaultLightestCount;
   if (!Number.isInteger(lightestCount) || lightestCount < 0) {
     throw new RangeError(`lightestCount must be a whole number of at least 0, got ${String(lightestCount)}`);

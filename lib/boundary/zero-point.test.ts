@@ -68,18 +68,19 @@ describe("zeta values behind the constants", () => {
 
 describe("zeroPointEnergy", () => {
   it("gives a = -1 for the critical bosonic string", () => {
-    // Bosonic open-string tachyon alpha' M^2 = -1 (Polchinski vol. 1, from memory; physics.md check value).
+    // Bosonic open-string tachyon alpha' M^2 = -1 (Polchinski vol. 1, section 1.3, from memory).
     expect(formatRational(zeroPointEnergy("bosonic", { dimension: bosonicCriticalDimension, nu: 0 }))).toBe("-1");
   });
 
   it("gives a = -1/2 in NS and 0 in R at nu = 0", () => {
-    // NS tachyon at alpha' M^2 = -1/2 before GSO (Green, Schwarz and Witten vol. 1, from memory).
+    // NS tachyon at alpha' M^2 = -1/2 before GSO, massless R ground state (Green, Schwarz and Witten vol. 1,
+    // chapter 4, from memory; Polchinski vol. 2, section 10.2, from memory).
     expect(formatRational(zeroPointEnergy("NS", { dimension: 10, nu: 0 }))).toBe("-1/2");
     expect(formatRational(zeroPointEnergy("R", { dimension: 10, nu: 0 }))).toBe("0");
   });
 
   it("matches the closed bosonic formula a = -(D - 2)/24 + nu/16 for every D and nu", () => {
-    // Polchinski vol. 2, section 13.4, from memory.
+    // nu/16 = nu (1/48 + 1/24) per ND direction on top of -(D - 2)/24 (Polchinski vol. 2, section 13.4, from memory).
     for (let dimension = 2; dimension <= 30; dimension += 1) {
       for (let nu = 0; nu <= dimension - 2; nu += 1) {
         const closed = addRational(rational(-(dimension - 2), 24), rational(nu, 16));
@@ -104,7 +105,7 @@ describe("zeroPointEnergy", () => {
   });
 
   it("gives a = -1/2 for a critical bosonic pair at nu = 8", () => {
-    // -(24)/24 + 8/16 = -1/2 by the closed formula above (hand-checked).
+    // -(24)/24 + 8/16 = -1/2 by the closed formula above (Polchinski vol. 2, section 13.4, from memory).
     expect(formatRational(zeroPointEnergy("bosonic", { dimension: 26, nu: 8 }))).toBe("-1/2");
   });
 });
@@ -120,7 +121,8 @@ describe("zeroPointContributions", () => {
   it("swaps the fermion moding on ND axes in NS", () => {
     const rows = zeroPointContributions("NS", { dimension: 10, nu: 2 });
     const summary = rows.map((row) => [row.field, row.moding, row.directions, formatRational(row.total)]);
-    // 6 NN/DD + 2 ND directions; NS fermions integer-moded on ND axes (physics.md, mode expansions).
+    // 6 NN/DD + 2 ND directions; NS fermions integer-moded on ND axes (Polchinski vol. 2, section 13.4, from memory).
+    // Totals: 6 (-1/24), 2 (1/48), 2 (1/24), 6 (-1/48), from the per-direction values checked above.
     expect(summary).toEqual([
       ["boson", "integer", 6, "-1/4"],
       ["boson", "half-integer", 2, "1/24"],
@@ -145,6 +147,7 @@ describe("zeroPointContributions", () => {
         const rows = zeroPointContributions(sector, { dimension: 10, nu });
         const count = (field: string) =>
           rows.filter((row) => row.field === field).reduce((sum, row) => sum + row.directions, 0);
+        // D - 2 = 8 light-cone directions in ten dimensions (common practice).
         expect(count("boson")).toBe(8);
         expect(count("fermion")).toBe(8);
       }

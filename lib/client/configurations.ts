@@ -2,9 +2,11 @@
  * react-query factories and fetchers for configurations, revisions and stored results.
  * The browser reads and writes configurations only through these.
  */
-import { queryOptions, useMutation, useQueryClient } from "@tanstack/react-query";
+import { infiniteQueryOptions, queryOptions, useMutation, useQueryClient } from "@tanstack/react-query";
 import type { ConfigurationDto, ConfigurationPage, ConfigurationSummaryDto, ResultDto, RevisionDto, RevisionSummaryDto } from "@/db/queries/configuration-dtos";
-import type { Configuration } from "@/lib/boundary/types";
+import type { ResultHeadDto } from "@/db/queries/result-reads";
+import type { Configuration, Sector } from "@/lib/boundary/types";
+import type { SectorOverviewPage } from "@/lib/spectrum";
 import { apiFetch, type Jsonified } from "@/lib/client/api-client";
 import type { ListConfigurationsQuery } from "@/lib/validations/configuration-api";
 
@@ -13,6 +15,11 @@ export type ConfigurationSummaryJson = Jsonified<ConfigurationSummaryDto>;
 export type RevisionSummaryJson = Jsonified<RevisionSummaryDto>;
 export type RevisionJson = Jsonified<RevisionDto>;
 export type ResultJson = Jsonified<ResultDto>;
+export type ResultHeadJson = Jsonified<ResultHeadDto>;
+export type SectorOverviewPageJson = Jsonified<SectorOverviewPage>;
+
+/** Sector overviews fetched per page of the results page's list. */
+export const sectorPageSize = 100;
 export type ConfigurationPageJson = Jsonified<ConfigurationPage> & { page: number; pageSize: number };
 
 /** Filters of a configuration list, as sent in the query string. */
@@ -52,6 +59,32 @@ export const configurationQueries = {
     queryOptions({
       queryKey: [...configurationQueries.all(), "revision", id, revisionId] as const,
       queryFn: () => apiFetch<RevisionJson>(`/api/configurations/${id}/revisions/${revisionId}`),
+      staleTime: Number.POSITIVE_INFINITY,
+    }),
+  resultHead: (id: string, revisionId: string) =>
+    queryOptions({
+      queryKey: [...configurationQueries.all(), "result-head", id, revisionId] as const,
+      queryFn: () => apiFetch<ResultHeadJson>(`/api/configurations/${id}/revisions/${revisionId}/result/overview`),
+      staleTime: Number.POSITIVE_INFINITY,
+    }),
+  resultSectorPages: (id: string, revisionId: string, filter: { search: string; tachyonicOnly: boolean }) =>
+    infiniteQueryOptions({
+      queryKey: [...configurationQueries.all(), "result-sector-pages", id, revisionId, filter] as const,
+      queryFn: ({ pageParam }) => {
+        const search = new URLSearchParams({ offset: String(pageParam), limit: String(sectorPageSize) });
+        if (filter.search) search.set("search", filter.search);
+        if (filter.tachyonicOnly) search.set("tachyonic", "true");
+        return apiFetch<SectorOverviewPageJson>(`/api/configurations/${id}/revisions/${revisionId}/result/sectors?${search.toString()}`);
+      },
+      initialPageParam: 0,
+      getNextPageParam: (last) => (last.offset + last.items.length < last.total ? last.offset + last.items.length : undefined),
+      staleTime: Number.POSITIVE_INFINITY,
+    }),
+  resultSector: (id: string, revisionId: string, index: number) =>
+    queryOptions({
+      queryKey: [...configurationQueries.all(), "result-sector", id, revisionId, index] as const,
+      queryFn: () => apiFetch<Sector>(`/api/configurations/${id}/revisions/${revisionId}/result/sectors/${index}`),
+      // Revisions are immutable, and so are their stored results.
       staleTime: Number.POSITIVE_INFINITY,
     }),
   result: (id: string, revisionId: string) =>

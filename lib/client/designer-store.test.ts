@@ -1,6 +1,18 @@
 import { beforeEach, describe, expect, it } from "vitest";
 import type { Configuration } from "@/lib/boundary/types";
-import { addStack, deleteStacks, moveStacks, setLabel, toggleAxis } from "@/lib/designer/document";
+import {
+  renameStack,
+  setAnti,
+  setColour,
+  setCount,
+  setLabel,
+  setLevels,
+  setPosition,
+  setStringScale,
+  setTheory,
+  setTitle,
+  toggleAxis,
+} from "@/lib/designer/document";
 import { designerHistoryLimit, selectCanRedo, selectCanUndo, selectDocument, useDesignerStore } from "./designer-store";
 
 const start: Configuration = {
@@ -31,37 +43,137 @@ describe("load", () => {
   });
 });
 
-describe("edit", () => {
-  it("applies a reducer, marks the draft dirty and records an undo step", () => {
-    store().edit((doc) => addStack(doc));
-    expect(selectDocument(store()).stacks).toHaveLength(3);
+describe("document commands", () => {
+  it("apply their edit, mark the draft dirty and record an undo step", () => {
+    expect(store().addStack()).toBe("s1");
+    expect(selectDocument(store()).stacks.map((s) => s.id)).toEqual(["a", "b", "s1"]);
     expect(store().dirty).toBe(true);
     expect(selectCanUndo(store())).toBe(true);
-  });
-
-  it("ignores a refused edit (same reference): no undo step, not dirty", () => {
-    store().edit((doc) => toggleAxis(doc, "a", 0));
-    expect(store().dirty).toBe(false);
-    expect(selectCanUndo(store())).toBe(false);
-  });
-
-  it("merges edits of one gesture into a single undo step", () => {
-    for (let i = 0; i < 5; i++) store().edit((doc) => moveStacks(doc, ["a"], { "9": 0.5 }), { gesture: "drag-1" });
-    store().endGesture();
-    expect(selectDocument(store()).stacks[0]!.position).toEqual({ "9": 2.5 });
     store().undo();
     expect(selectDocument(store())).toBe(start);
   });
 
-  it("keeps at most the history limit of undo steps", () => {
-    for (let i = 0; i < designerHistoryLimit + 20; i++) store().edit((doc) => setLabel(doc, "a", `a${i}`));
+  it("ignore a refused edit (the same reference back): no undo step, not dirty", () => {
+    store().toggleAxis("a", 0); // time is not a spatial axis
+    store().setCount("a", 0);
+    store().renameStack("a", "b"); // taken
+    expect(store().addStack({ id: "a" })).toBeNull();
+    expect(selectDocument(store())).toBe(start);
+    expect(store().dirty).toBe(false);
+    expect(selectCanUndo(store())).toBe(false);
+  });
+
+  it("give the same document as the pure edits of lib/designer/document.ts", () => {
+    store().toggleAxis("a", 1);
+    store().setPosition("b", 8, 1.5);
+    store().setCount("a", 3);
+    store().setAnti("b", true);
+    store().setLabel("a", "probe");
+    store().setColour("a", "#AABBCC");
+    store().renameStack("b", "wall");
+    store().setTitle("Renamed");
+    store().setLevels(6);
+    store().setStringScale(1e16);
+    let expected = toggleAxis(start, "a", 1);
+    expected = setPosition(expected, "b", 8, 1.5);
+    expected = setCount(expected, "a", 3);
+    expected = setAnti(expected, "b", true);
+    expected = setLabel(expected, "a", "probe");
+    expected = setColour(expected, "a", "#AABBCC");
+    expected = renameStack(expected, "b", "wall");
+    expected = setTitle(expected, "Renamed");
+    expected = setLevels(expected, 6);
+    expected = setStringScale(expected, 1e16);
+    expect(selectDocument(store())).toEqual(expected);
+    expect(store().history.past).toHaveLength(10);
+  });
+
+  it("switch the theory, dropping axes that no longer exist", () => {
+    store().setTheory("bosonic");
+    store().setPosition("a", 20, 1);
+    store().setTheory("IIB");
+    expect(selectDocument(store())).toEqual(setTheory(setPosition(setTheory(start, "bosonic"), "a", 20, 1), "IIB"));
+    expect(selectDocument(store()).stacks[0]!.position).toEqual({});
+  });
+
+  it("select a new stack or new copies when asked, and keep the selection otherwise", () => {
+    store().select(["a"]);
+    store().addStack();
+    expect(store().selection).toEqual(["a"]);
+    const added = store().addStack({ position: { "9": 4 }, select: true });
+    expect(store().selection).toEqual([added]);
+    expect(selectDocument(store()).stacks.at(-1)!.position).toEqual({ "9": 4 });
+
+    const copies = store().duplicateStacks(["a", "b"], { shift: { "9": 1 }, select: true });
+    expect(copies).toHaveLength(2);
+    expect(store().selection).toEqual(copies);
+    const copyOfB = selectDocument(store()).stacks.find((s) => s.id === copies[1]);
+    expect(copyOfB?.position).toEqual({ "9": 3 });
+    expect(store().duplicateStacks(["ghost"])).toEqual([]);
+  });
+
+  it("delete stacks and drop them from the selection", () => {
+    store().select(["a", "b"]);
+    store().deleteStacks(["a"]);
+    expect(selectDocument(store()).stacks.map((s) => s.id)).toEqual(["b"]);
+    expect(store().selection).toEqual(["b"]);
+  });
+
+  it("move stacks by a step, snapped to the grid while snapping is on", () => {
+    store().setSnapping(true);
+    expect(store().gridStep).toBe(0.5);
+    store().moveStacks(["b"], { "9": 0.6 });
+    expect(selectDocument(store()).stacks[1]!.position).toEqual({ "9": 2.5 }); // 2 + 0.6, snapped to 0.5
+    store().setSnapping(false);
+    store().moveStacks(["a"], { "9": 0.123 });
+    expect(selectDocument(store()).stacks[0]!.position).toEqual({ "9": 0.123 });
+  });
+
+  it("make one undo step of typing into one field, and a new one for another field", () => {
+    for (const label of ["p", "pr", "pro"]) store().setLabel("a", label);
+    store().setLabel("b", "wall");
+    expect(store().history.past).toHaveLength(2);
+    store().undo();
+    expect(selectDocument(store()).stacks[0]!.label).toBe("pro");
+    store().undo();
+    expect(selectDocument(store())).toBe(start);
+  });
+
+  it("keep at most the history limit of undo steps", () => {
+    for (let i = 0; i < designerHistoryLimit + 20; i++) store().setAnti("a", i % 2 === 0);
     expect(store().history.past).toHaveLength(designerHistoryLimit);
+  });
+});
+
+describe("dragStacks", () => {
+  it("measures each offset from where the drag began and makes the drag one undo step", () => {
+    store().setSnapping(false);
+    for (const offset of [0.5, 1, 1.5]) store().dragStacks(["b"], { "9": offset }, "drag-1");
+    store().endGesture();
+    expect(selectDocument(store()).stacks[1]!.position).toEqual({ "9": 3.5 });
+    store().undo();
+    expect(selectDocument(store())).toBe(start);
+  });
+
+  it("starts a new drag from the document as the previous drag left it", () => {
+    store().setSnapping(false);
+    store().dragStacks(["b"], { "9": 1 }, "drag-1");
+    store().endGesture();
+    store().dragStacks(["b"], { "9": 1 }, "drag-2");
+    expect(selectDocument(store()).stacks[1]!.position).toEqual({ "9": 4 });
+    expect(store().history.past).toHaveLength(2);
+  });
+
+  it("returns to the starting document when the offset comes back to zero", () => {
+    store().dragStacks(["b"], { "9": 2 }, "drag-1");
+    store().dragStacks(["b"], { "9": 0 }, "drag-1");
+    expect(selectDocument(store())).toBe(start);
   });
 });
 
 describe("undo and redo", () => {
   it("walk the history and drop selected stacks that no longer exist", () => {
-    store().edit((doc) => addStack(doc, { id: "c" }));
+    store().addStack({ id: "c" });
     store().select(["c", "a"]);
     store().undo();
     expect(store().selection).toEqual(["a"]);
@@ -83,22 +195,22 @@ describe("select", () => {
 
   it("loses deleted stacks from the selection", () => {
     store().select(["a", "b"]);
-    store().edit((doc) => deleteStacks(doc, ["a"]));
+    store().deleteStacks(["a"]);
     expect(store().selection).toEqual(["b"]);
   });
 });
 
 describe("markSaved", () => {
   it("clears the dirty flag and records the new version", () => {
-    store().edit((doc) => addStack(doc));
+    store().addStack();
     store().markSaved(5, selectDocument(store()));
     expect(store()).toMatchObject({ dirty: false, baseVersion: 5, configurationId: "c1" });
   });
 
   it("stays dirty when the draft changed while the save was in flight", () => {
-    store().edit((doc) => addStack(doc));
+    store().addStack();
     const sent = selectDocument(store());
-    store().edit((doc) => setLabel(doc, "a", "edited meanwhile"));
+    store().setLabel("a", "edited meanwhile");
     store().markSaved(5, sent);
     expect(store()).toMatchObject({ dirty: true, baseVersion: 5 });
   });

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import type { Configuration } from "@/lib/boundary/types";
+import { configurationTitleMaxLength } from "@/lib/validations/configuration";
 import {
   addStack,
   deleteStacks,
@@ -226,7 +227,7 @@ describe("setTheory", () => {
 describe("document settings", () => {
   it("sets title, levels and string scale within their limits", () => {
     const config = sample();
-    expect(setTitle(config, "x".repeat(300)).title).toHaveLength(120);
+    expect(setTitle(config, "x".repeat(configurationTitleMaxLength + 100)).title).toHaveLength(configurationTitleMaxLength);
     expect(setLevels(config, 10).levels).toBe(10);
     expect(setLevels(config, 201)).toBe(config);
     expect(setStringScale(config, 1e16).stringScaleGeV).toBe(1e16);

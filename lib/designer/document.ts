@@ -10,6 +10,7 @@
 import { configurationLimits, dimensionOf } from "@/lib/boundary";
 import type { Configuration, Stack, Theory } from "@/lib/boundary/types";
 import { cleanNumber } from "@/lib/canvas/snap";
+import { configurationTitleMaxLength } from "@/lib/validations/configuration";
 
 /** Stack ids: letters, digits, "-" and "_", starting with a letter or digit, at most 64 characters. */
 export const stackIdPattern = /^[A-Za-z0-9][A-Za-z0-9_-]{0,63}$/;
@@ -227,9 +228,9 @@ export function setTheory(config: Configuration, theory: Theory): Configuration 
   };
 }
 
-/** Sets the document title (trimmed to 120 characters). */
+/** Sets the document title (cut to {@link configurationTitleMaxLength} characters). */
 export function setTitle(config: Configuration, title: string): Configuration {
-  return { ...config, title: title.slice(0, 120) };
+  return { ...config, title: title.slice(0, configurationTitleMaxLength) };
 }
 
 /** Sets the highest oscillator level reported; refused outside 0..200 or for non-integers. */

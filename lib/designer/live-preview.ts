@@ -1,11 +1,12 @@
 /**
- * The designer's live check and compute: the same zod schema as the API, then the engine's
- * own checks, then the spectrum. Runs in the browser on every edit.
+ * The designer's live check and compute: the shape rules of the API's zod schema, then the engine's
+ * checks and the spectrum in one pass (`tryComputeSpectrum`), so each edit runs the engine's checker
+ * once. Runs in the browser on every edit.
  */
-import { checkConfiguration, computeSpectrum } from "@/lib/boundary";
+import { checkConfiguration, tryComputeSpectrum } from "@/lib/boundary";
 import type { Configuration, SpectrumResult } from "@/lib/boundary/types";
 import type { FieldIssue } from "@/lib/errors";
-import { configurationSchema } from "@/lib/validations/configuration";
+import { configurationShapeSchema } from "@/lib/validations/configuration";
 
 /** Everything the preview shows for one draft. */
 export interface LivePreview {
@@ -23,33 +24,20 @@ export interface ComputeLivePreviewOptions {
   now?: () => number;
 }
 
-/** Validates a draft and, when it is valid, computes its spectrum. */
+/**
+ * Validates a draft as the API would (`configurationSchema`: shape problems and the engine's
+ * problems together) and, when it is valid, computes its spectrum.
+ */
 export function computeLivePreview(document: Configuration, options: ComputeLivePreviewOptions = {}): LivePreview {
   const now = options.now ?? (() => performance.now());
   const started = now();
-  const issues = validateDraft(document);
-  const result = issues.length === 0 ? computeSpectrum(document) : null;
-  return { issues, result, elapsedMs: now() - started };
-}
-
-/** Problems with a draft from the zod schema and the engine's checks, without duplicates. */
-export function validateDraft(document: Configuration): FieldIssue[] {
-  const issues: FieldIssue[] = [];
-  const parsed = configurationSchema.safeParse(document);
-  if (!parsed.success) {
-    for (const issue of parsed.error.issues) {
-      issues.push({ path: issue.path.map((key) => (typeof key === "number" ? key : String(key))), message: issue.message });
-    }
-  } else {
-    issues.push(...checkConfiguration(document).map((problem) => ({ path: problem.path, message: problem.message })));
-  }
-  const seen = new Set<string>();
-  return issues.filter((issue) => {
-    const key = `${issue.path.join(".")}|${issue.message}`;
-    if (seen.has(key)) return false;
-    seen.add(key);
-    return true;
-  });
+  const shapeIssues = shapeIssuesOf(document);
+  // A draft with a shape problem (an over-long title) is not computed, but its engine problems are
+  // still listed beside it, as the API's schema would list them.
+  const attempt =
+    shapeIssues.length > 0 ? { problems: checkConfiguration(document), result: null } : tryComputeSpectrum(document);
+  const issues = withoutDuplicates([...shapeIssues, ...attempt.problems]);
+  return { issues, result: attempt.result, elapsedMs: now() - started };
 }
 
 /** Issues grouped for display: per stack index, and those about the document itself. */
@@ -65,4 +53,23 @@ export function groupIssues(issues: FieldIssue[]): { byStack: Map<number, FieldI
     }
   }
   return { byStack, document: documentIssues };
+}
+
+function shapeIssuesOf(document: Configuration): FieldIssue[] {
+  const parsed = configurationShapeSchema.safeParse(document);
+  if (parsed.success) return [];
+  return parsed.error.issues.map((issue) => ({
+    path: issue.path.map((key) => (typeof key === "number" ? key : String(key))),
+    message: issue.message,
+  }));
+}
+
+function withoutDuplicates(issues: FieldIssue[]): FieldIssue[] {
+  const seen = new Set<string>();
+  return issues.filter((issue) => {
+    const key = `${issue.path.join(".")}|${issue.message}`;
+    if (seen.has(key)) return false;
+    seen.add(key);
+    return true;
+  });
 }

@@ -2,43 +2,75 @@
  * Data for the results plots: alpha' M^2 of each sector's lightest state against the
  * separation y, and log10 of the degeneracy against the level.
  */
+import { addRational, compareRational, formatRational, isNegativeRational, rationalToNumber, type Rational } from "@/lib/boundary/rational";
 import type { Sector, SectorKind } from "@/lib/boundary/types";
-import { formatPair, isSurviving, lightestLevel, log10OfStateCount, pairKey, parseResultNumber } from "@/lib/spectrum";
+import {
+  formatMassSquared,
+  formatPair,
+  isSurviving,
+  log10OfStateCount,
+  pairKey,
+  parseExactRational,
+  parseResultNumber,
+  type SectorOverview,
+} from "@/lib/spectrum";
 
-/** One sector's lightest-state curve alpha' M^2(y) = (y / 2 pi)^2 + (N + a). */
+/** The parts of a sector (full or overview) the mass plot reads. */
+export type MassCurveSector = Pick<SectorOverview, "pair" | "separation" | "zeroPoint" | "lightest">;
+
+/**
+ * One curve alpha' M^2(y) = (y / 2 pi)^2 + (N + a), shared by every sector whose lightest state has
+ * that N + a (their curves coincide), with the sectors' actual separations.
+ */
 export interface MassCurve {
+  /** N + a as exact text, e.g. "-1/2": the curve's key. */
   key: string;
   label: string;
-  /** N + a of the lightest surviving state (alpha' M^2 at y = 0). */
+  /** N + a of the lightest surviving state (alpha' M^2 at y = 0), exact. */
+  interceptText: string;
   intercept: number;
-  /** The sector's actual separation. */
-  separation: number;
-  /** y_c where alpha' M^2 crosses zero, or null when the state is never tachyonic. */
+  /** y_c where alpha' M^2 crosses zero, or null when N + a >= 0 (exactly). */
   crossing: number | null;
+  /** The sectors on this curve, at their separations. */
+  sectors: Array<{ key: string; label: string; separation: number }>;
 }
 
 /**
- * The lightest-state curve of each sector with at least one surviving state. The intercept
- * is recovered from the stored alpha' M^2 at the sector's separation (mass formula of the
- * conventions: alpha' M^2 = (y / 2 pi)^2 + N + a).
+ * The lightest-state curves of the sectors: N + a is taken exactly from the lightest surviving
+ * row's level and the sector's zero-point energy (never recovered from a rounded alpha' M^2, so a
+ * massless ground state never shows a spurious crossing), and sectors with the same N + a share one
+ * curve. Curves come in increasing N + a.
  */
-export function massCurves(sectors: readonly Sector[]): MassCurve[] {
-  const curves: MassCurve[] = [];
+export function massCurves(sectors: readonly MassCurveSector[]): MassCurve[] {
+  const byIntercept = new Map<string, MassCurve & { exact: Rational }>();
   for (const sector of sectors) {
-    const row = lightestLevel(sector);
-    const lightest = row ? parseResultNumber(row.massSquared) : Number.NaN;
-    if (!Number.isFinite(lightest)) continue;
-    const stretch = (sector.separation / (2 * Math.PI)) ** 2;
-    const intercept = lightest - stretch;
-    curves.push({
-      key: pairKey(...sector.pair),
-      label: formatPair(sector.pair),
-      intercept,
-      separation: sector.separation,
-      crossing: intercept < 0 ? 2 * Math.PI * Math.sqrt(-intercept) : null,
-    });
+    const row = sector.lightest;
+    if (!row) continue;
+    const level = parseExactRational(row.level);
+    const zeroPointText = sector.zeroPoint[row.sector];
+    const zeroPoint = zeroPointText === undefined ? null : parseExactRational(zeroPointText);
+    if (!level || !zeroPoint) continue;
+    const exact = addRational(level, zeroPoint);
+    const interceptText = formatRational(exact);
+    let curve = byIntercept.get(interceptText);
+    if (!curve) {
+      const intercept = rationalToNumber(exact);
+      curve = {
+        key: interceptText,
+        label: `N + a = ${formatMassSquared(interceptText)}`,
+        interceptText,
+        intercept,
+        crossing: isNegativeRational(exact) ? 2 * Math.PI * Math.sqrt(-intercept) : null,
+        sectors: [],
+        exact,
+      };
+      byIntercept.set(interceptText, curve);
+    }
+    curve.sectors.push({ key: pairKey(...sector.pair), label: formatPair(sector.pair), separation: sector.separation });
   }
-  return curves;
+  return [...byIntercept.values()]
+    .sort((x, y) => compareRational(x.exact, y.exact))
+    .map(({ exact: _exact, ...curve }) => ({ ...curve, label: `${curve.label} (${curve.sectors.length === 1 ? (curve.sectors[0]?.label ?? "") : `${curve.sectors.length} sectors`})` }));
 }
 
 /** Options of {@link massCurvePoints}. */
@@ -56,7 +88,7 @@ export function massCurvePoints(curves: readonly MassCurve[], options: MassCurve
   rows: Array<Record<string, number>>;
 } {
   const samples = Math.max(2, options.samples ?? 61);
-  const reach = Math.max(2 * Math.PI, ...curves.map((c) => Math.max(c.separation, c.crossing ?? 0)));
+  const reach = Math.max(2 * Math.PI, ...curves.flatMap((c) => [c.crossing ?? 0, ...c.sectors.map((s) => s.separation)]));
   const yMax = Number((reach * 1.3).toPrecision(3));
   const rows: Array<Record<string, number>> = [];
   for (let i = 0; i < samples; i++) {

@@ -9,8 +9,8 @@ export { compareResultNumbers, parseExactRational, parseResultNumber } from "./r
 export { compareStateCounts, isSurviving, log10OfStateCount } from "./state-count";
 export { pairKey } from "./pair-key";
 export { lightestBySector, lightestLevel, type SectorLightest } from "./lightest";
-export { isTachyonicState, tachyonicSectors, type TachyonicSector } from "./tachyons";
-export { summarizeResult, type ResultSummary } from "./summary";
+export { isTachyonicState, tachyonicSectors, type TachyonicSector, type TachyonSource } from "./tachyons";
+export { summarizeResult, summaryFacts, type ResultSummary, type SummaryFacts, type SummaryWorldvolume } from "./summary";
 export { highestUnstretchedMassSquared, unstretchedMassSquared, unstretchedMassSquaredText } from "./mass-cap";
 export { formatWorldvolume, stringCreationSectors, worldvolumeKey } from "./worldvolumes";
 export {
@@ -21,3 +21,13 @@ export {
   formatPair,
   type FormatNumberOptions,
 } from "./format";
+export {
+  pageSectorOverviews,
+  resultOverview,
+  sectorOverview,
+  type ResultOverview,
+  type SectorDetailField,
+  type SectorOverview,
+  type SectorOverviewPage,
+  type SectorPageQuery,
+} from "./overview";

@@ -4,7 +4,7 @@
  *
  * Invalid-input policy: a row whose alpha' M^2 cannot be read is not tachyonic; nothing throws.
  */
-import type { LevelRow, Sector, SpectrumResult } from "@/lib/boundary/types";
+import type { LevelRow, Sector } from "@/lib/boundary/types";
 import { lightestLevel } from "./lightest";
 import { parseResultNumber } from "./result-number";
 
@@ -32,22 +32,26 @@ export interface TachyonicSector {
   criticalSeparation: number | null;
 }
 
+/** What a tachyon summary reads of a sector: a full sector, or an overview sector with its lightest row. */
+export type TachyonSource = Pick<Sector, "pair" | "tachyonic" | "separation" | "criticalSeparation"> &
+  ({ levels: LevelRow[] } | { lightest: LevelRow | null });
+
 /**
  * The sectors the engine marked tachyonic, in the order of the result.
  *
- * @param result - Only `sectors` is read.
+ * @param result - Only `sectors` is read (full sectors or overview sectors, lib/spectrum/overview.ts).
  * @returns One entry per tachyonic sector; empty when the configuration is stable.
  * @example
  * tachyonicSectors(braneAntibrane)[0] // => { pair: ["a", "b"], lightest: { massSquared: "-1/2", ... }, separation: 0, criticalSeparation: 4.44288293816 }
  */
-export function tachyonicSectors(result: Pick<SpectrumResult, "sectors">): TachyonicSector[] {
+export function tachyonicSectors(result: { sectors: readonly TachyonSource[] }): TachyonicSector[] {
   return result.sectors.filter((sector) => sector.tachyonic).map(describeTachyon);
 }
 
-function describeTachyon(sector: Sector): TachyonicSector {
+function describeTachyon(sector: TachyonSource): TachyonicSector {
   return {
     pair: sector.pair,
-    lightest: lightestLevel(sector),
+    lightest: "lightest" in sector ? sector.lightest : lightestLevel(sector),
     separation: sector.separation,
     criticalSeparation: sector.criticalSeparation,
   };

@@ -34,12 +34,14 @@ export function worldvolumeKey(worldvolume: Pick<WorldvolumeTheory, "stacks">): 
  * stacks: nu = 8 with a common Dirichlet axis to be separated along (string creation; the engine's
  * sector note says so).
  *
- * @param result - `theory` and `sectors` are read.
+ * @param result - `theory` and each sector's `nu` and `dd` are read (full sectors or overviews).
  * @returns Those sectors in the order of the result; none for the bosonic string.
  * @example
- * stringCreationSectors(pointAndWall).map((sector) => sector.pair) // => [["wall", "point"]]
+ * stringCreationSectors(pointAndWall).map((sector) => sector.pair) // => [["point", "wall"]]
  */
-export function stringCreationSectors(result: Pick<SpectrumResult, "theory" | "sectors">): Sector[] {
+export function stringCreationSectors<S extends Pick<Sector, "nu" | "dd">>(
+  result: Pick<SpectrumResult, "theory"> & { sectors: readonly S[] },
+): S[] {
   if (result.theory === "bosonic") return [];
   return result.sectors.filter((sector) => sector.nu === 8 && sector.dd > 0);
 }

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { forkConfigurationBodySchema, listConfigurationsQuerySchema, parseIfMatch } from "./configuration-api";
+import { configurationTitleMaxLength } from "./configuration";
+import { deletedNoticeSchema, forkConfigurationBodySchema, listConfigurationsQuerySchema, parseIfMatch } from "./configuration-api";
 
 describe("parseIfMatch", () => {
   it("reads a bare, quoted or weak version", () => {
@@ -32,5 +33,22 @@ describe("forkConfigurationBodySchema", () => {
   it("requires a uuid target group", () => {
     expect(forkConfigurationBodySchema.safeParse({ targetGroupId: "personal" }).success).toBe(false);
     expect(forkConfigurationBodySchema.safeParse({ targetGroupId: "6f1c2f4e-8b7a-4d2e-9c3b-1a2b3c4d5e6f" }).success).toBe(true);
+  });
+
+  it("takes a fork title as long as a document title, and no longer", () => {
+    const targetGroupId = "6f1c2f4e-8b7a-4d2e-9c3b-1a2b3c4d5e6f";
+    const longest = "t".repeat(configurationTitleMaxLength);
+    expect(forkConfigurationBodySchema.safeParse({ targetGroupId, title: longest }).success).toBe(true);
+    expect(forkConfigurationBodySchema.safeParse({ targetGroupId, title: `${longest}t` }).success).toBe(false);
+  });
+});
+
+describe("deletedNoticeSchema", () => {
+  const deleted = "6f1c2f4e-8b7a-4d2e-9c3b-1a2b3c4d5e6f";
+
+  it("echoes a title up to the title limit and drops a longer one", () => {
+    const longest = "t".repeat(configurationTitleMaxLength);
+    expect(deletedNoticeSchema.parse({ deleted, title: longest }).title).toBe(longest);
+    expect(deletedNoticeSchema.parse({ deleted, title: `${longest}t` }).title).toBe("");
   });
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { formatJsonPath, ValidationError } from "@/lib/errors";
-import { configurationSchema, spectrumRequestSchema } from "./configuration";
+import { configurationSchema, configurationTitleMaxLength, spectrumRequestSchema } from "./configuration";
 
 const valid = {
   format: 1,
@@ -45,6 +45,14 @@ describe("configurationSchema", () => {
     expect(issuesOf({ ...valid, title: "  " }).map((issue) => issue.path)).toEqual(["title"]);
     const badColour = { ...valid, stacks: [{ ...valid.stacks[0], colour: "red" }] };
     expect(issuesOf(badColour).map((issue) => issue.path)).toEqual(["stacks[0].colour"]);
+  });
+
+  it("takes a title up to configurationTitleMaxLength characters after trimming", () => {
+    const longest = "t".repeat(configurationTitleMaxLength);
+    expect(issuesOf({ ...valid, title: `  ${longest}  ` })).toEqual([]);
+    expect(issuesOf({ ...valid, title: `${longest}t` })).toEqual([
+      { path: "title", message: `Use at most ${configurationTitleMaxLength} characters.` },
+    ]);
   });
 
   it("uses the same rules for the spectrum request body", () => {

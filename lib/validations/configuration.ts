@@ -9,6 +9,12 @@ import type { Configuration, Stack } from "@/lib/boundary/types";
  * issues at their JSON paths so that there is one source of truth for them.
  */
 
+/**
+ * The longest configuration title, in characters after trimming. The one limit for the document
+ * schema, the API bodies that carry a title, the forms and the data-access layer.
+ */
+export const configurationTitleMaxLength = 200;
+
 const stackSchema = z.object({
   id: z.string({ error: "A stack id must be text." }),
   label: z.string({ error: "A label must be text." }).max(120, "Keep the label under 120 characters.").default(""),
@@ -28,13 +34,18 @@ const stackSchema = z.object({
     .optional(),
 }) satisfies z.ZodType<Stack>;
 
-const configurationShape = z.object({
+/**
+ * The document's shape alone: types, text lengths and the file format, without the engine's
+ * problems. For a caller that runs `checkConfiguration` itself (the designer's live preview checks
+ * and computes in one engine pass); everything else uses {@link configurationSchema}.
+ */
+export const configurationShapeSchema = z.object({
   format: z.literal(1, { error: "Only file format 1 is known." }),
   title: z
     .string({ error: "The title must be text." })
     .trim()
     .min(1, "Give the configuration a title.")
-    .max(200, "Keep the title under 200 characters."),
+    .max(configurationTitleMaxLength, `Use at most ${configurationTitleMaxLength} characters.`),
   description: z.string().max(5000, "Keep the description under 5000 characters.").optional(),
   theory: z.enum(["bosonic", "IIA", "IIB"], { error: 'The theory must be "bosonic", "IIA" or "IIB".' }),
   dimension: z.number({ error: "The dimension must be a number." }).optional(),
@@ -51,7 +62,7 @@ const configurationShape = z.object({
  * @example
  * configurationSchema.safeParse(document).success
  */
-export const configurationSchema = configurationShape.superRefine((configuration, context) => {
+export const configurationSchema = configurationShapeSchema.superRefine((configuration, context) => {
   for (const problem of checkConfiguration(configuration)) {
     context.addIssue({ code: "custom", path: problem.path, message: problem.message });
   }
@@ -60,3 +71,9 @@ export const configurationSchema = configurationShape.superRefine((configuration
 /** Body of `POST /api/spectrum`: the configuration document itself. */
 export const spectrumRequestSchema = configurationSchema;
 
+
+/** Query of `POST /api/spectrum`: sectors from `sectorOffset` keep their level rows until `maxRows` rows. */
+export const spectrumQuerySchema = z.object({
+  sectorOffset: z.coerce.number({ error: "sectorOffset must be a whole number." }).int().min(0).max(1_000_000).default(0),
+  maxRows: z.coerce.number({ error: "maxRows must be a whole number." }).int().min(1).max(20_000).default(10_000),
+});

@@ -1,4 +1,4 @@
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test, type Locator, type Page } from "@playwright/test";
 import { computeSpectrum } from "@/lib/boundary";
 import type { Configuration } from "@/lib/boundary/types";
 import { formatEngineProse, formatMassSquared, parseResultNumber } from "@/lib/spectrum";
@@ -21,6 +21,15 @@ function twoStackDocument(title: string): Configuration {
       { id: "b", label: "point", count: 1, anti: false, worldvolume: [], position: { "9": 1.5 } },
     ],
   };
+}
+
+/** True when the Konva stage inside the canvas frame has the frame's current size in CSS pixels. */
+async function stageMatchesFrame(canvas: Locator): Promise<boolean> {
+  return canvas.evaluate((frame) => {
+    const stage = frame.querySelector("canvas");
+    const box = frame.getBoundingClientRect();
+    return stage !== null && stage.style.width === `${Math.floor(box.width)}px` && stage.style.height === `${Math.floor(box.height)}px`;
+  });
 }
 
 async function openDesigner(page: Page, id: string): Promise<void> {
@@ -65,15 +74,10 @@ test.describe("designer", () => {
 
     // Canvas: drag the new D0 two units to the right. The view was fitted to the starting stack at
     // the origin (80 px per unit, origin at the centre), so s1 is drawn 160 px above the centre.
-    // The preview beside the canvas grows as stacks are added and the canvas refits after a resize:
-    // wait until its box holds still before aiming at a stack by pixels.
-    let box = await canvas.boundingBox();
-    await expect(async () => {
-      const before = await canvas.boundingBox();
-      await page.waitForTimeout(250);
-      box = await canvas.boundingBox();
-      expect(box).toEqual(before);
-    }).toPass({ timeout: 10_000 });
+    // Aim by pixels only once the stage is drawn at the canvas's current size (the layout around it
+    // changes as stacks are added, and the stage follows a resize one render later).
+    await expect.poll(() => stageMatchesFrame(canvas)).toBe(true);
+    const box = await canvas.boundingBox();
     if (!box) throw new Error("the canvas has no box");
     const cx = box.x + box.width / 2;
     const cy = box.y + box.height / 2;
@@ -92,6 +96,8 @@ test.describe("designer", () => {
     await page.getByRole("button", { name: "Stack s2 is an antibrane" }).click();
     await page.getByLabel("Position of stack s2 on x9").fill("1");
     await expect(page.getByTestId("stack-kind-s2")).toHaveText("anti-D4");
+    // U(N) per separated stack; an anti-D4 one unit from a D4 is inside y_c = pi sqrt(2), so tachyonic
+    // (common practice; Banks and Susskind 1995, hep-th/9511194, from memory).
     await expect(page.getByTestId("spectrum-gauge-group")).toHaveText("U(2) x U(1) x U(1)");
     await expect(page.getByTestId("spectrum-stability")).toContainText("tachyonic sector");
     await expect(page.getByTestId("spectrum-tachyons")).toContainText("a\u2013s2");

@@ -1,4 +1,5 @@
-import { expect, test } from "@playwright/test";
+import { expect, test, type Locator } from "@playwright/test";
+import { landingDemoConfiguration } from "@/lib/demo-configurations";
 import { demoAccounts, signIn } from "./helpers/accounts";
 
 // The production build's security headers, content security policy, cookie flags and CSRF check,
@@ -34,18 +35,27 @@ test.describe("security in the browser", () => {
     expect(session?.httpOnly).toBe(true);
     expect(session?.sameSite).toBe("Lax");
 
-    const list = await page.request.get("/api/configurations");
+    // The seeded three-stack demo: its pages draw a canvas, KaTeX expansions and plots.
+    const list = await page.request.get(`/api/configurations?search=${encodeURIComponent(landingDemoConfiguration.title)}`);
     expect(list.status()).toBe(200);
-    const { items } = (await list.json()) as { items: { id: string }[] };
-    const id = items[0]?.id;
+    const { items } = (await list.json()) as { items: { id: string; title: string }[] };
+    const id = items.find((item) => item.title === landingDemoConfiguration.title)?.id;
     expect(id).toBeTruthy();
 
-    for (const path of ["/dashboard", `/configurations/${id}`, `/configurations/${id}/results`, `/configurations/${id}/history`]) {
+    // What each page renders on the client once it has hydrated; the checks wait for it, so any script or
+    // style it needs has run by the time the violations are read.
+    const pages: Array<{ path: string; rendered: Locator }> = [
+      { path: "/dashboard", rendered: page.locator('table a[href^="/configurations/"]').first() },
+      { path: `/configurations/${id}`, rendered: page.locator("[data-designer-canvas] canvas").first() },
+      { path: `/configurations/${id}/results`, rendered: page.locator(".katex").first() },
+      { path: `/configurations/${id}/history`, rendered: page.getByRole("heading", { level: 1 }) },
+    ];
+    for (const { path, rendered } of pages) {
       const response = await page.goto(path);
       expect(response?.headers()["content-security-policy"]).toContain("script-src 'self'");
-      await page.waitForLoadState("load");
-      // The designer's canvas and the results' KaTeX render on the client; give them a moment.
-      await page.waitForTimeout(1_000);
+      // The account menu's trigger is enabled only once React has hydrated the page.
+      await expect(page.getByRole("button", { name: /^Account:/ })).toBeEnabled();
+      await expect(rendered).toBeAttached();
       const violations = await page.evaluate(() => (window as unknown as { cspViolations?: string[] }).cspViolations ?? []);
       expect({ path, violations }).toEqual({ path, violations: [] });
     }

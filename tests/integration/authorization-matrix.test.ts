@@ -2,6 +2,7 @@ import { readdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, it, vi } from "vitest";
 import type { Actor } from "@/db/queries/actor";
+import { createApiToken } from "@/db/queries/api-tokens";
 import { uploadAttachment } from "@/db/queries/attachments";
 import { addComment } from "@/db/queries/comments";
 import { createConfiguration } from "@/db/queries/configurations";
@@ -10,6 +11,7 @@ import { createShareLink } from "@/db/queries/share-links";
 import { probeNearSevenBrane } from "@/lib/demo-configurations";
 import { createTestGroup, createTestUser, type TestUser } from "@/tests/fixtures/users";
 import { idleState } from "@/lib/action-state";
+import { handlersOf, routeFiles, routeMethods, type RouteMethod } from "@/tests/support/route-files";
 
 // Every route handler under app/api against every kind of caller, from ONE table. The route files
 // are found on disk when the test runs: a new route.ts, or a new exported method, without an entry
@@ -43,8 +45,8 @@ const { runAs } = (await import("@/lib/server/session")) as unknown as {
 
 const roles = ["anonymous", "nonMember", "viewer", "editor", "owner", "admin"] as const;
 type Role = (typeof roles)[number];
-const methods = ["GET", "POST", "PUT", "PATCH", "DELETE"] as const;
-type Method = (typeof methods)[number];
+const methods = routeMethods;
+type Method = RouteMethod;
 
 /** A research group with one member per role, a site admin outside it, and one of every kind of record. */
 interface World {
@@ -62,6 +64,8 @@ interface World {
   invitationId: string;
   /** A pending invitation to the acting user's own address (or a new address for anonymous), in another group. */
   acceptTokenFor: (role: Role) => Promise<string>;
+  /** The owner's personal API tokens. */
+  ownerTokens: { read: string; write: string };
 }
 
 async function createWorld(): Promise<World> {
@@ -81,12 +85,14 @@ async function createWorld(): Promise<World> {
   ]);
   const configuration = await createConfiguration(owner.actor, group.id, probeNearSevenBrane, "first");
   const png = new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13, 73, 72, 68, 82]);
-  const [attachment, comment, share, invitation, otherGroup] = await Promise.all([
+  const [attachment, comment, share, invitation, otherGroup, readToken, writeToken] = await Promise.all([
     uploadAttachment(editor.actor, configuration.id, { fileName: "figure.png", data: png }),
     addComment(editor.actor, configuration.id, { body: "Check the NS zero-point energy." }),
     createShareLink(owner.actor, configuration.id),
     createInvitation(owner.actor, group.id, { email: `pending-${Date.now()}-${Math.random()}@test.mooring`, role: "viewer" }),
     createTestGroup(host.actor),
+    createApiToken(owner.actor, { name: "matrix read", scope: "read", expiresInDays: 7 }),
+    createApiToken(owner.actor, { name: "matrix write", scope: "write", expiresInDays: 7 }),
   ]);
   const users = { nonMember, viewer, editor, owner, admin };
   return {
@@ -99,6 +105,7 @@ async function createWorld(): Promise<World> {
     commentId: comment.id,
     shareLinkId: share.link.id,
     invitationId: invitation.invitation.id,
+    ownerTokens: { read: readToken.secret, write: writeToken.secret },
     acceptTokenFor: async (role) => {
       const email = role === "anonymous" ? `newcomer-${Date.now()}-${Math.random()}@test.mooring` : users[role].actor.email;
       return (await createInvitation(host.actor, otherGroup.id, { email, role: "viewer" })).token;
@@ -156,6 +163,7 @@ const matrix: Record<string, RouteEntry> = {
     excluded: "next-auth's own handler (sign-in, session, CSRF token); its cookies and limits are tested in security.test.ts and sign-in-limit.test.ts",
   },
   "health/route.ts": { methods: { GET: { request: () => ({ request: json("GET", "/api/health") }), expect: everyone(200) } } },
+  "openapi.json/route.ts": { methods: { GET: { request: () => ({ request: json("GET", "/api/openapi.json") }), expect: everyone(200) } } },
   "spectrum/route.ts": {
     methods: {
       POST: {
@@ -321,6 +329,39 @@ const matrix: Record<string, RouteEntry> = {
       },
     },
   },
+  "configurations/[configurationId]/revisions/[revisionId]/result/overview/route.ts": {
+    methods: {
+      GET: {
+        request: (w) => ({
+          request: json("GET", `${configurationPath(w)}/revisions/${w.revisionId}/result/overview`),
+          params: { configurationId: w.configurationId, revisionId: w.revisionId },
+        }),
+        expect: membersRead,
+      },
+    },
+  },
+  "configurations/[configurationId]/revisions/[revisionId]/result/sectors/route.ts": {
+    methods: {
+      GET: {
+        request: (w) => ({
+          request: json("GET", `${configurationPath(w)}/revisions/${w.revisionId}/result/sectors?limit=5`),
+          params: { configurationId: w.configurationId, revisionId: w.revisionId },
+        }),
+        expect: membersRead,
+      },
+    },
+  },
+  "configurations/[configurationId]/revisions/[revisionId]/result/sectors/[sectorIndex]/route.ts": {
+    methods: {
+      GET: {
+        request: (w) => ({
+          request: json("GET", `${configurationPath(w)}/revisions/${w.revisionId}/result/sectors/0`),
+          params: { configurationId: w.configurationId, revisionId: w.revisionId, sectorIndex: "0" },
+        }),
+        expect: membersRead,
+      },
+    },
+  },
   "configurations/[configurationId]/export/route.ts": {
     methods: { GET: { request: (w) => ({ request: json("GET", `${configurationPath(w)}/export?format=csv`), params: configurationParams(w) }), expect: membersRead } },
   },
@@ -382,22 +423,12 @@ const matrix: Record<string, RouteEntry> = {
   },
 };
 
-const apiRoot = path.resolve(import.meta.dirname, "..", "..", "app", "api");
 
-/** Every route.ts under app/api, relative to it, found on disk. */
-function routeFiles(): string[] {
-  return (readdirSync(apiRoot, { recursive: true }) as string[])
-    .map((file) => file.split(path.sep).join("/"))
-    .filter((file) => file === "route.ts" || file.endsWith("/route.ts"))
-    .sort();
-}
-
-type Handler = (request: Request, context: { params: Promise<Params> }) => Promise<Response>;
-
-async function handlersOf(file: string): Promise<Partial<Record<Method, Handler>>> {
-  const module = (await import(/* @vite-ignore */ path.join(apiRoot, file))) as Record<string, unknown>;
-  return Object.fromEntries(methods.filter((method) => typeof module[method] === "function").map((method) => [method, module[method] as Handler]));
-}
+/**
+ * A cell that succeeds with PUT, PATCH or DELETE changes or removes the record it is about, so it
+ * gets a world of its own.
+ */
+const needsOwnWorld = (method: Method, status: number) => method !== "GET" && method !== "POST" && status < 400;
 
 describe("authorization matrix", () => {
   it("the table covers every route handler file under app/api and every method it exports", async () => {
@@ -413,11 +444,9 @@ describe("authorization matrix", () => {
     }
   });
 
-  // A cell that succeeds with PUT, PATCH or DELETE changes or removes the record it is about, so it
-  // gets a world of its own; every other cell (reads, creates, refusals) shares one world, so the
+  // A cell that succeeds with PUT, PATCH or DELETE gets a world of its own; every other cell (reads, creates, refusals) shares one world, so the
   // order of the cells does not matter. A refusal that wrongly wrote would show in later cells too.
   let shared: Promise<World> | undefined;
-  const needsOwnWorld = (method: Method, status: number) => method !== "GET" && method !== "POST" && status < 400;
   for (const [file, entry] of Object.entries(matrix)) {
     if ("excluded" in entry) continue;
     describe(file, () => {
@@ -430,6 +459,47 @@ describe("authorization matrix", () => {
             if (!handler) throw new Error(`${file} does not export ${method}`);
             const { request, params = {} } = await cell.request(world, role);
             const response = await runAs(actorOf(world, role), () => handler(request, { params: Promise.resolve(params) }));
+            const body = response.status >= 400 ? await response.text() : "";
+            expect({ status: response.status, body: body.slice(0, 200) }).toMatchObject({ status });
+          });
+        }
+      }
+    });
+  }
+});
+
+// ---------------------------------------------------------------------------------------------
+// Personal API tokens against the same table: every route handler is called with the owner's
+// read-only and read-write tokens in `Authorization: Bearer` (and no session). Routes that take
+// tokens (the configuration routes and the compute) answer as they answer the owner's session,
+// except that a read-only token is refused (403) by every route that writes; every other route
+// refuses tokens (403), apart from the health check and the API document, which read no caller at all. With a session
+// cookie too, the token alone counts.
+// ---------------------------------------------------------------------------------------------
+
+/** The routes that accept tokens, as the issue names them (not read from the app's own policy). */
+const tokenRoutes = (file: string) => file === "spectrum/route.ts" || file === "configurations/route.ts" || file.startsWith("configurations/");
+/** Writing methods, except the stateless compute, which changes nothing. */
+const writes = (file: string, method: Method) => method !== "GET" && file !== "spectrum/route.ts";
+
+describe("authorization matrix with API tokens", () => {
+  let shared: Promise<World> | undefined;
+  for (const [file, entry] of Object.entries(matrix)) {
+    if ("excluded" in entry) continue;
+    describe(file, () => {
+      for (const [method, cell] of Object.entries(entry.methods) as [Method, Cell][]) {
+        for (const scope of ["read", "write"] as const) {
+          const ignoresCaller = file === "health/route.ts" || file === "openapi.json/route.ts";
+          const status = !ignoresCaller && (!tokenRoutes(file) || (scope === "read" && writes(file, method))) ? 403 : cell.expect.owner;
+          it(`${method} with the owner's ${scope} token -> ${status}`, async () => {
+            const world = needsOwnWorld(method, status) ? await createWorld() : await (shared ??= createWorld());
+            const handler = (await handlersOf(file))[method];
+            if (!handler) throw new Error(`${file} does not export ${method}`);
+            const { request, params = {} } = await cell.request(world, "owner");
+            request.headers.set("authorization", `Bearer ${world.ownerTokens[scope]}`);
+            // The admin's session beside a read-only token must not lend it the right to write.
+            const session = scope === "read" ? world.users.admin.actor : null;
+            const response = await runAs(session, () => handler(request, { params: Promise.resolve(params) }));
             const body = response.status >= 400 ? await response.text() : "";
             expect({ status: response.status, body: body.slice(0, 200) }).toMatchObject({ status });
           });
@@ -486,6 +556,18 @@ const actionMatrix: Record<string, ActionEntry> = {
   },
   "(workspace)/account/actions.ts": {
     actions: {
+      createApiTokenAction: {
+        call: (action) => action(...([idleState(), form({ name: "Matrix script", scope: "read", expiresInDays: "30" })] as never[])),
+        expect: okFor(signedInRoles),
+      },
+      // Only one's own token: the owner's token is "no such token" to everyone else, admins included.
+      revokeApiTokenAction: {
+        call: async (action, world) => {
+          const token = await createApiToken(world.users.owner.actor, { name: "to revoke", scope: "write", expiresInDays: 7 });
+          return action(...([token.token.id] as never[]));
+        },
+        expect: okFor(["owner"]),
+      },
       updateAccountNameAction: { call: (action) => action(...([idleState(), form({ name: "Renamed Person" })] as never[])), expect: okFor(signedInRoles) },
       changePasswordAction: {
         // Test accounts have no password yet, so no current password is asked for.

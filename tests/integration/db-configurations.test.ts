@@ -4,7 +4,8 @@ import { db } from "@/db/index";
 import { auditLog, configurations, results, revisions } from "@/db/schema";
 import { createConfiguration, getConfiguration, listConfigurationsForGroup, listConfigurationsForUser, setConfigurationStarter, softDeleteConfiguration, undeleteConfiguration, updateConfiguration } from "@/db/queries/configurations";
 import { forkConfiguration, listForksOfConfiguration } from "@/db/queries/forks";
-import { getResultForRevision, getRevision, getRevisionByNumber, listRevisions, restoreRevision } from "@/db/queries/revisions";
+import { getResultForRevision } from "@/db/queries/result-reads";
+import { getRevision, getRevisionByNumber, listRevisions, restoreRevision } from "@/db/queries/revisions";
 import { ENGINE_VERSION } from "@/lib/boundary";
 import type { Configuration } from "@/lib/boundary/types";
 import { braneAntibranePair, twoTwoBraneStacks } from "@/lib/demo-configurations";
@@ -278,7 +279,8 @@ describe("restoreRevision", () => {
     const first = configuration.currentRevision?.id ?? "";
     await db
       .update(results)
-      .set({ engineVersion: "0.9.0", result: sql`jsonb_set(${results.result}, '{engineVersion}', '"0.9.0"')` })
+      // As a row stored by an older engine, before results carried content hashes.
+      .set({ engineVersion: "0.9.0", contentHash: null, result: sql`jsonb_set(${results.result}, '{engineVersion}', '"0.9.0"')` })
       .where(eq(results.revisionId, first));
     const restored = await restoreRevision(editor.actor, configuration.id, first, { expectedVersion: 1 });
     const stored = await getResultForRevision(editor.actor, restored.currentRevision?.id ?? "");

@@ -6,9 +6,7 @@ describe("GET /api/health", () => {
     const response = await GET();
     expect(response.status).toBe(200);
     expect(response.headers.get("cache-control")).toBe("no-store");
-    const body = (await response.json()) as { ok: boolean; database: { ok: boolean; latencyMs: number } };
-    expect(body.ok).toBe(true);
-    expect(body.database.ok).toBe(true);
-    expect(body.database.latencyMs).toBeGreaterThanOrEqual(0);
+    // Exactly these fields; JSON would turn a NaN or infinite latency into null, which fails here.
+    expect(await response.json()).toEqual({ ok: true, database: { ok: true, latencyMs: expect.any(Number) } });
   });
 });

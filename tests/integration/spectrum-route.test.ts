@@ -40,7 +40,7 @@ describe("POST /api/spectrum", () => {
     await resetRateLimits();
   });
 
-  it("returns 200 with the spectrum: bosonic tachyon at -1 and 24 massless states (Polchinski vol. 1, common practice)", async () => {
+  it("returns 200 with the spectrum: bosonic tachyon at -1 and 24 massless states (Polchinski vol. 1, section 1.3, from memory)", async () => {
     const response = await post(JSON.stringify(bosonic));
     expect(response.status).toBe(200);
     const result = (await response.json()) as SpectrumResult;
@@ -57,6 +57,7 @@ describe("POST /api/spectrum", () => {
     );
     expect(response.status).toBe(200);
     const result = (await response.json()) as SpectrumResult;
+    // One stack of two D3s: half-BPS with a U(2) gauge group (Polchinski vol. 2, section 13.4, from memory; common practice).
     expect(result.supercharges).toBe(16);
     expect(result.gaugeGroup).toBe("U(2)");
   });

@@ -1,13 +1,17 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
+import { createApiToken, revokeApiToken } from "@/db/queries/api-tokens";
 import { updateAccount } from "@/db/queries/users";
 import { errorState, invalidState, readFields, type ActionState, type FieldsOf } from "@/lib/action-state";
 import { getCurrentUser } from "@/lib/server/session";
+import { createApiTokenSchema } from "@/lib/validations/api-token";
 import { accountNameSchema, changePasswordSchema } from "@/lib/validations/auth";
 
 export type AccountNameState = ActionState<FieldsOf<typeof accountNameSchema>>;
 export type ChangePasswordState = ActionState<FieldsOf<typeof changePasswordSchema>>;
+/** The new-token form's state; `secret` is the token itself, present once, right after it was created. */
+export type CreateApiTokenState = ActionState<FieldsOf<typeof createApiTokenSchema>> & { secret?: string; tokenName?: string };
 
 export async function updateAccountNameAction(_previous: AccountNameState, formData: FormData): Promise<AccountNameState> {
   const fields = readFields(formData, ["name"]);
@@ -35,4 +39,35 @@ export async function changePasswordAction(_previous: ChangePasswordState, formD
     return errorState(error);
   }
   return { status: "success", message: "Your password has been changed.", fieldErrors: {}, values: {} };
+}
+
+export async function createApiTokenAction(_previous: CreateApiTokenState, formData: FormData): Promise<CreateApiTokenState> {
+  const fields = readFields(formData, ["name", "scope", "expiresInDays"]);
+  const parsed = createApiTokenSchema.safeParse(fields);
+  if (!parsed.success) return invalidState(parsed.error.issues, fields);
+  let created: Awaited<ReturnType<typeof createApiToken>>;
+  try {
+    created = await createApiToken(await getCurrentUser(), parsed.data);
+  } catch (error) {
+    return errorState(error, fields);
+  }
+  revalidatePath("/account");
+  return {
+    status: "success",
+    message: `Token "${created.token.name}" created. Copy it now: it is not shown again.`,
+    fieldErrors: {},
+    values: {},
+    secret: created.secret,
+    tokenName: created.token.name,
+  };
+}
+
+export async function revokeApiTokenAction(tokenId: string): Promise<ActionState> {
+  try {
+    const revoked = await revokeApiToken(await getCurrentUser(), tokenId);
+    revalidatePath("/account");
+    return { status: "success", message: `Token "${revoked.name}" revoked.`, fieldErrors: {}, values: {} };
+  } catch (error) {
+    return errorState(error);
+  }
 }

@@ -6,7 +6,7 @@
  */
 import { ConfigurationError, computeSpectrum, type ConfigurationProblem } from "../../boundary";
 import type { Configuration, Sector, SpectrumResult } from "../../boundary/types";
-import { summarizeResult, type ResultSummary } from "../../spectrum";
+import { resultOverview, summarizeResult, type ResultSummary } from "../../spectrum";
 
 /** Which sectors keep their level rows and mode expansions in an API response. */
 export interface SectorPageOptions {
@@ -31,11 +31,22 @@ export interface SpectrumJob {
   document: Configuration;
   /** Without it the whole result is kept (what a saved revision stores). */
   page?: SectorPageOptions;
+  /** Also serialise the result's overview (lib/spectrum/overview.ts), as a saved revision stores it. */
+  overview?: boolean;
 }
 
 /** What a computation answers. */
 export type SpectrumJobOutcome =
-  | { ok: true; json: string; summary: ResultSummary; engineVersion: string; computeMs: number; page: SectorPage | null }
+  | {
+      ok: true;
+      json: string;
+      /** The overview as JSON text when the job asked for it, else null. */
+      overviewJson: string | null;
+      summary: ResultSummary;
+      engineVersion: string;
+      computeMs: number;
+      page: SectorPage | null;
+    }
   | { ok: false; problems: ConfigurationProblem[] };
 
 /**
@@ -51,12 +62,15 @@ export function runSpectrumJob(job: SpectrumJob): SpectrumJobOutcome {
     if (error instanceof ConfigurationError) return { ok: false, problems: error.problems };
     throw error;
   }
+  const summary = summarizeResult(job.document, result);
+  const overviewJson = job.overview ? JSON.stringify(resultOverview(result)) : null;
   const page = job.page ? pageSectors(result, job.page) : null;
   const json = JSON.stringify(page ? { ...result, page } : result);
   return {
     ok: true,
     json,
-    summary: summarizeResult(job.document, result),
+    overviewJson,
+    summary,
     engineVersion: result.engineVersion,
     computeMs: Math.round((performance.now() - started) * 1000) / 1000,
     page,

@@ -1,6 +1,8 @@
 // Reads the mail captured by the local fake SMTP server (maildev) through its REST API.
 // MAILBOX_URL is set by scripts/test.mjs (e.g. http://127.0.0.1:1081).
 
+import { expect } from "@playwright/test";
+
 export interface MailAddress {
   address: string;
   name: string;
@@ -50,17 +52,25 @@ export interface WaitForMessageOptions {
   timeoutMs?: number;
 }
 
+/** The newest message to `address` if it matches the options, else null. */
+async function findMatchingMessage(address: string, options: WaitForMessageOptions): Promise<MailMessage | null> {
+  const message = await findNewestMessageTo(address);
+  if (!message) return null;
+  const fresh = !options.after || new Date(message.time).getTime() >= options.after.getTime();
+  const subjectMatches = !options.subjectIncludes || message.subject.includes(options.subjectIncludes);
+  return fresh && subjectMatches ? message : null;
+}
+
 /** Polls the mailbox until a message to `address` matching the options arrives. */
 export async function waitForMessageTo(address: string, options: WaitForMessageOptions = {}): Promise<MailMessage> {
-  const deadline = Date.now() + (options.timeoutMs ?? 15_000);
-  while (Date.now() < deadline) {
-    const message = await findNewestMessageTo(address);
-    const fresh = !options.after || new Date(message?.time ?? 0).getTime() >= options.after.getTime();
-    const subjectMatches = !options.subjectIncludes || message?.subject.includes(options.subjectIncludes);
-    if (message && fresh && subjectMatches) return message;
-    await new Promise((resolve) => setTimeout(resolve, 250));
-  }
-  throw new Error(`no mail to ${address}${options.subjectIncludes ? ` about "${options.subjectIncludes}"` : ""} arrived`);
+  const wanted = `mail to ${address}${options.subjectIncludes ? ` about "${options.subjectIncludes}"` : ""}`;
+  await expect
+    .poll(async () => (await findMatchingMessage(address, options)) !== null, { message: `no ${wanted} arrived`, timeout: options.timeoutMs ?? 15_000 })
+    .toBe(true);
+  // Captured mail stays in the mailbox, so the message found by the poll is still there (or a newer match).
+  const message = await findMatchingMessage(address, options);
+  if (!message) throw new Error(`the ${wanted} left the mailbox`);
+  return message;
 }
 
 /** The first http(s) link in a message: from the HTML `href`s when present, else from the text. */

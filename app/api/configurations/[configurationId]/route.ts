@@ -1,14 +1,25 @@
 import { getConfiguration, softDeleteConfiguration, updateConfiguration } from "@/db/queries/configurations";
+import { getConfigurationWithResultText } from "@/db/queries/result-reads";
 import { ValidationError } from "@/lib/errors";
 import { route } from "@/lib/server/route";
 import {
   configurationBodyLimitBytes,
   parseIfMatch,
+  readConfigurationQuerySchema,
   updateConfigurationBodySchema,
 } from "@/lib/validations/configuration-api";
 
-/** GET /api/configurations/[configurationId]: the configuration with its current document; ETag is the version. */
-export const GET = route({ params: ["configurationId"] }, async ({ actor, params }) => {
+/**
+ * GET /api/configurations/[configurationId][?include=result]: the configuration with its current
+ * document; ETag is the version. With `include=result` it also carries `result`, the current
+ * revision's stored result `{ revisionId, engineVersion, computeMs, createdAt, result }` (null before
+ * the first save), sent as stored.
+ */
+export const GET = route({ params: ["configurationId"], query: readConfigurationQuerySchema }, async ({ actor, params, query }) => {
+  if (query.include === "result") {
+    const { text, version } = await getConfigurationWithResultText(actor, params.configurationId);
+    return new Response(text, { headers: { "content-type": "application/json", etag: `"${version}"` } });
+  }
   const configuration = await getConfiguration(actor, params.configurationId);
   return Response.json(configuration, { headers: { etag: `"${configuration.version}"` } });
 });

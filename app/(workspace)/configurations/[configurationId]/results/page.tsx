@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
-import { getResultForRevision, listRevisions } from "@/db/queries/revisions";
+import { getResultHead } from "@/db/queries/result-reads";
+import { listRevisions } from "@/db/queries/revisions";
 import { ConfigurationCollaboration } from "@/components/collaboration/configuration-collaboration";
 import { ResultsView } from "@/components/results/results-view";
 import { EmptyState } from "@/components/ui/empty-state";
@@ -35,7 +36,8 @@ export default async function ConfigurationResultsPage({ params, searchParams }:
       </div>
     );
   }
-  const result = await getResultForRevision(user, revision.id);
+  // The head only: further sectors and each sector's levels load on demand.
+  const result = await getResultHead(user, configurationId, revision.id);
   return (
     <>
       <ResultsView

@@ -1,9 +1,14 @@
-import { getResultForRevision, getRevisionOfConfiguration } from "@/db/queries/revisions";
+import { getResultText } from "@/db/queries/result-reads";
 import { route } from "@/lib/server/route";
 
-/** GET /api/configurations/[configurationId]/revisions/[revisionId]/result: the stored engine result of that revision. */
+/**
+ * GET /api/configurations/[configurationId]/revisions/[revisionId]/result: the stored engine result
+ * of that revision, `{ revisionId, engineVersion, computeMs, createdAt, result }`. The result's JSON
+ * is sent as stored, without being parsed and re-serialised (older engine versions are upgraded).
+ */
 export const GET = route({ params: ["configurationId", "revisionId"] }, async ({ actor, params }) => {
-  await getRevisionOfConfiguration(actor, params.configurationId, params.revisionId);
-  const stored = await getResultForRevision(actor, params.revisionId);
-  return Response.json(stored, { headers: { "cache-control": "private, max-age=0, must-revalidate" } });
+  const text = await getResultText(actor, params.configurationId, params.revisionId);
+  return new Response(text, {
+    headers: { "content-type": "application/json", "cache-control": "private, max-age=0, must-revalidate" },
+  });
 });

@@ -1,0 +1,53 @@
+/**
+ * The canonical text of everything in a configuration that its spectrum result depends on, so
+ * that equal texts have equal results (for one engine version) and a stored result can be reused
+ * for an unchanged document (content addressing of results).
+ *
+ * Left out because no field of the result reads them: the document's `title` and `description`
+ * and each stack's display `colour`. Made canonical because the result does not depend on them:
+ * the order of the stacks (sectors and warnings come in id order), the order of object keys, and
+ * whether a Dirichlet position of 0 is written or left out (a missing position sits at 0). Every
+ * other field is kept as it is, so a field added to the format changes the key until it is listed
+ * here on purpose.
+ */
+
+import type { Configuration } from "./types";
+
+/** Document fields that no part of the result reads. */
+const displayOnlyFields = new Set(["title", "description"]);
+/** Stack fields that no part of the result reads. */
+const displayOnlyStackFields = new Set(["colour"]);
+
+/**
+ * Canonical JSON text of the result-relevant part of a configuration.
+ *
+ * @param config - Any configuration value (not mutated; need not be valid).
+ * @returns Sorted-key JSON without the display-only fields, with stacks in id order and zero
+ *   positions dropped.
+ * @example
+ * resultInputKey({ ...config, title: "A" }) === resultInputKey({ ...config, title: "B" }) // => true
+ */
+export function resultInputKey(config: Configuration): string {
+  const entries = Object.entries(config).filter(([key]) => !displayOnlyFields.has(key));
+  const stacks = [...config.stacks]
+    .sort((x, y) => (x.id < y.id ? -1 : x.id > y.id ? 1 : 0))
+    .map((stack) => {
+      const kept = Object.entries(stack).filter(([key]) => !displayOnlyStackFields.has(key));
+      const position = Object.entries(stack.position ?? {}).filter(([, value]) => value !== 0);
+      return Object.fromEntries(kept.map(([key, value]) => [key, key === "position" ? Object.fromEntries(position) : value]));
+    });
+  return canonicalJson(Object.fromEntries(entries.map(([key, value]) => [key, key === "stacks" ? stacks : value])));
+}
+
+/** JSON with object keys sorted at every depth (arrays keep their order). */
+function canonicalJson(value: unknown): string {
+  if (Array.isArray(value)) return `[${value.map(canonicalJson).join(",")}]`;
+  if (value !== null && typeof value === "object") {
+    const keys = Object.keys(value).sort();
+    return `{${keys
+      .filter((key) => (value as Record<string, unknown>)[key] !== undefined)
+      .map((key) => `${JSON.stringify(key)}:${canonicalJson((value as Record<string, unknown>)[key])}`)
+      .join(",")}}`;
+  }
+  return JSON.stringify(value) ?? "null";
+}
