@@ -1,5 +1,5 @@
 import type { WorldvolumeTheory } from "@/lib/boundary/types";
-import { formatEngineProse, formatMassSquared, formatNumber, worldvolumeKey } from "@/lib/spectrum";
+import { formatEngineProse, formatMassSquared, worldvolumeKey } from "@/lib/spectrum";
 import { Badge } from "@/components/ui/badge";
 
 export interface WorldvolumeTableProps {
@@ -62,8 +62,7 @@ export function WorldvolumeTable({ worldvolumes }: WorldvolumeTableProps) {
                     ))}
                     {worldvolume.defects.map((defect) => (
                       <li key={`d-${defect.stacks.join("|")}`} className="text-muted-foreground">
-                        {defect.dimension}d defect where stacks {defect.stacks.join(", ")} meet it
-                        {defect.separation > 0 ? ` (at y = ${formatNumber(defect.separation)})` : ""}: those strings live there
+                        {defect.dimension}d defect where stacks {defect.stacks.join(", ")} meet it: those strings live there
                       </li>
                     ))}
                   </ul>

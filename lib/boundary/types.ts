@@ -208,14 +208,12 @@ export interface WorldvolumeMatter {
   massSquared: string;
 }
 
-/** Where other stacks meet a worldvolume on a smaller intersection: states localised there. */
+/** Where other stacks meet a worldvolume (y = 0) on a smaller intersection: states localised there. */
 export interface WorldvolumeDefect {
   /** Ids of the stacks (one set of coincident stacks), in id order. */
   stacks: string[];
   /** Dimension nn + 1 of the intersection. */
   dimension: number;
-  /** Separation y between the worldvolumes, in units of sqrt(alpha') (0 when they meet). */
-  separation: number;
 }
 
 /**
@@ -238,7 +236,7 @@ export interface WorldvolumeTheory {
   flavour: WorldvolumeGroup[];
   /** Light states of strings to stacks that fill this worldvolume (flavour and parallel stacks). */
   matter: WorldvolumeMatter[];
-  /** Stacks meeting this worldvolume on a smaller intersection (their strings live there). */
+  /** Stacks meeting this worldvolume (y = 0) on a smaller intersection (their strings live there). */
   defects: WorldvolumeDefect[];
   /**
    * Real supercharges preserved by this worldvolume's stacks and every stack in `flavour` and
@@ -249,7 +247,10 @@ export interface WorldvolumeTheory {
   chirality: { positive: number; negative: number } | null;
   /** The usual name: "4d N=2", "2d (4,4)", "no supersymmetry", "no supersymmetry (bosonic string)". */
   supersymmetry: string;
-  /** One line, e.g. "4d: U(2), one fundamental hypermultiplet; U(1) flavour". */
+  /**
+   * One line, e.g. "4d: U(2), one fundamental hypermultiplet; U(1) flavour"; past four matter entries
+   * or defects it says how many more `matter` and `defects` hold.
+   */
   summary: string;
 }
 

@@ -114,7 +114,7 @@ describe("worldvolumes of computeSpectrum", () => {
       expect(d0.supersymmetry).toBe("1d N=4");
       // A lone D4: 16 supercharges, 5d N=2 (common practice).
       expect(worldvolumeOf(system, "d4").supersymmetry).toBe("5d N=2");
-      expect(worldvolumeOf(system, "d4").defects).toEqual([{ stacks: ["d0"], dimension: 1, separation: 0 }]);
+      expect(worldvolumeOf(system, "d4").defects).toEqual([{ stacks: ["d0"], dimension: 1 }]);
     });
 
     it("describes the D0 content as 9 adjoint scalars, a non-dynamical A_0 and 16 real fermions", () => {
@@ -172,6 +172,15 @@ describe("worldvolumes of computeSpectrum", () => {
       const result = computeSpectrum(config("IIA", []));
       expect(result.worldvolumes).toEqual([]);
       expect(result.gaugeGroup).toBe("none");
+    });
+
+    it("lists a defect only where the stacks meet, and names at most four matter entries in the summary", () => {
+      // A D0 off a D8 (y = 1.5) does not sit on it: no defect of the D8 (physics.md: y is the DD separation).
+      expect(worldvolumeOf(config("IIA", [stack("d8", axes(1, 8)), stack("d0", [], { position: { "9": 1.5 } })]), "d8").defects).toEqual([]);
+      const walls = Array.from({ length: 6 }, (_, i) => stack(`w${i}`, [1, 2, 3, 4, 5, 6, 7], { position: { "8": i + 1 } }));
+      const d3 = worldvolumeOf(config("IIB", [stack("d3", [1, 2, 3]), ...walls]), "d3");
+      expect(d3.matter).toHaveLength(6);
+      expect(d3.summary).toContain("and 2 more matter");
     });
 
     it("does not depend on the order of the stacks", () => {

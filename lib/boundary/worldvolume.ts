@@ -12,7 +12,8 @@
  *   flavour (global) symmetry (common practice, e.g. the D3-D7 system: 4d N=2 U(N) with N_7
  *   fundamental hypermultiplets and U(N_7) flavour; from memory). A parallel stack of the same
  *   worldvolume elsewhere gives bifundamental matter of two gauge groups.
- * - Stacks that meet A on a smaller intersection give states localised there: defects of A.
+ * - Stacks that meet A (y = 0) on a smaller intersection give states localised there: defects of A.
+ *   Stacks apart from A on such an intersection give it neither matter nor a defect.
  * - The supersymmetry of A's theory is the one preserved by A and by every stack whose strings
  *   fill A, from the explicit gamma matrices (`worldvolumeSupersymmetry`), named as usual
  *   (`nameSupersymmetry`).
@@ -133,7 +134,7 @@ function describeGroup(group: Group, groups: readonly Group[], input: DescribeWo
     const summary = input.pair(first, head);
     const fills = own.worldvolume.every((axis) => stack.worldvolume.includes(axis));
     if (!fills) {
-      defects.push({ stacks: ids(other.members), dimension: summary.sector.nn + 1, separation: summary.sector.separation });
+      if (summary.coincident) defects.push({ stacks: ids(other.members), dimension: summary.sector.nn + 1 });
       continue;
     }
     const higher = stack.worldvolume.length > axes.size;
@@ -168,19 +169,18 @@ function describeGroup(group: Group, groups: readonly Group[], input: DescribeWo
   );
 
   const gaugeGroup = `U(${group.rank})`;
-  const matterText = matter
-    .map((entry) => {
+  const matterText = summaryList(
+    matter.map((entry) => {
       const origin = entry.role === "gauge" ? ` (with ${quoteIds(entry.stacks)})` : flavour.length > 1 ? ` (from ${quoteIds(entry.stacks)})` : "";
-      return `, ${entry.description}${origin}`;
-    })
-    .join("");
+      return `${entry.description}${origin}`;
+    }),
+    "matter",
+  );
   const flavourText = flavour.length > 0 ? `; ${flavour.map((entry) => entry.group).join(" x ")} flavour` : "";
-  const defectText =
-    defects.length > 0
-      ? `; ${defects
-          .map((entry) => `${entry.dimension}d defect with ${quoteIds(entry.stacks)}${entry.separation > 0 ? ` at y = ${short(entry.separation)}` : ""}`)
-          .join(", ")}`
-      : "";
+  const defectText = summaryList(
+    defects.map((entry) => `${entry.dimension}d defect with ${quoteIds(entry.stacks)}`),
+    "defects",
+  );
 
   return {
     stacks: ids(group.members),
@@ -194,7 +194,7 @@ function describeGroup(group: Group, groups: readonly Group[], input: DescribeWo
     supercharges,
     chirality,
     supersymmetry,
-    summary: `${p + 1}d: ${gaugeGroup}${matterText}${flavourText}${defectText}`,
+    summary: `${p + 1}d: ${gaugeGroup}${matterText ? `, ${matterText}` : ""}${flavourText}${defectText ? `; ${defectText}` : ""}`,
   };
 }
 
@@ -286,6 +286,15 @@ function massSquaredText(summary: PairSummary): string {
 
 function short(value: number): string {
   return formatDecimal(value, { significantDigits: 4 });
+}
+
+/** Entries a summary line names before it says how many more there are. */
+const summaryEntries = 4;
+
+/** The first entries joined by ", ", and "and K more <what>" past `summaryEntries`. */
+function summaryList(entries: readonly string[], what: string): string {
+  const shown = entries.slice(0, summaryEntries).join(", ");
+  return entries.length > summaryEntries ? `${shown} and ${entries.length - summaryEntries} more ${what}` : shown;
 }
 
 function countWord(count: number): string {

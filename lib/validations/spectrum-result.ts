@@ -132,7 +132,7 @@ const worldvolumeSchema = z.object({
       massSquared: z.string(),
     }),
   ),
-  defects: z.array(z.object({ stacks: z.array(z.string()), dimension: z.number().int(), separation: z.number() })),
+  defects: z.array(z.object({ stacks: z.array(z.string()), dimension: z.number().int() })),
   supercharges: z.number().int().nullable(),
   chirality: z.object({ positive: z.number().int(), negative: z.number().int() }).nullable(),
   supersymmetry: z.string(),
