@@ -3,6 +3,7 @@
 import katex from "katex";
 import "katex/dist/katex.min.css";
 import { useMemo } from "react";
+import { fermionExpansionLatex, lightConeAxis } from "@/lib/boundary/expansion";
 import type { AxisExpansion } from "@/lib/boundary/types";
 import { Badge } from "@/components/ui/badge";
 
@@ -18,15 +19,16 @@ export interface ModeExpansionsProps {
 export function ModeExpansions({ axes }: ModeExpansionsProps) {
   const rendered = useMemo(
     () =>
-      axes.map((axis) => ({
-        axis,
-        boson: typeset(axis.latex),
-        fermions: axis.fermionLatex ? { NS: typeset(axis.fermionLatex.NS), R: typeset(axis.fermionLatex.R) } : null,
-      })),
+      axes.map((axis) => {
+        // Type II axes carry fermion modings; the expansions follow from the axis type alone.
+        const latex = axis.fermionModing ? fermionExpansionLatex(axis) : null;
+        return { axis, latex, boson: typeset(axis.latex), fermions: latex ? { NS: typeset(latex.NS), R: typeset(latex.R) } : null };
+      }),
     [axes],
   );
   const fermions = rendered.some((entry) => entry.fermions !== null);
-  const lightCone = axes.some((axis) => axis.lightCone);
+  const partner = lightConeAxis({ axes });
+  const lightCone = partner !== null;
   if (axes.length === 0) return <p className="text-xs text-muted-foreground">No mode expansions in this result.</p>;
   return (
     <div className="grid gap-1">
@@ -41,11 +43,11 @@ export function ModeExpansions({ axes }: ModeExpansionsProps) {
           </tr>
         </thead>
         <tbody>
-          {rendered.map(({ axis, boson, fermions: psi }) => (
+          {rendered.map(({ axis, latex, boson, fermions: psi }) => (
             <tr key={axis.axis} className="border-t border-border align-middle">
               <td className="px-2 py-1 font-mono whitespace-nowrap">
                 x{axis.axis}
-                {axis.lightCone ? (
+                {axis.axis === partner ? (
                   <Badge variant="accent" className="ml-1" title={"Paired with time in the light-cone gauge, x\u00b1 = x0 \u00b1 this axis"}>
                     light-cone
                   </Badge>
@@ -60,11 +62,11 @@ export function ModeExpansions({ axes }: ModeExpansionsProps) {
                 <div title={axis.latex} dangerouslySetInnerHTML={{ __html: boson }} />
                 {psi ? (
                   <div className="mt-0.5 grid gap-0.5 text-xs">
-                    <div title={axis.fermionLatex?.NS}>
+                    <div title={latex?.NS}>
                       <span className="mr-1 font-sans text-muted-foreground">NS:</span>
                       <span dangerouslySetInnerHTML={{ __html: psi.NS }} />
                     </div>
-                    <div title={axis.fermionLatex?.R}>
+                    <div title={latex?.R}>
                       <span className="mr-1 font-sans text-muted-foreground">R:</span>
                       <span dangerouslySetInnerHTML={{ __html: psi.R }} />
                     </div>

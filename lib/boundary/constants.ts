@@ -22,7 +22,8 @@ import { rational, type Rational } from "./rational";
  *   bosonic rows stop at the same alpha' M^2; before, each sector stopped at oscillator level N =
  *   levels). New fields: `worldvolumes` (gauge and flavour groups, light matter, defects and the
  *   supersymmetry of each worldvolume), `Sector.multiplet` (the W-boson multiplet of separated
- *   identical stacks), `AxisExpansion.fermionLatex` and `lightCone`. Bosonic pairs with every spatial
+ *   identical stacks); the worldsheet fermion expansions and the light-cone axis come from
+ *   `fermionExpansionLatex` and `lightConeAxis` (they need only the axis types). Bosonic pairs with every spatial
  *   axis ND are counted covariantly instead of listing no levels. Notes and massless descriptions
  *   for nu = 8 (string creation), D0 and D1 content; a D7 caution; conventions state M_s.
  *

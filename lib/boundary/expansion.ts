@@ -29,11 +29,7 @@ import type { AxisClassification, PairClassification } from "./classify";
 import { formatDecimal } from "./format";
 import type { AxisExpansion, AxisType, Moding, Theory } from "./types";
 
-/** Options of `expandAxis`. */
-export interface ExpandAxisOptions {
-  /** True when this axis is paired with time in the light-cone gauge (see the module doc). */
-  lightCone?: boolean;
-}
+
 
 /**
  * Moding of the boson X on an axis: integer on NN and DD, half-integer on ND and DN.
@@ -65,19 +61,17 @@ export function fermionModing(type: AxisType): { NS: Moding; R: Moding } {
  * Mode expansion of one spatial axis of an ordered pair, with the endpoint positions substituted.
  *
  * @param axis - The classified axis (from `classifyPair`); positions in units of sqrt(alpha').
- * @param theory - Fermion modings, fermion zero modes and fermion expansions are given for IIA/IIB only.
- * @param options - `lightCone`: mark the axis as the light-cone partner of time (default false).
+ * @param theory - Fermion modings and fermion zero modes are given for IIA/IIB only.
  * @returns Axis type, boson moding, fermion moding per sector (type II), the zero modes present
  *   ("x" and "p" on NN axes; for type II also the fermion zero modes "psi_0 (R)" on NN/DD axes or
- *   "psi_0 (NS)" on ND/DN axes), X^axis(tau, sigma) as LaTeX, the fermions psi and psi~ per sector
- *   as LaTeX (type II, in the boundary-sign convention of the module doc) and the light-cone mark.
- *   Positions print compactly (12 significant digits, trailing zeros trimmed; negative ones in
- *   parentheses when subtracted).
+ *   "psi_0 (NS)" on ND/DN axes), and X^axis(tau, sigma) as LaTeX. Positions print compactly
+ *   (12 significant digits, trailing zeros trimmed; negative ones in parentheses when subtracted).
+ *   The fermions' LaTeX comes from `fermionExpansionLatex`, which needs only the axis and type.
  * @example
  * expandAxis({ axis: 5, type: "DD", positionA: 0, positionB: 3.5 }, "bosonic").latex
  * // => "X^{5}(\\tau,\\sigma) = 0 + (3.5 - 0)\\frac{\\sigma}{\\pi} + \\sqrt{2\\alpha'}\\sum_{n\\neq0}\\frac{\\alpha_n}{n}e^{-in\\tau}\\sin n\\sigma"
  */
-export function expandAxis(axis: AxisClassification, theory: Theory, options: ExpandAxisOptions = {}): AxisExpansion {
+export function expandAxis(axis: AxisClassification, theory: Theory): AxisExpansion {
   const { type } = axis;
   const superstring = theory !== "bosonic";
   const zeroModes = type === "NN" ? ["x", "p"] : [];
@@ -88,26 +82,44 @@ export function expandAxis(axis: AxisClassification, theory: Theory, options: Ex
     bosonModing: bosonModing(type),
     zeroModes,
     latex: expansionLatex(axis),
-    lightCone: options.lightCone ?? false,
   };
-  if (superstring) {
-    expansion.fermionModing = fermionModing(type);
-    expansion.fermionLatex = fermionExpansions(axis);
-  }
+  if (superstring) expansion.fermionModing = fermionModing(type);
   return expansion;
+}
+
+/**
+ * The worldsheet fermions psi and psi~ on one axis as LaTeX, per sector, in the boundary-sign
+ * convention of the module doc (type II; normalisations left out).
+ *
+ * @param axis - The axis number and its type for the ordered pair (an `AxisExpansion` will do).
+ * @returns LaTeX for the NS and the R sector; the same strings for every call with the same axis and type.
+ * @example
+ * fermionExpansionLatex({ axis: 5, type: "DD" }).NS
+ * // => "\\psi^{5}(\\tau,\\sigma) = \\sum_{r\\in\\mathbb{Z}+1/2}\\psi^{5}_{r}e^{-ir(\\tau-\\sigma)},\\quad \\tilde\\psi^{5}(\\tau,\\sigma) = -\\sum_{r\\in\\mathbb{Z}+1/2}\\psi^{5}_{r}e^{-ir(\\tau+\\sigma)}"
+ */
+export function fermionExpansionLatex(axis: Pick<AxisClassification, "axis" | "type">): { NS: string; R: string } {
+  const key = `${axis.axis}${axis.type}`;
+  let cached = fermionCache.get(key);
+  if (!cached) {
+    const modings = fermionModing(axis.type);
+    cached = { NS: fermionLatex(axis, modings.NS), R: fermionLatex(axis, modings.R) };
+    fermionCache.set(key, cached);
+  }
+  // A copy, so that a caller changing one cannot change another.
+  return { NS: cached.NS, R: cached.R };
 }
 
 /**
  * The light-cone partner of time for a classified pair: the lowest NN axis, else the lowest DD axis,
  * else none (every spatial axis ND: counted covariantly).
  *
- * @param classification - From `classifyPair(a, b, D)`.
+ * @param classification - From `classifyPair(a, b, D)`, or a sector's `axes` as `{ axes }`.
  * @returns The axis number, or null.
  * @example
  * lightConeAxis(classifyPair(d3, d7, 10)) // => 1
  * lightConeAxis(classifyPair(d0, d0, 10)) // => 1 (a DD axis: the light-cone gauge is formal)
  */
-export function lightConeAxis(classification: Pick<PairClassification, "axes">): number | null {
+export function lightConeAxis(classification: { axes: ReadonlyArray<Pick<AxisClassification, "axis" | "type">> }): number | null {
   const nn = classification.axes.find((axis) => axis.type === "NN");
   if (nn) return nn.axis;
   return classification.axes.find((axis) => axis.type === "DD")?.axis ?? null;
@@ -118,13 +130,12 @@ export function lightConeAxis(classification: Pick<PairClassification, "axes">):
  *
  * @param classification - From `classifyPair(a, b, D)`.
  * @param theory - The configuration's theory.
- * @returns One `AxisExpansion` per spatial axis 1..D-1; the axis of `lightConeAxis` is marked.
+ * @returns One `AxisExpansion` per spatial axis 1..D-1.
  * @example
  * expandPair(classifyPair(a, a, 10), "IIB").length // => 9
  */
 export function expandPair(classification: Pick<PairClassification, "axes">, theory: Theory): AxisExpansion[] {
-  const partner = lightConeAxis(classification);
-  return classification.axes.map((axis) => expandAxis(axis, theory, { lightCone: axis.axis === partner }));
+  return classification.axes.map((axis) => expandAxis(axis, theory));
 }
 
 function expansionLatex(axis: AxisClassification): string {
@@ -146,20 +157,8 @@ function expansionLatex(axis: AxisClassification): string {
 /** Fermion expansions depend only on the axis number and type (no positions): built once each. */
 const fermionCache = new Map<string, { NS: string; R: string }>();
 
-function fermionExpansions(axis: AxisClassification): { NS: string; R: string } {
-  const key = `${axis.axis}${axis.type}`;
-  let cached = fermionCache.get(key);
-  if (!cached) {
-    const modings = fermionModing(axis.type);
-    cached = { NS: fermionLatex(axis, modings.NS), R: fermionLatex(axis, modings.R) };
-    fermionCache.set(key, cached);
-  }
-  // A copy per axis, so that a caller changing one result cannot change another.
-  return { NS: cached.NS, R: cached.R };
-}
-
 /** psi and psi~ on one axis in one sector (module doc: boundary-sign convention). */
-function fermionLatex(axis: AxisClassification, moding: Moding): string {
+function fermionLatex(axis: Pick<AxisClassification, "axis" | "type">, moding: Moding): string {
   const index = moding === "integer" ? "n" : "r";
   const range = moding === "integer" ? "\\mathbb{Z}" : "\\mathbb{Z}+1/2";
   const sum = `\\sum_{${index}\\in${range}}\\psi^{${axis.axis}}_{${index}}`;

@@ -72,19 +72,12 @@ export interface AxisExpansion {
   fermionModing?: { NS: Moding; R: Moding };
   /** Zero modes present: e.g. ["x", "p"] for NN, [] otherwise. */
   zeroModes: string[];
-  /** The mode expansion X(tau, sigma) as LaTeX, with the endpoint positions substituted. */
+  /**
+   * The mode expansion X(tau, sigma) as LaTeX, with the endpoint positions substituted. The fermions
+   * psi, psi~ depend only on the axis number and type, so they are not stored: `fermionExpansionLatex`
+   * writes them, and `lightConeAxis` names the axis paired with time.
+   */
   latex: string;
-  /**
-   * The worldsheet fermions psi and psi~ on this axis as LaTeX, per sector (type II only), in the
-   * boundary-sign convention of `expansion.ts`: psi = +psi~ at a Neumann end and -psi~ at a
-   * Dirichlet end of sigma = 0, the same times +1 (R) or -1 (NS) at sigma = pi.
-   */
-  fermionLatex?: { NS: string; R: string };
-  /**
-   * True on the spatial axis paired with time in the light-cone gauge, x^(+-) = x^0 +- x^k (the lowest
-   * NN axis, else the lowest DD axis); at most one axis per sector, none when it is counted covariantly.
-   */
-  lightCone: boolean;
 }
 
 export interface LevelRow {

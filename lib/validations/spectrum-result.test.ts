@@ -89,33 +89,24 @@ describe("readStoredResult", () => {
   });
 
   describe("a result of engine 1.0.1 (before the mass cap and the worldvolumes)", () => {
-    /** What 1.0.1 stored: no worldvolumes, multiplets, light-cone marks or fermion expansions. */
+    /** What 1.0.1 stored: no worldvolumes and no multiplets. */
     function engine101Result(): Record<string, unknown> {
       const result = stored();
       delete result.worldvolumes;
-      for (const sector of result.sectors as Array<Record<string, unknown>>) {
-        delete sector.multiplet;
-        for (const axis of sector.axes as Array<Record<string, unknown>>) {
-          delete axis.lightCone;
-          delete axis.fermionLatex;
-        }
-      }
+      for (const sector of result.sectors as Array<Record<string, unknown>>) delete sector.multiplet;
       return { ...result, engineVersion: "1.0.1" };
     }
     const upgraded = readStoredResult(engine101Result());
 
-    it("fills the new fields with defaults that claim nothing: no worldvolumes, no multiplets, no light-cone axis", () => {
+    it("fills the new fields with defaults that claim nothing: no worldvolumes and no multiplets", () => {
       expect(upgraded.worldvolumes).toEqual([]);
-      for (const sector of upgraded.sectors) {
-        expect(sector.multiplet).toBeNull();
-        expect(sector.axes.every((axis) => axis.lightCone === false && axis.fermionLatex === undefined)).toBe(true);
-      }
+      for (const sector of upgraded.sectors) expect(sector.multiplet).toBeNull();
     });
 
     it("says what was not recorded and that its levels were cut by oscillator level, not by mass", () => {
       // The fixture is IIA D0 and D8 along x9 (nu = 8): no separated identical stacks, so no multiplet is missing.
       expect(upgraded.warnings.filter((warning) => warning.startsWith("Stored by engine"))).toEqual([
-        "Stored by engine 1.0.1, which did not record the light-cone axis and the worldsheet fermion expansions or " +
+        "Stored by engine 1.0.1, which did not record " +
           "the theory on each worldvolume (gauge and flavour groups, light matter and supersymmetry); " +
           "save the configuration again to recompute the result with the current engine.",
         "Stored by engine 1.0.1, which listed every sector up to the oscillator level N = levels rather than up to the same alpha' M^2, " +

@@ -30,9 +30,6 @@ const countText = z.string().regex(countPattern, countMessage);
 const sectorKind = z.enum(["bosonic", "NS", "R"]);
 const moding = z.enum(["integer", "half-integer"]);
 
-/** An axis as stored by any engine version: engines before 1.1.0 did not mark the light-cone axis. */
-type StoredAxis = Omit<AxisExpansion, "lightCone"> & Partial<Pick<AxisExpansion, "lightCone">>;
-
 const axisSchema = z.object({
   axis: z.number().int(),
   type: z.enum(["NN", "DD", "ND", "DN"]),
@@ -40,9 +37,7 @@ const axisSchema = z.object({
   fermionModing: z.object({ NS: moding, R: moding }).optional(),
   zeroModes: z.array(z.string()),
   latex: z.string(),
-  fermionLatex: z.object({ NS: z.string(), R: z.string() }).optional(),
-  lightCone: z.boolean().optional(),
-}) satisfies z.ZodType<StoredAxis>;
+}) satisfies z.ZodType<AxisExpansion>;
 
 // The texts of the rows are checked by `checkRowTexts`, once per list: a zod check per field costs
 // about a microsecond, and a large result holds a few hundred thousand such fields.
@@ -83,7 +78,7 @@ const multipletSchema = z.object({
 type UpgradedSectorField = "supersymmetric" | "massless" | "notes" | "multiplet";
 
 /** A sector as stored by any engine version. */
-type StoredSector = Omit<Sector, UpgradedSectorField | "axes"> & Partial<Pick<Sector, UpgradedSectorField>> & { axes: StoredAxis[] };
+type StoredSector = Omit<Sector, UpgradedSectorField> & Partial<Pick<Sector, UpgradedSectorField>>;
 
 /** A sector as stored by any engine version (also the sector shape of the API reference). */
 export const storedSectorSchema = z.object({
@@ -224,26 +219,21 @@ const massCapVersion = [1, 1, 0] as const;
 /**
  * The upgrade step: missing lists become empty, missing conventions the statement of the engines
  * that did not store one (`conventionsBeforeMassCap`), a sector without a supersymmetry flag reads
- * as not supersymmetric, a sector without a multiplet as having none, an axis without a light-cone
- * mark as unmarked, and a result without worldvolumes as listing none. Where a default hides
+ * as not supersymmetric, a sector without a multiplet as having none, and a result without
+ * worldvolumes as listing none. Where a default hides
  * physics the old engine did not record, a warning names it, so that no screen presents a default
  * as a computed result; a result of an engine before 1.1.0 also says that its sectors were cut by
  * oscillator level rather than by mass.
  */
 function upgradeStoredResult(stored: StoredSpectrumResult): SpectrumResult {
   const unrecorded = new Set<string>();
-  const typeTwo = stored.theory !== "bosonic";
   const sectors = stored.sectors.map((sector): Sector => {
-    if (sector.supersymmetric === undefined && typeTwo) unrecorded.add("which sectors are supersymmetric");
+    if (sector.supersymmetric === undefined && stored.theory !== "bosonic") unrecorded.add("which sectors are supersymmetric");
     if (sector.massless === undefined) unrecorded.add("the massless content of each sector");
     // Only separated stacks with the same worldvolume can have a multiplet to name.
     if (sector.multiplet === undefined && sector.nu === 0 && sector.separation > 0) unrecorded.add("the W-boson multiplets of separated stacks");
-    if (sector.axes.some((axis) => axis.lightCone === undefined || (typeTwo && axis.fermionLatex === undefined))) {
-      unrecorded.add(typeTwo ? "the light-cone axis and the worldsheet fermion expansions" : "the light-cone axis");
-    }
     return {
       ...sector,
-      axes: sector.axes.map((axis) => ({ ...axis, lightCone: axis.lightCone ?? false })),
       // The bosonic string has no supersymmetry, so its default is not a guess.
       supersymmetric: sector.supersymmetric ?? false,
       massless: sector.massless ?? [],
