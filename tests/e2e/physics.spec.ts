@@ -81,7 +81,7 @@ test.describe("classic systems", () => {
     await expect(sector).toContainText("Without a fundamental string stretched between the stacks they feel a constant force");
     await expect(page.getByTestId("worldvolume-table")).toContainText("one fundamental fermionic mode in 0+1 dimensions");
     // The worldsheet fermions and the light-cone axis in the mode expansions.
-    await sector.getByText("Mode expansions").click();
+    await sector.getByText("Mode expansions", { exact: true }).click();
     await expect(sector.getByText("light-cone", { exact: true })).toHaveCount(1);
     await expect(sector.getByText(/Fermion boundary signs/)).toBeVisible();
   });
@@ -92,12 +92,12 @@ test.describe("classic systems", () => {
     const expected = computeSpectrum(system);
     const id = await createInGroup(page, system);
     await openResults(page, id);
+    // Ten sectors: the cards start closed, and an opened one loads its detail.
+    await page.getByTestId("sector-w-x").locator("summary").first().click();
     const multiplet = expected.sectors.find((sector) => sector.pair.join("-") === "w-x")?.multiplet;
     expect(multiplet).toBeTruthy();
     await expect(page.getByTestId("multiplet-w-x")).toContainText(`${multiplet?.name} in ${multiplet?.dimension} dimensions`);
     await expect(page.getByTestId("multiplet-w-x")).toContainText(multiplet?.content ?? "");
-    // Ten sectors: the tables start closed.
-    await page.getByTestId("sector-w-x").locator("summary").first().click();
     // NS and R rows of the same sector stop at the same alpha' M^2 = levels + (y / 2 pi)^2 = 2 + 1.
     const table = page.getByTestId("sector-w-x").getByRole("table").first();
     await expect(table.getByRole("columnheader", { name: /Oscillator level N/ })).toBeVisible();
