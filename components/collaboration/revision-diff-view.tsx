@@ -17,7 +17,7 @@ const fieldLabels: Record<ConfigurationDiff["fields"][number]["field"], string> 
   theory: "Theory",
   dimension: "Dimension",
   stringScaleGeV: "String scale (GeV)",
-  levels: "Levels",
+  levels: "Mass cap (\u03b1\u2032M\u00b2 at y = 0)",
 };
 
 /** What changed between two revisions: the document, then the spectrum (alpha' = 1). */
@@ -98,6 +98,20 @@ export function RevisionDiffView({ fromNumber, toNumber, configurationDiff, spec
                 Gauge group <Old>{spectrumDiff.gaugeGroup.before}</Old> → <New>{spectrumDiff.gaugeGroup.after}</New>
               </li>
             ) : null}
+            {spectrumDiff.worldvolumes.map((change) => (
+              <li key={`wv-${change.key}`}>
+                Worldvolume <code>{change.key.split("|").join(", ")}</code>:{" "}
+                {change.before === null ? (
+                  <New>{change.after}</New>
+                ) : change.after === null ? (
+                  <Old>{change.before}</Old>
+                ) : (
+                  <>
+                    <Old>{change.before}</Old> → <New>{change.after}</New>
+                  </>
+                )}
+              </li>
+            ))}
             {spectrumDiff.supercharges ? (
               <li>
                 Supercharges <Old>{show(spectrumDiff.supercharges.before)}</Old> → <New>{show(spectrumDiff.supercharges.after)}</New>

@@ -12,7 +12,7 @@ export interface LightestStatesTableProps {
   "data-testid"?: string;
 }
 
-const headings = ["Sector", "NS/R", "Level N", "\u03b1\u2032M\u00b2", "M\u221a\u03b1\u2032", "States", "With Chan-Paton"];
+const headings = ["Sector", "NS/R", "Oscillator level N", "\u03b1\u2032M\u00b2", "M\u221a\u03b1\u2032", "States", "With Chan-Paton"];
 
 /** The lightest states over all sectors, as the engine sorted them (alpha' = 1). */
 export function LightestStatesTable({ states, label, compact = false, "data-testid": testId }: LightestStatesTableProps) {
@@ -33,7 +33,7 @@ export function LightestStatesTable({ states, label, compact = false, "data-test
           {states.length === 0 ? (
             <tr>
               <td colSpan={headings.length} className={cn(cell, "text-center text-muted-foreground")}>
-                No states up to the highest level computed.
+                No states up to the mass cap.
               </td>
             </tr>
           ) : (

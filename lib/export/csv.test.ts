@@ -28,8 +28,9 @@ describe("spectrumToCsv", () => {
     expect(lines[1]).toBe(spectrumCsvColumns.join(","));
     // 2 comment/header records + 2 level rows + the empty string after the final CRLF
     expect(lines).toHaveLength(5);
-    expect(lines[2]).toBe('w,p,4,1,4,0,true,true,NS,0,-1/2,,1,4,"kept, brane, antibrane"');
-    expect(lines[3]).toBe("w,p,4,1,4,0,true,true,R,0,0,0,,16,");
+    // alpha_prime_mass_squared_at_y0 is N + a with the fixture's a = 0 in both sectors.
+    expect(lines[2]).toBe('w,p,4,1,4,0,true,true,NS,0,-1/2,0,,1,4,"kept, brane, antibrane"');
+    expect(lines[3]).toBe("w,p,4,1,4,0,true,true,R,0,0,0,0,,16,");
     expect(lines[4]).toBe("");
   });
 

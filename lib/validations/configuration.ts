@@ -50,7 +50,9 @@ export const configurationShapeSchema = z.object({
   theory: z.enum(["bosonic", "IIA", "IIB"], { error: 'The theory must be "bosonic", "IIA" or "IIB".' }),
   dimension: z.number({ error: "The dimension must be a number." }).optional(),
   stringScaleGeV: z.number({ error: "The string scale must be a number of GeV or null." }).nullable().default(null),
-  levels: z.number({ error: "Levels must be a number." }),
+  levels: z
+    .number({ error: "The mass cap (levels: the highest alpha' M^2 listed at zero separation) must be a number." })
+    .describe("Mass cap, a whole number 0 to 200: every sector lists its states with alpha' M^2 <= levels at zero separation (N + a <= levels)."),
   stacks: z.array(stackSchema, { error: "Stacks must be a list." }),
 });
 

@@ -1,13 +1,12 @@
 import { expect, test, type Locator, type Page } from "@playwright/test";
 import { computeSpectrum } from "@/lib/boundary";
 import type { Configuration } from "@/lib/boundary/types";
-import { formatMassSquared, parseResultNumber } from "@/lib/spectrum";
+import { formatEngineProse, formatMassSquared, parseResultNumber } from "@/lib/spectrum";
 import { demoAccounts, signIn } from "./helpers/accounts";
+import { createInGroup, unique } from "./helpers/configurations";
 
 // The designer end to end: Konva draws to a <canvas>, so every assertion goes through the
 // boundary grid, the live preview and the results tables, which mirror the model.
-
-const groupSlug = "brane-engineering";
 
 /** A small IIA document of our own: a D4 and a D0 above it. */
 function twoStackDocument(title: string): Configuration {
@@ -24,10 +23,6 @@ function twoStackDocument(title: string): Configuration {
   };
 }
 
-function unique(label: string): string {
-  return `${label} ${Date.now().toString(36)}${Math.random().toString(36).slice(2, 6)}`;
-}
-
 /** True when the Konva stage inside the canvas frame has the frame's current size in CSS pixels. */
 async function stageMatchesFrame(canvas: Locator): Promise<boolean> {
   return canvas.evaluate((frame) => {
@@ -35,16 +30,6 @@ async function stageMatchesFrame(canvas: Locator): Promise<boolean> {
     const box = frame.getBoundingClientRect();
     return stage !== null && stage.style.width === `${Math.floor(box.width)}px` && stage.style.height === `${Math.floor(box.height)}px`;
   });
-}
-
-/** Creates a configuration in the shared demo group through the API; returns its id. */
-async function createInGroup(page: Page, document: Configuration): Promise<string> {
-  const groups = (await (await page.request.get("/api/groups")).json()) as Array<{ id: string; slug: string }>;
-  const group = groups.find((g) => g.slug === groupSlug);
-  expect(group).toBeDefined();
-  const response = await page.request.post("/api/configurations", { data: { groupId: group?.id, document, message: "Created by the test" } });
-  expect(response.status()).toBe(201);
-  return ((await response.json()) as { id: string }).id;
 }
 
 async function openDesigner(page: Page, id: string): Promise<void> {
@@ -210,6 +195,13 @@ test.describe("designer", () => {
       await expect(cells.nth(6)).toHaveText(state.withChanPaton);
     }
     await expect(page.getByTestId("spectrum-supersymmetry")).toHaveText(`${expected.supercharges} supercharges`);
+    // The theory on each worldvolume, as the engine describes it.
+    const worldvolumes = page.getByTestId("spectrum-worldvolumes").getByRole("listitem");
+    await expect(worldvolumes).toHaveCount(expected.worldvolumes.length);
+    for (const [i, worldvolume] of expected.worldvolumes.entries()) {
+      await expect(worldvolumes.nth(i)).toContainText(formatEngineProse(worldvolume.summary));
+      await expect(worldvolumes.nth(i)).toContainText(worldvolume.supersymmetry);
+    }
     const tachyonic = expected.sectors.filter((s) => s.tachyonic).length;
     await expect(page.getByTestId("spectrum-stability")).toHaveText(tachyonic === 0 ? "No tachyons" : new RegExp(`^${tachyonic} tachyonic sector`));
 

@@ -46,9 +46,11 @@ describe("POST /api/spectrum", () => {
     expect(response.status).toBe(200);
     const result = (await response.json()) as SpectrumResult;
     expect(result.dimension).toBe(26);
+    // The mass cap levels = 1 lists alpha' M^2 <= 1: N = 0, 1, 2 with 1, 24, 324 states (OEIS A005758).
     expect(result.sectors[0]?.levels.map((row) => [row.massSquared, row.states])).toEqual([
       ["-1", "1"],
       ["0", "24"],
+      ["1", "324"],
     ]);
   });
 
