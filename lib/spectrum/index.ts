@@ -11,6 +11,7 @@ export { pairKey } from "./pair-key";
 export { lightestBySector, lightestLevel, type SectorLightest } from "./lightest";
 export { isTachyonicState, tachyonicSectors, type TachyonicSector, type TachyonSource } from "./tachyons";
 export { summarizeResult, summaryFacts, type ResultSummary, type SummaryFacts } from "./summary";
+export { massInGeV } from "./gev";
 export { displaySignificantDigits, formatMassSquared, formatNumber, formatPair, type FormatNumberOptions } from "./format";
 export {
   pageSectorOverviews,

@@ -2,6 +2,7 @@ import { expect, test, type Locator, type Page } from "@playwright/test";
 import { computeSpectrum } from "@/lib/boundary";
 import type { Configuration } from "@/lib/boundary/types";
 import { formatMassSquared, parseResultNumber } from "@/lib/spectrum";
+import { slabAndPoint } from "../fixtures/slab-and-point";
 import { demoAccounts, signIn } from "./helpers/accounts";
 
 // The designer end to end: Konva draws to a <canvas>, so every assertion goes through the
@@ -10,19 +11,7 @@ import { demoAccounts, signIn } from "./helpers/accounts";
 const groupSlug = "brane-engineering";
 
 /** A small IIA document of our own: a D4 and a D0 above it. */
-function twoStackDocument(title: string): Configuration {
-  return {
-    format: 1,
-    title,
-    theory: "IIA",
-    stringScaleGeV: null,
-    levels: 3,
-    stacks: [
-      { id: "a", label: "slab", count: 1, anti: false, worldvolume: [1, 2, 3, 4], position: {} },
-      { id: "b", label: "point", count: 1, anti: false, worldvolume: [], position: { "9": 1.5 } },
-    ],
-  };
-}
+const twoStackDocument = slabAndPoint;
 
 function unique(label: string): string {
   return `${label} ${Date.now().toString(36)}${Math.random().toString(36).slice(2, 6)}`;
