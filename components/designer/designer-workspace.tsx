@@ -11,6 +11,7 @@ import { fetchStaleSave, type StaleSave } from "@/lib/client/stale-save";
 import { announceSavedVersion, subscribeToSavedVersions } from "@/lib/client/version-channel";
 import { ApiError } from "@/lib/client/api-client";
 import { selectDocument, useDesignerStore } from "@/lib/client/designer-store";
+import { limitText } from "@/lib/text-limit";
 import { configurationTitleMaxLength } from "@/lib/validations/configuration";
 import { Alert } from "@/components/ui/alert";
 import { Badge } from "@/components/ui/badge";
@@ -242,14 +243,9 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
             readOnly={!canEdit}
             aria-describedby={titleNote ? "configuration-title-note" : undefined}
             onChange={(event) => {
-              const typed = event.target.value;
-              // Longer text is cut to the limit, and the note says so instead of the field silently refusing keys.
-              setTitleNote(
-                typed.length > configurationTitleMaxLength
-                  ? `Titles hold at most ${configurationTitleMaxLength} characters; the last ${typed.length - configurationTitleMaxLength} were left out.`
-                  : null,
-              );
-              setTitle(typed);
+              const limited = limitText(event.target.value, configurationTitleMaxLength, "Titles");
+              setTitleNote(limited.note);
+              setTitle(limited.text);
             }}
             onBlur={() => setTitleNote(null)}
             className="-ml-1 w-full min-w-0 truncate rounded px-1 text-xl font-semibold tracking-tight hover:bg-surface-muted focus:bg-surface focus-visible:outline-2 focus-visible:outline-ring"

@@ -12,6 +12,11 @@ export interface DocumentSettingsProps {
  * The settings of the whole configuration beside its stacks: how many oscillator levels the
  * spectrum lists, and the string scale M_s = 1/sqrt(alpha') in GeV that adds masses in GeV.
  */
+/** 1e16 rather than 10000000000000000: scales of interest run from TeV to beyond the GUT scale. */
+function scientific(value: number): string {
+  return value >= 1e6 ? value.toExponential().replace("e+", "e") : String(value);
+}
+
 export function DocumentSettings({ readOnly = false }: DocumentSettingsProps) {
   const document = useDesignerStore(selectDocument);
   const { setLevels, setStringScale } = useDesignerStore.getState();
@@ -50,6 +55,7 @@ export function DocumentSettings({ readOnly = false }: DocumentSettingsProps) {
           positive
           max={maxStringScaleGeV}
           unit="GeV"
+          formatValue={scientific}
           disabled={readOnly}
           name="The string scale"
           onCommit={setStringScale}

@@ -19,6 +19,8 @@ export interface NumberFieldProps extends Omit<ComponentProps<"input">, "value" 
   integer?: boolean;
   positive?: boolean;
   unit?: string;
+  /** How the stored value is written into the field (default `String`). */
+  formatValue?: (value: number) => string;
   /** Classes of the wrapper (the input keeps `className`). */
   wrapperClassName?: string;
 }
@@ -40,13 +42,14 @@ export function NumberField({
   positive = false,
   onClear,
   unit,
+  formatValue = String,
   className,
   wrapperClassName,
   onBlur,
   onKeyDown,
   ...props
 }: NumberFieldProps) {
-  const shownValue = value === null ? "" : String(value);
+  const shownValue = value === null ? "" : formatValue(value);
   const [text, setText] = useState(shownValue);
   const [focused, setFocused] = useState(false);
   /** A refused text's explanation, kept after leaving the field until the next edit. */

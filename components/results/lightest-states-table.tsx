@@ -41,11 +41,17 @@ export function LightestStatesTable({ states, label, compact = false, stringScal
         <thead className="bg-surface-muted/70 text-xs text-muted-foreground">
           <tr>
             {headings.map((heading, i) => (
-              <th key={heading.text} scope="col" className={cn(cell, "font-semibold", i < 2 ? "text-left" : "text-right")}>
+              <th
+                key={heading.text}
+                scope="col"
+                title={compact && heading.short ? heading.text : undefined}
+                className={cn(cell, "font-semibold", i < 2 ? "text-left" : "text-right")}
+              >
                 {compact && heading.short ? (
-                  <abbr title={heading.text} aria-label={heading.text} className="no-underline">
-                    {heading.short}
-                  </abbr>
+                  <>
+                    <span aria-hidden="true">{heading.short}</span>
+                    <span className="sr-only">{heading.text}</span>
+                  </>
                 ) : (
                   heading.text
                 )}
