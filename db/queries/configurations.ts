@@ -4,7 +4,7 @@ import type { Configuration } from "../../lib/boundary/types";
 import { parseConfigurationFileBytes } from "../../lib/validations/import";
 import { ForbiddenError, NotFoundError, ValidationError } from "../../lib/errors";
 import { db, type Executor } from "../index";
-import { configurations, groups, memberships, users, type GroupRole } from "../schema";
+import { configurations, groups, memberships, shareLinks, users, type GroupRole } from "../schema";
 import { assertUuid, requireActor, requireGroupRole, type Actor } from "./actor";
 import { recordAudit } from "./audit";
 import { getPersonalGroup } from "./groups";
@@ -72,8 +72,8 @@ export async function getConfiguration(
   actor: Actor | null,
   configurationId: string,
 ): Promise<ConfigurationDto> {
-  const { row, role } = await requireConfigurationRole(db, actor, configurationId, "viewer");
-  return toConfigurationDto(db, actor, row, role);
+  const { row, role, context } = await requireConfigurationRole(db, actor, configurationId, "viewer");
+  return toConfigurationDto(row, context, role);
 }
 
 /**
@@ -127,7 +127,9 @@ async function insertConfiguration(
   const columns = documentColumns(document, computed.summary);
   return db.transaction(async (tx) => {
     const role = await requireGroupRole(tx, actor, groupId, "editor");
-    if (options.isStarter) await assertCanPublishStarter(tx, groupId, role);
+    const [group] = await tx.select().from(groups).where(eq(groups.id, groupId));
+    if (!group) throw new NotFoundError("No such group.");
+    if (options.isStarter) assertCanPublishStarter(group, role);
     const [created] = await tx
       .insert(configurations)
       .values({ groupId, ...columns, version: 1, isStarter: options.isStarter ?? false, createdBy: author.id })
@@ -142,7 +144,7 @@ async function insertConfiguration(
       entityId: created.id,
       details: { title: columns.title, isStarter: created.isStarter },
     });
-    return toConfigurationDto(tx, actor, row, role);
+    return toConfigurationDto(row, { group, authorName: author.name, source: null }, role);
   });
 }
 
@@ -160,7 +162,7 @@ export async function updateConfiguration(
   const computed = await resultForDocument(db, input.document);
   const columns = documentColumns(input.document, computed.summary);
   return db.transaction(async (tx) => {
-    const { role } = await requireConfigurationRole(tx, actor, configurationId, "editor");
+    const { role, context } = await requireConfigurationRole(tx, actor, configurationId, "editor");
     const bumped = await bumpVersion(tx, configurationId, input.expectedVersion, columns);
     const row = await addRevision(tx, bumped, author.id, input.message, computed);
     await recordAudit(tx, {
@@ -171,31 +173,41 @@ export async function updateConfiguration(
       entityId: row.id,
       details: { version: row.version },
     });
-    return toConfigurationDto(tx, actor, row, role);
+    return toConfigurationDto(row, context, role);
   });
 }
 
-/** Moves a configuration to the bin (editor or better); `undeleteConfiguration` brings it back. */
+/**
+ * Moves a configuration to the bin (editor or better); `undeleteConfiguration` brings it back. Its
+ * share links are revoked with it and stay revoked after an undelete: a link someone handed out
+ * for the old configuration should not start working again without anyone deciding so.
+ */
 export async function softDeleteConfiguration(actor: Actor | null, configurationId: string): Promise<void> {
   const signedIn = requireActor(actor);
   await db.transaction(async (tx) => {
     const { row } = await requireConfigurationRole(tx, actor, configurationId, "editor");
+    const now = new Date();
     await tx
       .update(configurations)
-      .set({ deletedAt: new Date() })
+      .set({ deletedAt: now })
       .where(and(eq(configurations.id, row.id), isNull(configurations.deletedAt)));
+    const revoked = await tx
+      .update(shareLinks)
+      .set({ revokedAt: now })
+      .where(and(eq(shareLinks.configurationId, row.id), isNull(shareLinks.revokedAt)))
+      .returning({ id: shareLinks.id });
     await recordAudit(tx, {
       actorId: signedIn.id,
       groupId: row.groupId,
       action: "configuration.delete",
       entityType: "configuration",
       entityId: row.id,
-      details: { title: row.title },
+      details: { title: row.title, revokedShareLinks: revoked.length },
     });
   });
 }
 
-/** Restores a soft-deleted configuration (editor or better in its group). */
+/** Restores a soft-deleted configuration (editor or better in its group); its share links stay revoked. */
 export async function undeleteConfiguration(
   actor: Actor | null,
   configurationId: string,
@@ -209,13 +221,8 @@ export async function undeleteConfiguration(
       .where(eq(configurations.id, configurationId))
       .limit(1);
     if (!row) throw new NotFoundError("No such configuration.");
-    const role = await requireGroupRole(tx, actor, row.groupId, "editor", "configuration");
-    const [restored] = await tx
-      .update(configurations)
-      .set({ deletedAt: null })
-      .where(eq(configurations.id, configurationId))
-      .returning();
-    if (!restored) throw new NotFoundError("No such configuration.");
+    await requireGroupRole(tx, actor, row.groupId, "editor", "configuration");
+    await tx.update(configurations).set({ deletedAt: null }).where(eq(configurations.id, configurationId));
     await recordAudit(tx, {
       actorId: signedIn.id,
       groupId: row.groupId,
@@ -223,7 +230,8 @@ export async function undeleteConfiguration(
       entityType: "configuration",
       entityId: row.id,
     });
-    return toConfigurationDto(tx, actor, restored, role);
+    const restored = await requireConfigurationRole(tx, actor, configurationId, "editor");
+    return toConfigurationDto(restored.row, restored.context, restored.role);
   });
 }
 
@@ -235,8 +243,8 @@ export async function setConfigurationStarter(
 ): Promise<ConfigurationDto> {
   const signedIn = requireActor(actor);
   return db.transaction(async (tx) => {
-    const { row, role } = await requireConfigurationRole(tx, actor, configurationId, "owner");
-    if (isStarter) await assertCanPublishStarter(tx, row.groupId, role);
+    const { row, role, context } = await requireConfigurationRole(tx, actor, configurationId, "owner");
+    if (isStarter) assertCanPublishStarter(context.group, role);
     const [updated] = await tx
       .update(configurations)
       .set({ isStarter })
@@ -250,13 +258,12 @@ export async function setConfigurationStarter(
       entityType: "configuration",
       entityId: row.id,
     });
-    return toConfigurationDto(tx, actor, updated, role);
+    return toConfigurationDto(updated, context, role);
   });
 }
 
-async function assertCanPublishStarter(executor: Executor, groupId: string, role: GroupRole) {
-  const [group] = await executor.select({ kind: groups.kind }).from(groups).where(eq(groups.id, groupId));
-  if (group?.kind !== "lab") throw ValidationError.at(["isStarter"], "Only lab groups publish starter configurations.");
+function assertCanPublishStarter(group: Pick<typeof groups.$inferSelect, "kind">, role: GroupRole) {
+  if (group.kind !== "lab") throw ValidationError.at(["isStarter"], "Only lab groups publish starter configurations.");
   if (role !== "owner") throw new ForbiddenError("Only the lab's owners publish starter configurations.");
 }
 

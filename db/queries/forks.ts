@@ -5,7 +5,7 @@ import { ForbiddenError, NotFoundError, ValidationError } from "../../lib/errors
 import { distinctTitle } from "../../lib/titles";
 import { configurationTitleMaxLength } from "../../lib/validations/configuration";
 import { db } from "../index";
-import { configurations, revisions } from "../schema";
+import { configurations, groups, revisions } from "../schema";
 import { assertUuid, getGroupRole, requireActor, roleAtLeast, type Actor } from "./actor";
 import { recordAudit } from "./audit";
 import { requireConfigurationRole } from "./configuration-access";
@@ -93,7 +93,10 @@ export async function forkConfiguration(
       entityId: row.id,
       details: { sourceConfigurationId: source.id, sourceRevisionId: revision.id, withDraft: input.document !== undefined },
     });
-    return toConfigurationDto(tx, actor, row, targetRole);
+    const [group] = await tx.select().from(groups).where(eq(groups.id, input.targetGroupId));
+    if (!group) throw new NotFoundError("No such group.");
+    const forkedFrom = { configurationId: source.id, revisionId: revision.id, title: source.title, revisionNumber: revision.number };
+    return toConfigurationDto(row, { group, authorName: author.name, source: forkedFrom }, targetRole);
   });
 }
 

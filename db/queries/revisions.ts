@@ -99,7 +99,7 @@ export async function restoreRevision(
   const author = requireActor(actor);
   assertUuid(revisionId, "revision");
   return db.transaction(async (tx) => {
-    const { row: current, role } = await requireConfigurationRole(tx, actor, configurationId, "editor");
+    const { row: current, role, context } = await requireConfigurationRole(tx, actor, configurationId, "editor");
     const [old] = await tx
       .select()
       .from(revisions)
@@ -122,7 +122,7 @@ export async function restoreRevision(
       entityId: row.id,
       details: { restoredRevisionId: old.id, restoredNumber: old.number, version: row.version },
     });
-    return toConfigurationDto(tx, actor, row, role);
+    return toConfigurationDto(row, context, role);
   });
 }
 

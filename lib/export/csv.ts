@@ -65,7 +65,7 @@ export function spectrumToCsv(result: SpectrumResult, options: SpectrumToCsvOpti
       ]);
     }
   }
-  return records.map((record) => record.map(quoteCsvField).join(",")).join("\r\n") + "\r\n";
+  return records.map((record) => record.map((field) => quoteCsvField(neutralizeCsvFormula(field))).join(",")).join("\r\n") + "\r\n";
 }
 
 /**
@@ -76,4 +76,22 @@ export function spectrumToCsv(result: SpectrumResult, options: SpectrumToCsvOpti
  */
 export function quoteCsvField(value: string): string {
   return /[",\r\n]/.test(value) ? `"${value.replaceAll('"', '""')}"` : value;
+}
+
+// A spreadsheet reads a cell starting with one of these as a formula (OWASP, "CSV Injection").
+const formulaStart = /^[-=+@\t\r]/;
+// Numbers as the engine writes them: decimals, exponents and exact fractions such as "-1/2".
+const plainNumber = /^[-+]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[-+]?\d+)?(?:\/\d+)?$/i;
+
+/**
+ * Keeps a spreadsheet from running a cell as a formula: text starting with "-", "=", "+", "@", a
+ * tab or a CR gets a leading apostrophe (OWASP's advice). Plain numbers, negative masses squared
+ * like "-1/4" included, stay as they are.
+ *
+ * @example
+ * neutralizeCsvFormula("=HYPERLINK(\"x\")") // => "'=HYPERLINK(\"x\")"
+ * neutralizeCsvFormula("-1/2")               // => "-1/2"
+ */
+export function neutralizeCsvFormula(value: string): string {
+  return formulaStart.test(value) && !plainNumber.test(value) ? `'${value}` : value;
 }

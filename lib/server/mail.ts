@@ -27,6 +27,28 @@ export async function sendMail(content: MailContent): Promise<void> {
   await getTransporter().sendMail({ from: getEnv().MAIL_FROM, ...content });
 }
 
+const inFlight = new Set<Promise<void>>();
+
+/**
+ * Sends mail after the caller has answered, so how long SMTP takes (or whether there was anything
+ * to send at all) never shows in a response's timing. `deliver` may do its own database work
+ * first (issuing a token). A failure is logged; the person can ask again.
+ *
+ * @param what - Names the message in the log, e.g. "a password-reset link".
+ */
+export function sendMailInBackground(what: string, deliver: () => Promise<void>): void {
+  const task: Promise<void> = new Promise<void>((resolve) => setImmediate(resolve))
+    .then(deliver)
+    .catch((error: unknown) => console.error(`Sending ${what} failed:`, error))
+    .finally(() => inFlight.delete(task));
+  inFlight.add(task);
+}
+
+/** Resolves once every message handed to `sendMailInBackground` so far has been sent or has failed. */
+export async function settleBackgroundMail(): Promise<void> {
+  while (inFlight.size > 0) await Promise.all([...inFlight]);
+}
+
 /** An absolute link into the app, based on NEXTAUTH_URL (the public address of the app). */
 export function absoluteUrl(path: string): string {
   const base = getEnv().NEXTAUTH_URL ?? "http://127.0.0.1:3000";
@@ -71,6 +93,53 @@ export async function sendPasswordResetMail({ to, name, token, expiresAt }: Pass
       paragraphs: [`Someone asked to reset the password of your Mooring account. The link works once and expires ${describeExpiry(expiresAt)}.`],
       action: { label: "Choose a new password", url },
       footnote: "If you did not ask for this, ignore this message; your password stays as it is.",
+    }),
+  );
+}
+
+export interface SignUpConfirmationMail {
+  to: string;
+  name: string;
+  token: string;
+  expiresAt: Date;
+  /** Where to go once the account exists (a safe same-site path); omitted for the dashboard. */
+  callbackQuery: string;
+}
+
+export async function sendSignUpConfirmationMail({ to, name, token, expiresAt, callbackQuery }: SignUpConfirmationMail): Promise<void> {
+  const url = absoluteUrl(`/sign-up/confirm/${encodeURIComponent(token)}${callbackQuery}`);
+  await sendMail(
+    renderMail({
+      to,
+      subject: "Confirm your address to finish your Mooring account",
+      greeting: `Hello ${name},`,
+      paragraphs: [
+        `To finish creating your Mooring account, open this link and enter the password you chose. It expires ${describeExpiry(expiresAt)}.`,
+      ],
+      action: { label: "Finish creating the account", url },
+      footnote: "If you did not sign up for Mooring, ignore this message: no account is created without it.",
+    }),
+  );
+}
+
+export interface ExistingAccountMail {
+  to: string;
+  name: string;
+}
+
+/** Sent instead of a confirmation when someone signs up with an address that already has an account. */
+export async function sendExistingAccountMail({ to, name }: ExistingAccountMail): Promise<void> {
+  await sendMail(
+    renderMail({
+      to,
+      subject: "You already have a Mooring account",
+      greeting: `Hello ${name},`,
+      paragraphs: [
+        "Someone, perhaps you, tried to create a Mooring account with this address. It already has an account, so nothing was changed.",
+        "Sign in with your password, or ask for a sign-in link or a password reset on the sign-in page.",
+      ],
+      action: { label: "Sign in to Mooring", url: absoluteUrl("/sign-in") },
+      footnote: "If it was not you, you can ignore this message; your account is as it was.",
     }),
   );
 }

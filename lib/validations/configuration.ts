@@ -72,3 +72,9 @@ export const configurationSchema = configurationShapeSchema.superRefine((configu
 /** Body of `POST /api/spectrum`: the configuration document itself. */
 export const spectrumRequestSchema = configurationSchema;
 
+
+/** Query of `POST /api/spectrum`: sectors from `sectorOffset` keep their level rows until `maxRows` rows. */
+export const spectrumQuerySchema = z.object({
+  sectorOffset: z.coerce.number({ error: "sectorOffset must be a whole number." }).int().min(0).max(1_000_000).default(0),
+  maxRows: z.coerce.number({ error: "maxRows must be a whole number." }).int().min(1).max(20_000).default(10_000),
+});

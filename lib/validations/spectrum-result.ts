@@ -70,7 +70,8 @@ type UpgradedSectorField = "supersymmetric" | "massless" | "notes";
 /** A sector as stored by any engine version. */
 type StoredSector = Omit<Sector, UpgradedSectorField> & Partial<Pick<Sector, UpgradedSectorField>>;
 
-const storedSectorSchema = z.object({
+/** A sector as stored by any engine version (also the sector shape of the API reference). */
+export const storedSectorSchema = z.object({
   pair: z.tuple([z.string(), z.string()]),
   nn: z.number().int(),
   dd: z.number().int(),
@@ -104,7 +105,8 @@ type UpgradedResultField = "warnings" | "conventions";
 export type StoredSpectrumResult = Omit<SpectrumResult, UpgradedResultField | "sectors"> &
   Partial<Pick<SpectrumResult, UpgradedResultField>> & { sectors: StoredSector[] };
 
-const storedResultShape = z.object({
+/** A result as stored by any engine version, before the upgrade step (also the result shape of the API reference). */
+export const storedResultShape = z.object({
   engineVersion: z.string().min(1, "A stored result names the engine version that computed it."),
   theory: z.enum(["bosonic", "IIA", "IIB"]),
   dimension: z.number().int(),

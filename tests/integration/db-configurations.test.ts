@@ -367,6 +367,37 @@ describe("lab starters", () => {
     await expect(setConfigurationStarter(student.actor, starter.id, false)).rejects.toBeInstanceOf(ForbiddenError);
   });
 
+  it("lets the lab's instructors read a student's fork of a starter, and nobody else outside the student's space", async () => {
+    const instructor = await createTestUser({ label: "instructor" });
+    const assistant = await createTestUser({ label: "assistant" });
+    const student = await createTestUser({ label: "student" });
+    const classmate = await createTestUser({ label: "classmate" });
+    const lab = await createTestGroup(
+      instructor.actor,
+      [
+        { actor: assistant.actor, role: "editor" },
+        { actor: student.actor, role: "viewer" },
+        { actor: classmate.actor, role: "viewer" },
+      ],
+      "lab",
+    );
+    const starter = await createConfiguration(instructor.actor, lab.id, twoTwoBraneStacks, "Starter", { isStarter: true });
+    const fork = await forkConfiguration(student.actor, starter.id, { targetGroupId: student.personalGroupId });
+
+    const seen = await getConfiguration(instructor.actor, fork.id);
+    expect(seen).toMatchObject({ id: fork.id, role: "viewer", canEdit: false, forkedFrom: { configurationId: starter.id, title: twoTwoBraneStacks.title } });
+    expect((await getConfiguration(assistant.actor, fork.id)).role).toBe("viewer");
+    expect((await listRevisions(instructor.actor, fork.id)).map((revision) => revision.number)).toEqual([1]);
+    await expect(
+      updateConfiguration(instructor.actor, fork.id, { expectedVersion: 1, document: twoTwoBraneStacks, message: "not mine" }),
+    ).rejects.toBeInstanceOf(ForbiddenError);
+    // A fellow student of the lab is no instructor: the fork stays hidden.
+    await expect(getConfiguration(classmate.actor, fork.id)).rejects.toBeInstanceOf(NotFoundError);
+    // Once the starter is withdrawn the fork is the student's alone again.
+    await setConfigurationStarter(instructor.actor, starter.id, false);
+    await expect(getConfiguration(instructor.actor, fork.id)).rejects.toBeInstanceOf(NotFoundError);
+  });
+
   it("refuses starters outside lab groups", async () => {
     const { owner, group } = await scenario();
     await expect(

@@ -3,7 +3,6 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { SiteRoleForm } from "@/components/admin/site-role-form";
 import { PageContainer } from "@/components/layout/page-container";
-import { Badge } from "@/components/ui/badge";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Input } from "@/components/ui/input";
@@ -79,11 +78,6 @@ export default async function AdminPage({ searchParams }: { searchParams: Promis
                 </TableCell>
                 <TableCell>
                   <span className="font-mono text-[13px]">{row.email}</span>
-                  {row.lockedUntil ? (
-                    <Badge variant="danger" className="ml-2">
-                      locked
-                    </Badge>
-                  ) : null}
                 </TableCell>
                 <TableCell>
                   <SiteRoleForm userId={row.id} userName={row.name} siteRole={row.siteRole} />
