@@ -2,7 +2,7 @@ import "server-only";
 import { randomUUID } from "node:crypto";
 import { and, asc, count, eq, ilike, inArray, isNull, sql, type SQL } from "drizzle-orm";
 import type { Configuration } from "../../lib/boundary/types";
-import { parseConfigurationFile } from "../../lib/validations/import";
+import { parseConfigurationFileBytes } from "../../lib/validations/import";
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from "../../lib/errors";
 import { db } from "../index";
 import { auditLog, configurations, groups, memberships, results, revisions, shareLinks, users, type GroupRole } from "../schema";
@@ -98,19 +98,19 @@ export interface ImportConfigurationInput {
   /** The receiving group; the actor's personal space when omitted. */
   groupId?: string;
   fileName: string;
-  /** The file's text (UTF-8). */
-  text: string;
+  /** The file's bytes, judged by their content (UTF-8 JSON is expected). */
+  bytes: Uint8Array;
 }
 
 /**
- * Creates a configuration from the text of a configuration file (editor or better in the group).
+ * Creates a configuration from a configuration file (editor or better in the group).
  * Every problem of the file is reported at once with its JSON path inside the file (422), and
  * nothing is saved from an invalid file.
  */
 export async function importConfiguration(actor: Actor | null, input: ImportConfigurationInput): Promise<ConfigurationDto> {
   const signedIn = requireActor(actor);
   if (input.groupId !== undefined) assertUuid(input.groupId, "group");
-  const document = parseConfigurationFile(input.text);
+  const document = parseConfigurationFileBytes(input.bytes);
   const computed = await resultForDocument(db, document, { problemsAt: [] });
   const groupId = input.groupId ?? (await getPersonalGroup(signedIn)).id;
   return insertConfiguration(actor, groupId, document, `Imported from ${input.fileName || "a file"}`, computed, {});

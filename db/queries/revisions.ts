@@ -8,10 +8,8 @@ import { recordAudit } from "./audit";
 import { requireConfigurationRole } from "./configuration-access";
 import {
   toConfigurationDto,
-  toResultDto,
   toRevisionSummary,
   type ConfigurationDto,
-  type ResultDto,
   type RevisionDto,
   type RevisionSummaryDto,
 } from "./configuration-dtos";

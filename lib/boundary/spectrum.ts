@@ -34,7 +34,6 @@ import {
   formatRational,
   isNegativeRational,
   isZeroRational,
-  parseRational,
   rational,
   rationalToNumber,
   subtractRational,

@@ -1,6 +1,7 @@
 import "server-only";
 import nodemailer, { type Transporter } from "nodemailer";
 import { getEnv } from "@/lib/server/env";
+import { countOf, withArticle } from "@/lib/wording";
 
 /** One message: plain text always, HTML as a courtesy; both say the same. */
 export interface MailContent {
@@ -161,7 +162,7 @@ export async function sendInvitationMail({ to, groupName, inviterName, role, acc
       subject: `${inviterName} invited you to ${groupName} on Mooring`,
       greeting: "Hello,",
       paragraphs: [
-        `${inviterName} invited you to join “${groupName}” on Mooring as ${role === "owner" ? "an owner" : `an ${role}`}.`,
+        `${inviterName} invited you to join “${groupName}” on Mooring as ${withArticle(role)}.`,
         `Accept with the link below; it expires ${describeExpiry(expiresAt)}. If you have no account yet, you can create one on the way.`,
       ],
       action: { label: `Join ${groupName}`, url },
@@ -196,10 +197,10 @@ ${paragraphs.map((p) => `<p style="margin:0 0 16px;line-height:1.5">${escapeHtml
 
 function describeExpiry(expiresAt: Date): string {
   const minutes = Math.max(1, Math.round((expiresAt.getTime() - Date.now()) / 60_000));
-  if (minutes < 120) return `in ${minutes} minutes`;
+  if (minutes < 120) return `in ${countOf(minutes, "minute")}`;
   const hours = Math.round(minutes / 60);
-  if (hours < 48) return `in ${hours} hours`;
-  return `in ${Math.round(hours / 24)} days`;
+  if (hours < 48) return `in ${countOf(hours, "hour")}`;
+  return `in ${countOf(Math.round(hours / 24), "day")}`;
 }
 
 function escapeHtml(value: string): string {

@@ -11,6 +11,7 @@ export { pairKey } from "./pair-key";
 export { lightestBySector, lightestLevel, type SectorLightest } from "./lightest";
 export { isTachyonicState, tachyonicSectors, type TachyonicSector, type TachyonSource } from "./tachyons";
 export { summarizeResult, summaryFacts, type ResultSummary, type SummaryFacts, type SummaryWorldvolume } from "./summary";
+export { massInGeV } from "./gev";
 export { highestUnstretchedMassSquared, unstretchedMassSquared, unstretchedMassSquaredText } from "./mass-cap";
 export { formatWorldvolume, stringCreationSectors, worldvolumeKey } from "./worldvolumes";
 export {

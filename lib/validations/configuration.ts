@@ -15,7 +15,8 @@ import type { Configuration, Stack } from "@/lib/boundary/types";
  */
 export const configurationTitleMaxLength = 200;
 
-const stackSchema = z.object({
+/** The shape of one stack. */
+export const stackSchema = z.object({
   id: z.string({ error: "A stack id must be text." }),
   label: z.string({ error: "A label must be text." }).max(120, "Keep the label under 120 characters.").default(""),
   count: z.number({ error: "The count must be a number." }),

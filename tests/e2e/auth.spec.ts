@@ -13,7 +13,8 @@ test.describe("sign-up", () => {
   test("creates an account and opens its dashboard", async ({ page }) => {
     const account = newAccount("signup");
     await signUp(page, account);
-    await expect(page.getByRole("heading", { level: 1 })).toContainText("Welcome back");
+    // A new account is welcomed, not welcomed back.
+    await expect(page.getByRole("heading", { level: 1 })).toContainText(`Welcome to Mooring, ${account.name.split(" ")[0]}`);
     await expect(page.getByRole("heading", { name: "My configurations" })).toBeVisible();
     await expect(page.getByText("No configurations yet")).toBeVisible();
     await expect(page.getByRole("link", { name: "My space" })).toBeVisible();

@@ -9,7 +9,7 @@ import { createShareLink } from "@/db/queries/share-links";
 import { probeNearSevenBrane } from "@/lib/demo-configurations";
 import { clientAddressHeader } from "@/scripts/lib/client-address.mjs";
 import { createTestGroup, createTestUser, type TestUser } from "@/tests/fixtures/users";
-import { actionFiles, actionsOf, handlersOf, methods, routeFiles, type Method } from "@/tests/support/app-modules";
+import { actionFiles, actionsOf, handlersOf, routeFiles, type Method } from "@/tests/support/app-modules";
 import { idleState } from "@/lib/action-state";
 
 // Every route handler under app/api against every kind of caller, from ONE table. The route files

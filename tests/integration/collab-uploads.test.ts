@@ -257,6 +257,20 @@ describe("import", () => {
     expect(tooBig.status).toBe(413);
   });
 
+  it("names a file that is not JSON by its content, and words a top-level list plainly", async () => {
+    const { owner } = await scenario();
+    session.actor = owner.actor;
+    const messageOf = async (body: BlobPart, name: string) => {
+      const response = await importRoute.POST(upload("/api/configurations/import", new Blob([body]), name));
+      expect(response.status).toBe(422);
+      return ((await response.json()) as { message: string }).message;
+    };
+    // PNG signature (RFC 2083): 89 50 4E 47 0D 0A 1A 0A, whatever the file is called.
+    expect(await messageOf(new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0]), "figure.json")).toContain("a PNG image");
+    expect(await messageOf("pair,sector,level\na-b,NS,0\n", "spectrum.json")).toContain("a CSV table");
+    expect(await messageOf(JSON.stringify([probeNearSevenBrane, probeNearSevenBrane]), "two.json")).toContain("holds a list");
+  });
+
   it("requires a session (401) and membership of the target group", async () => {
     const { outsider, group } = await scenario();
     const file = new Blob([JSON.stringify(probeNearSevenBrane)]);
@@ -269,7 +283,7 @@ describe("import", () => {
 
 describe("export", () => {
   it("serves JSON that re-imports, and CSV and LaTeX with conventions, to members only", async () => {
-    const { viewer, outsider, configuration, params } = await scenario();
+    const { viewer, outsider, params } = await scenario();
     session.actor = viewer.actor;
     const json = await exportRoute.GET(new Request(`http://test.local/x?format=json`), params);
     expect(json.status).toBe(200);

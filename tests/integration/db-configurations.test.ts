@@ -236,6 +236,17 @@ describe("forkConfiguration", () => {
     expect(fork).toMatchObject({ tachyonic: false, lightestMassSquared: 0 });
   });
 
+  it("gives a repeat fork into the same space a numbered title, document and row alike", async () => {
+    const { viewer, configuration } = await scenario();
+    const titles: string[] = [];
+    for (let i = 0; i < 3; i++) {
+      const fork = await forkConfiguration(viewer.actor, configuration.id, { targetGroupId: viewer.personalGroupId, title: "Pair (fork)" });
+      expect(fork.document.title).toBe(fork.title);
+      titles.push(fork.title);
+    }
+    expect(titles).toEqual(["Pair (fork)", "Pair (fork 2)", "Pair (fork 3)"]);
+  });
+
   it("needs read access to the source and editor access to the target", async () => {
     const { viewer, outsider, group, configuration } = await scenario();
     await expect(

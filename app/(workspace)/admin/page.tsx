@@ -13,6 +13,7 @@ import { listUsers } from "@/db/queries/users";
 import { getEnv } from "@/lib/server/env";
 import { formatDate } from "@/lib/format-date";
 import { requireUser } from "@/lib/server/session";
+import { countOf } from "@/lib/wording";
 
 export const metadata: Metadata = { title: "Users and roles" };
 
@@ -57,7 +58,7 @@ export default async function AdminPage({ searchParams }: { searchParams: Promis
       ) : (
         <Table>
           <TableCaption>
-            {items.length === total ? `${total} accounts` : `${items.length} of ${total} accounts`}
+            {items.length === total ? countOf(total, "account") : `${items.length} of ${countOf(total, "account")}`}
             {search ? ` matching “${search}”` : ""}
           </TableCaption>
           <TableHeader>
