@@ -47,7 +47,7 @@ export interface ResultHeadDto extends ResultMetaDto {
 }
 
 /** Entries of each worldvolume's matter, flavour and defect lists that the page shows. */
-const worldvolumeListEntries = 8;
+const worldvolumeListEntries = 4;
 
 /** Sector overview marks drawn on the mass plot at most, over all curves. */
 const maxCurveMarks = 240;
