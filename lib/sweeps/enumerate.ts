@@ -20,6 +20,17 @@ import type { DimensionValue, SweepDefinition } from "./types";
  * // => [{ kind: "orientation", anti: true }, { kind: "position", value: ... (the second step) }]
  */
 export function pointValues(definition: SweepDefinition, index: number): DimensionValue[] {
+  const digits = pointDigits(definition, index);
+  return definition.dimensions.map((dimension, d) => dimensionValue(dimension, digits[d] ?? 0));
+}
+
+/**
+ * The position of point `index` along each dimension (the digits of its mixed-radix number).
+ *
+ * @example
+ * pointDigits({ format: 1, dimensions: [orientationOfB, threePositions] }, 4) // => [1, 1]
+ */
+export function pointDigits(definition: SweepDefinition, index: number): number[] {
   const sizes = definition.dimensions.map((dimension) => Number(dimensionSize(dimension)));
   const total = sizes.reduce((product, size) => product * size, 1);
   if (!Number.isInteger(index) || index < 0 || index >= total) throw new RangeError(`Point ${index} is outside 0..${total - 1}`);
@@ -30,7 +41,7 @@ export function pointValues(definition: SweepDefinition, index: number): Dimensi
     digits[d] = rest % size;
     rest = Math.floor(rest / size);
   }
-  return definition.dimensions.map((dimension, d) => dimensionValue(dimension, digits[d] ?? 0));
+  return digits;
 }
 
 /**

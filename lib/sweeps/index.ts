@@ -16,7 +16,7 @@ export {
   valuesLength,
 } from "./dimension";
 export { checkSweepDefinition, formatPointCount, sweepLimits, sweepPointCount, type SweepProblem } from "./definition";
-export { applyValues, pointDocument, pointValues } from "./enumerate";
+export { applyValues, pointDigits, pointDocument, pointValues } from "./enumerate";
 export { computeSweepPoint, pointVerdict, summarizeSweepPoint } from "./point-summary";
 export { chunkCount, chunkLimits, chunkRange, chunkSizeFor, firstFairTag } from "./chunks";
 export {
@@ -29,3 +29,5 @@ export {
   type SweepPointRow,
 } from "./point-rows";
 export { sweepCsvColumns, sweepExportConventions, sweepToCsv, sweepToJson } from "./export";
+export { massPlotAxes, massPlotPoints, verdictMap, type MassPlotAxis, type MassPlotPoint, type VerdictCell, type VerdictMap } from "./plot-data";
+export { draftToDefinition, newDimensionDraft, toDimensionDraft, type DimensionDraft, type ValuesDraft } from "./form-draft";

@@ -6,7 +6,8 @@
  */
 import type { Configuration } from "../boundary/types";
 import { dimensionLabel, formatDimensionValue } from "./dimension";
-import { pointValues } from "./enumerate";
+import { dimensionValue } from "./dimension";
+import { pointDigits } from "./enumerate";
 import { pointVerdict } from "./point-summary";
 import type { DimensionValue, PointVerdict, SweepDefinition, SweepPointOutcome } from "./types";
 
@@ -74,6 +75,8 @@ export function toPointColumns(points: readonly StoredSweepPoint[]): SweepPointC
 /** A point as the table, the plots and the exports read it. */
 export interface SweepPointRow {
   index: number;
+  /** The point's position along each dimension. */
+  digits: number[];
   values: DimensionValue[];
   /** Each dimension's value as text. */
   labels: string[];
@@ -94,18 +97,31 @@ export interface SweepPointRow {
  */
 export function toPointRows(definition: SweepDefinition, columns: SweepPointColumns): SweepPointRow[] {
   const text = (i: number | undefined) => (i === undefined || i < 0 ? null : (columns.texts[i] ?? null));
+  // Many points share each dimension's value: decode and label each value once.
+  const decoded = definition.dimensions.map(() => new Map<number, { value: DimensionValue; label: string }>());
+  const valueOf = (d: number, digit: number) => {
+    const dimension = definition.dimensions[d];
+    const cache = decoded[d];
+    if (!dimension || !cache) throw new RangeError(`No dimension ${d}`);
+    let found = cache.get(digit);
+    if (!found) {
+      const value = dimensionValue(dimension, digit);
+      found = { value, label: formatDimensionValue(dimension, value) };
+      cache.set(digit, found);
+    }
+    return found;
+  };
   return columns.index.map((index, i) => {
-    const values = pointValues(definition, index);
+    const digits = pointDigits(definition, index);
+    const values = digits.map((digit, d) => valueOf(d, digit));
     const ok = columns.ok[i] === 1;
     const supercharges = columns.supercharges[i] ?? null;
     const tachyonicSectors = columns.tachyonicSectors[i] ?? 0;
     return {
       index,
-      values,
-      labels: values.map((value, d) => {
-        const dimension = definition.dimensions[d];
-        return dimension ? formatDimensionValue(dimension, value) : "";
-      }),
+      digits,
+      values: values.map((item) => item.value),
+      labels: values.map((item) => item.label),
       verdict: pointVerdict({ status: ok ? "ok" : "invalid", supercharges, tachyonicSectors }),
       supercharges,
       tachyonicSectors,
