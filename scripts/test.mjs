@@ -5,7 +5,7 @@
 // (scripts/fault-run.mjs: a throwaway PostgreSQL stopped and restarted under load) on the same build.
 // `node scripts/test.mjs unit integration` runs only the named parts (unit, integration, e2e).
 import { rmSync } from "node:fs";
-import { appEnv, buildApp, clearMailbox, dataDir, runNpmScriptIfPresent, startApp, startMaildev } from "./lib/app.mjs";
+import { appEnv, buildApp, clearMailbox, dataDir, runNpmScriptIfPresent, startApp, startMaildev, startWorkers } from "./lib/app.mjs";
 import { findFreePort, freePortNear } from "./lib/net.mjs";
 import {
   clusterState,
@@ -210,6 +210,8 @@ async function main() {
     if (ready) {
       const serving = await step("next start", async () => {
         await startApp({ port: appPort, env: e2eEnv, services });
+        // The sweep browser test needs a worker computing the points.
+        startWorkers({ count: 1, env: e2eEnv, services });
         await clearMailbox(e2eEnv.MAILBOX_URL);
         console.log(`[test] app on ${e2eEnv.NEXTAUTH_URL}, mailbox on ${e2eEnv.MAILBOX_URL}, browser ${chromiumPath}`);
         return { code: 0, output: "" };

@@ -143,7 +143,7 @@ export function SweepDefinitionForm({ configurationId, base, isStarter, suggeste
         ) : (
           <>
             <strong className="font-semibold">{formatPointCount(count)}</strong> {count === 1n ? "point" : "points"} (at most {formatPointCount(sweepLimits.maxPoints)}). Each
-            point is the saved revision with these values; alpha&apos; = 1, positions in units of √α′.
+            point is the saved revision with these values; α′ = 1, positions in units of √α′.
           </>
         )}
       </p>

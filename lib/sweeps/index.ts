@@ -31,3 +31,4 @@ export {
 export { sweepCsvColumns, sweepExportConventions, sweepToCsv, sweepToJson } from "./export";
 export { massPlotAxes, massPlotPoints, verdictMap, type MassPlotAxis, type MassPlotPoint, type VerdictCell, type VerdictMap } from "./plot-data";
 export { draftToDefinition, newDimensionDraft, toDimensionDraft, type DimensionDraft, type ValuesDraft } from "./form-draft";
+export { formatDuration, formatRate } from "./format";
