@@ -14,7 +14,7 @@
  * bench-results/sweeps.json.
  */
 import { execFileSync, spawn, type ChildProcess } from "node:child_process";
-import { mkdirSync, writeFileSync } from "node:fs";
+import { mkdirSync, readFileSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { performance } from "node:perf_hooks";
@@ -52,13 +52,41 @@ function dbScript(...args: string[]): string {
 
 /** Starts one worker process; resolves once it is taking chunks. */
 function startWorker(env: NodeJS.ProcessEnv): Promise<ChildProcess> {
-  const child = spawn(process.execPath, ["--import", "tsx", "--conditions=react-server", "scripts/sweep-worker.ts"], { cwd: root, env, stdio: ["ignore", "pipe", "inherit"] });
+  const child = spawn(process.execPath, ["--import", "tsx", "--conditions=react-server", "scripts/sweep-worker.ts", ...(process.env.BENCH_VERBOSE ? ["--verbose"] : [])], { cwd: root, env, stdio: ["ignore", "pipe", "inherit"] });
+  if (process.env.BENCH_VERBOSE) child.stdout?.on("data", (chunk: Buffer) => process.stdout.write(`${(performance.now() / 1000).toFixed(2)} ${chunk.toString()}`));
   return new Promise((resolve, reject) => {
     child.once("exit", (code) => reject(new Error(`a worker exited (code ${code}) before taking chunks`)));
     child.stdout?.on("data", (chunk: Buffer) => {
       if (chunk.toString().includes("is taking chunks")) resolve(child);
     });
   });
+}
+
+/** CPU seconds (user + system) a process has used so far, from /proc (Linux). */
+function cpuSeconds(pid: number | undefined): number {
+  if (pid === undefined) return 0;
+  const fields = readFileSync(`/proc/${pid}/stat`, "utf8").split(") ")[1]?.split(" ") ?? [];
+  // utime and stime are fields 14 and 15 of stat, in clock ticks (100 per second on Linux).
+  return (Number(fields[11]) + Number(fields[12])) / 100;
+}
+
+/**
+ * How much CPU two busy processes get together, relative to one, right now: about 2 on an idle
+ * 2-core machine, near 1 when other work already holds a core. Two workers cannot beat this.
+ */
+async function parallelCapacity(): Promise<number> {
+  const spin = (): Promise<number> =>
+    new Promise((resolve, reject) => {
+      const child = spawn(process.execPath, ["-e", "const t=Date.now();let n=0;while(Date.now()-t<2000)n+=Math.sqrt(n);const c=process.cpuUsage();console.log((c.user+c.system)/1e6)"], {
+        stdio: ["ignore", "pipe", "inherit"],
+      });
+      let out = "";
+      child.stdout.on("data", (chunk: Buffer) => (out += chunk.toString()));
+      child.once("exit", (code) => (code === 0 ? resolve(Number(out)) : reject(new Error("the CPU probe failed"))));
+    });
+  const one = await spin();
+  const [a, b] = await Promise.all([spin(), spin()]);
+  return ((a ?? 0) + (b ?? 0)) / one;
 }
 
 async function stopWorkers(workers: ChildProcess[]): Promise<void> {
@@ -90,7 +118,7 @@ async function main(): Promise<void> {
   const { getSweep, startSweep } = await import("../db/queries/sweeps");
   const { createUser } = await import("../db/queries/users");
   const { stopSweepQueue } = await import("../db/sweep-queue");
-  const { computeChunk } = await import("../lib/server/sweeps/worker");
+  const { computeChunk, warmUpEngine } = await import("../lib/server/sweeps/worker");
   const { sweepPointCount } = await import("../lib/sweeps");
 
   const total = Number(sweepPointCount(definition));
@@ -100,18 +128,19 @@ async function main(): Promise<void> {
   if (!personal) throw new Error("the bench account has no personal space");
   const configuration = await createConfiguration(actor, personal.id, base, "bench");
 
-  // 1. Raw engine rate, the same points in this process (after a short warm-up).
-  computeChunk({ sweepId: "", chunk: 0, start: 0, end: 200, document: base, definition });
+  // 1. Raw engine rate, the same points in this process, after the warm-up every worker does too.
+  warmUpEngine();
   const rawStarted = performance.now();
   const points = computeChunk({ sweepId: "", chunk: 0, start: 0, end: total, document: base, definition });
   const rawSeconds = (performance.now() - rawStarted) / 1000;
   if (points.length !== total) throw new Error("the raw run computed the wrong number of points");
 
   // 2 and 3. The same sweep through the queue with one and with two workers.
-  const runs: { workers: number; seconds: number; chunks: number; chunkSize: number }[] = [];
+  const runs: { workers: number; seconds: number; workerCpuSeconds: number; chunks: number; chunkSize: number }[] = [];
   for (const count of [1, 2]) {
     const workers = await Promise.all(Array.from({ length: count }, () => startWorker(env)));
     try {
+      const cpuBefore = workers.reduce((sum, child) => sum + cpuSeconds(child.pid), 0);
       const started = performance.now();
       const sweep = await startSweep(actor, configuration.id, { definition, title: `bench, ${count} worker(s)` });
       for (;;) {
@@ -120,13 +149,16 @@ async function main(): Promise<void> {
         if (progress.status !== "running") throw new Error(`the sweep ended ${progress.status}: ${progress.failure ?? ""}`);
         await new Promise((resolve) => setTimeout(resolve, 100));
       }
-      runs.push({ workers: count, seconds: (performance.now() - started) / 1000, chunks: sweep.chunkCount, chunkSize: sweep.chunkSize });
+      const seconds = (performance.now() - started) / 1000;
+      const workerCpuSeconds = workers.reduce((sum, child) => sum + cpuSeconds(child.pid), 0) - cpuBefore;
+      runs.push({ workers: count, seconds, workerCpuSeconds, chunks: sweep.chunkCount, chunkSize: sweep.chunkSize });
     } finally {
       await stopWorkers(workers);
     }
   }
   await stopSweepQueue();
   await closeDatabase();
+  const capacity = await parallelCapacity();
 
   const rawRate = total / rawSeconds;
   const [one, two] = runs;
@@ -141,12 +173,16 @@ async function main(): Promise<void> {
 
   console.log(`\nSweep throughput, ${total} points (${one.chunks} chunks of ${one.chunkSize}); ${cores} cores, load average ${os.loadavg()[0]?.toFixed(1)}\n`);
   printRows(
-    ["case", "seconds", "points/s"],
+    ["case", "seconds", "points/s", "worker CPU s"],
     [
-      ["raw engine (this process)", rawSeconds.toFixed(2), rawRate.toFixed(0)],
-      ["sweep, 1 worker", one.seconds.toFixed(2), oneRate.toFixed(0)],
-      ["sweep, 2 workers", two.seconds.toFixed(2), twoRate.toFixed(0)],
+      ["raw engine (this process)", rawSeconds.toFixed(2), rawRate.toFixed(0), "-"],
+      ["sweep, 1 worker", one.seconds.toFixed(2), oneRate.toFixed(0), one.workerCpuSeconds.toFixed(2)],
+      ["sweep, 2 workers", two.seconds.toFixed(2), twoRate.toFixed(0), two.workerCpuSeconds.toFixed(2)],
     ],
+  );
+  console.log(
+    `\nCPU two busy processes got together, relative to one, just after the runs: ${capacity.toFixed(2)}x ` +
+      "(about 2 on an idle 2-core machine; two workers cannot scale past it).",
   );
   console.log("");
   printRows(
@@ -158,7 +194,7 @@ async function main(): Promise<void> {
   mkdirSync(out, { recursive: true });
   writeFileSync(
     path.join(out, "sweeps.json"),
-    `${JSON.stringify({ points: total, cores, loadAverage: os.loadavg(), rawSeconds, rawRate, runs, oneRate, twoRate, targets }, null, 2)}\n`,
+    `${JSON.stringify({ points: total, cores, loadAverage: os.loadavg(), parallelCapacity: capacity, rawSeconds, rawRate, runs, oneRate, twoRate, targets }, null, 2)}\n`,
   );
   console.log(`\nwrote ${path.relative(process.cwd(), path.join(out, "sweeps.json"))}`);
 }

@@ -63,54 +63,51 @@ export async function loadChunkWork(sweepId: string, chunk: number): Promise<Chu
 }
 
 /**
- * Stores a chunk's points in one transaction: each point once (its key is (sweep, point)), the
- * chunk marked stored, and the sweep's count raised by the points actually inserted, so a chunk
- * stored twice counts once. The last chunk completes a running sweep.
+ * Stores a chunk's points atomically, in one statement (one round trip): each point once (its key
+ * is (sweep, point)), the chunk marked stored, and the sweep's count raised by the points actually
+ * inserted, so a chunk stored twice counts once. The last chunk completes a running sweep.
  *
  * @returns How many points were new.
  */
 export async function storeChunkPoints(sweepId: string, chunk: number, points: readonly StoredSweepPoint[]): Promise<number> {
-  return db.transaction(async (tx) => {
-    let inserted = 0;
-    for (let i = 0; i < points.length; i += 1000) {
-      const rows = await tx
-        .insert(sweepPoints)
-        .values(
-          points.slice(i, i + 1000).map((point) =>
-            point.status === "ok"
-              ? {
-                  sweepId,
-                  pointIndex: point.index,
-                  supercharges: point.supercharges,
-                  tachyonicSectors: point.tachyonicSectors,
-                  lightestMassSquared: point.lightestMassSquared,
-                  masslessStates: point.masslessStates,
-                  gaugeGroup: point.gaugeGroup,
-                  problem: null,
-                }
-              : { sweepId, pointIndex: point.index, problem: point.problem },
-          ),
-        )
-        .onConflictDoNothing()
-        .returning({ index: sweepPoints.pointIndex });
-      inserted += rows.length;
-    }
-    await tx
-      .update(sweepChunks)
-      .set({ doneAt: new Date() })
-      .where(and(eq(sweepChunks.sweepId, sweepId), eq(sweepChunks.chunkIndex, chunk), isNull(sweepChunks.doneAt)));
-    if (inserted > 0) {
-      await tx
-        .update(sweeps)
-        .set({
-          donePoints: sql`${sweeps.donePoints} + ${inserted}`,
-          status: sql`case when ${sweeps.donePoints} + ${inserted} >= ${sweeps.totalPoints} and ${sweeps.status} = 'running' then 'completed'::sweep_status else ${sweeps.status} end`,
-          finishedAt: sql`case when ${sweeps.donePoints} + ${inserted} >= ${sweeps.totalPoints} and ${sweeps.status} = 'running' then now() else ${sweeps.finishedAt} end`,
-        })
-        .where(eq(sweeps.id, sweepId));
-    }
-    return inserted;
-  });
+  const rows = points.map((point) =>
+    point.status === "ok"
+      ? {
+          point_index: point.index,
+          supercharges: point.supercharges,
+          tachyonic_sectors: point.tachyonicSectors,
+          lightest_mass_squared: point.lightestMassSquared,
+          massless_states: point.masslessStates,
+          gauge_group: point.gaugeGroup,
+          problem: null,
+        }
+      : { point_index: point.index, supercharges: null, tachyonic_sectors: 0, lightest_mass_squared: null, massless_states: null, gauge_group: null, problem: point.problem },
+  );
+  const result = await db.execute<{ inserted: number }>(sql`
+    with inserted as (
+      insert into ${sweepPoints} (sweep_id, point_index, supercharges, tachyonic_sectors, lightest_mass_squared, massless_states, gauge_group, problem)
+      select ${sweepId}::uuid, x.point_index, x.supercharges, x.tachyonic_sectors, x.lightest_mass_squared, x.massless_states, x.gauge_group, x.problem
+      from jsonb_to_recordset(${JSON.stringify(rows)}::jsonb) as x(
+        point_index int, supercharges int, tachyonic_sectors int, lightest_mass_squared double precision,
+        massless_states text, gauge_group text, problem text)
+      on conflict do nothing
+      returning 1
+    ),
+    counted as (select count(*)::int as n from inserted),
+    chunk_done as (
+      update ${sweepChunks} set done_at = now()
+      where sweep_id = ${sweepId}::uuid and chunk_index = ${chunk} and done_at is null
+    ),
+    sweep_done as (
+      update ${sweeps} set
+        done_points = done_points + counted.n,
+        status = case when done_points + counted.n >= total_points and status = 'running' then 'completed'::sweep_status else status end,
+        finished_at = case when done_points + counted.n >= total_points and status = 'running' then now() else finished_at end
+      from counted
+      where id = ${sweepId}::uuid and counted.n > 0
+    )
+    select n as inserted from counted`);
+  return result.rows[0]?.inserted ?? 0;
 }
 
 /** Marks a running sweep failed (a chunk failed on every retry), with the reason shown on its page. */

@@ -16,12 +16,13 @@ import type { Configuration } from "../boundary/types";
 /** Chunking constants. */
 export const chunkLimits = {
   /**
-   * Engine work (sectors x (levels + 1), `configurationCost`) per chunk: a few hundred ms on one
-   * core, so the queue's round trips stay a few per cent of a chunk and a retried chunk loses little.
+   * Engine work (sectors x (levels + 1), `configurationCost`) per chunk: about 0.3 s on one core,
+   * so the queue's few round trips per chunk stay a few per cent of it, a sweep of a few thousand
+   * points still splits over several workers, and a retried chunk loses little.
    */
-  costPerChunk: 2_000,
+  costPerChunk: 12_000,
   /** Most points in one chunk. */
-  maxPointsPerChunk: 500,
+  maxPointsPerChunk: 2_000,
   /** Most chunks of one sweep (bigger sweeps get bigger chunks). */
   maxChunks: 5_000,
 } as const;
@@ -30,7 +31,7 @@ export const chunkLimits = {
  * Points per chunk for a sweep of `base` with `totalPoints` points.
  *
  * @example
- * chunkSizeFor(twoStacksAtLevel6, 10_000) // => 95   (2000 / 21, 21 = 3 sectors x 7 levels)
+ * chunkSizeFor(twoStacksAtLevel6, 10_000) // => 571   (12000 / 21, 21 = 3 sectors x 7 levels)
  */
 export function chunkSizeFor(base: Pick<Configuration, "stacks" | "levels">, totalPoints: number): number {
   const byCost = Math.floor(chunkLimits.costPerChunk / Math.max(1, configurationCost(base)));

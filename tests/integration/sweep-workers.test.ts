@@ -52,21 +52,21 @@ afterAll(async () => {
 describe("sweep workers", () => {
   it("two workers share a sweep; one killed mid-run loses nothing and every point is stored exactly once", { timeout: 90_000 }, async () => {
     const owner = await createTestUser({ label: "sweeper" });
-    // Twenty levels make a point heavy enough for chunks of a few dozen points, so the sweep has
-    // many chunks and the kill lands while the first worker holds one.
-    const base = { ...braneAntibranePair, levels: 20 };
+    // Forty levels make a point heavy enough for chunks of a few dozen points, so the sweep has
+    // several chunks and the kill lands while the first worker holds one.
+    const base = { ...braneAntibranePair, levels: 40 };
     const configuration = await createConfiguration(owner.actor, owner.personalGroupId, base, "base");
     const definition = {
       format: 1 as const,
       dimensions: [
-        { kind: "position" as const, stack: "anti", axis: 9, values: { kind: "range" as const, from: 0, to: 8, steps: 40 } },
+        { kind: "position" as const, stack: "anti", axis: 9, values: { kind: "range" as const, from: 0, to: 8, steps: 60 } },
         { kind: "count" as const, stack: "brane", values: { kind: "list" as const, values: [1, 2, 3, 4, 5] } },
         { kind: "orientation" as const, stack: "anti" },
       ],
     };
     const sweep = await startSweep(owner.actor, configuration.id, { definition, title: "kill test" });
-    expect(sweep.totalPoints).toBe(400);
-    expect(sweep.chunkCount).toBeGreaterThan(8);
+    expect(sweep.totalPoints).toBe(600);
+    expect(sweep.chunkCount).toBeGreaterThanOrEqual(5);
 
     const first = startWorker("first");
     const second = startWorker("second");
@@ -76,12 +76,18 @@ describe("sweep workers", () => {
     // Kill the first worker as soon as it takes a chunk, once some chunks are stored.
     await until("the first chunks", progress, (value) => value.donePoints >= sweep.chunkSize, logs);
     const taken = await new Promise<number>((resolve) => {
-      const check = (chunk: Buffer) => {
-        const match = /took chunk (\d+)/.exec(chunk.toString());
-        if (!match) return;
+      let holding: number | null = null;
+      const check = (data: Buffer) => {
+        for (const line of data.toString().split("\n")) {
+          const took = /took chunk (\d+) of/.exec(line);
+          const stored = /stored chunk (\d+) of/.exec(line);
+          if (took) holding = Number(took[1]);
+          if (stored && Number(stored[1]) === holding) holding = null;
+        }
+        if (holding === null) return;
         first.child.kill("SIGKILL");
         first.child.stdout?.off("data", check);
-        resolve(Number(match[1]));
+        resolve(holding);
       };
       first.child.stdout?.on("data", check);
     });
@@ -90,12 +96,12 @@ describe("sweep workers", () => {
     expect(first.log.join("")).not.toMatch(new RegExp(`stored chunk ${taken} of`));
 
     const finished = await until("the sweep to complete", progress, (value) => value.status === "completed", logs);
-    expect(finished.donePoints).toBe(400);
+    expect(finished.donePoints).toBe(600);
 
     const stored = await db.execute<{ count: number; distinct: number; low: number; high: number }>(
       sql`select count(*)::int as count, count(distinct point_index)::int as distinct, min(point_index) as low, max(point_index) as high from sweep_points where sweep_id = ${sweep.id}`,
     );
-    expect(stored.rows[0]).toEqual({ count: 400, distinct: 400, low: 0, high: 399 });
+    expect(stored.rows[0]).toEqual({ count: 600, distinct: 600, low: 0, high: 599 });
     const chunks = await db.execute<{ open: number }>(sql`select count(*) filter (where done_at is null)::int as open from sweep_chunks where sweep_id = ${sweep.id}`);
     expect(chunks.rows[0]?.open).toBe(0);
     // The chunk the killed worker held expired and ran again on the other worker.

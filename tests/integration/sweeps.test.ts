@@ -120,7 +120,7 @@ describe("fair scheduling", () => {
 describe("cancelSweep and resumeSweep", () => {
   it("takes waiting chunks off the queue, then puts only the unstored ones back as a new generation", async () => {
     const owner = await createTestUser({ label: "sweep-cancel" });
-    const configuration = await createConfiguration(owner.actor, owner.personalGroupId, { ...braneAntibranePair, levels: 20 }, "base");
+    const configuration = await createConfiguration(owner.actor, owner.personalGroupId, { ...braneAntibranePair, levels: 60 }, "base");
     const sweep = await startSweep(owner.actor, configuration.id, { definition: separation(200) });
     expect(sweep.chunkCount).toBeGreaterThan(2);
     // A worker stores chunk 0 (as lib/server/sweeps/worker.ts does), twice: the second store adds nothing.

@@ -2,7 +2,8 @@ import "server-only";
 import type PgBoss from "pg-boss";
 import { listWaitingChunkJobs, loadChunkWork, markSweepFailed, storeChunkPoints, type ChunkWork } from "@/db/queries/sweep-work";
 import { enqueueChunks, sweepChunkQueue, sweepQueue, type SweepChunkJobData } from "@/db/sweep-queue";
-import { computeSweepPoint, type StoredSweepPoint } from "@/lib/sweeps";
+import { braneAntibranePair } from "@/lib/demo-configurations";
+import { computeSweepPoint, type StoredSweepPoint, type SweepDefinition } from "@/lib/sweeps";
 
 /*
  * A sweep worker: takes one chunk at a time from the pg-boss queue, computes its points with the
@@ -36,6 +37,22 @@ export function computeChunk(work: ChunkWork): StoredSweepPoint[] {
   return points;
 }
 
+/**
+ * Runs the engine on a few hundred points of a small sweep of our own before the first chunk: a
+ * fresh process runs its first chunk several times slower while the JIT compiles the engine.
+ */
+export function warmUpEngine(): void {
+  const definition: SweepDefinition = {
+    format: 1,
+    dimensions: [
+      { kind: "position", stack: "anti", axis: 9, values: { kind: "range", from: 0, to: 6, steps: 100 } },
+      { kind: "orientation", stack: "anti" },
+      { kind: "count", stack: "brane", values: { kind: "list", values: [1, 2] } },
+    ],
+  };
+  computeChunk({ sweepId: "", chunk: 0, start: 0, end: 400, document: { ...braneAntibranePair, levels: 3 }, definition });
+}
+
 /** Runs a worker until `options.stop` resolves. */
 export async function runSweepWorker(options: SweepWorkerOptions): Promise<void> {
   const log = options.log ?? ((line: string) => console.log(line));
@@ -46,6 +63,7 @@ export async function runSweepWorker(options: SweepWorkerOptions): Promise<void>
     wake?.();
   });
   const boss = await sweepQueue({ supervise: true });
+  warmUpEngine();
   log(`sweep worker ${process.pid} is taking chunks from "${sweepChunkQueue}"`);
 
   let lastReconcile = 0;
