@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { checkConfiguration } from "../boundary";
 import { dimensionValue, formatDimensionValue, valueAt } from "./dimension";
 import { sweepPointCount } from "./definition";
-import { pointDocument, pointValues } from "./enumerate";
+import { pointDigits, pointDocument, pointNumbering, pointValues } from "./enumerate";
 import { braneAntibraneAtOrigin as base, twoThreeBranes } from "./test-configurations";
 import type { SweepDefinition, SweepDimension } from "./types";
 
@@ -38,6 +38,23 @@ describe("pointValues", () => {
       expect(() => pointValues(definition, 2)).toThrow(RangeError);
       expect(() => pointValues(definition, -1)).toThrow(RangeError);
     });
+  });
+});
+
+describe("pointNumbering", () => {
+  it("decodes every point as pointDigits does and counts the points as sweepPointCount does", () => {
+    const definition: SweepDefinition = {
+      format: 1,
+      dimensions: [
+        { kind: "orientation", stack: "b" },
+        { kind: "position", stack: "b", axis: 9, values: { kind: "list", values: [0, 1, 2] } },
+        { kind: "count", stack: "a", values: { kind: "list", values: [1, 2, 3, 4] } },
+      ],
+    };
+    const numbering = pointNumbering(definition);
+    expect(numbering.total).toBe(Number(sweepPointCount(definition)));
+    for (let i = 0; i < numbering.total; i += 1) expect(numbering.digits(i)).toEqual(pointDigits(definition, i));
+    expect(() => numbering.digits(numbering.total)).toThrow(RangeError);
   });
 });
 

@@ -16,7 +16,7 @@ export {
   valuesLength,
 } from "./dimension";
 export { checkSweepDefinition, formatPointCount, sweepLimits, sweepPointCount, type SweepProblem } from "./definition";
-export { applyValues, pointDigits, pointDocument, pointValues } from "./enumerate";
+export { applyValues, pointDigits, pointDocument, pointNumbering, pointValues } from "./enumerate";
 export { computeSweepPoint, pointVerdict, summarizeSweepPoint } from "./point-summary";
 export { chunkCount, chunkLimits, chunkRange, chunkSizeFor, firstFairTag } from "./chunks";
 export {

@@ -5,9 +5,8 @@
  * Invalid-input policy: pure transforms; columns of unequal length read as missing values.
  */
 import type { Configuration } from "../boundary/types";
-import { dimensionLabel, formatDimensionValue } from "./dimension";
-import { dimensionValue } from "./dimension";
-import { pointDigits } from "./enumerate";
+import { dimensionLabel, dimensionValue, formatDimensionValue } from "./dimension";
+import { pointNumbering } from "./enumerate";
 import { pointVerdict } from "./point-summary";
 import type { DimensionValue, PointVerdict, SweepDefinition, SweepPointOutcome } from "./types";
 
@@ -111,8 +110,9 @@ export function toPointRows(definition: SweepDefinition, columns: SweepPointColu
     }
     return found;
   };
+  const numbering = pointNumbering(definition);
   return columns.index.map((index, i) => {
-    const digits = pointDigits(definition, index);
+    const digits = numbering.digits(index);
     const values = digits.map((digit, d) => valueOf(d, digit));
     const ok = columns.ok[i] === 1;
     const supercharges = columns.supercharges[i] ?? null;
