@@ -5,28 +5,32 @@ import { checkCrossSiteRequest, crossSiteRejection } from "@/lib/server/csrf";
 import { getEnv } from "@/lib/server/env";
 
 /**
- * Refuses cross-site state-changing requests to /api (lib/server/csrf.ts; next-auth's routes keep their own
- * token), and sends visitors without a session from the signed-in areas to the sign-in page. The
- * redirect is convenience only: every page, action, route handler and DAL function checks the session again.
+ * Refuses cross-site state-changing requests to /api and cross-site server actions with 403
+ * (lib/server/csrf.ts; next-auth's routes keep their own token), and sends visitors without a
+ * session from the signed-in areas to the sign-in page. The redirect is convenience only: every
+ * page, action, route handler and DAL function checks the session again.
  *
  * Under /api the proxy runs only for requests a browser may have sent from another site (see
  * `config.matcher`): running it costs about as much as a whole small route handler, and every
  * request it skips is one that `checkCrossSiteRequest` lets through whatever its method.
  */
 export async function proxy(request: NextRequest) {
-  if (request.nextUrl.pathname.startsWith("/api/")) {
-    if (request.nextUrl.pathname.startsWith("/api/auth/")) return NextResponse.next();
+  const { pathname } = request.nextUrl;
+  const serverAction = request.headers.has("next-action");
+  if (pathname.startsWith("/api/") || serverAction) {
+    if (pathname.startsWith("/api/auth/")) return NextResponse.next();
+    // Next refuses a cross-site server action itself, but as a 500; answer it as the API does.
+    // A same-site action goes on to the action, which checks the session itself.
     const appUrl = getEnv().NEXTAUTH_URL;
     const verdict = checkCrossSiteRequest(request, appUrl ? [appUrl] : []);
     if (verdict.ok) return NextResponse.next();
-    console.warn(`Refused a cross-site ${request.method} ${request.nextUrl.pathname}: ${verdict.reason}`);
+    console.warn(`Refused a cross-site ${serverAction ? "server action" : request.method} ${pathname}: ${verdict.reason}`);
     return crossSiteRejection();
   }
   const token = await getToken({ req: request, secret: getAuthSecret() });
   if (token) return NextResponse.next();
-  const { pathname, search } = request.nextUrl;
   const url = new URL("/sign-in", request.url);
-  url.searchParams.set("callbackUrl", `${pathname}${search}`);
+  url.searchParams.set("callbackUrl", `${pathname}${request.nextUrl.search}`);
   return NextResponse.redirect(url);
 }
 
@@ -42,5 +46,7 @@ export const config = {
     // ambient cookies). tests/integration/security.test.ts checks that lib/server/csrf.ts passes all of them.
     { source: "/api/:path*", has: [{ type: "header", key: "sec-fetch-site", value: "(?!same-origin$).*" }] },
     { source: "/api/:path*", missing: [{ type: "header", key: "sec-fetch-site" }], has: [{ type: "header", key: "origin" }] },
+    // Server actions (a POST to any page with a Next-Action header), for the same check.
+    { source: "/:path*", has: [{ type: "header", key: "next-action" }] },
   ],
 };

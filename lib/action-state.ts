@@ -1,5 +1,6 @@
 import type { z } from "zod";
 import { toDomainError, ValidationError } from "@/lib/errors";
+import { isStorableText, unstorableTextMessage } from "@/lib/storable-text";
 
 /**
  * What a form's server action answers: a status, a message for the whole form and error messages
@@ -28,6 +29,23 @@ export function readFields<TField extends string>(formData: FormData, fields: re
     return [field, typeof value === "string" ? value : ""] as const;
   });
   return Object.fromEntries(entries) as Record<TField, string>;
+}
+
+/** What `parseFields` gives: the parsed data, or the issues to show with `invalidState`. */
+export type ParsedFields<T> =
+  | { success: true; data: T }
+  | { success: false; error: { issues: readonly { path: readonly PropertyKey[]; message: string }[] } };
+
+/**
+ * Parses form fields with `schema`, after refusing (an issue on each such field) text PostgreSQL
+ * cannot store, NUL characters and unpaired surrogates, as the JSON routes answer 422 for it.
+ */
+export function parseFields<TSchema extends z.ZodType>(schema: TSchema, fields: Record<string, string>): ParsedFields<z.output<TSchema>> {
+  const unstorable = Object.keys(fields).filter((field) => !isStorableText(fields[field] ?? ""));
+  if (unstorable.length > 0) {
+    return { success: false, error: { issues: unstorable.map((field) => ({ path: [field], message: unstorableTextMessage })) } };
+  }
+  return schema.safeParse(fields);
 }
 
 /** An error state with each zod issue under the field it concerns (issues without a field go to `message`). */

@@ -60,6 +60,17 @@ describe("toErrorResponse", () => {
     expect(isDatabaseUnavailable(Object.assign(new Error("duplicate key"), { code: "23505" }))).toBe(false);
   });
 
+  it("answers 422 when PostgreSQL refuses text it cannot hold, as a net under the input checks", async () => {
+    // SQLSTATE 22021 character_not_in_repertoire (a NUL byte in text) and 22P05
+    // untranslatable_character (\u0000 in jsonb), PostgreSQL manual appendix A.
+    for (const code of ["22021", "22P05"]) {
+      const refused = Object.assign(new Error("invalid byte sequence"), { code });
+      const response = toErrorResponse(new Error("Failed query: insert", { cause: refused }));
+      expect(response.status).toBe(422);
+      expect(((await response.json()) as { issues: { message: string }[] }).issues[0]?.message).toMatch(/NUL characters/);
+    }
+  });
+
   it("logs anything else and answers a generic 500", async () => {
     const log = vi.spyOn(console, "error").mockImplementation(() => undefined);
     const response = toErrorResponse(new TypeError("boom"));

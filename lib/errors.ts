@@ -1,4 +1,5 @@
 import { ZodError } from "zod";
+import { unstorableTextMessage } from "@/lib/storable-text";
 
 /** One problem with an input, addressed by its JSON path (e.g. ["stacks", 0, "count"]). */
 export interface FieldIssue {
@@ -195,7 +196,21 @@ export function toDomainError(error: unknown): DomainError | null {
   if (error instanceof DomainError) return error;
   if (error instanceof ZodError) return ValidationError.fromZod(error);
   if (isDatabaseUnavailable(error)) return new ServiceUnavailableError();
+  if (isUnstorableText(error)) return new ValidationError([{ path: [], message: unstorableTextMessage }]);
   return null;
+}
+
+/**
+ * True for PostgreSQL refusing text it cannot hold: 22021 (a NUL byte in text) and 22P05 (\u0000
+ * in jsonb). Inputs are checked before they reach the database; this is the net under those checks.
+ */
+function isUnstorableText(error: unknown): boolean {
+  for (let current = error, depth = 0; current && typeof current === "object" && depth < 5; depth += 1) {
+    const code = "code" in current ? String(current.code) : "";
+    if (code === "22021" || code === "22P05") return true;
+    current = "cause" in current ? current.cause : undefined;
+  }
+  return false;
 }
 
 /** PostgreSQL SQLSTATE classes and Node socket codes that mean "the database is not reachable". */

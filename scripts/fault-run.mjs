@@ -4,7 +4,7 @@
 //
 // It never touches the project's shared cluster: it creates a throwaway cluster in a temp folder on
 // its own loopback port, migrates and seeds it, serves the existing build (NEXT_DIST_DIR or .next;
-// built first when missing) with `next start` against it, and runs bounded request loops (health,
+// built first when missing) with scripts/serve.mjs against it, and runs bounded request loops (health,
 // configuration read, save with If-Match, spectrum compute) while the database is stopped
 // ("fast" shutdown; the long run also crashes it with "immediate") and started again. It checks:
 //   - no request ever gets a 500 or a dropped connection;

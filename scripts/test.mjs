@@ -208,18 +208,21 @@ async function main() {
       (await step(`seed demo data into ${e2eDb}`, () => runNpmScriptIfPresent("db:seed", e2eEnv, "demo data"))) &&
       (await step("next build", () => buildApp(e2eEnv)));
     if (ready) {
-      const serving = await step("next start", async () => {
-        await startApp({ port: appPort, env: e2eEnv, services });
+      // The app's port is taken only now, after the build: another run may have taken the one
+      // chosen at the start in the meantime (startApp refuses a port that answers already).
+      const serveEnv = appEnv({ databaseUrl: databaseUrl(e2eDb, pg.port), ...ports, appPort: await freePortNear(appPort) });
+      const serving = await step("serve the build", async () => {
+        await startApp({ port: new URL(serveEnv.NEXTAUTH_URL).port, env: serveEnv, services });
         // The sweep browser test needs a worker computing the points.
-        startWorkers({ count: 1, env: e2eEnv, services });
-        await clearMailbox(e2eEnv.MAILBOX_URL);
-        console.log(`[test] app on ${e2eEnv.NEXTAUTH_URL}, mailbox on ${e2eEnv.MAILBOX_URL}, browser ${chromiumPath}`);
+        startWorkers({ count: 1, env: serveEnv, services });
+        await clearMailbox(serveEnv.MAILBOX_URL);
+        console.log(`[test] app on ${serveEnv.NEXTAUTH_URL}, mailbox on ${serveEnv.MAILBOX_URL}, browser ${chromiumPath}`);
         return { code: 0, output: "" };
       });
       if (serving) {
         await step(
           "browser tests (playwright)",
-          () => runStep(bin("playwright"), ["test"], { env: { ...e2eEnv, E2E_BASE_URL: e2eEnv.NEXTAUTH_URL } }),
+          () => runStep(bin("playwright"), ["test"], { env: { ...serveEnv, E2E_BASE_URL: serveEnv.NEXTAUTH_URL } }),
           "playwright",
         );
       }

@@ -3,7 +3,7 @@ import type { SiteRole } from "@/db/schema";
 
 declare module "next-auth" {
   interface Session {
-    user: DefaultSession["user"] & { id: string; siteRole: SiteRole };
+    user: DefaultSession["user"] & { id: string; siteRole: SiteRole; sessionId?: string };
   }
 
   interface User {
@@ -15,5 +15,7 @@ declare module "next-auth/jwt" {
   interface JWT {
     id?: string;
     siteRole?: SiteRole;
+    /** The `sessions` row this token belongs to. */
+    sid?: string;
   }
 }

@@ -1,8 +1,7 @@
 "use client";
 
-import { signIn } from "next-auth/react";
 import { useActionState } from "react";
-import { signUpAction, type SignUpState } from "@/app/(auth)/actions";
+import { signUpAction } from "@/app/(auth)/actions";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
@@ -12,24 +11,25 @@ import { useHydrated } from "@/lib/client/use-hydrated";
 import { minPasswordLength } from "@/lib/validations/auth";
 
 export interface SignUpFormProps {
-  /** Same-site path to open once the account exists and is signed in. */
+  /** Same-site path to open once the account is confirmed and signed in. */
   callbackPath: string;
 }
 
+/**
+ * The sign-up form. On success it shows where the confirmation link went; the account is created
+ * when that link is opened (the same answer is given for an address that already has an account).
+ */
 export function SignUpForm({ callbackPath }: SignUpFormProps) {
   const hydrated = useHydrated();
-  const [state, formAction, pending] = useActionState(async (previous: SignUpState, formData: FormData): Promise<SignUpState> => {
-    const result = await signUpAction(previous, formData);
-    if (result.status !== "success") return result;
-    // The account exists now; sign in with the same credentials and go on.
-    const signedIn = await signIn("password", { email: formData.get("email"), password: formData.get("password"), redirect: false });
-    if (!signedIn?.ok || signedIn.error) {
-      window.location.assign("/sign-in");
-      return result;
-    }
-    window.location.assign(callbackPath);
-    return result;
-  }, idleState());
+  const [state, formAction, pending] = useActionState(signUpAction, idleState());
+
+  if (state.status === "success") {
+    return (
+      <Alert variant="success" title="Check your inbox">
+        {state.message}
+      </Alert>
+    );
+  }
 
   const showSummary = state.status === "error" && state.message && Object.keys(state.fieldErrors).length === 0;
 
@@ -40,6 +40,7 @@ export function SignUpForm({ callbackPath }: SignUpFormProps) {
           {state.message}
         </Alert>
       ) : null}
+      <input type="hidden" name="callbackPath" value={callbackPath} />
       <Field id="name" label="Name" error={state.fieldErrors.name}>
         <Input name="name" autoComplete="name" defaultValue={state.values.name} required autoFocus />
       </Field>

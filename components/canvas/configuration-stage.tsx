@@ -1,8 +1,14 @@
 "use client";
 
 import type Konva from "konva";
+// Konva's core and only the shapes drawn here, not the whole library (Konva's minimal-bundle
+// imports): the designer's first load stays light.
+import "konva/lib/shapes/Circle";
+import "konva/lib/shapes/Line";
+import "konva/lib/shapes/Rect";
+import "konva/lib/shapes/Text";
 import { useMemo, useState } from "react";
-import { Circle, Group, Layer, Line, Rect, Stage, Text } from "react-konva";
+import { Circle, Group, Layer, Line, Rect, Stage, Text } from "react-konva/lib/ReactKonvaCore";
 import type { Configuration, SpectrumResult } from "@/lib/boundary/types";
 import { hitTest, rectFromCorners, stacksInRect } from "@/lib/canvas/hit-test";
 import { draggableAxes, type DisplayAxes } from "@/lib/canvas/projection";

@@ -6,6 +6,8 @@ import type { ConfigurationDiff, SpectrumDiff } from "@/lib/revisions/diff";
 export interface RevisionDiffViewProps {
   fromNumber: number;
   toNumber: number;
+  /** Names of the two sides in the heading, when they are not revisions of one configuration ("the source", "this fork"). */
+  sideLabels?: { from: string; to: string };
   configurationDiff: ConfigurationDiff;
   /** Null when either revision has no stored result. */
   spectrumDiff: SpectrumDiff | null;
@@ -17,16 +19,16 @@ const fieldLabels: Record<ConfigurationDiff["fields"][number]["field"], string> 
   theory: "Theory",
   dimension: "Dimension",
   stringScaleGeV: "String scale (GeV)",
-  levels: "Levels",
+  levels: "Mass cap (\u03b1\u2032M\u00b2 at y = 0)",
 };
 
 /** What changed between two revisions: the document, then the spectrum (alpha' = 1). */
-export function RevisionDiffView({ fromNumber, toNumber, configurationDiff, spectrumDiff }: RevisionDiffViewProps) {
+export function RevisionDiffView({ fromNumber, toNumber, sideLabels, configurationDiff, spectrumDiff }: RevisionDiffViewProps) {
   return (
     <div className="grid gap-6 text-sm" aria-live="polite">
       <section aria-labelledby="document-changes" className="grid gap-2">
         <h3 id="document-changes" className="font-semibold">
-          Configuration, revision {fromNumber} → {toNumber}
+          {sideLabels ? `Configuration, ${sideLabels.from} → ${sideLabels.to}` : `Configuration, revision ${fromNumber} → ${toNumber}`}
         </h3>
         {configurationDiff.identical ? (
           <p className="text-muted-foreground">The documents are identical.</p>
@@ -98,6 +100,20 @@ export function RevisionDiffView({ fromNumber, toNumber, configurationDiff, spec
                 Gauge group <Old>{spectrumDiff.gaugeGroup.before}</Old> → <New>{spectrumDiff.gaugeGroup.after}</New>
               </li>
             ) : null}
+            {spectrumDiff.worldvolumes.map((change) => (
+              <li key={`wv-${change.key}`}>
+                Worldvolume <code>{change.key.split("|").join(", ")}</code>:{" "}
+                {change.before === null ? (
+                  <New>{change.after}</New>
+                ) : change.after === null ? (
+                  <Old>{change.before}</Old>
+                ) : (
+                  <>
+                    <Old>{change.before}</Old> → <New>{change.after}</New>
+                  </>
+                )}
+              </li>
+            ))}
             {spectrumDiff.supercharges ? (
               <li>
                 Supercharges <Old>{show(spectrumDiff.supercharges.before)}</Old> → <New>{show(spectrumDiff.supercharges.after)}</New>

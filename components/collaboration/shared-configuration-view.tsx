@@ -100,8 +100,10 @@ export function SharedConfigurationView({ shared }: SharedConfigurationViewProps
                   <SectorLevelsTable
                     caption={`Levels of the ${formatPair(sector.pair)} sector`}
                     rows={sector.levels}
+                    zeroPoint={sector.zeroPoint}
                     kind="all"
-                    maxLevel={document.levels}
+                    // Every row the engine stored: it already cut them at the document's mass cap.
+                    massCap={Number.POSITIVE_INFINITY}
                     showGeV={document.stringScaleGeV !== null}
                   />
                 </section>

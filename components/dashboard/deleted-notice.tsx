@@ -20,7 +20,10 @@ export function DeletedNotice({ configurationId, title }: DeletedNoticeProps) {
 
   return (
     <Alert variant="info" title={`${name} was deleted`}>
-      <p>Its revisions, results and comments are kept; undo brings it back as it was.</p>
+      <p>
+        Its revisions, results and comments are kept; undo brings it back as it was. Its share links were turned off and stay off; create
+        new ones after undoing if you still need them.
+      </p>
       <div className="mt-2 flex flex-wrap items-center gap-2">
         <Button
           size="sm"

@@ -5,6 +5,7 @@ import { RoleBadge } from "@/components/dashboard/role-badge";
 import { Card, CardContent, CardDescription, CardHeader, CardTitle } from "@/components/ui/card";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Skeleton } from "@/components/ui/skeleton";
+import { countOf } from "@/lib/wording";
 
 const kindLabels = { personal: "Personal space", research: "Research group", lab: "Lab" } as const;
 
@@ -29,7 +30,7 @@ export async function MyGroupsPanel({ actor }: { actor: Actor }) {
                     {group.kind === "personal" ? "My space" : group.name}
                   </Link>
                   <p className="text-xs text-muted-foreground">
-                    {kindLabels[group.kind]} · {plural(group.memberCount, "member")} · {plural(group.configurationCount, "configuration")}
+                    {kindLabels[group.kind]} · {countOf(group.memberCount, "member")} · {countOf(group.configurationCount, "configuration")}
                   </p>
                 </div>
                 <RoleBadge role={group.role} />
@@ -62,8 +63,4 @@ export function MyGroupsPanelSkeleton() {
       </CardContent>
     </Card>
   );
-}
-
-function plural(n: number, word: string): string {
-  return `${n} ${word}${n === 1 ? "" : "s"}`;
 }

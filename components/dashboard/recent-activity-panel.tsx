@@ -4,29 +4,8 @@ import { listRecentActivityForUser, type ActivityDto } from "@/db/queries/auth";
 import { Card, CardContent, CardDescription, CardHeader, CardTitle } from "@/components/ui/card";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Skeleton } from "@/components/ui/skeleton";
+import { capitalise, describeActivity } from "@/lib/activity/sentences";
 import { formatDateTime } from "@/lib/format-date";
-
-/** Past-tense phrases for the audit actions a user sees about themselves. */
-const actionPhrases: Record<string, string> = {
-  "configuration.create": "Created",
-  "configuration.update": "Saved a revision of",
-  "configuration.fork": "Forked",
-  "configuration.restore": "Restored an earlier revision of",
-  "configuration.delete": "Deleted",
-  "configuration.undelete": "Recovered",
-  "comment.create": "Commented",
-  "comment.delete": "Deleted a comment",
-  "attachment.create": "Attached a file",
-  "attachment.delete": "Removed an attachment",
-  "share_link.create": "Created a share link",
-  "share_link.revoke": "Revoked a share link",
-  "invitation.create": "Invited someone",
-  "invitation.resend": "Resent an invitation",
-  "invitation.revoke": "Revoked an invitation",
-  "invitation.accept": "Joined",
-  "membership.role_change": "Changed a member's role",
-  "group.create": "Created the group",
-};
 
 /** What the signed-in user did lately, in the groups they belong to. */
 export async function RecentActivityPanel({ actor }: { actor: Actor }) {
@@ -59,22 +38,29 @@ export async function RecentActivityPanel({ actor }: { actor: Actor }) {
 }
 
 function ActivityLine({ entry }: { entry: ActivityDto }) {
-  const phrase = actionPhrases[entry.action] ?? entry.action.replace(/[._]/g, " ");
-  const groupLabel = entry.group.kind === "personal" ? "my space" : entry.group.name;
+  const phrase = describeActivity(entry);
+  const groupLabel = entry.group.kind === "personal" ? "your personal space" : entry.group.name;
+  const deletedTitle = typeof entry.details.title === "string" ? `“${entry.details.title}”` : "a configuration";
   return (
     <p>
-      {phrase}{" "}
-      {entry.configuration ? (
-        <Link href={`/configurations/${entry.configuration.id}`} className="font-medium hover:text-accent hover:underline">
-          {entry.configuration.title}
-        </Link>
-      ) : null}{" "}
+      {capitalise(phrase.verb)}{" "}
+      {phrase.aboutConfiguration ? (
+        entry.configuration ? (
+          <Link href={`/configurations/${entry.configuration.id}`} className="font-medium hover:text-accent hover:underline">
+            {entry.configuration.title}
+          </Link>
+        ) : (
+          deletedTitle
+        )
+      ) : null}
+      {phrase.rest ? ` ${phrase.rest}` : null}{" "}
       <span className="text-muted-foreground">
         in{" "}
         <Link href={`/groups/${entry.group.slug}`} className="hover:text-accent hover:underline">
           {groupLabel}
         </Link>
       </span>
+      .
     </p>
   );
 }

@@ -1,8 +1,8 @@
 "use client";
 
-import { useState } from "react";
+import { useState, type ReactNode } from "react";
 import type { Configuration, Stack } from "@/lib/boundary/types";
-import { maxStackCount, renameProblem, spatialAxes } from "@/lib/designer/document";
+import { maxAbsPosition, maxStackCount, maxStacks, renameProblem, spatialAxes } from "@/lib/designer/document";
 import { stackKind } from "@/lib/designer/stack-kind";
 import type { FieldIssue } from "@/lib/errors";
 import { selectDocument, useDesignerStore } from "@/lib/client/designer-store";
@@ -14,6 +14,8 @@ export interface BoundaryGridProps {
   /** Problems per stack index (from the same zod schema as the API, and the engine's checks). */
   issuesByStack: Map<number, FieldIssue[]>;
   readOnly?: boolean;
+  /** Opens the paired flip ("move the worldvolume from x4 to x6") for a stack. */
+  onMoveWorldvolume?: (id: string) => void;
 }
 
 /**
@@ -21,12 +23,13 @@ export interface BoundaryGridProps {
  * (N or D, with the position in D cells), and N, brane/antibrane, label and colour. Every
  * control is a native button or input, so the whole configuration can be built by keyboard.
  */
-export function BoundaryGrid({ issuesByStack, readOnly = false }: BoundaryGridProps) {
+export function BoundaryGrid({ issuesByStack, readOnly = false, onMoveWorldvolume }: BoundaryGridProps) {
   const document = useDesignerStore(selectDocument);
   const selection = useDesignerStore((s) => s.selection);
   const displayAxes = useDesignerStore((s) => s.displayAxes);
   const { addStack, select } = useDesignerStore.getState();
   const axes = spatialAxes(document);
+  const full = document.stacks.length >= maxStacks;
 
   return (
     <section aria-labelledby="boundary-grid-title" className="flex min-h-0 flex-col gap-2">
@@ -38,9 +41,16 @@ export function BoundaryGrid({ issuesByStack, readOnly = false }: BoundaryGridPr
           </span>
         </h2>
         {!readOnly ? (
-          <Button size="sm" variant="secondary" onClick={() => addStack()}>
-            Add stack
-          </Button>
+          <div className="flex items-center gap-2">
+            {full ? (
+              <span id="stack-limit-note" className="text-xs text-muted-foreground">
+                {maxStacks} stacks, the most a configuration holds
+              </span>
+            ) : null}
+            <Button size="sm" variant="secondary" onClick={() => addStack()} aria-describedby={full ? "stack-limit-note" : undefined}>
+              Add stack
+            </Button>
+          </div>
         ) : null}
       </div>
       {document.stacks.length === 0 ? (
@@ -48,7 +58,9 @@ export function BoundaryGrid({ issuesByStack, readOnly = false }: BoundaryGridPr
           No stacks yet. {readOnly ? "" : "Add one with the button above, or press A on the canvas."}
         </p>
       ) : (
-        <div className="overflow-x-auto rounded-lg border border-border bg-surface">
+        // `relative` keeps the visually hidden headings inside the scrolling box: positioned against the
+        // page, they would widen it and let a phone scroll sideways into blank space.
+        <div className="relative overflow-x-auto rounded-lg border border-border bg-surface" data-testid="boundary-grid-scroller">
           <table className="w-full border-collapse text-xs" aria-describedby="boundary-grid-help">
             <caption id="boundary-grid-help" className="sr-only">
               One row per stack. Each axis cell toggles between Neumann and Dirichlet; Dirichlet cells hold the position.
@@ -94,6 +106,7 @@ export function BoundaryGrid({ issuesByStack, readOnly = false }: BoundaryGridPr
                   issues={issuesByStack.get(index) ?? []}
                   readOnly={readOnly}
                   onSelect={(on) => select([stack.id], on ? "add" : "toggle")}
+                  onMoveWorldvolume={onMoveWorldvolume}
                 />
               ))}
             </tbody>
@@ -113,9 +126,10 @@ interface StackRowsProps {
   issues: FieldIssue[];
   readOnly: boolean;
   onSelect: (on: boolean) => void;
+  onMoveWorldvolume?: (id: string) => void;
 }
 
-function StackRows({ stack, index, document, axes, selected, issues, readOnly, onSelect }: StackRowsProps) {
+function StackRows({ stack, index, document, axes, selected, issues, readOnly, onSelect, onMoveWorldvolume }: StackRowsProps) {
   const { deleteStacks, duplicateStacks, renameStack, setAnti, setColour, setCount, setLabel, setPosition, toggleAxis } =
     useDesignerStore.getState();
   const [idDraft, setIdDraft] = useState(stack.id);
@@ -187,6 +201,7 @@ function StackRows({ stack, index, document, axes, selected, issues, readOnly, o
             max={maxStackCount}
             disabled={readOnly}
             onCommit={(count) => setCount(stack.id, count)}
+            name="N"
             aria-label={`Number of branes N in stack ${stack.id}`}
             className="w-12"
           />
@@ -237,6 +252,9 @@ function StackRows({ stack, index, document, axes, selected, issues, readOnly, o
                     step={0.5}
                     disabled={readOnly}
                     onCommit={(value) => setPosition(stack.id, axis, value)}
+                    name={`The position on x${axis}`}
+                    min={-maxAbsPosition}
+                    max={maxAbsPosition}
                     aria-label={`Position of stack ${stack.id} on x${axis}`}
                     className="w-11"
                   />
@@ -258,29 +276,18 @@ function StackRows({ stack, index, document, axes, selected, issues, readOnly, o
         <td className="px-2 py-1 whitespace-nowrap">
           {!readOnly ? (
             <div className="flex gap-0.5">
-              <button
-                type="button"
-                onClick={() => duplicateStacks([stack.id])}
-                aria-label={`Duplicate stack ${stack.id}`}
-                title="Duplicate"
-                className="grid size-7 place-items-center rounded text-muted-foreground hover:bg-surface-muted hover:text-foreground"
-              >
-                <svg width="14" height="14" viewBox="0 0 16 16" fill="none" stroke="currentColor" strokeWidth="1.5" aria-hidden="true">
-                  <rect x="5" y="5" width="8.5" height="8.5" rx="1.5" />
-                  <path d="M10.5 5V3.5A1.5 1.5 0 0 0 9 2H3.5A1.5 1.5 0 0 0 2 3.5V9a1.5 1.5 0 0 0 1.5 1.5H5" />
-                </svg>
-              </button>
-              <button
-                type="button"
-                onClick={() => deleteStacks([stack.id])}
-                aria-label={`Delete stack ${stack.id}`}
-                title="Delete"
-                className="grid size-7 place-items-center rounded text-danger-soft-foreground hover:bg-danger-soft"
-              >
-                <svg width="14" height="14" viewBox="0 0 16 16" fill="none" stroke="currentColor" strokeWidth="1.5" aria-hidden="true">
-                  <path d="M2.5 4h11M6 4V2.5h4V4M4 4l.7 9.5h6.6L12 4" />
-                </svg>
-              </button>
+              {onMoveWorldvolume ? (
+                <RowAction label={`Move the worldvolume of stack ${stack.id}`} title="Move the worldvolume to another axis (keeps p)" onClick={() => onMoveWorldvolume(stack.id)}>
+                  <path d="M2 5h10l-2.5-2.5M14 11H4l2.5 2.5" />
+                </RowAction>
+              ) : null}
+              <RowAction label={`Duplicate stack ${stack.id}`} title="Duplicate" onClick={() => duplicateStacks([stack.id])}>
+                <rect x="5" y="5" width="8.5" height="8.5" rx="1.5" />
+                <path d="M10.5 5V3.5A1.5 1.5 0 0 0 9 2H3.5A1.5 1.5 0 0 0 2 3.5V9a1.5 1.5 0 0 0 1.5 1.5H5" />
+              </RowAction>
+              <RowAction label={`Delete stack ${stack.id}`} title="Delete" danger onClick={() => deleteStacks([stack.id])}>
+                <path d="M2.5 4h11M6 4V2.5h4V4M4 4l.7 9.5h6.6L12 4" />
+              </RowAction>
             </div>
           ) : null}
         </td>
@@ -288,7 +295,8 @@ function StackRows({ stack, index, document, axes, selected, issues, readOnly, o
       {issues.length > 0 ? (
         <tr>
           <td colSpan={axes.length + 8} className="px-3 pb-2">
-            <ul id={issueId} role="alert" className="space-y-0.5 text-xs text-danger-soft-foreground">
+            {/* Sticky and no wider than the scrolling box, so a long message stays in view in a wide table. */}
+            <ul id={issueId} role="alert" className="sticky left-3 max-w-[min(100%,calc(100vw_-_4rem))] space-y-0.5 text-xs text-danger-soft-foreground">
               {issues.map((issue) => (
                 <li key={`${issue.path.join(".")}-${issue.message}`}>{issue.message}</li>
               ))}
@@ -297,5 +305,33 @@ function StackRows({ stack, index, document, axes, selected, issues, readOnly, o
         </tr>
       ) : null}
     </>
+  );
+}
+
+interface RowActionProps {
+  label: string;
+  title: string;
+  danger?: boolean;
+  onClick: () => void;
+  /** The icon's SVG shapes (16 x 16, stroked). */
+  children: ReactNode;
+}
+
+function RowAction({ label, title, danger = false, onClick, children }: RowActionProps) {
+  return (
+    <button
+      type="button"
+      onClick={onClick}
+      aria-label={label}
+      title={title}
+      className={cn(
+        "grid size-7 place-items-center rounded",
+        danger ? "text-danger-soft-foreground hover:bg-danger-soft" : "text-muted-foreground hover:bg-surface-muted hover:text-foreground",
+      )}
+    >
+      <svg width="14" height="14" viewBox="0 0 16 16" fill="none" stroke="currentColor" strokeWidth="1.5" aria-hidden="true">
+        {children}
+      </svg>
+    </button>
   );
 }

@@ -16,9 +16,11 @@ export function ConventionsNote({ className, full = false }: ConventionsNoteProp
       ) : (
         <p>
           <strong className="font-semibold text-foreground">Conventions:</strong> &alpha;&prime; = 1; lengths in units of
-          &radic;&alpha;&prime;; &alpha;&prime;M&sup2; = (y/2&pi;)&sup2; + N + a; masses as M&radic;&alpha;&prime;. Counts are
-          after the GSO projection. <strong className="font-semibold text-foreground">Caution:</strong> machine-computed;
-          check results independently before publishing them.
+          &radic;&alpha;&prime;; &alpha;&prime;M&sup2; = (y/2&pi;)&sup2; + N + a; masses as M&radic;&alpha;&prime; (times
+          M<sub>s</sub> = 1/&radic;&alpha;&prime; for GeV). Every sector is listed up to the same mass cap, N + a &le; levels.
+          Counts are light-cone trace counts after the GSO projection.{" "}
+          <strong className="font-semibold text-foreground">Caution:</strong> machine-computed; check results independently
+          before publishing them.
         </p>
       )}
     </aside>

@@ -3,7 +3,7 @@
 import dynamic from "next/dynamic";
 import { useCallback, useEffect, useRef, useState } from "react";
 import type { SpectrumResult } from "@/lib/boundary/types";
-import { baseScale, zoomAt, type Viewport } from "@/lib/canvas/viewport";
+import { baseScale, zoomAt } from "@/lib/canvas/viewport";
 import { spatialAxes } from "@/lib/designer/document";
 import { fitSceneViewport } from "@/lib/designer/scene";
 import { snapValue } from "@/lib/canvas/snap";
@@ -22,6 +22,8 @@ export interface DesignerCanvasProps {
   readOnly?: boolean;
   /** Called by Ctrl/Cmd+S. */
   onSaveShortcut?: () => void;
+  /** Opens the paired flip for the one selected stack (button and M). */
+  onMoveWorldvolume?: (id: string) => void;
   className?: string;
 }
 
@@ -30,7 +32,7 @@ export interface DesignerCanvasProps {
  * delete, undo, redo, help) and the keyboard shortcuts. The react-konva stage loads in the
  * browser only.
  */
-export function DesignerCanvas({ result, readOnly = false, onSaveShortcut, className }: DesignerCanvasProps) {
+export function DesignerCanvas({ result, readOnly = false, onSaveShortcut, onMoveWorldvolume, className }: DesignerCanvasProps) {
   const document = useDesignerStore(selectDocument);
   const selection = useDesignerStore((s) => s.selection);
   const displayAxes = useDesignerStore((s) => s.displayAxes);
@@ -94,6 +96,11 @@ export function DesignerCanvas({ result, readOnly = false, onSaveShortcut, class
   const deleteSelection = useCallback(() => {
     deleteStacks(useDesignerStore.getState().selection);
   }, [deleteStacks]);
+
+  const moveSelectedWorldvolume = useCallback(() => {
+    const [only, ...others] = useDesignerStore.getState().selection;
+    if (only !== undefined && others.length === 0) onMoveWorldvolume?.(only);
+  }, [onMoveWorldvolume]);
 
   useEffect(() => {
     function onKeyDown(event: KeyboardEvent) {
@@ -168,6 +175,10 @@ export function DesignerCanvas({ result, readOnly = false, onSaveShortcut, class
         case "D":
           if (!readOnly) duplicateSelection();
           break;
+        case "m":
+        case "M":
+          if (!readOnly) moveSelectedWorldvolume();
+          break;
         case "Delete":
         case "Backspace":
           if (!readOnly) {
@@ -198,7 +209,7 @@ export function DesignerCanvas({ result, readOnly = false, onSaveShortcut, class
     }
     window.addEventListener("keydown", onKeyDown);
     return () => window.removeEventListener("keydown", onKeyDown);
-  }, [addAtCentre, deleteSelection, duplicateSelection, moveStacks, onSaveShortcut, readOnly, redo, select, setSnapping, setTool, setViewport, undo, zoom]);
+  }, [addAtCentre, deleteSelection, duplicateSelection, moveSelectedWorldvolume, moveStacks, onSaveShortcut, readOnly, redo, select, setSnapping, setTool, setViewport, undo, zoom]);
 
   const axes = spatialAxes(document);
   const zoomPercent = viewport ? Math.round((viewport.scale / baseScale) * 100) : 100;
@@ -257,6 +268,11 @@ export function DesignerCanvas({ result, readOnly = false, onSaveShortcut, class
             <ToolButton label="Delete selected (Delete)" onClick={deleteSelection} disabled={selection.length === 0}>
               Delete
             </ToolButton>
+            {onMoveWorldvolume ? (
+              <ToolButton label="Move the worldvolume of the selected stack (M)" onClick={moveSelectedWorldvolume} disabled={selection.length !== 1}>
+                Move axis
+              </ToolButton>
+            ) : null}
             <Divider />
             <ToolButton label="Undo (Ctrl+Z)" onClick={undo} disabled={!canUndo}>
               Undo

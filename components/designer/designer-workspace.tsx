@@ -4,10 +4,14 @@ import { useQuery, useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useState } from "react";
+import { mergeConfigurations, type MergeResult } from "@/lib/revisions/merge";
 import { clearDraft, readDraft, writeDraft } from "@/lib/designer/draft-storage";
 import { configurationQueries, useDeleteConfiguration, useForkConfiguration, useUpdateConfiguration, type ConfigurationJson } from "@/lib/client/configurations";
+import { fetchStaleSave, type StaleSave } from "@/lib/client/stale-save";
+import { announceSavedVersion, subscribeToSavedVersions } from "@/lib/client/version-channel";
 import { ApiError } from "@/lib/client/api-client";
 import { selectDocument, useDesignerStore } from "@/lib/client/designer-store";
+import { limitText } from "@/lib/text-limit";
 import { configurationTitleMaxLength } from "@/lib/validations/configuration";
 import { Alert } from "@/components/ui/alert";
 import { Badge } from "@/components/ui/badge";
@@ -18,6 +22,8 @@ import { ExportMenu } from "@/components/configurations/export-menu";
 import { BoundaryGrid } from "./boundary-grid";
 import { ConflictDialog } from "./conflict-dialog";
 import { DesignerCanvas } from "./designer-canvas";
+import { DocumentSettings } from "./document-settings";
+import { MoveWorldvolumeDialog } from "./move-worldvolume-dialog";
 import { ForkDialog, type WritableGroup } from "./fork-dialog";
 import { ForkedFromNote } from "./forked-from-note";
 import { SaveDialog } from "./save-dialog";
@@ -39,17 +45,31 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
   const id = initial.id;
   const router = useRouter();
   const queryClient = useQueryClient();
-  const { data: configuration } = useQuery({ ...configurationQueries.detail(id), initialData: initial });
+  // The stored version is polled (and read again on focus) so that a newer save by someone else is
+  // noticed while editing; other tabs of this browser also announce their saves at once.
+  const { data: configuration } = useQuery({
+    ...configurationQueries.detail(id),
+    initialData: initial,
+    refetchInterval: 30_000,
+    refetchOnWindowFocus: true,
+  });
   const ready = useDesignerStore((s) => s.configurationId === id);
   const document = useDesignerStore(selectDocument);
   const dirty = useDesignerStore((s) => s.dirty);
   const baseVersion = useDesignerStore((s) => s.baseVersion);
-  const { load, markSaved, setTitle } = useDesignerStore.getState();
+  const notice = useDesignerStore((s) => s.notice);
+  const { load, markSaved, rebase, setTitle, dismissNotice } = useDesignerStore.getState();
 
   const [recoveredAt, setRecoveredAt] = useState<number | null>(null);
   const [saveOpen, setSaveOpen] = useState(false);
   const [saveError, setSaveError] = useState<string | null>(null);
-  const [conflictVersion, setConflictVersion] = useState<number | null>(null);
+  const [conflictOpen, setConflictOpen] = useState(false);
+  const [stale, setStale] = useState<StaleSave | null>(null);
+  const [staleError, setStaleError] = useState<string | null>(null);
+  const [merge, setMerge] = useState<MergeResult | null>(null);
+  const [mergedFrom, setMergedFrom] = useState<number | null>(null);
+  const [titleNote, setTitleNote] = useState<string | null>(null);
+  const [moveStackId, setMoveStackId] = useState<string | null>(null);
   const [forkMode, setForkMode] = useState<ForkMode | null>(null);
   const [forkError, setForkError] = useState<string | null>(null);
   const [forkPending, setForkPending] = useState(false);
@@ -90,6 +110,17 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
     return () => window.removeEventListener("beforeunload", warn);
   }, [dirty]);
 
+  // Another tab saved this configuration: read the stored version now rather than at the next poll.
+  useEffect(
+    () =>
+      subscribeToSavedVersions((message) => {
+        if (message.configurationId === id) void queryClient.invalidateQueries({ queryKey: configurationQueries.detail(id).queryKey });
+      }),
+    [id, queryClient],
+  );
+
+  const newerStored = ready && baseVersion !== null && configuration.version > baseVersion;
+
   const preview = useLivePreview(document);
   const blocked = preview.issues.length > 0;
 
@@ -108,6 +139,8 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
       {
         onSuccess: (updated) => {
           markSaved(updated.version, sent);
+          announceSavedVersion(id, updated.version);
+          setMergedFrom(null);
           if (!useDesignerStore.getState().dirty) clearDraft(window.localStorage, id);
           setRecoveredAt(null);
           setSaveOpen(false);
@@ -115,7 +148,7 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
         onError: (error) => {
           if (error instanceof ApiError && error.status === 409) {
             setSaveOpen(false);
-            setConflictVersion(error.currentVersion);
+            void openConflict();
           } else {
             const detail = error instanceof ApiError && error.issues.length > 0 ? ` ${error.issues.map((i) => i.message).join(" ")}` : "";
             setSaveError(`${error.message}${detail} Your draft is kept in this browser.`);
@@ -125,12 +158,37 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
     );
   }
 
+  /** Reads who saved what since the draft's version and tries a merge, for the conflict dialog. */
+  async function openConflict() {
+    const base = useDesignerStore.getState().baseVersion;
+    setConflictOpen(true);
+    setStale(null);
+    setMerge(null);
+    setStaleError(null);
+    if (base === null) return;
+    try {
+      const read = await fetchStaleSave(queryClient, id, base);
+      setStale(read);
+      setMerge(read.base ? mergeConfigurations(read.base, useDesignerStore.getState().history.present, read.latest.document) : null);
+    } catch (error) {
+      setStaleError(error instanceof Error ? `The stored version could not be read: ${error.message}` : "The stored version could not be read.");
+    }
+  }
+
+  function applyMerge() {
+    if (!stale || !merge?.document) return;
+    rebase(merge.document, stale.latest.version);
+    setMergedFrom(stale.latest.version);
+    setConflictOpen(false);
+  }
+
   async function reloadLatest() {
     const fresh = await queryClient.fetchQuery({ ...configurationQueries.detail(id), staleTime: 0 });
     clearDraft(window.localStorage, id);
     load(fresh.document, { configurationId: id, baseVersion: fresh.version });
-    setConflictVersion(null);
+    setConflictOpen(false);
     setRecoveredAt(null);
+    setMergedFrom(null);
   }
 
   function discardDraft() {
@@ -152,7 +210,7 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
       const created = await fork.mutateAsync({ targetGroupId: input.targetGroupId, title: input.title, revisionId, document });
       if (document) clearDraft(window.localStorage, id);
       setForkMode(null);
-      setConflictVersion(null);
+      setConflictOpen(false);
       router.push(`/configurations/${created.id}`);
     } catch (error) {
       setForkError(error instanceof Error ? error.message : "The fork failed. Your draft is kept in this browser.");
@@ -183,10 +241,20 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
             id="configuration-title"
             value={document.title}
             readOnly={!canEdit}
-            maxLength={configurationTitleMaxLength}
-            onChange={(event) => setTitle(event.target.value)}
-            className="-ml-1 w-full rounded px-1 text-xl font-semibold tracking-tight hover:bg-surface-muted focus:bg-surface focus-visible:outline-2 focus-visible:outline-ring"
+            aria-describedby={titleNote ? "configuration-title-note" : undefined}
+            onChange={(event) => {
+              const limited = limitText(event.target.value, configurationTitleMaxLength, "Titles");
+              setTitleNote(limited.note);
+              setTitle(limited.text);
+            }}
+            onBlur={() => setTitleNote(null)}
+            className="-ml-1 w-full min-w-0 truncate rounded px-1 text-xl font-semibold tracking-tight hover:bg-surface-muted focus:bg-surface focus-visible:outline-2 focus-visible:outline-ring"
           />
+          {titleNote ? (
+            <p id="configuration-title-note" role="alert" className="text-xs text-danger-soft-foreground">
+              {titleNote}
+            </p>
+          ) : null}
         </div>
         <div className="flex flex-wrap items-center gap-2">
           <span role="status" aria-live="polite" className="text-xs text-muted-foreground" data-testid="save-state">
@@ -201,6 +269,11 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
           <ButtonLink href={`/configurations/${id}/history`} variant="ghost" size="sm">
             History
           </ButtonLink>
+          {configuration.forkedFrom?.title ? (
+            <ButtonLink href={`/configurations/${id}/compare?with=${configuration.forkedFrom.configurationId}`} variant="ghost" size="sm">
+              Compare with source
+            </ButtonLink>
+          ) : null}
           <ExportMenu
             configurationId={id}
             onExportPng={() => {
@@ -242,11 +315,52 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
         <Alert variant="warning">This browser refused to keep a local copy of your draft; save soon to avoid losing work.</Alert>
       ) : null}
       {exportError ? <Alert variant="danger">{exportError}</Alert> : null}
+      {notice ? (
+        <Alert variant="warning" title="Not done">
+          {notice}{" "}
+          <button type="button" onClick={dismissNotice} className="font-medium underline">
+            Dismiss
+          </button>
+        </Alert>
+      ) : null}
+      {newerStored && !conflictOpen ? (
+        <div role="status" className="rounded-md border border-warning/40 bg-warning-soft px-3 py-2 text-sm text-warning-soft-foreground" data-testid="newer-version">
+          <p>
+            <span className="font-semibold">Version {configuration.version} was saved</span> elsewhere (another tab, or a collaborator) while you had version{" "}
+            {baseVersion} open.
+          </p>
+          <p className="mt-1 flex flex-wrap gap-3">
+            <button type="button" className="font-medium underline" onClick={() => void openConflict()}>
+              See what changed{dirty ? " and merge" : ""}
+            </button>
+            <button type="button" className="font-medium underline" onClick={() => void reloadLatest()}>
+              Load version {configuration.version}
+              {dirty ? " (discard my draft)" : ""}
+            </button>
+          </p>
+        </div>
+      ) : null}
+      {mergedFrom !== null && dirty ? (
+        <Alert variant="info" title="Merged">
+          Your changes now sit on top of version {mergedFrom}. Check them, then save.
+        </Alert>
+      ) : null}
 
-      <div className="grid gap-3 xl:grid-cols-[minmax(0,1fr)_25rem]">
-        <div className="flex min-w-0 flex-col gap-3">
-          <DesignerCanvas result={preview.result} readOnly={!canEdit} onSaveShortcut={openSave} className="h-[min(56vh,560px)]" />
-          <BoundaryGrid issuesByStack={preview.byStack} readOnly={!canEdit} />
+      {/* One column on a phone; on a wide screen the preview beside the canvas and the grid across both, wide enough for every column. */}
+      <div className="grid min-w-0 gap-3 xl:grid-cols-[minmax(0,1fr)_28rem]">
+        <DesignerCanvas
+          result={preview.result}
+          readOnly={!canEdit}
+          onSaveShortcut={openSave}
+          onMoveWorldvolume={canEdit ? setMoveStackId : undefined}
+          className="h-[min(56vh,560px)] min-w-0 xl:h-auto xl:min-h-[min(56vh,560px)]"
+        />
+        <div className="order-last min-w-0 rounded-lg border border-border bg-surface p-3 xl:order-none xl:max-h-[calc(100vh-6rem)] xl:overflow-y-auto">
+          <SpectrumPreview result={preview.result} issues={preview.issues} elapsedMs={preview.elapsedMs} stringScaleGeV={document.stringScaleGeV} />
+        </div>
+        <div className="flex min-w-0 flex-col gap-3 xl:col-span-2">
+          <DocumentSettings readOnly={!canEdit} />
+          <BoundaryGrid issuesByStack={preview.byStack} readOnly={!canEdit} onMoveWorldvolume={canEdit ? setMoveStackId : undefined} />
           {preview.document.length > 0 ? (
             <Alert variant="danger" title="Problems with the configuration">
               <ul className="list-disc pl-4">
@@ -257,10 +371,8 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
             </Alert>
           ) : null}
         </div>
-        <div className="min-w-0 rounded-lg border border-border bg-surface p-3">
-          <SpectrumPreview result={preview.result} issues={preview.issues} elapsedMs={preview.elapsedMs} />
-        </div>
       </div>
+      <MoveWorldvolumeDialog stackId={moveStackId} onClose={() => setMoveStackId(null)} />
 
       <Dialog
         open={deleteOpen}
@@ -293,17 +405,18 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
       </Dialog>
       <SaveDialog open={saveOpen} onOpenChange={setSaveOpen} pending={update.isPending} error={saveError} onSave={save} />
       <ConflictDialog
-        open={conflictVersion !== null}
-        onOpenChange={(open) => {
-          if (!open) setConflictVersion(null);
-        }}
-        currentVersion={conflictVersion}
+        open={conflictOpen}
+        onOpenChange={setConflictOpen}
         baseVersion={baseVersion}
+        stale={stale}
+        error={staleError}
+        merge={merge}
         canFork={writableGroups.length > 0}
         pending={forkPending}
+        onMerge={applyMerge}
         onReload={() => void reloadLatest()}
         onFork={() => {
-          setConflictVersion(null);
+          setConflictOpen(false);
           setForkMode("draft");
         }}
       />

@@ -1,6 +1,7 @@
 "use client";
 
 import { useState } from "react";
+import { limitText } from "@/lib/text-limit";
 import { configurationTitleMaxLength } from "@/lib/validations/configuration";
 import { Button } from "@/components/ui/button";
 import { Dialog } from "@/components/ui/dialog";
@@ -44,6 +45,7 @@ export interface ForkDialogProps {
 export function ForkDialog({ open, onOpenChange, groups, defaultTitle, sourceLabel, pending, error, onFork }: ForkDialogProps) {
   const [groupId, setGroupId] = useState(groups[0]?.id ?? "");
   const [title, setTitle] = useState(defaultTitle);
+  const [titleNote, setTitleNote] = useState<string | null>(null);
   return (
     <Dialog
       open={open}
@@ -75,8 +77,15 @@ export function ForkDialog({ open, onOpenChange, groups, defaultTitle, sourceLab
           <Field id="fork-group" label="Space">
             <SpaceSelect groups={groups} value={groupId} onChange={(event) => setGroupId(event.target.value)} />
           </Field>
-          <Field id="fork-title" label="Title" error={error}>
-            <Input value={title} maxLength={configurationTitleMaxLength} onChange={(event) => setTitle(event.target.value)} />
+          <Field id="fork-title" label="Title" hint="A number is added when the space already has a configuration of this title." error={titleNote ?? error}>
+            <Input
+              value={title}
+              onChange={(event) => {
+                const limited = limitText(event.target.value, configurationTitleMaxLength, "Titles");
+                setTitle(limited.text);
+                setTitleNote(limited.note);
+              }}
+            />
           </Field>
         </form>
       )}

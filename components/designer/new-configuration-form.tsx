@@ -6,6 +6,7 @@ import type { Theory } from "@/lib/boundary/types";
 import { starterDocument } from "@/lib/designer/starter-document";
 import { useCreateConfiguration } from "@/lib/client/configurations";
 import { ApiError } from "@/lib/client/api-client";
+import { limitText } from "@/lib/text-limit";
 import { configurationTitleMaxLength } from "@/lib/validations/configuration";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
@@ -30,6 +31,7 @@ export function NewConfigurationForm({ groups, defaultGroupId }: NewConfiguratio
   const router = useRouter();
   const create = useCreateConfiguration();
   const [title, setTitle] = useState("");
+  const [titleNote, setTitleNote] = useState<string | null>(null);
   const [theory, setTheory] = useState<Theory>("IIA");
   const [groupId, setGroupId] = useState(defaultGroupId && groups.some((g) => g.id === defaultGroupId) ? defaultGroupId : (groups[0]?.id ?? ""));
   const titleError = create.error instanceof ApiError ? create.error.issues.find((i) => i.path.includes("title"))?.message : undefined;
@@ -45,8 +47,17 @@ export function NewConfigurationForm({ groups, defaultGroupId }: NewConfiguratio
         );
       }}
     >
-      <Field id="new-title" label="Title" error={titleError}>
-        <Input value={title} maxLength={configurationTitleMaxLength} required onChange={(event) => setTitle(event.target.value)} placeholder="e.g. Probe D3 near a D7 wall" />
+      <Field id="new-title" label="Title" error={titleNote ?? titleError}>
+        <Input
+          value={title}
+          required
+          onChange={(event) => {
+            const limited = limitText(event.target.value, configurationTitleMaxLength, "Titles");
+            setTitle(limited.text);
+            setTitleNote(limited.note);
+          }}
+          placeholder="e.g. Probe D3 near a D7 wall"
+        />
       </Field>
       <Field id="new-group" label="Space">
         <SpaceSelect groups={groups} value={groupId} onChange={(event) => setGroupId(event.target.value)} />

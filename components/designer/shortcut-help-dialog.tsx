@@ -8,6 +8,7 @@ export const designerShortcuts: Array<{ keys: string; action: string }> = [
   { keys: "Arrow keys", action: "Move the selected stacks one grid step on the display axes (Shift: four steps; canvas focused)" },
   { keys: "A", action: "Add a stack at the centre of the view" },
   { keys: "D", action: "Duplicate the selected stacks" },
+  { keys: "M", action: "Move the worldvolume of the one selected stack to another axis (keeps p)" },
   { keys: "Delete / Backspace", action: "Delete the selected stacks" },
   { keys: "Ctrl/Cmd + A", action: "Select every stack" },
   { keys: "Escape", action: "Clear the selection" },

@@ -3,7 +3,7 @@
 import type { SpectrumResult } from "@/lib/boundary/types";
 import type { FieldIssue } from "@/lib/errors";
 import { LightestStatesTable } from "@/components/results/lightest-states-table";
-import { summaryFacts } from "@/lib/spectrum";
+import { formatNumber, massInGeV, summaryFacts } from "@/lib/spectrum";
 import { SpectrumSummary } from "@/components/results/spectrum-summary";
 import { ConventionsNote } from "./conventions-note";
 
@@ -13,10 +13,12 @@ export interface SpectrumPreviewProps {
   elapsedMs: number;
   /** Rows of the lightest-states table (default 8). */
   lightestRows?: number;
+  /** M_s in GeV of the draft: masses are shown in GeV too when set. */
+  stringScaleGeV?: number | null;
 }
 
 /** The live spectrum beside the canvas: summary, tachyons, lightest states and warnings. */
-export function SpectrumPreview({ result, issues, elapsedMs, lightestRows = 8 }: SpectrumPreviewProps) {
+export function SpectrumPreview({ result, issues, elapsedMs, lightestRows = 8, stringScaleGeV = null }: SpectrumPreviewProps) {
   return (
     <section aria-labelledby="spectrum-preview-title" className="flex flex-col gap-3 text-sm">
       <div className="flex items-baseline justify-between gap-2">
@@ -43,21 +45,35 @@ export function SpectrumPreview({ result, issues, elapsedMs, lightestRows = 8 }:
           </ul>
         </div>
       ) : (
-        <PreviewBody result={result} lightestRows={lightestRows} />
+        <PreviewBody result={result} lightestRows={lightestRows} stringScaleGeV={stringScaleGeV} />
       )}
       <ConventionsNote />
     </section>
   );
 }
 
-function PreviewBody({ result, lightestRows }: { result: SpectrumResult; lightestRows: number }) {
+function PreviewBody({ result, lightestRows, stringScaleGeV }: { result: SpectrumResult; lightestRows: number; stringScaleGeV: number | null }) {
+  const firstMassive = result.lightest.find((state) => state.mass !== null && state.mass > 0) ?? null;
   return (
     <>
       <SpectrumSummary facts={summaryFacts(result)} />
 
+      {stringScaleGeV !== null ? (
+        <p className="rounded-md border border-border bg-surface-muted/50 px-2.5 py-1.5 text-xs" data-testid="preview-string-scale">
+          String scale M<sub>s</sub> = <span className="font-mono">{formatNumber(stringScaleGeV)}</span> GeV, so M = (M&radic;&alpha;&prime;) &times; M
+          <sub>s</sub>.
+          {firstMassive ? (
+            <>
+              {" "}
+              Lightest massive state listed: M = <span className="font-mono">{formatNumber(massInGeV(firstMassive.mass, stringScaleGeV))}</span> GeV.
+            </>
+          ) : null}
+        </p>
+      ) : null}
+
       <div>
         <h3 className="mb-1 text-xs font-semibold">Lightest states</h3>
-        <LightestStatesTable states={result.lightest.slice(0, lightestRows)} label="Lightest states" compact />
+        <LightestStatesTable states={result.lightest.slice(0, lightestRows)} label="Lightest states" compact stringScaleGeV={stringScaleGeV} />
       </div>
 
       {result.warnings.length > 0 ? (

@@ -11,14 +11,20 @@ export interface NavItem {
 
 export interface MainNavProps {
   items: readonly NavItem[];
+  className?: string;
 }
 
-export function MainNav({ items }: MainNavProps) {
+/** True when `pathname` is the item's page or one below it. */
+export function isActiveNavItem(item: NavItem, pathname: string): boolean {
+  return pathname === item.href || pathname.startsWith(`${item.href}/`);
+}
+
+export function MainNav({ items, className }: MainNavProps) {
   const pathname = usePathname();
   return (
-    <nav aria-label="Main" className="flex items-center gap-1 overflow-x-auto">
+    <nav aria-label="Main" className={cn("flex items-center gap-1", className)}>
       {items.map((item) => {
-        const active = pathname === item.href || pathname.startsWith(`${item.href}/`);
+        const active = isActiveNavItem(item, pathname);
         return (
           <Link
             key={item.href}

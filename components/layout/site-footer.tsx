@@ -1,3 +1,5 @@
+import Link from "next/link";
+
 export function SiteFooter() {
   return (
     <footer className="mt-auto border-t border-border">
@@ -7,7 +9,12 @@ export function SiteFooter() {
           units (M² in units of 1/α′, distances in units of √α′) unless a string scale is set. Mooring computes tree-level
           open-string spectra of flat, parallel D-brane stacks. Check any result before you publish it.
         </p>
-        <p className="shrink-0">Mooring · a workbench for parallel D-branes</p>
+        <p className="shrink-0">
+          Mooring · a workbench for parallel D-branes ·{" "}
+          <Link href="/docs/api" className="underline-offset-2 hover:text-foreground hover:underline">
+            API reference
+          </Link>
+        </p>
       </div>
     </footer>
   );

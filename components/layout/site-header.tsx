@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { AccountMenu, type AccountMenuUser } from "@/components/layout/account-menu";
 import { MainNav, type NavItem } from "@/components/layout/main-nav";
+import { NavMenu } from "@/components/layout/nav-menu";
 import { MooringMark } from "@/components/layout/mooring-mark";
 import { ThemeToggle } from "@/components/layout/theme-toggle";
 import { ButtonLink } from "@/components/ui/button";
@@ -28,12 +29,18 @@ export function SiteHeader({ user, showMailbox = false }: SiteHeaderProps) {
       >
         Skip to content
       </a>
-      <div className="mx-auto flex h-14 max-w-7xl items-center gap-4 px-4 sm:px-6">
+      <div className="mx-auto flex h-14 max-w-7xl items-center gap-2 px-4 sm:gap-4 sm:px-6">
         <Link href={user ? "/dashboard" : "/"} className="flex items-center gap-2 rounded-md font-semibold tracking-tight">
           <MooringMark />
           <span>Mooring</span>
         </Link>
-        {user ? <MainNav items={user.siteRole === "admin" ? [...workspaceNav, ...adminNav] : workspaceNav} /> : null}
+        {user ? (
+          <>
+            {/* Below md the links do not fit beside the account menu: they fold into one menu button. */}
+            <MainNav items={user.siteRole === "admin" ? [...workspaceNav, ...adminNav] : workspaceNav} className="hidden md:flex" />
+            <NavMenu items={user.siteRole === "admin" ? [...workspaceNav, ...adminNav] : workspaceNav} className="md:hidden" />
+          </>
+        ) : null}
         <div className="ml-auto flex items-center gap-1.5">
           <ThemeToggle />
           {user ? (

@@ -1,5 +1,5 @@
 import type { LightestState } from "@/lib/boundary/types";
-import { formatPair, pairKey } from "@/lib/spectrum";
+import { formatNumber, formatPair, massInGeV, pairKey } from "@/lib/spectrum";
 import { cn } from "@/lib/utils";
 import { MassSquaredText, MassText } from "./mass-text";
 
@@ -9,22 +9,52 @@ export interface LightestStatesTableProps {
   label: string;
   /** Smaller type and padding, for the panel beside the canvas. */
   compact?: boolean;
+  /** M_s in GeV: adds a column of masses in GeV when set. */
+  stringScaleGeV?: number | null;
   "data-testid"?: string;
 }
 
-const headings = ["Sector", "NS/R", "Level N", "\u03b1\u2032M\u00b2", "M\u221a\u03b1\u2032", "States", "With Chan-Paton"];
+interface Heading {
+  text: string;
+  /** The heading in a compact table, with `text` as its accessible name and tooltip. */
+  short?: string;
+}
+
+const baseHeadings: Heading[] = [
+  { text: "Sector" },
+  { text: "NS/R" },
+  { text: "Oscillator level N", short: "N" },
+  { text: "\u03b1\u2032M\u00b2" },
+  { text: "M\u221a\u03b1\u2032" },
+];
+const gevHeading: Heading = { text: "M (GeV)", short: "GeV" };
+const countHeadings: Heading[] = [{ text: "States" }, { text: "With Chan-Paton", short: "With CP" }];
 
 /** The lightest states over all sectors, as the engine sorted them (alpha' = 1). */
-export function LightestStatesTable({ states, label, compact = false, "data-testid": testId }: LightestStatesTableProps) {
+export function LightestStatesTable({ states, label, compact = false, stringScaleGeV = null, "data-testid": testId }: LightestStatesTableProps) {
   const cell = compact ? "px-1.5 py-1" : "px-3 py-1.5";
+  const showGeV = stringScaleGeV !== null;
+  const headings = [...baseHeadings, ...(showGeV ? [gevHeading] : []), ...countHeadings];
   return (
     <div className="overflow-x-auto rounded-md border border-border bg-surface">
       <table className={cn("w-full border-collapse", compact ? "text-xs" : "text-sm")} aria-label={label} data-testid={testId}>
         <thead className="bg-surface-muted/70 text-xs text-muted-foreground">
           <tr>
             {headings.map((heading, i) => (
-              <th key={heading} scope="col" className={cn(cell, "font-semibold", i < 2 ? "text-left" : "text-right")}>
-                {heading}
+              <th
+                key={heading.text}
+                scope="col"
+                title={compact && heading.short ? heading.text : undefined}
+                className={cn(cell, "font-semibold", i < 2 ? "text-left" : "text-right")}
+              >
+                {compact && heading.short ? (
+                  <>
+                    <span aria-hidden="true">{heading.short}</span>
+                    <span className="sr-only">{heading.text}</span>
+                  </>
+                ) : (
+                  heading.text
+                )}
               </th>
             ))}
           </tr>
@@ -33,7 +63,7 @@ export function LightestStatesTable({ states, label, compact = false, "data-test
           {states.length === 0 ? (
             <tr>
               <td colSpan={headings.length} className={cn(cell, "text-center text-muted-foreground")}>
-                No states up to the highest level computed.
+                No states up to the mass cap.
               </td>
             </tr>
           ) : (
@@ -48,6 +78,11 @@ export function LightestStatesTable({ states, label, compact = false, "data-test
                 <td className={cn(cell, "text-right font-mono")}>
                   <MassText value={state.mass} />
                 </td>
+                {showGeV ? (
+                  <td className={cn(cell, "text-right font-mono whitespace-nowrap")}>
+                    {state.mass === null ? <MassText value={null} /> : formatNumber(massInGeV(state.mass, stringScaleGeV))}
+                  </td>
+                ) : null}
                 <td className={cn(cell, "text-right font-mono")}>{state.states ?? "\u2014"}</td>
                 <td className={cn(cell, "text-right font-mono")}>{state.withChanPaton}</td>
               </tr>

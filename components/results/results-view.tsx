@@ -23,6 +23,7 @@ import { ForkedFromNote } from "@/components/designer/forked-from-note";
 import { LightestStatesTable } from "./lightest-states-table";
 import { SectorList } from "./sector-list";
 import { SpectrumSummary } from "./spectrum-summary";
+import { WorldvolumeTable } from "./worldvolume-table";
 
 const MassPlot = dynamic(() => import("./mass-plot").then((m) => m.MassPlot), {
   ssr: false,
@@ -50,8 +51,8 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
   const { data: stored } = useQuery({ ...configurationQueries.resultHead(configuration.id, revision.id), initialData: initialResult });
   const { result, facts, massCurves, showGeV, firstPage } = stored;
   const [kind, setKind] = useState<SectorKind | "all">("all");
-  // Oscillator level up to which the tables list rows; null lists every row.
-  const [maxLevel, setMaxLevel] = useState<number | null>(null);
+  // alpha' M^2 at zero separation (N + a) up to which the tables list rows; null lists every row.
+  const [massCap, setMassCap] = useState<number | null>(null);
   const [search, setSearch] = useState("");
   const [onlyTachyonic, setOnlyTachyonic] = useState(false);
   const [forkOpen, setForkOpen] = useState(false);
@@ -108,6 +109,13 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
           Summary
         </h2>
         <SpectrumSummary facts={facts} />
+      </section>
+
+      <section aria-labelledby="worldvolumes-title" className="grid gap-2">
+        <h2 id="worldvolumes-title" className="text-lg font-semibold">
+          Worldvolume theories
+        </h2>
+        <WorldvolumeTable worldvolumes={result.worldvolumes} />
       </section>
 
       {result.warnings.length > 0 ? (
@@ -170,15 +178,16 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
               </select>
             </label>
             <label className="flex items-center gap-1">
-              <span className="text-muted-foreground">Up to level</span>
+              <span className="text-muted-foreground">Up to &alpha;&prime;M&sup2; at y = 0</span>
               <input
                 type="number"
-                min={0}
+                min={-1}
                 step={0.5}
-                value={maxLevel ?? ""}
+                value={massCap ?? ""}
                 placeholder="all"
-                onChange={(event) => setMaxLevel(event.target.value === "" ? null : Number(event.target.value))}
+                onChange={(event) => setMassCap(event.target.value === "" ? null : Number(event.target.value))}
                 className="h-8 w-16 rounded border border-border-strong bg-surface px-2"
+                aria-label="Show levels up to alpha' M squared at zero separation"
               />
             </label>
             <label className="flex items-center gap-1">
@@ -194,7 +203,7 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
           firstPage={firstPage}
           typeTwo={result.supercharges !== null}
           kind={kind}
-          maxLevel={maxLevel ?? Number.POSITIVE_INFINITY}
+          massCap={massCap ?? Number.POSITIVE_INFINITY}
           showGeV={showGeV}
         />
       </section>

@@ -4,7 +4,7 @@ import { useQuery } from "@tanstack/react-query";
 import dynamic from "next/dynamic";
 import type { Sector, SectorKind } from "@/lib/boundary/types";
 import { configurationQueries } from "@/lib/client/configurations";
-import { formatMassSquared, formatNumber, formatPair, type SectorOverview } from "@/lib/spectrum";
+import { formatEngineProse, formatMassSquared, formatNumber, formatPair, type SectorOverview } from "@/lib/spectrum";
 import { Badge } from "@/components/ui/badge";
 import { SectorLevelsTable } from "./sector-levels-table";
 
@@ -22,7 +22,8 @@ export interface SectorCardProps {
   /** Whether the theory has supersymmetry to speak of (type II). */
   typeTwo: boolean;
   kind: SectorKind | "all";
-  maxLevel: number;
+  /** Rows with alpha' M^2 at zero separation (N + a) up to this value are listed. */
+  massCap: number;
   showGeV: boolean;
 }
 
@@ -30,7 +31,7 @@ export interface SectorCardProps {
  * One sector of a stored result: its header from the overview, and, once opened, its level table,
  * massless content, notes and mode expansions, loaded for this sector alone.
  */
-export function SectorCard({ configurationId, revisionId, sector, open, onToggle, typeTwo, kind, maxLevel, showGeV }: SectorCardProps) {
+export function SectorCard({ configurationId, revisionId, sector, open, onToggle, typeTwo, kind, massCap, showGeV }: SectorCardProps) {
   const title = formatPair(sector.pair);
   return (
     <details
@@ -60,7 +61,7 @@ export function SectorCard({ configurationId, revisionId, sector, open, onToggle
         ) : null}
       </summary>
       {open ? (
-        <SectorDetail configurationId={configurationId} revisionId={revisionId} sector={sector} title={title} kind={kind} maxLevel={maxLevel} showGeV={showGeV} />
+        <SectorDetail configurationId={configurationId} revisionId={revisionId} sector={sector} title={title} kind={kind} massCap={massCap} showGeV={showGeV} />
       ) : null}
     </details>
   );
@@ -72,11 +73,11 @@ interface SectorDetailProps {
   sector: SectorOverview;
   title: string;
   kind: SectorKind | "all";
-  maxLevel: number;
+  massCap: number;
   showGeV: boolean;
 }
 
-function SectorDetail({ configurationId, revisionId, sector, title, kind, maxLevel, showGeV }: SectorDetailProps) {
+function SectorDetail({ configurationId, revisionId, sector, title, kind, massCap, showGeV }: SectorDetailProps) {
   const query = useQuery(configurationQueries.resultSector(configurationId, revisionId, sector.index));
   if (query.isPending) {
     return (
@@ -98,23 +99,38 @@ function SectorDetail({ configurationId, revisionId, sector, title, kind, maxLev
   const detail: Sector = query.data;
   return (
     <div className="grid gap-3 border-t border-border px-4 py-3">
-      <SectorLevelsTable caption={`Levels of sector ${title}`} rows={detail.levels} kind={kind} maxLevel={maxLevel} showGeV={showGeV} />
+      <SectorLevelsTable
+        caption={`Levels of sector ${title}`}
+        rows={detail.levels}
+        zeroPoint={detail.zeroPoint}
+        kind={kind}
+        massCap={massCap}
+        showGeV={showGeV}
+      />
       {detail.massless.length > 0 ? (
         <div className="text-xs">
           <h4 className="font-semibold">Massless content</h4>
           <ul className="list-disc pl-4 text-muted-foreground">
             {detail.massless.map((m) => (
               <li key={`${m.sector}-${m.description}`}>
-                {m.sector}: {m.description} ({m.states} states{m.withChanPaton ? `, ${m.withChanPaton} with Chan-Paton` : ""})
+                {m.sector}: {formatEngineProse(m.description)} (light-cone trace count {m.states}
+                {m.withChanPaton ? `, ${m.withChanPaton} with Chan-Paton` : ""})
               </li>
             ))}
           </ul>
         </div>
       ) : null}
+      {sector.multiplet ? (
+        <p className="text-xs" data-testid={`multiplet-${sector.pair.join("-")}`}>
+          <span className="font-semibold">Lightest multiplet:</span> {sector.multiplet.name} in {sector.multiplet.dimension} dimensions:{" "}
+          {sector.multiplet.content} ({sector.multiplet.states} states, light-cone trace count), M&radic;&alpha;&prime; ={" "}
+          <span className="font-mono">{formatNumber(sector.multiplet.mass)}</span>
+        </p>
+      ) : null}
       {detail.notes.length > 0 ? (
         <ul className="list-disc pl-4 text-xs text-muted-foreground">
           {detail.notes.map((n) => (
-            <li key={n}>{n}</li>
+            <li key={n}>{formatEngineProse(n)}</li>
           ))}
         </ul>
       ) : null}

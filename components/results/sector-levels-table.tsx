@@ -10,8 +10,9 @@ import {
   type SortingState,
 } from "@tanstack/react-table";
 import { useMemo, useState } from "react";
-import type { LevelRow, SectorKind } from "@/lib/boundary/types";
-import { compareResultNumbers, compareStateCounts, formatNumber, parseResultNumber } from "@/lib/spectrum";
+import type { LevelRow, SectorKind, ZeroPoint } from "@/lib/boundary/types";
+import { rationalToNumber } from "@/lib/boundary/rational";
+import { compareResultNumbers, compareStateCounts, formatNumber, unstretchedMassSquared } from "@/lib/spectrum";
 import { cn } from "@/lib/utils";
 import { MassSquaredText, MassText } from "./mass-text";
 
@@ -19,24 +20,29 @@ export interface SectorLevelsTableProps {
   /** Caption naming the sector, for assistive technology. */
   caption: string;
   rows: LevelRow[];
+  /** Zero-point energies of the sector, to read alpha' M^2 at zero separation (N + a) of each row. */
+  zeroPoint: ZeroPoint;
   /** Only rows of this kind (NS, R, bosonic), or all. */
   kind: SectorKind | "all";
-  /** Only rows up to this level. */
-  maxLevel: number;
+  /** Only rows with alpha' M^2 at zero separation (N + a) up to this value. */
+  massCap: number;
   showGeV: boolean;
 }
 
-/** The levels of one sector, sortable by any column, filtered by kind and level. */
-export function SectorLevelsTable({ caption, rows, kind, maxLevel, showGeV }: SectorLevelsTableProps) {
+/** The levels of one sector, sortable by any column, filtered by kind and by alpha' M^2 at zero separation. */
+export function SectorLevelsTable({ caption, rows, zeroPoint, kind, massCap, showGeV }: SectorLevelsTableProps) {
   const [sorting, setSorting] = useState<SortingState>([]);
   const columns = useMemo<ColumnDef<LevelRow>[]>(
     () => [
       { accessorKey: "sector", header: "Sector", filterFn: (row, _id, value: string) => value === "all" || row.original.sector === value },
       {
         accessorKey: "level",
-        header: "Level N",
+        header: "Oscillator level N",
         sortingFn: (a, b) => compareResultNumbers(a.original.level, b.original.level),
-        filterFn: (row, _id, value: number) => parseResultNumber(row.original.level) <= value,
+        filterFn: (row, _id, value: number) => {
+          const unstretched = unstretchedMassSquared(row.original, zeroPoint);
+          return unstretched === null || rationalToNumber(unstretched) <= value;
+        },
       },
       {
         accessorKey: "massSquared",
@@ -50,7 +56,7 @@ export function SectorLevelsTable({ caption, rows, kind, maxLevel, showGeV }: Se
         : []),
       {
         accessorKey: "states",
-        header: "States",
+        header: "States (light-cone)",
         sortingFn: (a, b) => compareStateCounts(a.original.states, b.original.states),
         cell: ({ row }) => row.original.states ?? <span title={row.original.note}>&mdash;</span>,
       },
@@ -60,14 +66,14 @@ export function SectorLevelsTable({ caption, rows, kind, maxLevel, showGeV }: Se
         sortingFn: (a, b) => compareStateCounts(a.original.withChanPaton, b.original.withChanPaton),
       },
     ],
-    [showGeV],
+    [showGeV, zeroPoint],
   );
   const columnFilters = useMemo(
     () => [
       { id: "sector", value: kind },
-      { id: "level", value: maxLevel },
+      { id: "level", value: massCap },
     ],
-    [kind, maxLevel],
+    [kind, massCap],
   );
   const table = useReactTable({
     data: rows,

@@ -17,7 +17,8 @@ export interface SectorListProps {
   firstPage: SectorOverviewPageJson;
   typeTwo: boolean;
   kind: SectorKind | "all";
-  maxLevel: number;
+  /** Rows with alpha' M^2 at zero separation (N + a) up to this value are listed. */
+  massCap: number;
   showGeV: boolean;
 }
 
@@ -30,7 +31,7 @@ const openByDefault = 6;
  * near the viewport are in the page, each measured as it renders; a card loads its own detail
  * when it is opened. Two thousand sectors scroll as smoothly as ten.
  */
-export function SectorList({ configurationId, revisionId, filter, firstPage, typeTwo, kind, maxLevel, showGeV }: SectorListProps) {
+export function SectorList({ configurationId, revisionId, filter, firstPage, typeTwo, kind, massCap, showGeV }: SectorListProps) {
   const unfiltered = filter.search === "" && !filter.tachyonicOnly;
   const pages = useInfiniteQuery({
     ...configurationQueries.resultSectorPages(configurationId, revisionId, filter),
@@ -99,7 +100,7 @@ export function SectorList({ configurationId, revisionId, filter, firstPage, typ
                 }
                 typeTwo={typeTwo}
                 kind={kind}
-                maxLevel={maxLevel}
+                massCap={massCap}
                 showGeV={showGeV}
               />
             ) : (

@@ -1,6 +1,7 @@
 import type { ReactNode } from "react";
-import { formatNumber, formatPair, pairKey, type SummaryFacts } from "@/lib/spectrum";
+import { formatEngineProse, formatNumber, formatPair, pairKey, type SummaryFacts } from "@/lib/spectrum";
 import { Badge } from "@/components/ui/badge";
+import { cn } from "@/lib/utils";
 import { MassSquaredText } from "./mass-text";
 
 export interface SpectrumSummaryProps {
@@ -9,16 +10,17 @@ export interface SpectrumSummaryProps {
 }
 
 /**
- * The headline of a spectrum: supersymmetry, tachyons, gauge group and the lightest state.
- * The one summary of the designer preview, the results page and the shared view; it lays
- * itself out by the width it is given (a list in a side panel, cards across a page).
+ * The headline of a spectrum: supersymmetry, tachyons, the lightest state and the theory on each
+ * worldvolume (gauge and flavour groups, light matter, supersymmetry in that dimension). The one
+ * summary of the designer preview, the results page and the shared view; it lays itself out by
+ * the width it is given (a list in a side panel, cards across a page).
  */
 export function SpectrumSummary({ facts }: SpectrumSummaryProps) {
-  const { tachyons, tachyonCount, lightest } = facts;
+  const { tachyons, tachyonCount, lightest, worldvolumes, worldvolumeCount, stringCreation } = facts;
   const result = facts;
   return (
     <div className="@container">
-      <dl className="grid gap-2 text-sm @2xl:grid-cols-2 @2xl:gap-3 @5xl:grid-cols-4" aria-label="Spectrum summary">
+      <dl className="grid gap-2 text-sm @2xl:grid-cols-3 @2xl:gap-3" aria-label="Spectrum summary">
         <SummaryItem
           term="Supersymmetry"
           value={
@@ -27,18 +29,31 @@ export function SpectrumSummary({ facts }: SpectrumSummaryProps) {
                 {result.supercharges === null ? "not applicable" : `${result.supercharges} supercharges`}
               </span>
               {result.supercharges === null ? null : (
-                <Badge variant={result.bps ? "success" : "outline"} className="ml-2 align-middle">
-                  {result.bps ? "BPS" : "not BPS"}
+                <Badge variant={result.bps ? (stringCreation.length > 0 ? "warning" : "success") : "outline"} className="ml-2 align-middle">
+                  {result.bps ? (stringCreation.length > 0 ? "BPS with a stretched string" : "BPS") : "not BPS"}
                 </Badge>
               )}
             </>
           }
           detail={
-            result.supercharges === null
-              ? "The bosonic string has no spacetime supersymmetry."
-              : result.bps
-                ? "Every pair of stacks is mutually supersymmetric."
-                : "Some pairs break all supersymmetry between them."
+            result.supercharges === null ? (
+              "The bosonic string has no spacetime supersymmetry."
+            ) : !result.bps ? (
+              "Some pairs break all supersymmetry between them."
+            ) : stringCreation.length > 0 ? (
+              <span data-testid="spectrum-string-creation">
+                Supersymmetric only with a fundamental string stretched between{" "}
+                {stringCreation.map((pair, index) => (
+                  <span key={pairKey(...pair)}>
+                    {index > 0 ? "; " : ""}
+                    <span className="font-mono">{pair[0]}</span> and <span className="font-mono">{pair[1]}</span>
+                  </span>
+                ))}{" "}
+                (&nu; = 8: a string is created when the stacks cross); without it they feel a constant force.
+              </span>
+            ) : (
+              "Every pair of stacks is mutually supersymmetric."
+            )
           }
         />
         <SummaryItem
@@ -71,15 +86,6 @@ export function SpectrumSummary({ facts }: SpectrumSummaryProps) {
           }
         />
         <SummaryItem
-          term="Gauge group"
-          value={
-            <span className="font-mono" data-testid="spectrum-gauge-group">
-              {result.gaugeGroup || "none"}
-            </span>
-          }
-          detail={`${facts.sectorCount} sector${facts.sectorCount === 1 ? "" : "s"} of open strings.`}
-        />
-        <SummaryItem
           term="Lightest state"
           value={
             lightest ? (
@@ -92,8 +98,41 @@ export function SpectrumSummary({ facts }: SpectrumSummaryProps) {
           }
           detail={
             lightest
-              ? `${formatPair(lightest.pair)}, ${lightest.sector} at level ${lightest.level}: ${lightest.withChanPaton} states with Chan-Paton factors.`
-              : "No level up to the highest one computed keeps a state."
+              ? `${formatPair(lightest.pair)}, ${lightest.sector} at oscillator level N = ${lightest.level}: ${lightest.withChanPaton} states with Chan-Paton factors.`
+              : "No state up to the mass cap survives."
+          }
+        />
+        <SummaryItem
+          term="Worldvolumes"
+          className="@2xl:col-span-3"
+          value={
+            worldvolumes === null || worldvolumes.length === 0 ? (
+              <span className="text-sm font-normal" data-testid="spectrum-worldvolumes">
+                {worldvolumes === null ? "not recorded by the engine that stored this result" : "none"}
+              </span>
+            ) : (
+              <ul className="grid gap-0.5 text-sm font-normal" data-testid="spectrum-worldvolumes">
+                {worldvolumes.map((worldvolume) => (
+                  <li key={worldvolume.key} data-testid={`worldvolume-${worldvolume.stacks.join("-")}`}>
+                    <span>{formatEngineProse(worldvolume.summary)}</span>{" "}
+                    <Badge variant={worldvolume.supercharges ? "success" : "outline"} className="align-middle">
+                      {worldvolume.supersymmetry}
+                    </Badge>
+                  </li>
+                ))}
+                {worldvolumeCount > worldvolumes.length ? <li>and {worldvolumeCount - worldvolumes.length} more</li> : null}
+              </ul>
+            )
+          }
+          detail={
+            <>
+              Gauge factors over all worldvolumes:{" "}
+              <span className="font-mono" data-testid="spectrum-gauge-group">
+                {result.gaugeGroup || "none"}
+              </span>
+              ; each is gauged only on its own worldvolume, and a higher-dimensional stack&apos;s group is a flavour symmetry of
+              the lower-dimensional theory. {facts.sectorCount} sector{facts.sectorCount === 1 ? "" : "s"} of open strings.
+            </>
           }
         />
       </dl>
@@ -101,9 +140,14 @@ export function SpectrumSummary({ facts }: SpectrumSummaryProps) {
   );
 }
 
-function SummaryItem({ term, value, detail }: { term: string; value: ReactNode; detail: ReactNode }) {
+function SummaryItem({ term, value, detail, className }: { term: string; value: ReactNode; detail: ReactNode; className?: string }) {
   return (
-    <div className="grid grid-cols-[7.5rem_minmax(0,1fr)] gap-x-3 gap-y-0.5 @2xl:grid-cols-1 @2xl:content-start @2xl:rounded-lg @2xl:border @2xl:border-border @2xl:bg-surface @2xl:p-4">
+    <div
+      className={cn(
+        "grid grid-cols-[7.5rem_minmax(0,1fr)] gap-x-3 gap-y-0.5 @2xl:grid-cols-1 @2xl:content-start @2xl:rounded-lg @2xl:border @2xl:border-border @2xl:bg-surface @2xl:p-4",
+        className,
+      )}
+    >
       <dt className="text-xs text-muted-foreground @2xl:font-semibold @2xl:tracking-wide @2xl:uppercase">{term}</dt>
       <dd className="font-medium @2xl:text-lg @2xl:font-semibold">{value}</dd>
       <dd className="col-start-2 text-xs text-muted-foreground @2xl:col-start-1 @2xl:text-sm">{detail}</dd>

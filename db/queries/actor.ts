@@ -2,7 +2,7 @@ import "server-only";
 import { and, eq, isNull, sql, type Placeholder } from "drizzle-orm";
 import { ForbiddenError, NotFoundError, UnauthenticatedError } from "../../lib/errors";
 import { db, type Executor } from "../index";
-import { groups, memberships, users, type GroupRole, type SiteRole } from "../schema";
+import { groups, memberships, sessions, users, type GroupRole, type SiteRole } from "../schema";
 
 /** The signed-in user acting on the data, as carried by the session. */
 export interface Actor {
@@ -10,6 +10,8 @@ export interface Actor {
   email: string;
   name: string;
   siteRole: SiteRole;
+  /** The session (browser or device) the request came with, when it came with one. */
+  sessionId?: string;
 }
 
 /** Group roles from weakest to strongest. */
@@ -84,13 +86,14 @@ export async function requireGroupRole(
 }
 
 /**
- * Loads the Actor for a user id (e.g. from a session token), or null when the account no
- * longer exists or was deleted. This is how sessions obtain an actor; it authorizes nothing.
+ * Loads the Actor of a session token's user and session id, or null when the session was revoked
+ * (signed out, a password change or reset) or the account is gone. This is how every request
+ * obtains its actor; one prepared query.
  */
-export async function getActorById(userId: string): Promise<Actor | null> {
-  if (!isUuid(userId)) return null;
-  const [row] = await actorByIdStatement.execute({ userId });
-  return row ?? null;
+export async function getActorForSession(userId: string, sessionId: string): Promise<Actor | null> {
+  if (!isUuid(userId) || !isUuid(sessionId)) return null;
+  const [row] = await actorBySessionStatement.execute({ userId, sessionId });
+  return row ? { ...row, sessionId } : null;
 }
 
 // Prepared statements for the lookups made on nearly every request: PostgreSQL parses and plans
@@ -108,12 +111,20 @@ function selectGroupRole(executor: Executor, groupId: string | Placeholder, user
 
 const groupRoleStatement = selectGroupRole(db, sql.placeholder("groupId"), sql.placeholder("userId")).prepare("group_role");
 
-const actorByIdStatement = db
+const actorBySessionStatement = db
   .select({ id: users.id, email: users.email, name: users.name, siteRole: users.siteRole })
-  .from(users)
-  .where(and(eq(users.id, sql.placeholder("userId")), isNull(users.deletedAt)))
+  .from(sessions)
+  .innerJoin(users, eq(users.id, sessions.userId))
+  .where(
+    and(
+      eq(sessions.id, sql.placeholder("sessionId")),
+      eq(sessions.userId, sql.placeholder("userId")),
+      isNull(sessions.revokedAt),
+      isNull(users.deletedAt),
+    ),
+  )
   .limit(1)
-  .prepare("actor_by_id");
+  .prepare("actor_by_session");
 
 const uuidPattern = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 

@@ -1,7 +1,7 @@
 import "server-only";
 import { and, desc, eq, isNull } from "drizzle-orm";
 import { ForbiddenError, NotFoundError, PayloadTooLargeError, ValidationError } from "../../lib/errors";
-import { sniffContentType, type AttachmentContentType } from "../../lib/files/sniff";
+import { attachmentFileNameFor, sniffContentType, type AttachmentContentType } from "../../lib/files/sniff";
 import { attachmentMaxBytes } from "../../lib/validations/attachment";
 import { db } from "../index";
 import { attachments, users } from "../schema";
@@ -31,8 +31,20 @@ export interface AttachmentFileDto {
 }
 
 /**
+ * Checks that the actor may attach files to the configuration (editors and owners), before an
+ * upload is read: 401 without a session, 404 for a configuration the actor cannot see, 403 for a
+ * viewer. `uploadAttachment` checks again inside its own work.
+ */
+export async function assertMayAttach(actor: Actor | null, configurationId: string): Promise<void> {
+  await requireConfigurationRole(db, actor, configurationId, "editor");
+}
+
+/**
  * Stores an attachment. Editors and owners. Larger than `attachmentMaxBytes` is a 413, a type
- * other than PNG/JPEG/PDF a 422 on `file`; in both cases nothing is written.
+ * other than PNG/JPEG/PDF a 422 on `file`; in both cases nothing is written. The stored name keeps
+ * the uploaded one's stem but always ends in the extension of the type found in the bytes
+ * ("notes.html" holding a PDF is stored as "notes.pdf"), so opening a download never runs it as
+ * something else.
  */
 export async function uploadAttachment(
   actor: Actor | null,
@@ -49,12 +61,13 @@ export async function uploadAttachment(
   if (!contentType) {
     throw ValidationError.at(["file"], "Only PNG, JPEG and PDF files can be attached (checked from the file's contents).");
   }
+  const fileName = attachmentFileNameFor(file.fileName, contentType);
   return db.transaction(async (tx) => {
     const [row] = await tx
       .insert(attachments)
       .values({
         configurationId,
-        fileName: file.fileName,
+        fileName,
         contentType,
         byteSize: file.data.byteLength,
         data: Buffer.from(file.data.buffer, file.data.byteOffset, file.data.byteLength),
@@ -68,11 +81,11 @@ export async function uploadAttachment(
       action: "attachment.create",
       entityType: "attachment",
       entityId: row.id,
-      details: { configurationId, fileName: file.fileName, contentType, byteSize: file.data.byteLength },
+      details: { configurationId, fileName, contentType, byteSize: file.data.byteLength },
     });
     return {
       id: row.id,
-      fileName: file.fileName,
+      fileName,
       contentType,
       byteSize: file.data.byteLength,
       uploadedByName: signedIn.name,

@@ -1,8 +1,14 @@
 import "server-only";
-import { and, desc, eq, lt } from "drizzle-orm";
+import { and, desc, eq, isNull, lt, sql } from "drizzle-orm";
 import { db } from "../index";
-import { auditLog, users } from "../schema";
+import { auditLog, configurations, users } from "../schema";
 import { assertUuid, requireGroupRole, type Actor } from "./actor";
+
+/**
+ * The configuration an entry is about: its entity for configuration entries, the recorded
+ * `configurationId` for comments, attachments and share links.
+ */
+export const entryConfigurationId = sql`coalesce(case when ${auditLog.entityType} = 'configuration' then ${auditLog.entityId} end, (${auditLog.details} ->> 'configurationId')::uuid)`;
 
 /** One row of a group's audit log. */
 export interface AuditLogEntryDto {
@@ -11,6 +17,8 @@ export interface AuditLogEntryDto {
   entityType: string;
   entityId: string | null;
   actorName: string | null;
+  /** Title of the configuration the entry is about, while it exists (deleted ones keep theirs in `details`). */
+  configurationTitle: string | null;
   details: Record<string, unknown>;
   createdAt: Date;
 }
@@ -38,11 +46,13 @@ export async function listAuditLog(
       entityType: auditLog.entityType,
       entityId: auditLog.entityId,
       actorName: users.name,
+      configurationTitle: configurations.title,
       details: auditLog.details,
       createdAt: auditLog.createdAt,
     })
     .from(auditLog)
     .leftJoin(users, eq(users.id, auditLog.actorId))
+    .leftJoin(configurations, and(eq(configurations.id, entryConfigurationId), eq(configurations.groupId, groupId), isNull(configurations.deletedAt)))
     .where(and(eq(auditLog.groupId, groupId), options.before ? lt(auditLog.createdAt, options.before) : undefined))
     .orderBy(desc(auditLog.createdAt))
     .limit(limit);

@@ -1,5 +1,6 @@
 import "server-only";
 import { and, desc, eq, isNull } from "drizzle-orm";
+import { entryConfigurationId } from "./audit-log";
 import { db } from "../index";
 import { auditLog, configurations, groups, memberships, type GroupKind } from "../schema";
 import { requireActor, type Actor } from "./actor";
@@ -9,6 +10,8 @@ export interface ActivityDto {
   id: string;
   /** Dotted verb from the audit log, e.g. "configuration.update". */
   action: string;
+  /** The entry's recorded details (version numbers, e-mail addresses, file names). */
+  details: Record<string, unknown>;
   group: { slug: string; name: string; kind: GroupKind };
   /** The configuration the entry is about, when it still exists. */
   configuration: { id: string; title: string } | null;
@@ -35,6 +38,7 @@ export async function listRecentActivityForUser(
     .select({
       id: auditLog.id,
       action: auditLog.action,
+      details: auditLog.details,
       groupSlug: groups.slug,
       groupName: groups.name,
       groupKind: groups.kind,
@@ -48,8 +52,7 @@ export async function listRecentActivityForUser(
     .leftJoin(
       configurations,
       and(
-        eq(auditLog.entityType, "configuration"),
-        eq(configurations.id, auditLog.entityId),
+        eq(configurations.id, entryConfigurationId),
         eq(configurations.groupId, groups.id),
         isNull(configurations.deletedAt),
       ),
@@ -61,6 +64,7 @@ export async function listRecentActivityForUser(
   return rows.map((row) => ({
     id: row.id,
     action: row.action,
+    details: row.details,
     group: { slug: row.groupSlug, name: row.groupName, kind: row.groupKind },
     configuration: row.configurationId && row.configurationTitle ? { id: row.configurationId, title: row.configurationTitle } : null,
     createdAt: row.createdAt,

@@ -1,12 +1,9 @@
 import "server-only";
-import { eq, sql, type Placeholder } from "drizzle-orm";
-import { alias } from "drizzle-orm/pg-core";
 import type { Configuration, SpectrumResult, Theory } from "../../lib/boundary/types";
-import { NotFoundError } from "../../lib/errors";
 import { readStoredResult } from "../../lib/validations/spectrum-result";
-import { db, type Executor } from "../index";
-import { configurations, groups, results, revisions, users, type ConfigurationRow, type GroupKind, type GroupRole } from "../schema";
-import { getGroupRole, roleAtLeast, type Actor } from "./actor";
+import { groups, results, revisions, type ConfigurationRow, type GroupKind, type GroupRole } from "../schema";
+import { roleAtLeast } from "./actor";
+import type { ConfigurationContext } from "./configuration-access";
 
 /*
  * The shapes the configuration DAL returns (configurations, revisions, forks, results) and the
@@ -107,72 +104,18 @@ export interface ConfigurationPage {
   total: number;
 }
 
-const sourceConfiguration = alias(configurations, "source_configuration");
-const sourceRevision = alias(revisions, "source_revision");
-const currentRevision = alias(revisions, "current_revision");
-
-/** Group, author, current revision number and fork source of one configuration (for its DTO). */
-function selectConfigurationDetails(executor: Executor, configurationId: string | Placeholder) {
-  return executor
-    .select({
-      group: groups,
-      authorName: users.name,
-      currentNumber: currentRevision.number,
-      sourceTitle: sourceConfiguration.title,
-      sourceGroupId: sourceConfiguration.groupId,
-      sourceDeletedAt: sourceConfiguration.deletedAt,
-      sourceRevisionNumber: sourceRevision.number,
-    })
-    .from(configurations)
-    .innerJoin(groups, eq(groups.id, configurations.groupId))
-    .innerJoin(users, eq(users.id, configurations.createdBy))
-    .leftJoin(currentRevision, eq(currentRevision.id, configurations.currentRevisionId))
-    .leftJoin(sourceConfiguration, eq(sourceConfiguration.id, configurations.forkedFromConfigurationId))
-    .leftJoin(sourceRevision, eq(sourceRevision.id, configurations.forkedFromRevisionId))
-    .where(eq(configurations.id, configurationId))
-    .limit(1);
-}
-
 /**
- * The details query prepared once: planning this six-table join costs PostgreSQL about a
- * millisecond, more than running it, and every configuration read needs it. Transactions build
- * the same query on their own connection (selectConfigurationDetails).
+ * The DTO of one configuration row, with its group, author and fork source (from the access check,
+ * db/queries/configuration-access.ts, or known to the write that made the row). The current
+ * revision's number is the row's version: every accepted save makes revision number = version.
  */
-const configurationDetailsStatement = selectConfigurationDetails(db, sql.placeholder("id")).prepare("configuration_details");
-
-/** The DTO of one configuration row, with its group, author, current revision and fork source. */
-export async function toConfigurationDto(
-  executor: Executor,
-  actor: Actor | null,
-  row: ConfigurationRow,
-  role: GroupRole,
-): Promise<ConfigurationDto> {
-  const [details] =
-    executor === db ? await configurationDetailsStatement.execute({ id: row.id }) : await selectConfigurationDetails(executor, row.id);
-  if (!details) throw new NotFoundError("No such configuration.");
-
-  let forkedFrom: ConfigurationDto["forkedFrom"] = null;
-  if (row.forkedFromConfigurationId) {
-    const sourceVisible =
-      details.sourceGroupId !== null &&
-      details.sourceDeletedAt === null &&
-      (await getGroupRole(executor, actor, details.sourceGroupId)) !== null;
-    forkedFrom = {
-      configurationId: row.forkedFromConfigurationId,
-      revisionId: row.forkedFromRevisionId,
-      revisionNumber: sourceVisible ? details.sourceRevisionNumber : null,
-      title: sourceVisible ? details.sourceTitle : null,
-    };
-  }
+export function toConfigurationDto(row: ConfigurationRow, context: ConfigurationContext, role: GroupRole): ConfigurationDto {
   return {
-    ...toSummary(row, details.group, details.authorName),
+    ...toSummary(row, context.group, context.authorName),
     description: row.description,
     document: row.document,
-    currentRevision:
-      row.currentRevisionId && details.currentNumber !== null
-        ? { id: row.currentRevisionId, number: details.currentNumber }
-        : null,
-    forkedFrom,
+    currentRevision: row.currentRevisionId ? { id: row.currentRevisionId, number: row.version } : null,
+    forkedFrom: context.source,
     role,
     canEdit: roleAtLeast(role, "editor"),
   };

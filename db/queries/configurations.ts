@@ -1,10 +1,11 @@
 import "server-only";
+import { randomUUID } from "node:crypto";
 import { and, asc, count, eq, ilike, inArray, isNull, sql, type SQL } from "drizzle-orm";
 import type { Configuration } from "../../lib/boundary/types";
-import { parseConfigurationFile } from "../../lib/validations/import";
-import { ForbiddenError, NotFoundError, ValidationError } from "../../lib/errors";
-import { db, type Executor } from "../index";
-import { configurations, groups, memberships, users, type GroupRole } from "../schema";
+import { parseConfigurationFileBytes } from "../../lib/validations/import";
+import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from "../../lib/errors";
+import { db } from "../index";
+import { auditLog, configurations, groups, memberships, results, revisions, shareLinks, users, type GroupRole } from "../schema";
 import { assertUuid, requireActor, requireGroupRole, type Actor } from "./actor";
 import { recordAudit } from "./audit";
 import { getPersonalGroup } from "./groups";
@@ -17,7 +18,7 @@ import {
   type ListConfigurationsOptions,
 } from "./configuration-dtos";
 import { resultForDocument, type RevisionResult } from "./results";
-import { addRevision, bumpVersion, documentColumns } from "./revision-writes";
+import { addRevision, documentColumns } from "./revision-writes";
 
 /** Options of `createConfiguration`. */
 export interface CreateConfigurationOptions {
@@ -72,8 +73,8 @@ export async function getConfiguration(
   actor: Actor | null,
   configurationId: string,
 ): Promise<ConfigurationDto> {
-  const { row, role } = await requireConfigurationRole(db, actor, configurationId, "viewer");
-  return toConfigurationDto(db, actor, row, role);
+  const { row, role, context } = await requireConfigurationRole(db, actor, configurationId, "viewer");
+  return toConfigurationDto(row, context, role);
 }
 
 /**
@@ -97,19 +98,19 @@ export interface ImportConfigurationInput {
   /** The receiving group; the actor's personal space when omitted. */
   groupId?: string;
   fileName: string;
-  /** The file's text (UTF-8). */
-  text: string;
+  /** The file's bytes, judged by their content (UTF-8 JSON is expected). */
+  bytes: Uint8Array;
 }
 
 /**
- * Creates a configuration from the text of a configuration file (editor or better in the group).
+ * Creates a configuration from a configuration file (editor or better in the group).
  * Every problem of the file is reported at once with its JSON path inside the file (422), and
  * nothing is saved from an invalid file.
  */
 export async function importConfiguration(actor: Actor | null, input: ImportConfigurationInput): Promise<ConfigurationDto> {
   const signedIn = requireActor(actor);
   if (input.groupId !== undefined) assertUuid(input.groupId, "group");
-  const document = parseConfigurationFile(input.text);
+  const document = parseConfigurationFileBytes(input.bytes);
   const computed = await resultForDocument(db, document, { problemsAt: [] });
   const groupId = input.groupId ?? (await getPersonalGroup(signedIn)).id;
   return insertConfiguration(actor, groupId, document, `Imported from ${input.fileName || "a file"}`, computed, {});
@@ -127,7 +128,9 @@ async function insertConfiguration(
   const columns = documentColumns(document, computed.summary);
   return db.transaction(async (tx) => {
     const role = await requireGroupRole(tx, actor, groupId, "editor");
-    if (options.isStarter) await assertCanPublishStarter(tx, groupId, role);
+    const [group] = await tx.select().from(groups).where(eq(groups.id, groupId));
+    if (!group) throw new NotFoundError("No such group.");
+    if (options.isStarter) assertCanPublishStarter(group, role);
     const [created] = await tx
       .insert(configurations)
       .values({ groupId, ...columns, version: 1, isStarter: options.isStarter ?? false, createdBy: author.id })
@@ -142,7 +145,7 @@ async function insertConfiguration(
       entityId: created.id,
       details: { title: columns.title, isStarter: created.isStarter },
     });
-    return toConfigurationDto(tx, actor, row, role);
+    return toConfigurationDto(row, { group, authorName: author.name, source: null }, role);
   });
 }
 
@@ -150,6 +153,10 @@ async function insertConfiguration(
  * Saves a new revision (editor or better) with a result the server computes. The update only
  * applies when the stored version equals `expectedVersion`; otherwise ConflictError (with the
  * current version) and nothing is written, so concurrent saves never overwrite each other.
+ *
+ * The write is one statement (see `saveRevisionStatement`): the role and version checks, the new
+ * revision, its result, the configuration's new columns and the audit entry land together or not
+ * at all. Only when it writes nothing is the reason looked up (404, 403 or 409).
  */
 export async function updateConfiguration(
   actor: Actor | null,
@@ -157,45 +164,126 @@ export async function updateConfiguration(
   input: UpdateConfigurationInput,
 ): Promise<ConfigurationDto> {
   const author = requireActor(actor);
+  assertUuid(configurationId, "configuration");
+  assertExpectedVersion(input.expectedVersion);
   const computed = await resultForDocument(db, input.document);
   const columns = documentColumns(input.document, computed.summary);
-  return db.transaction(async (tx) => {
-    const { role } = await requireConfigurationRole(tx, actor, configurationId, "editor");
-    const bumped = await bumpVersion(tx, configurationId, input.expectedVersion, columns);
-    const row = await addRevision(tx, bumped, author.id, input.message, computed);
-    await recordAudit(tx, {
-      actorId: author.id,
-      groupId: row.groupId,
-      action: "configuration.update",
-      entityType: "configuration",
-      entityId: row.id,
-      details: { version: row.version },
-    });
-    return toConfigurationDto(tx, actor, row, role);
-  });
+  let saved = false;
+  try {
+    saved = await saveRevisionStatement(author, configurationId, input, columns, computed);
+  } catch (error) {
+    // Two saves from the same version: the later one meets the earlier one's revision number.
+    if (!isUniqueViolation(error)) throw error;
+  }
+  const access = await requireConfigurationRole(db, actor, configurationId, saved ? "viewer" : "editor");
+  if (!saved) throw new ConflictError(access.row.version);
+  return toConfigurationDto(access.row, access.context, access.role);
 }
 
-/** Moves a configuration to the bin (editor or better); `undeleteConfiguration` brings it back. */
+/** Refuses an `expectedVersion` that is not a positive whole number (422). */
+function assertExpectedVersion(expectedVersion: number): void {
+  if (!Number.isInteger(expectedVersion) || expectedVersion < 1) {
+    throw ValidationError.at(["expectedVersion"], "expectedVersion must be a positive whole number.");
+  }
+}
+
+/**
+ * The save as one statement of data-modifying CTEs: the revision (numbered expected + 1) is
+ * inserted only where the configuration is live, in a live group, at the expected version, and the
+ * author may edit it (editor, owner or site admin); its result, the configuration's update (which
+ * again requires the expected version) and the audit entry follow from it. Returns whether the
+ * configuration was updated. A concurrent save from the same version fails on the revision's
+ * unique number (23505) and writes nothing.
+ */
+async function saveRevisionStatement(
+  author: Actor,
+  configurationId: string,
+  input: UpdateConfigurationInput,
+  columns: ReturnType<typeof documentColumns>,
+  result: RevisionResult,
+): Promise<boolean> {
+  const revisionId = randomUUID();
+  const document = JSON.stringify(columns.document);
+  const mayEdit =
+    author.siteRole === "admin"
+      ? sql`true`
+      : sql`exists (select 1 from ${memberships} m where m.group_id = c.group_id and m.user_id = ${author.id} and m.role in ('editor', 'owner'))`;
+  const storeResult =
+    result.source === "fresh"
+      ? sql`select rev.id, ${result.engineVersion}, ${result.contentHash}, ${result.json}::jsonb, ${result.overviewJson}::jsonb, ${result.computeMs} from rev`
+      : sql`select rev.id, s.engine_version, s.content_hash, s.result, s.overview, s.compute_ms from rev, ${results} s where s.id = ${result.resultId}`;
+  const outcome = await db.execute<{ version: number }>(sql`
+    with rev as (
+      insert into ${revisions} (id, configuration_id, number, document, author_id, message)
+      select ${revisionId}, c.id, c.version + 1, ${document}::jsonb, ${author.id}, ${input.message.trim()}
+      from ${configurations} c
+      join ${groups} g on g.id = c.group_id and g.deleted_at is null
+      where c.id = ${configurationId} and c.version = ${input.expectedVersion} and c.deleted_at is null and ${mayEdit}
+      returning id, configuration_id, number
+    ),
+    res as (
+      insert into ${results} (revision_id, engine_version, content_hash, result, overview, compute_ms)
+      ${storeResult}
+    ),
+    upd as (
+      update ${configurations} c
+      set title = ${columns.title}, description = ${columns.description}, theory = ${columns.theory},
+          document = ${document}::jsonb, stack_count = ${columns.stackCount},
+          lightest_mass_squared = ${columns.lightestMassSquared}, tachyonic = ${columns.tachyonic},
+          supercharges = ${columns.supercharges}, version = rev.number, current_revision_id = rev.id, updated_at = now()
+      from rev
+      where c.id = rev.configuration_id and c.version = ${input.expectedVersion}
+      returning c.id, c.group_id, c.version
+    ),
+    aud as (
+      insert into ${auditLog} (actor_id, group_id, action, entity_type, entity_id, details)
+      select ${author.id}, upd.group_id, 'configuration.update', 'configuration', upd.id, jsonb_build_object('version', upd.version)
+      from upd
+    )
+    select version from upd`);
+  return outcome.rows.length === 1;
+}
+
+/** PostgreSQL's unique_violation (23505). */
+function isUniqueViolation(error: unknown): boolean {
+  for (let current = error, depth = 0; current && typeof current === "object" && depth < 5; depth += 1) {
+    if ("code" in current && current.code === "23505") return true;
+    current = "cause" in current ? current.cause : undefined;
+  }
+  return false;
+}
+
+/**
+ * Moves a configuration to the bin (editor or better); `undeleteConfiguration` brings it back. Its
+ * share links are revoked with it and stay revoked after an undelete: a link someone handed out
+ * for the old configuration should not start working again without anyone deciding so.
+ */
 export async function softDeleteConfiguration(actor: Actor | null, configurationId: string): Promise<void> {
   const signedIn = requireActor(actor);
   await db.transaction(async (tx) => {
     const { row } = await requireConfigurationRole(tx, actor, configurationId, "editor");
+    const now = new Date();
     await tx
       .update(configurations)
-      .set({ deletedAt: new Date() })
+      .set({ deletedAt: now })
       .where(and(eq(configurations.id, row.id), isNull(configurations.deletedAt)));
+    const revoked = await tx
+      .update(shareLinks)
+      .set({ revokedAt: now })
+      .where(and(eq(shareLinks.configurationId, row.id), isNull(shareLinks.revokedAt)))
+      .returning({ id: shareLinks.id });
     await recordAudit(tx, {
       actorId: signedIn.id,
       groupId: row.groupId,
       action: "configuration.delete",
       entityType: "configuration",
       entityId: row.id,
-      details: { title: row.title },
+      details: { title: row.title, revokedShareLinks: revoked.length },
     });
   });
 }
 
-/** Restores a soft-deleted configuration (editor or better in its group). */
+/** Restores a soft-deleted configuration (editor or better in its group); its share links stay revoked. */
 export async function undeleteConfiguration(
   actor: Actor | null,
   configurationId: string,
@@ -209,13 +297,8 @@ export async function undeleteConfiguration(
       .where(eq(configurations.id, configurationId))
       .limit(1);
     if (!row) throw new NotFoundError("No such configuration.");
-    const role = await requireGroupRole(tx, actor, row.groupId, "editor", "configuration");
-    const [restored] = await tx
-      .update(configurations)
-      .set({ deletedAt: null })
-      .where(eq(configurations.id, configurationId))
-      .returning();
-    if (!restored) throw new NotFoundError("No such configuration.");
+    await requireGroupRole(tx, actor, row.groupId, "editor", "configuration");
+    await tx.update(configurations).set({ deletedAt: null }).where(eq(configurations.id, configurationId));
     await recordAudit(tx, {
       actorId: signedIn.id,
       groupId: row.groupId,
@@ -223,7 +306,8 @@ export async function undeleteConfiguration(
       entityType: "configuration",
       entityId: row.id,
     });
-    return toConfigurationDto(tx, actor, restored, role);
+    const restored = await requireConfigurationRole(tx, actor, configurationId, "editor");
+    return toConfigurationDto(restored.row, restored.context, restored.role);
   });
 }
 
@@ -235,8 +319,8 @@ export async function setConfigurationStarter(
 ): Promise<ConfigurationDto> {
   const signedIn = requireActor(actor);
   return db.transaction(async (tx) => {
-    const { row, role } = await requireConfigurationRole(tx, actor, configurationId, "owner");
-    if (isStarter) await assertCanPublishStarter(tx, row.groupId, role);
+    const { row, role, context } = await requireConfigurationRole(tx, actor, configurationId, "owner");
+    if (isStarter) assertCanPublishStarter(context.group, role);
     const [updated] = await tx
       .update(configurations)
       .set({ isStarter })
@@ -250,13 +334,12 @@ export async function setConfigurationStarter(
       entityType: "configuration",
       entityId: row.id,
     });
-    return toConfigurationDto(tx, actor, updated, role);
+    return toConfigurationDto(updated, context, role);
   });
 }
 
-async function assertCanPublishStarter(executor: Executor, groupId: string, role: GroupRole) {
-  const [group] = await executor.select({ kind: groups.kind }).from(groups).where(eq(groups.id, groupId));
-  if (group?.kind !== "lab") throw ValidationError.at(["isStarter"], "Only lab groups publish starter configurations.");
+function assertCanPublishStarter(group: Pick<typeof groups.$inferSelect, "kind">, role: GroupRole) {
+  if (group.kind !== "lab") throw ValidationError.at(["isStarter"], "Only lab groups publish starter configurations.");
   if (role !== "owner") throw new ForbiddenError("Only the lab's owners publish starter configurations.");
 }
 

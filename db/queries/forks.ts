@@ -1,9 +1,11 @@
 import "server-only";
-import { and, eq } from "drizzle-orm";
+import { and, eq, isNull } from "drizzle-orm";
 import type { Configuration } from "../../lib/boundary/types";
 import { ForbiddenError, NotFoundError, ValidationError } from "../../lib/errors";
+import { distinctTitle } from "../../lib/titles";
+import { configurationTitleMaxLength } from "../../lib/validations/configuration";
 import { db } from "../index";
-import { configurations, revisions } from "../schema";
+import { configurations, groups, revisions } from "../schema";
 import { assertUuid, getGroupRole, requireActor, roleAtLeast, type Actor } from "./actor";
 import { recordAudit } from "./audit";
 import { requireConfigurationRole } from "./configuration-access";
@@ -18,7 +20,7 @@ export interface ForkConfigurationInput {
   targetGroupId: string;
   /** Revision to fork; the current one when omitted. */
   revisionId?: string;
-  /** Title of the fork; the source title when omitted. */
+  /** Title of the fork; the source title when omitted. A number is added when the space already has a configuration of that title. */
   title?: string;
   /**
    * An edited document to start the fork from (the designer's unsaved draft); the fork still records
@@ -57,7 +59,13 @@ export async function forkConfiguration(
       : [];
     if (!revision) throw new NotFoundError("No such revision.");
 
-    const title = input.title?.trim() || (input.document ?? revision.document).title;
+    // A repeat fork into the same space gets a numbered title ("X (fork 2)"), so the two can be told apart.
+    const taken = await tx
+      .select({ title: configurations.title })
+      .from(configurations)
+      .where(and(eq(configurations.groupId, input.targetGroupId), isNull(configurations.deletedAt)));
+    const wanted = input.title?.trim() || (input.document ?? revision.document).title;
+    const title = distinctTitle(wanted, new Set(taken.map((row) => row.title)), configurationTitleMaxLength);
     const document: Configuration = { ...(input.document ?? revision.document), title };
     // The title is not part of the physics, so an untouched document keeps the source's result.
     const result = await resultForDocument(tx, document, input.document === undefined ? { sameAs: { revisionId: revision.id } } : {});
@@ -85,7 +93,10 @@ export async function forkConfiguration(
       entityId: row.id,
       details: { sourceConfigurationId: source.id, sourceRevisionId: revision.id, withDraft: input.document !== undefined },
     });
-    return toConfigurationDto(tx, actor, row, targetRole);
+    const [group] = await tx.select().from(groups).where(eq(groups.id, input.targetGroupId));
+    if (!group) throw new NotFoundError("No such group.");
+    const forkedFrom = { configurationId: source.id, revisionId: revision.id, title: source.title, revisionNumber: revision.number };
+    return toConfigurationDto(row, { group, authorName: author.name, source: forkedFrom }, targetRole);
   });
 }
 

@@ -143,9 +143,13 @@ export async function createPersonalGroup(
   return group;
 }
 
-/** A group by its slug. Non-members get NotFoundError, so a group's existence does not leak. */
+/**
+ * A group by its slug. Non-members get NotFoundError, so a group's existence does not leak; so
+ * does text that cannot be a slug (it never reaches the database).
+ */
 export async function getGroupBySlug(actor: Actor | null, slug: string): Promise<GroupDto> {
   requireActor(actor);
+  if (!slugPattern.test(slug.toLowerCase())) throw new NotFoundError("No such group.");
   const [group] = await db
     .select()
     .from(groups)

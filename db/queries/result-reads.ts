@@ -17,9 +17,8 @@ import { readStoredResult } from "../../lib/validations/spectrum-result";
 import { db } from "../index";
 import { results, revisions } from "../schema";
 import { assertUuid, requireActor, type Actor } from "./actor";
-import { requireConfigurationRole } from "./configuration-access";
-import { getConfiguration } from "./configurations";
-import { toResultDto, type ResultDto, type ResultMetaDto } from "./configuration-dtos";
+import { readConfigurationWithResult, requireConfigurationRole } from "./configuration-access";
+import { toConfigurationDto, toResultDto, type ResultDto, type ResultMetaDto } from "./configuration-dtos";
 
 /*
  * Reading stored results (viewer or better on the configuration). The whole result is read only
@@ -185,22 +184,15 @@ export async function getConfigurationWithResultText(
   actor: Actor | null,
   configurationId: string,
 ): Promise<{ text: string; version: number }> {
-  const configuration = await getConfiguration(actor, configurationId);
-  const head = JSON.stringify(configuration).slice(0, -1);
-  const version = configuration.version;
-  const revisionId = configuration.currentRevision?.id;
-  if (!revisionId) return { text: `${head},"result":null}`, version };
-  const [row] = await db
-    .select({
-      engineVersion: results.engineVersion,
-      computeMs: results.computeMs,
-      createdAt: results.createdAt,
-      text: sql<string>`${results.result}::text`,
-    })
-    .from(results)
-    .where(eq(results.revisionId, revisionId));
-  if (!row) return { text: `${head},"result":null}`, version };
-  const text = row.engineVersion === ENGINE_VERSION ? row.text : JSON.stringify(readStoredResult(JSON.parse(row.text)));
-  const meta = JSON.stringify({ revisionId, engineVersion: row.engineVersion, computeMs: row.computeMs, createdAt: row.createdAt });
-  return { text: `${head},"result":${meta.slice(0, -1)},"result":${text}}}`, version };
+  const { row, context, role, result } = await readConfigurationWithResult(actor, configurationId);
+  const head = JSON.stringify(toConfigurationDto(row, context, role)).slice(0, -1);
+  if (!result || !row.currentRevisionId) return { text: `${head},"result":null}`, version: row.version };
+  const text = result.engineVersion === ENGINE_VERSION ? result.text : JSON.stringify(readStoredResult(JSON.parse(result.text)));
+  const meta = JSON.stringify({
+    revisionId: row.currentRevisionId,
+    engineVersion: result.engineVersion,
+    computeMs: result.computeMs,
+    createdAt: result.createdAt,
+  });
+  return { text: `${head},"result":${meta.slice(0, -1)},"result":${text}}}`, version: row.version };
 }

@@ -8,10 +8,8 @@ import { recordAudit } from "./audit";
 import { requireConfigurationRole } from "./configuration-access";
 import {
   toConfigurationDto,
-  toResultDto,
   toRevisionSummary,
   type ConfigurationDto,
-  type ResultDto,
   type RevisionDto,
   type RevisionSummaryDto,
 } from "./configuration-dtos";
@@ -99,7 +97,7 @@ export async function restoreRevision(
   const author = requireActor(actor);
   assertUuid(revisionId, "revision");
   return db.transaction(async (tx) => {
-    const { row: current, role } = await requireConfigurationRole(tx, actor, configurationId, "editor");
+    const { row: current, role, context } = await requireConfigurationRole(tx, actor, configurationId, "editor");
     const [old] = await tx
       .select()
       .from(revisions)
@@ -122,7 +120,7 @@ export async function restoreRevision(
       entityId: row.id,
       details: { restoredRevisionId: old.id, restoredNumber: old.number, version: row.version },
     });
-    return toConfigurationDto(tx, actor, row, role);
+    return toConfigurationDto(row, context, role);
   });
 }
 

@@ -1,28 +1,23 @@
 import "server-only";
 import { randomBytes } from "node:crypto";
-import bcrypt from "bcryptjs";
-import { and, asc, count, eq, gt, ilike, isNull, or, sql } from "drizzle-orm";
-import {
-  NotFoundError,
-  RateLimitError,
-  UnauthenticatedError,
-  ValidationError,
-} from "../../lib/errors";
+import { and, asc, count, eq, gt, ilike, isNull, lt, or, sql } from "drizzle-orm";
+import { NotFoundError, UnauthenticatedError, ValidationError } from "../../lib/errors";
+import { comparePassword, hashPassword } from "../../lib/server/password-hashing";
 import { createSecureToken, hashSecureToken } from "../../lib/server/secure-token";
-import { db, type Transaction } from "../index";
-import { authTokens, users, type AuthTokenKind, type SiteRole } from "../schema";
+import { isStorableText } from "../../lib/storable-text";
+import { db, type Executor, type Transaction } from "../index";
+import { authTokens, pendingSignUps, users, type AuthTokenKind, type SiteRole } from "../schema";
 import { assertUuid, requireActor, requireSiteAdmin, type Actor } from "./actor";
 import { recordAudit } from "./audit";
 import { createPersonalGroup } from "./groups";
+import { revokeSessions } from "./sessions";
 
 /** bcrypt cost factor for password hashes. */
 export const bcryptCost = 12;
-/** Consecutive failed sign-ins that lock an account. */
-export const maxFailedSignIns = 10;
-/** How long a lockout lasts. */
-export const lockoutMinutes = 15;
 /** Lifetime of a sign-in link. */
 export const signInLinkMinutes = 15;
+/** Lifetime of the link that confirms a sign-up. */
+export const signUpLinkHours = 24;
 /** Lifetime of a password-reset link. */
 export const passwordResetMinutes = 60;
 /** Shortest accepted password. */
@@ -46,7 +41,6 @@ export interface UserSummaryDto {
   name: string;
   siteRole: SiteRole;
   emailVerifiedAt: Date | null;
-  lockedUntil: Date | null;
   createdAt: Date;
 }
 
@@ -90,101 +84,125 @@ export async function createUser(actor: Actor | null, input: CreateUserInput): P
   if (input.siteRole === "admin") requireSiteAdmin(actor);
   const email = normalizeEmail(input.email);
   const name = input.name.trim();
-  const issues: { path: string[]; message: string }[] = [];
-  if (!/^[^\s@]+@[^\s@]+\.[^\s@]+$/.test(email)) issues.push({ path: ["email"], message: "Enter a valid e-mail address." });
-  if (!name) issues.push({ path: ["name"], message: "Enter your name." });
-  if (input.password != null) {
-    const problem = passwordProblem(input.password);
-    if (problem) issues.push({ path: ["password"], message: problem });
-  }
+  const issues = accountProblems(email, name, input.password);
   if (issues.length > 0) throw new ValidationError(issues);
-  const passwordHash = input.password != null ? await bcrypt.hash(input.password, bcryptCost) : null;
+  const passwordHash = input.password != null ? await hashPassword(input.password, bcryptCost) : null;
 
   return db.transaction(async (tx) => {
-    const [user] = await tx
-      .insert(users)
-      .values({
-        email,
-        name,
-        passwordHash,
-        siteRole: input.siteRole ?? "member",
-        emailVerifiedAt: input.emailVerified ? new Date() : null,
-      })
-      .onConflictDoNothing({ target: users.email })
-      .returning();
-    if (!user) throw ValidationError.at(["email"], "An account with this e-mail already exists.");
-    await createPersonalGroup(tx, user);
-    await recordAudit(tx, {
-      actorId: actor?.id ?? user.id,
-      groupId: null,
-      action: "user.create",
-      entityType: "user",
-      entityId: user.id,
-      details: { siteRole: user.siteRole },
+    const user = await insertAccount(tx, actor, {
+      email,
+      name,
+      passwordHash,
+      siteRole: input.siteRole ?? "member",
+      emailVerifiedAt: input.emailVerified ? new Date() : null,
     });
+    if (!user) throw ValidationError.at(["email"], "An account with this e-mail already exists.");
+    return toAccountDto(user);
+  });
+}
+
+/** Input of `requestSignUp`: what the sign-up form asks for. */
+export interface SignUpInput {
+  email: string;
+  name: string;
+  password: string;
+}
+
+/**
+ * What `requestSignUp` leads to: a confirmation link to mail to a new address, or, for an address
+ * that already has an account, a note to its owner. The caller answers both the same way.
+ */
+export type SignUpRequest =
+  | { kind: "new"; email: string; name: string; token: string; expiresAt: Date }
+  | { kind: "existing"; email: string; name: string }
+  | { kind: "unavailable" };
+
+/**
+ * Starts a sign-up: nothing is created until the address is confirmed (`confirmSignUp`), so a
+ * sign-up with someone else's address leads nowhere. Both outcomes do the same work (one bcrypt
+ * hash, one sweep of expired sign-ups), so neither the answer nor its timing tells whether the
+ * address has an account. Invalid fields give a ValidationError, as `createUser`.
+ */
+export async function requestSignUp(_actor: Actor | null, input: SignUpInput): Promise<SignUpRequest> {
+  const email = normalizeEmail(input.email);
+  const name = input.name.trim();
+  const issues = accountProblems(email, name, input.password);
+  if (issues.length > 0) throw new ValidationError(issues);
+  const passwordHash = await hashPassword(input.password, bcryptCost);
+  await db.delete(pendingSignUps).where(lt(pendingSignUps.expiresAt, sql`now()`));
+  const [existing] = await db
+    .select({ email: users.email, name: users.name, deletedAt: users.deletedAt })
+    .from(users)
+    .where(eq(users.email, email))
+    .limit(1);
+  if (existing) return existing.deletedAt ? { kind: "unavailable" } : { kind: "existing", email: existing.email, name: existing.name };
+  const token = createSecureToken();
+  const expiresAt = new Date(Date.now() + signUpLinkHours * 60 * 60_000);
+  await db.insert(pendingSignUps).values({ email, name, passwordHash, tokenHash: hashSecureToken(token), expiresAt });
+  return { kind: "new", email, name, token, expiresAt };
+}
+
+/** The address a sign-up confirmation link is for, or null when the link is unknown or expired. */
+export async function getPendingSignUp(_actor: Actor | null, token: string): Promise<{ email: string; name: string } | null> {
+  const [row] = await db
+    .select({ email: pendingSignUps.email, name: pendingSignUps.name })
+    .from(pendingSignUps)
+    .where(and(eq(pendingSignUps.tokenHash, hashSecureToken(token)), gt(pendingSignUps.expiresAt, sql`now()`)))
+    .limit(1);
+  return row ?? null;
+}
+
+/**
+ * Finishes a sign-up from its mailed link: the password chosen at sign-up must be entered again,
+ * which proves that whoever opened the mail also started the sign-up. Creates the account (e-mail
+ * verified) with its personal space and drops every other pending sign-up for the address.
+ * An unknown or expired link is a ValidationError on ["token"], a wrong password one on ["password"].
+ */
+export async function confirmSignUp(_actor: Actor | null, token: string, password: string): Promise<AccountDto> {
+  const [pending] = await db
+    .select()
+    .from(pendingSignUps)
+    .where(and(eq(pendingSignUps.tokenHash, hashSecureToken(token)), gt(pendingSignUps.expiresAt, sql`now()`)))
+    .limit(1);
+  if (!pending) throw ValidationError.at(["token"], "This link is not valid or has expired; sign up again.");
+  if (!(await comparePassword(password, pending.passwordHash))) {
+    throw ValidationError.at(["password"], "That is not the password chosen when signing up.");
+  }
+  return db.transaction(async (tx) => {
+    const dropped = await tx.delete(pendingSignUps).where(eq(pendingSignUps.email, pending.email)).returning({ id: pendingSignUps.id });
+    // A second tab confirming the same link got here first.
+    if (!dropped.some((row) => row.id === pending.id)) throw ValidationError.at(["token"], "This link has already been used; sign in instead.");
+    const user = await insertAccount(tx, null, {
+      email: pending.email,
+      name: pending.name,
+      passwordHash: pending.passwordHash,
+      siteRole: "member",
+      emailVerifiedAt: new Date(),
+    });
+    if (!user) throw ValidationError.at(["token"], "An account with this address exists already; sign in instead.");
     return toAccountDto(user);
   });
 }
 
 /**
  * Checks e-mail and password for a sign-in and returns the Actor. Wrong credentials give
- * UnauthenticatedError (the same message whether or not the account exists); after
- * `maxFailedSignIns` consecutive failures the account is locked for `lockoutMinutes`, during
- * which even the right password gets RateLimitError.
+ * UnauthenticatedError with the same message, and the same bcrypt work, whether or not the account
+ * exists. Repeated failures are slowed down by lib/server/sign-in-limit.ts, per client.
  */
 export async function verifyPassword(
   _actor: Actor | null,
   email: string,
   password: string,
 ): Promise<Actor> {
-  const wrong = new UnauthenticatedError("Wrong e-mail or password.");
   const [user] = await db
     .select()
     .from(users)
     .where(and(eq(users.email, normalizeEmail(email)), isNull(users.deletedAt)))
     .limit(1);
-  if (!user || !user.passwordHash) {
-    // Spend the same time as a real check so response times do not reveal which e-mails exist.
-    await bcrypt.compare(password, await getDummyHash());
-    throw wrong;
-  }
-  const now = Date.now();
-  if (user.lockedUntil && user.lockedUntil.getTime() > now) throw lockedError(user.lockedUntil);
-
-  if (await bcrypt.compare(password, user.passwordHash)) {
-    if (user.failedSignIns > 0 || user.lockedUntil) {
-      await db.update(users).set({ failedSignIns: 0, lockedUntil: null }).where(eq(users.id, user.id));
-    }
-    return { id: user.id, email: user.email, name: user.name, siteRole: user.siteRole };
-  }
-
-  // One atomic statement, so concurrent failures are all counted. An expired lock starts a new count.
-  const expired = sql`(${users.lockedUntil} is not null and ${users.lockedUntil} <= now())`;
-  const nextCount = sql`case when ${expired} then 1 else ${users.failedSignIns} + 1 end`;
-  const [updated] = await db
-    .update(users)
-    .set({
-      failedSignIns: sql`${nextCount}`,
-      lockedUntil: sql`case
-        when ${nextCount} >= ${maxFailedSignIns} then now() + make_interval(mins => ${lockoutMinutes})
-        when ${expired} then null
-        else ${users.lockedUntil} end`,
-    })
-    .where(eq(users.id, user.id))
-    .returning({ failedSignIns: users.failedSignIns, lockedUntil: users.lockedUntil });
-  if (updated?.lockedUntil && updated.failedSignIns === maxFailedSignIns) {
-    await recordAudit(db, {
-      actorId: null,
-      groupId: null,
-      action: "user.lock",
-      entityType: "user",
-      entityId: user.id,
-      details: { failedSignIns: updated.failedSignIns },
-    });
-    throw lockedError(updated.lockedUntil);
-  }
-  if (updated?.lockedUntil && updated.lockedUntil.getTime() > now) throw lockedError(updated.lockedUntil);
-  throw wrong;
+  const hash = user?.passwordHash ?? (await getDummyHash());
+  const matches = await comparePassword(password, hash);
+  if (!user || !user.passwordHash || !matches) throw new UnauthenticatedError("Wrong e-mail or password.");
+  return { id: user.id, email: user.email, name: user.name, siteRole: user.siteRole };
 }
 
 /**
@@ -208,17 +226,38 @@ export async function issuePasswordResetToken(
 
 /**
  * Consumes a sign-in link token and returns the Actor to sign in. The e-mail counts as verified.
+ * An account whose address was never verified but has a password (made before sign-ups were
+ * confirmed by mail, possibly by someone else using this address) loses that password and its
+ * sessions here: whoever reads this mailbox owns the account from now on.
  * Unknown, expired and reused tokens give a ValidationError on ["token"] saying which.
  */
 export async function consumeSignInLinkToken(_actor: Actor | null, token: string): Promise<Actor> {
   return db.transaction(async (tx) => {
     const userId = await consumeToken(tx, token, "sign_in_link");
+    const [before] = await tx
+      .select({ emailVerifiedAt: users.emailVerifiedAt, passwordHash: users.passwordHash })
+      .from(users)
+      .where(and(eq(users.id, userId), isNull(users.deletedAt)))
+      .for("update")
+      .limit(1);
+    if (!before) throw ValidationError.at(["token"], "This link is not valid.");
+    const unprovenPassword = before.emailVerifiedAt === null && before.passwordHash !== null;
     const [user] = await tx
       .update(users)
-      .set({ emailVerifiedAt: sql`coalesce(${users.emailVerifiedAt}, now())` })
-      .where(and(eq(users.id, userId), isNull(users.deletedAt)))
+      .set({ emailVerifiedAt: sql`coalesce(${users.emailVerifiedAt}, now())`, ...(unprovenPassword ? { passwordHash: null } : {}) })
+      .where(eq(users.id, userId))
       .returning();
     if (!user) throw ValidationError.at(["token"], "This link is not valid.");
+    if (unprovenPassword) {
+      await revokeSessions(tx, user.id);
+      await recordAudit(tx, {
+        actorId: user.id,
+        groupId: null,
+        action: "user.unverified_password_cleared",
+        entityType: "user",
+        entityId: user.id,
+      });
+    }
     await recordAudit(tx, {
       actorId: user.id,
       groupId: null,
@@ -231,8 +270,9 @@ export async function consumeSignInLinkToken(_actor: Actor | null, token: string
 }
 
 /**
- * Sets a new password with a reset token; also clears a lockout, verifies the e-mail and
- * invalidates the account's other unused reset tokens.
+ * Sets a new password with a reset token; also verifies the e-mail, ends every session of the
+ * account and invalidates its other unused e-mailed links (sign-in and reset alike), so whoever
+ * held the account before the reset is out.
  */
 export async function resetPasswordWithToken(
   _actor: Actor | null,
@@ -241,15 +281,13 @@ export async function resetPasswordWithToken(
 ): Promise<Actor> {
   const problem = passwordProblem(newPassword);
   if (problem) throw ValidationError.at(["password"], problem);
-  const passwordHash = await bcrypt.hash(newPassword, bcryptCost);
+  const passwordHash = await hashPassword(newPassword, bcryptCost);
   return db.transaction(async (tx) => {
     const userId = await consumeToken(tx, token, "password_reset");
     const [user] = await tx
       .update(users)
       .set({
         passwordHash,
-        failedSignIns: 0,
-        lockedUntil: null,
         emailVerifiedAt: sql`coalesce(${users.emailVerifiedAt}, now())`,
       })
       .where(and(eq(users.id, userId), isNull(users.deletedAt)))
@@ -258,19 +296,15 @@ export async function resetPasswordWithToken(
     await tx
       .update(authTokens)
       .set({ usedAt: new Date() })
-      .where(
-        and(
-          eq(authTokens.userId, userId),
-          eq(authTokens.kind, "password_reset"),
-          isNull(authTokens.usedAt),
-        ),
-      );
+      .where(and(eq(authTokens.userId, userId), isNull(authTokens.usedAt)));
+    const endedSessions = await revokeSessions(tx, userId);
     await recordAudit(tx, {
       actorId: user.id,
       groupId: null,
       action: "user.password_reset",
       entityType: "user",
       entityId: user.id,
+      details: { endedSessions },
     });
     return { id: user.id, email: user.email, name: user.name, siteRole: user.siteRole };
   });
@@ -281,7 +315,10 @@ export async function getAccount(actor: Actor | null): Promise<AccountDto> {
   return toAccountDto(await loadOwnAccount(actor));
 }
 
-/** Changes the signed-in user's name and/or password (the current password is required to change it). */
+/**
+ * Changes the signed-in user's name and/or password (the current password is required to change
+ * it). A password change ends the account's other sessions and keeps the one making the change.
+ */
 export async function updateAccount(
   actor: Actor | null,
   input: UpdateAccountInput,
@@ -299,24 +336,29 @@ export async function updateAccount(
     if (problem) throw ValidationError.at(["newPassword"], problem);
     if (user.passwordHash) {
       const current = input.currentPassword ?? "";
-      if (!(await bcrypt.compare(current, user.passwordHash))) {
+      if (!(await comparePassword(current, user.passwordHash))) {
         throw ValidationError.at(["currentPassword"], "The current password is wrong.");
       }
     }
-    changes.passwordHash = await bcrypt.hash(input.newPassword, bcryptCost);
+    changes.passwordHash = await hashPassword(input.newPassword, bcryptCost);
   }
   if (Object.keys(changes).length === 0) return toAccountDto(user);
 
   return db.transaction(async (tx) => {
     const [updated] = await tx.update(users).set(changes).where(eq(users.id, user.id)).returning();
     if (!updated) throw new UnauthenticatedError("Your account no longer exists.");
+    // A new password ends every other session: whoever knew the old one is signed out elsewhere.
+    const endedSessions = changes.passwordHash ? await revokeSessions(tx, user.id, { except: actor?.sessionId }) : 0;
     await recordAudit(tx, {
       actorId: user.id,
       groupId: null,
       action: "user.update",
       entityType: "user",
       entityId: user.id,
-      details: { fields: Object.keys(changes).map((key) => (key === "passwordHash" ? "password" : key)) },
+      details: {
+        fields: Object.keys(changes).map((key) => (key === "passwordHash" ? "password" : key)),
+        ...(changes.passwordHash ? { endedSessions } : {}),
+      },
     });
     return toAccountDto(updated);
   });
@@ -329,6 +371,8 @@ export async function listUsers(
 ): Promise<{ items: UserSummaryDto[]; total: number }> {
   requireSiteAdmin(actor);
   const search = options.search?.trim();
+  // No account holds text the database cannot store, so such a search matches nothing.
+  if (search && !isStorableText(search)) return { items: [], total: 0 };
   const pattern = search ? `%${search.replace(/[\\%_]/g, (c) => `\\${c}`)}%` : null;
   const where = and(
     isNull(users.deletedAt),
@@ -342,7 +386,6 @@ export async function listUsers(
         name: users.name,
         siteRole: users.siteRole,
         emailVerifiedAt: users.emailVerifiedAt,
-        lockedUntil: users.lockedUntil,
         createdAt: users.createdAt,
       })
       .from(users)
@@ -352,13 +395,7 @@ export async function listUsers(
       .offset(Math.max(options.offset ?? 0, 0)),
     db.select({ n: count() }).from(users).where(where),
   ]);
-  return {
-    items: items.map((item) => ({
-      ...item,
-      lockedUntil: item.lockedUntil && item.lockedUntil.getTime() > Date.now() ? item.lockedUntil : null,
-    })),
-    total: totals[0]?.n ?? 0,
-  };
+  return { items, total: totals[0]?.n ?? 0 };
 }
 
 /** Changes a user's site role (site admins only). The last admin cannot be demoted. */
@@ -403,7 +440,6 @@ export async function setSiteRole(
       name: updated.name,
       siteRole: updated.siteRole,
       emailVerifiedAt: updated.emailVerifiedAt,
-      lockedUntil: updated.lockedUntil,
       createdAt: updated.createdAt,
     };
   });
@@ -413,7 +449,14 @@ export async function setSiteRole(
 // made on first use so importing this module stays cheap.
 let dummyHash: Promise<string> | undefined;
 function getDummyHash(): Promise<string> {
-  dummyHash ??= bcrypt.hash(randomBytes(16).toString("hex"), bcryptCost);
+  if (!dummyHash) {
+    const made = hashPassword(randomBytes(16).toString("hex"), bcryptCost);
+    dummyHash = made;
+    // A first attempt that failed (a busy pool) must not leave a rejected promise for every later caller.
+    made.catch(() => {
+      if (dummyHash === made) dummyHash = undefined;
+    });
+  }
   return dummyHash;
 }
 
@@ -422,15 +465,6 @@ function passwordProblem(password: string): string | null {
   // bcrypt ignores everything past 72 bytes; refuse rather than silently truncate.
   if (Buffer.byteLength(password, "utf8") > 72) return "Use at most 72 bytes.";
   return null;
-}
-
-function lockedError(until: Date): RateLimitError {
-  const seconds = Math.max(1, Math.ceil((until.getTime() - Date.now()) / 1000));
-  const minutes = Math.ceil(seconds / 60);
-  return new RateLimitError(
-    seconds,
-    `Too many failed sign-ins. This account is locked for ${minutes} more minute${minutes === 1 ? "" : "s"}; you can also reset the password.`,
-  );
 }
 
 async function issueToken(
@@ -499,6 +533,41 @@ async function loadOwnAccount(actor: Actor | null): Promise<typeof users.$inferS
     .where(and(eq(users.id, signedIn.id), isNull(users.deletedAt)))
     .limit(1);
   if (!user) throw new UnauthenticatedError("Your account no longer exists.");
+  return user;
+}
+
+/** Checks of a new account's fields, every problem at once. */
+function accountProblems(email: string, name: string, password: string | null | undefined): { path: string[]; message: string }[] {
+  const issues: { path: string[]; message: string }[] = [];
+  if (!/^[^\s@]+@[^\s@]+\.[^\s@]+$/.test(email)) issues.push({ path: ["email"], message: "Enter a valid e-mail address." });
+  if (!name) issues.push({ path: ["name"], message: "Enter your name." });
+  if (password != null) {
+    const problem = passwordProblem(password);
+    if (problem) issues.push({ path: ["password"], message: problem });
+  }
+  return issues;
+}
+
+/**
+ * Inserts an account with its personal space and audit entry, or returns null when the e-mail is
+ * taken. Runs inside the caller's transaction.
+ */
+async function insertAccount(
+  tx: Executor,
+  actor: Actor | null,
+  values: Pick<typeof users.$inferInsert, "email" | "name" | "passwordHash" | "siteRole" | "emailVerifiedAt">,
+): Promise<typeof users.$inferSelect | null> {
+  const [user] = await tx.insert(users).values(values).onConflictDoNothing({ target: users.email }).returning();
+  if (!user) return null;
+  await createPersonalGroup(tx, user);
+  await recordAudit(tx, {
+    actorId: actor?.id ?? user.id,
+    groupId: null,
+    action: "user.create",
+    entityType: "user",
+    entityId: user.id,
+    details: { siteRole: user.siteRole },
+  });
   return user;
 }
 

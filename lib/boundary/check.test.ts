@@ -117,7 +117,8 @@ describe("checkConfiguration", () => {
     expect(problems).toEqual([
       {
         path: ["levels"],
-        message: "64 stacks give 2080 sectors, too many to list up to level 9 in one result; lower levels to at most 8 or use fewer stacks",
+        message:
+          "64 stacks give 2080 sectors, too many to list up to alpha' M^2 = 9 in one result; lower the mass cap (levels) to at most 8 or use fewer stacks",
       },
     ]);
     // Twelve stacks (78 sectors) still reach the top level 200: 78 * 201 = 15678.

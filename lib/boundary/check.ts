@@ -54,7 +54,7 @@ export class ConfigurationError extends Error {
 export const configurationLimits = {
   /** At most this many stacks (64 stacks give 2080 sectors). */
   maxStacks: 64,
-  /** Highest oscillator level that may be requested. */
+  /** Highest mass cap `levels` (alpha' M^2 at zero separation) that may be requested. */
   maxLevel: 200,
   /** Largest branes-per-stack count. */
   maxCount: 10_000,
@@ -65,8 +65,9 @@ export const configurationLimits = {
   /** Longest stack id. */
   maxIdLength: 64,
   /**
-   * Largest sectors x (levels + 1) in one result: bounds the rows listed (about four per sector
-   * and level) so that 64 stacks cannot ask for millions of rows. Twelve stacks reach level 200.
+   * Largest `configurationCost`, sectors x (levels + 1), in one result: each unit lists at most
+   * four level rows, so this bounds a result to 80,000 rows and 64 stacks cannot ask for millions.
+   * Twelve stacks reach a mass cap of 200.
    */
   maxSectorLevels: 20_000,
   /** Largest string scale in GeV (beyond the Planck scale, ~1.2e19 GeV); keeps masses in GeV finite. */
@@ -106,7 +107,7 @@ export function describeStack(stack: Pick<Stack, "id" | "label">): string {
  * Rules: bosonic D is 26 or a non-critical integer 2..26 (a warning, not a problem); type II
  * needs D = 10; IIA allows only even p and IIB only odd p; worldvolume axes lie in 1..D-1,
  * sorted and without duplicates; stack ids are unique and well formed; counts are integers
- * 1..10000; at most 64 stacks; levels are integers 0..200; positions are finite, at most 1e6
+ * 1..10000; at most 64 stacks; the mass cap `levels` is an integer 0..200; positions are finite, at most 1e6
  * in size, and keyed by Dirichlet axes of the stack; the string scale is null or positive and at
  * most 1e20 GeV; sectors x (levels + 1) stays within 20000.
  *
@@ -125,7 +126,7 @@ export function checkConfiguration(config: Configuration): ConfigurationProblem[
   if (!levelsOk) {
     problems.push({
       path: ["levels"],
-      message: `Levels must be a whole number from 0 to ${configurationLimits.maxLevel}, got ${String(config.levels)}`,
+      message: `The mass cap (levels: the highest alpha' M^2 listed at zero separation) must be a whole number from 0 to ${configurationLimits.maxLevel}, got ${String(config.levels)}`,
     });
   }
 
@@ -150,8 +151,8 @@ export function checkConfiguration(config: Configuration): ConfigurationProblem[
     problems.push({
       path: ["levels"],
       message:
-        `${config.stacks.length} stacks give ${sectorCount} sectors, too many to list up to level ${config.levels} in one result; ` +
-        `lower levels to at most ${highest} or use fewer stacks`,
+        `${config.stacks.length} stacks give ${sectorCount} sectors, too many to list up to alpha' M^2 = ${config.levels} in one result; ` +
+        `lower the mass cap (levels) to at most ${highest} or use fewer stacks`,
     });
   }
 
@@ -177,6 +178,11 @@ export function checkConfiguration(config: Configuration): ConfigurationProblem[
  * `configurationLimits.maxSectorLevels` bounds. Rate limits and the choice to compute off the
  * request thread are weighted by it.
  *
+ * Each unit stands for at most four level rows: with the mass cap N + a <= levels, a type II
+ * sector lists N on the half-integer grid up to levels - a with a >= -1/2 in each of NS and R
+ * (at most 2 levels + 2 rows each), and a bosonic sector up to levels - a with a >= -1 (at most
+ * 2 levels + 3 rows), so rows <= 4 x cost.
+ *
  * @param config - Only the number of stacks and `levels` are read.
  * @returns n (n + 1) / 2 sectors for n stacks, times levels + 1 (at least 1 level counted).
  * @example
@@ -196,9 +202,9 @@ export function compareStackIds(x: Stack, y: Stack): number {
 /**
  * Lists cautions for a configuration the engine can compute but whose physics needs care.
  *
- * Covers: a non-critical bosonic dimension; antibranes in the bosonic theory (ignored); D8 and
- * D9 stacks (RR tadpoles, orientifolds, a varying dilaton); pairs in which every spatial axis is
- * ND, which the light-cone counting does not cover.
+ * Covers: a non-critical bosonic dimension; antibranes in the bosonic theory (ignored); D7, D8 and
+ * D9 stacks (a deficit angle and a running coupling; RR tadpoles, orientifolds, a varying dilaton);
+ * pairs in which every spatial axis is ND, which are counted covariantly.
  *
  * @param config - The configuration (assumed to pass `checkConfiguration`; not mutated).
  * @returns Warning sentences in a fixed order, with stacks taken in id order so that the order of
@@ -226,13 +232,16 @@ export function configurationWarnings(config: Configuration): string[] {
       );
     }
   } else {
-    const highCodimension = stacks.filter((stack) => stack.worldvolume.length >= 8);
-    for (const stack of highCodimension) {
+    // Codimension two or less: the brane's own fields do not fall off far away (common practice, from memory).
+    const lowCodimension = stacks.filter((stack) => stack.worldvolume.length >= 7);
+    for (const stack of lowCodimension) {
       const p = stack.worldvolume.length;
       const why =
         p === 9
           ? "a space-filling D9 stack needs its RR tadpole cancelled (e.g. by an orientifold plane, as in type I with 32 D9 branes)"
-          : "a D8 stack is a domain wall of codimension one: its RR charge sources a varying dilaton (massive IIA) and needs orientifolds or other D8s for consistency";
+          : p === 8
+            ? "a D8 stack is a domain wall of codimension one: its RR charge sources a varying dilaton (massive IIA) and needs orientifolds or other D8s for consistency"
+            : "a D7 stack has codimension two: it makes a deficit angle in the transverse plane and a coupling (axio-dilaton) that runs logarithmically with the distance, and a compact transverse space needs 24 of them (or orientifolds) to close up";
       warnings.push(`${capitalise(describeStack(stack))} is a D${p}: ${why}. The open-string spectrum is shown without these ingredients.`);
     }
   }
@@ -242,8 +251,8 @@ export function configurationWarnings(config: Configuration): string[] {
       const b = stacks[j];
       if (a && b && classifyPair(a, b, dimension).nu === dimension - 1) {
         warnings.push(
-          `Every spatial axis is ND between ${describeStack(a)} and ${describeStack(b)}: the light-cone counting needs ` +
-            "an axis that is NN or DD for both, so no levels are listed for that pair.",
+          `Every spatial axis is ND between ${describeStack(a)} and ${describeStack(b)}: no axis is left for the ` +
+            "light-cone gauge, so that pair's states are counted covariantly (X^0 with the b, c ghosts), with a = -(D - 2)/24 + nu/16.",
         );
       }
     }

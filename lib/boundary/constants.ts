@@ -15,12 +15,22 @@ import { rational, type Rational } from "./rational";
 
 /**
  * Version stamped on every spectrum result; bump the minor version when numbers may change and the
- * patch version when only the presentation does (1.0.1: warnings in stack-id order).
+ * patch version when only the presentation does.
+ *
+ * - 1.0.1: warnings in stack-id order.
+ * - 1.1.0: `levels` is a mass cap, N + a <= levels at zero separation, in every sector (NS, R and
+ *   bosonic rows stop at the same alpha' M^2; before, each sector stopped at oscillator level N =
+ *   levels). New fields: `worldvolumes` (gauge and flavour groups, light matter, defects and the
+ *   supersymmetry of each worldvolume), `Sector.multiplet` (the W-boson multiplet of separated
+ *   identical stacks); the worldsheet fermion expansions and the light-cone axis come from
+ *   `fermionExpansionLatex` and `lightConeAxis` (they need only the axis types). Bosonic pairs with every spatial
+ *   axis ND are counted covariantly instead of listing no levels. Notes and massless descriptions
+ *   for nu = 8 (string creation), D0 and D1 content; a D7 caution; conventions state M_s.
  *
  * @example
- * ENGINE_VERSION // => "1.0.1"
+ * ENGINE_VERSION // => "1.1.0"
  */
-export const ENGINE_VERSION = "1.0.1";
+export const ENGINE_VERSION = "1.1.0";
 
 /**
  * Critical dimension of the bosonic string (Lorentz invariance of the light-cone quantisation
@@ -88,7 +98,13 @@ export const CONVENTIONS_TEXT =
   "the string length. Masses are given as alpha' M^2 = (y / 2 pi)^2 + N + a, where N is the " +
   "oscillator level (integer or half-integer) and a the zero-point energy of the sector, from " +
   "zeta(-1) = -1/12 and zeta(-1, 1/2) = 1/24 (bosonic: a = -(D - 2)/24 + nu/16; NS: a = -1/2 + nu/8; " +
-  "R: a = 0, with nu the number of ND/DN axes), and as M sqrt(alpha'). Degeneracies count " +
-  "light-cone oscillator states after the GSO projection, per oriented string and per Chan-Paton " +
-  "label. Continuous momentum along the common Neumann directions is not included. " +
+  "R: a = 0, with nu the number of ND/DN axes), and as M sqrt(alpha'); with a string scale " +
+  "M_s = 1/sqrt(alpha') given in GeV, M in GeV is M sqrt(alpha') times M_s. Every sector lists its " +
+  "states up to the same mass cap, N + a <= levels (alpha' M^2 at y = 0). Degeneracies are " +
+  "light-cone trace counts of oscillator states after the GSO projection, per oriented string and " +
+  "per Chan-Paton label (x^0 is paired with the lowest common Neumann axis, else the lowest common " +
+  "Dirichlet axis, where the gauge is formal); bosonic pairs with every spatial axis ND are counted " +
+  "covariantly. Worldsheet fermions: psi = +psi~ at a Neumann end and -psi~ at a Dirichlet end of " +
+  "sigma = 0, the same times +1 (R) or -1 (NS) at sigma = pi. Continuous momentum along the common " +
+  "Neumann directions is not included. " +
   "Caution: these are machine-computed results; anyone publishing them should check them independently.";

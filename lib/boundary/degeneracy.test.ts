@@ -237,9 +237,10 @@ describe("edge cases", () => {
     }
   });
 
-  it("rejects NS and R outside ten dimensions, and bosonic nu beyond D - 2", () => {
+  it("rejects NS and R outside ten dimensions, and bosonic nu beyond D - 1", () => {
     expect(() => oscillatorDegeneracies("NS", { dimension: 26, nu: 0, maxLevel: 1 })).toThrow(RangeError);
-    expect(() => oscillatorDegeneracies("bosonic", { dimension: 26, nu: 25, maxLevel: 1 })).toThrow(RangeError);
+    expect(() => oscillatorDegeneracies("bosonic", { dimension: 26, nu: 26, maxLevel: 1 })).toThrow(RangeError);
+    expect(() => oscillatorDegeneracies("NS", { dimension: 10, nu: 9, maxLevel: 1 })).toThrow(RangeError);
     expect(() => oscillatorDegeneracies("bosonic", { dimension: 1, nu: 0, maxLevel: 1 })).toThrow(RangeError);
   });
 

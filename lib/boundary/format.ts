@@ -1,5 +1,5 @@
 /**
- * Number formatting shared by the engine's text outputs (decimal mass strings, LaTeX).
+ * Number and text formatting shared by the engine's text outputs (decimal mass strings, LaTeX, notes).
  */
 
 /** Options of `formatDecimal`. */
@@ -34,4 +34,17 @@ export function formatDecimal(value: number, options: FormatDecimalOptions = {})
   }
   const trimmed = text.slice(0, end);
   return trimmed === "-0" ? "0" : trimmed;
+}
+
+/**
+ * Joins phrases as English prose: "a", "a and b", "a, b and c".
+ *
+ * @param parts - The phrases, in order (not mutated).
+ * @returns The joined text; "" for no phrases.
+ * @example
+ * listInWords(["one massive vector (3 polarisations)", "5 scalars", "8 fermion states"])
+ * // => "one massive vector (3 polarisations), 5 scalars and 8 fermion states"
+ */
+export function listInWords(parts: readonly string[]): string {
+  return parts.length <= 1 ? (parts[0] ?? "") : `${parts.slice(0, -1).join(", ")} and ${parts.at(-1) ?? ""}`;
 }

@@ -33,8 +33,8 @@ export {
   type PairClassification,
   type SeparationComponent,
 } from "./classify";
-export { expandAxis, expandPair, bosonModing, fermionModing } from "./expansion";
-export { formatDecimal } from "./format";
+export { expandAxis, expandPair, bosonModing, fermionModing, fermionExpansionLatex, lightConeAxis } from "./expansion";
+export { formatDecimal, listInWords } from "./format";
 export { resultInputKey } from "./result-key";
 export {
   ENGINE_VERSION,
@@ -44,5 +44,12 @@ export {
 } from "./constants";
 export { zeroPointEnergy, zeroPointContributions } from "./zero-point";
 export { oscillatorDegeneracies, projectedDegeneracies } from "./degeneracy";
-export { countSupercharges, pairPreservesSupersymmetry } from "./supersymmetry";
+export {
+  countSupercharges,
+  pairPreservesSupersymmetry,
+  worldvolumeSupersymmetry,
+  nameSupersymmetry,
+  type WorldvolumeSupersymmetry,
+} from "./supersymmetry";
+export { describeWorldvolumes, type DescribeWorldvolumesInput, type PairSummary } from "./worldvolume";
 export { parseRational, formatRational, rationalToNumber, compareRational, type Rational } from "./rational";

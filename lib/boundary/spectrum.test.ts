@@ -42,13 +42,14 @@ describe("computeSpectrum", () => {
       ]);
     });
 
-    it("counts 1, 24, 324, 3200 states at levels 0..3 (OEIS A005758)", () => {
+    it("counts 1, 24, 324, 3200, 25650 states at levels 0..4, up to the mass cap alpha' M^2 = 3 (OEIS A005758)", () => {
       const [sector] = computeSpectrum(d25).sectors;
       expect(sector ? rowsOf(sector, "bosonic") : []).toEqual([
         ["-1", "1"],
         ["0", "24"],
         ["1", "324"],
         ["2", "3200"],
+        ["3", "25650"],
       ]);
     });
 
@@ -84,7 +85,8 @@ describe("computeSpectrum", () => {
       ];
       expect(sector ? rowsOf(sector, "NS").slice(0, 3) : []).toEqual(expected);
       expect(sector ? rowsOf(sector, "R").slice(0, 3) : []).toEqual(expected);
-      expect(sector?.levels.map((row) => row.level)).toEqual(["1/2", "3/2", "5/2", "0", "1", "2", "3"]);
+      // The mass cap alpha' M^2 <= 3 stops NS (a = -1/2) at N = 7/2 and R (a = 0) at N = 3.
+      expect(sector?.levels.map((row) => row.level)).toEqual(["1/2", "3/2", "5/2", "7/2", "0", "1", "2", "3"]);
       expect(sector?.tachyonic).toBe(false);
     });
 
@@ -255,7 +257,7 @@ describe("computeSpectrum", () => {
       expect(sector?.nn).toBe(0);
       expect(sector?.dd).toBe(9);
       expect(sector?.massless[0]?.states).toBe("8");
-      expect(sector?.massless[0]?.description).toContain("no vector polarisations");
+      expect(sector?.massless[0]?.description).toContain("a non-dynamical A_0");
     });
 
     it("cautions about D8 and D9 and still computes them", () => {
@@ -312,18 +314,20 @@ describe("computeSpectrum", () => {
       expect(sector?.massless).toEqual([]);
     });
 
-    it("lists no levels for a bosonic pair whose spatial axes are all ND", () => {
+    it("counts a bosonic pair whose spatial axes are all ND covariantly, with a note and a warning", () => {
       const result = computeSpectrum(config("bosonic", [stack("point", []), stack("fill", axes(1, 25))]));
       const pair = sectorOf(result.sectors, "fill", "point");
       expect(pair.nu).toBe(25);
-      expect(pair.levels).toEqual([]);
-      expect(pair.notes[0]).toContain("Every spatial axis is ND");
+      expect(pair.notes[0]).toContain("counted covariantly");
       expect(result.warnings.some((warning) => warning.includes("Every spatial axis is ND"))).toBe(true);
     });
 
-    it("lists massless content even when levels = 0 hides the NS vector row", () => {
+    it("lists the massless NS vector and R states at the mass cap levels = 0", () => {
       const [sector] = computeSpectrum(config("IIB", [stack("a", [1])], { levels: 0 })).sectors;
-      expect(sector?.levels.map((row) => row.sector)).toEqual(["R"]);
+      expect(sector?.levels.map((row) => [row.sector, row.level])).toEqual([
+        ["NS", "1/2"],
+        ["R", "0"],
+      ]);
       expect(sector?.massless.map((content) => content.sector)).toEqual(["NS", "R"]);
     });
   });

@@ -27,18 +27,19 @@ import { classifyPair, type PairClassification } from "./classify";
 import { CONVENTIONS_TEXT, ENGINE_VERSION } from "./constants";
 import { oscillatorDegeneracies, projectedDegeneracies, type OrientedCounts } from "./degeneracy";
 import { expandPair } from "./expansion";
-import { formatDecimal } from "./format";
+import { formatDecimal, listInWords } from "./format";
 import {
   addRational,
   compareRational,
   formatRational,
   isNegativeRational,
   isZeroRational,
-  parseRational,
   rational,
   rationalToNumber,
+  subtractRational,
   type Rational,
 } from "./rational";
+import { describeWorldvolumes, type PairSummary } from "./worldvolume";
 import { countSupercharges, pairPreservesSupersymmetry } from "./supersymmetry";
 import type {
   ComputeSpectrumOptions,
@@ -48,6 +49,7 @@ import type {
   MasslessContent,
   Sector,
   SectorKind,
+  SectorMultiplet,
   SpectrumResult,
   Stack,
   ZeroPoint,
@@ -115,6 +117,8 @@ function computeCheckedSpectrum(configuration: Configuration, options: ComputeSp
   const context = createSectorContext(configuration);
   const stacks = [...configuration.stacks].sort(compareStackIds);
   const built: BuiltSector[] = [];
+  // built index of the pair (i, j), i <= j in id order.
+  const pairIndex = (i: number, j: number): number => i * stacks.length - (i * (i - 1)) / 2 + (j - i);
   for (let i = 0; i < stacks.length; i += 1) {
     for (let j = i; j < stacks.length; j += 1) {
       built.push(buildSector(stacks[i] as Stack, stacks[j] as Stack, configuration, context));
@@ -125,13 +129,20 @@ function computeCheckedSpectrum(configuration: Configuration, options: ComputeSp
   const supercharges = superstring ? countSupercharges(stacks) : null;
   const warnings = configurationWarnings(configuration);
   if (stacks.length === 0) warnings.push("The configuration has no stacks yet, so there are no open strings.");
+  const { worldvolumes, gaugeGroup } = describeWorldvolumes({
+    stacks,
+    theory: configuration.theory,
+    dimension: context.dimension,
+    pair: (i, j) => built[pairIndex(Math.min(i, j), Math.max(i, j))] as BuiltSector,
+  });
 
   return {
     engineVersion: ENGINE_VERSION,
     theory: configuration.theory,
     dimension: context.dimension,
     warnings,
-    gaugeGroup: describeGaugeGroup(stacks, configuration.theory, context.dimension),
+    gaugeGroup,
+    worldvolumes,
     supercharges,
     bps: supercharges !== null && stacks.length > 0 && supercharges > 0,
     sectors: built.map((entry) => entry.sector),
@@ -156,6 +167,8 @@ export interface LevelTemplate {
   exactText: string;
   /** N + a as a number. */
   exactValue: number;
+  /** N + a = 0: massless at zero separation. */
+  massless: boolean;
   /** States of the string from stack a to stack b, per Chan-Paton label. */
   ab: bigint;
   /** States of the string from stack b to stack a, per Chan-Paton label. */
@@ -169,8 +182,13 @@ export interface SectorSeries {
   kind: SectorKind;
   /** Zero-point energy a. */
   zeroPoint: Rational;
-  /** Levels with surviving states, in increasing order, up to max(levels, 1). */
+  /**
+   * Levels with surviving states, in increasing order: every level with N + a <= the mass cap
+   * (`Configuration.levels`), and at least up to N = 1 so that the lowest state is known.
+   */
   levels: LevelTemplate[];
+  /** How many of `levels` lie within the mass cap (N + a <= levels): the rows a sector lists. */
+  listed: number;
   /** The level with the lowest N + a, or null when nothing survives. */
   lowest: LevelTemplate | null;
 }
@@ -192,15 +210,16 @@ export interface SectorContext {
  * Builds the per-call memo used by `computeSector`.
  *
  * @param configuration - A valid configuration (see `checkConfiguration`).
- * @returns A fresh context; series are counted up to max(levels, 1) so that the lightest state of
- *   every sector (always at level <= 1) is known even when fewer levels are displayed.
+ * @returns A fresh context; each series is counted to the mass cap, N + a <= levels, and at least to
+ *   N = 1, so that the lightest state of every sector (always at N <= 1) is known even when the cap
+ *   lists fewer rows.
  * @throws RangeError from the degeneracy and zero-point modules when asked for an nu they do not cover.
  * @example
  * createSectorContext(configuration).series("NS", 0, true).levels[0]?.ab // => 8n
  */
 export function createSectorContext(configuration: Configuration): SectorContext {
   const dimension = dimensionOf(configuration);
-  const countedLevel = Math.max(configuration.levels, 1);
+  const cap = rational(configuration.levels);
   const seriesMemo = new Map<string, SectorSeries>();
   const susyMemo = new Map<string, boolean>();
   return {
@@ -209,11 +228,16 @@ export function createSectorContext(configuration: Configuration): SectorContext
       const key = `${kind}|${nu}|${kind === "bosonic" || sameOrientation}`;
       let series = seriesMemo.get(key);
       if (!series) {
+        const zeroPoint = zeroPointEnergy(kind, { dimension, nu });
+        // Highest N with N + a <= cap, on the half-integer grid: floor(2 (cap - a)) / 2.
+        const headroom = subtractRational(cap, zeroPoint);
+        const twiceCut = floorDivide(2n * headroom.num, headroom.den);
+        const countedLevel = Math.max(Number(twiceCut), 2) / 2;
         const counts =
           kind === "bosonic"
             ? bosonicCounts(dimension, nu, countedLevel)
             : projectedDegeneracies(kind, { nu, sameOrientation, maxLevel: countedLevel });
-        series = buildSeries(kind, zeroPointEnergy(kind, { dimension, nu }), counts);
+        series = buildSeries(kind, zeroPoint, counts, cap);
         seriesMemo.set(key, series);
       }
       return series;
@@ -240,8 +264,9 @@ export function createSectorContext(configuration: Configuration): SectorContext
  * @param b - Stack at sigma = pi; the same stack (same id) as `a` for the stack with itself.
  * @param configuration - The (valid) configuration the stacks belong to.
  * @param context - The per-call memo from `createSectorContext(configuration)`.
- * @returns The sector: classification, zero points, level rows up to `configuration.levels`,
- *   massless content, tachyon and critical separation, supersymmetry flag and notes.
+ * @returns The sector: classification, zero points, level rows with N + a <= `configuration.levels`
+ *   (the mass cap at zero separation), massless content, the named multiplet of separated identical
+ *   stacks, tachyon and critical separation, supersymmetry flag and notes.
  * @example
  * const context = createSectorContext(configuration);
  * computeSector(d3, d3, configuration, context).massless[0].description
@@ -252,7 +277,7 @@ export function computeSector(a: Stack, b: Stack, configuration: Configuration, 
 }
 
 /** A sector with the numeric alpha' M^2 of each of its level rows (for the lightest states). */
-interface BuiltSector {
+interface BuiltSector extends PairSummary {
   sector: Sector;
   /** alpha' M^2 of `sector.levels[i]` as a number. */
   values: number[];
@@ -270,7 +295,8 @@ function buildSector(a: Stack, b: Stack, configuration: Configuration, context: 
   const stretch = coincident ? 0 : classification.separationSquared / (4 * Math.PI * Math.PI);
   const sameOrientation = theory === "bosonic" || a.anti === b.anti;
   const kinds: SectorKind[] = theory === "bosonic" ? ["bosonic"] : ["NS", "R"];
-  const notes: string[] = [];
+  // No axis left for the light-cone gauge (a bosonic pair with every spatial axis ND): counted covariantly.
+  const covariant = nu === dimension - 1;
 
   const base = {
     pair: [a.id, b.id] as [string, string],
@@ -283,19 +309,11 @@ function buildSector(a: Stack, b: Stack, configuration: Configuration, context: 
     axes: expandPair(classification, theory),
   };
 
-  // Light-cone counting needs a spatial axis that is NN or DD for both stacks.
-  if (nu > dimension - 2) {
-    notes.push(
-      "Every spatial axis is ND for this pair, so the light-cone state counting used here does not apply; no levels are listed.",
-    );
-    const sector = { ...base, zeroPoint: {}, tachyonic: false, criticalSeparation: null, levels: [], massless: [], notes };
-    return { sector, values: [] };
-  }
-
   const zeroPoint: ZeroPoint = {};
   const levels: LevelRow[] = [];
   const values: number[] = [];
   const massless: MasslessContent[] = [];
+  const notes: string[] = [];
   const rowContext: RowContext = {
     self,
     a,
@@ -306,22 +324,23 @@ function buildSector(a: Stack, b: Stack, configuration: Configuration, context: 
     stringScaleGeV: configuration.stringScaleGeV,
   };
   let lowest: LevelTemplate | null = null;
+  // Rows with N + a = 0: massless at coincidence, the W-boson multiplet when the stacks are apart.
+  const zeroRows: LevelRow[] = [];
   for (const kind of kinds) {
     const series = context.series(kind, nu, sameOrientation);
     zeroPoint[kind] = formatRational(series.zeroPoint);
     if (series.lowest && (lowest === null || compareRational(series.lowest.exact, lowest.exact) < 0)) {
       lowest = series.lowest;
     }
-    for (const template of series.levels) {
-      const displayed = template.twiceLevel <= 2 * configuration.levels;
-      const massive = !coincident || !isZeroRational(template.exact);
-      if (!displayed && massive) continue;
+    for (let index = 0; index < series.listed; index += 1) {
+      const template = series.levels[index] as LevelTemplate;
       const row = buildRow(template, rowContext);
-      if (!massive) massless.push(describeMassless(row, template, classification, { self, sameOrientation, a, b }));
-      if (displayed) {
-        levels.push(row);
-        values.push(stretch + template.exactValue);
+      if (template.massless) {
+        if (coincident) massless.push(describeMassless(row, template, classification, { self, sameOrientation, a, b }));
+        zeroRows.push(row);
       }
+      levels.push(row);
+      values.push(stretch + template.exactValue);
     }
   }
 
@@ -332,10 +351,20 @@ function buildSector(a: Stack, b: Stack, configuration: Configuration, context: 
     !self && classification.dd > 0 && lowest !== null && isNegativeRational(lowest.exact)
       ? 2 * Math.PI * Math.sqrt(-lowest.exactValue)
       : null;
+  const multiplet =
+    !self && nu === 0 && !coincident && sameOrientation ? describeWMultiplet(zeroRows, classification, theory, dimension) : null;
 
-  notes.push(...sectorNotes({ self, a, b, classification, coincident, sameOrientation, theory, criticalSeparation }));
-  const sector = { ...base, zeroPoint, tachyonic, criticalSeparation, levels, massless, notes };
-  return { sector, values };
+  notes.push(
+    ...sectorNotes({ self, a, b, classification, coincident, sameOrientation, theory, criticalSeparation, multiplet }),
+  );
+  if (covariant) {
+    notes.unshift(
+      `Every spatial axis is ND for this pair, so no axis is left for the light-cone gauge: its states are counted covariantly ` +
+        `(X^0 and the b, c ghosts leave prod (1 - q^n)^(+1) (1 - q^(n-1/2))^(-${nu})), with a = -(D - 2)/24 + nu/16 = ${zeroPoint.bosonic ?? "?"}.`,
+    );
+  }
+  const sector = { ...base, zeroPoint, tachyonic, criticalSeparation, levels, massless, multiplet, notes };
+  return { sector, values, lowest: lowest?.exact ?? null, stretch, coincident };
 }
 
 interface RowContext {
@@ -382,8 +411,9 @@ function multiplyCount(factor: number, count: bigint): string {
   return Number.isSafeInteger(product) ? String(product) : (BigInt(factor) * count).toString();
 }
 
-function buildSeries(kind: SectorKind, zeroPoint: Rational, counts: readonly OrientedCounts[]): SectorSeries {
+function buildSeries(kind: SectorKind, zeroPoint: Rational, counts: readonly OrientedCounts[], cap: Rational): SectorSeries {
   let lowest: LevelTemplate | null = null;
+  let listed = 0;
   const levels = counts.map((count): LevelTemplate => {
     const level = rational(count.twiceLevel, 2);
     const exact = addRational(level, zeroPoint);
@@ -394,14 +424,23 @@ function buildSeries(kind: SectorKind, zeroPoint: Rational, counts: readonly Ori
       exact,
       exactText: formatRational(exact),
       exactValue: rationalToNumber(exact),
+      massless: isZeroRational(exact),
       ab: count.ab,
       ba: count.ba,
       abText: count.ab.toString(),
     };
     if (lowest === null || compareRational(exact, lowest.exact) < 0) lowest = template;
+    // Levels rise, and so does N + a: the listed rows are a prefix.
+    if (compareRational(exact, cap) <= 0) listed += 1;
     return template;
   });
-  return { kind, zeroPoint, levels, lowest };
+  return { kind, zeroPoint, levels, listed, lowest };
+}
+
+/** floor(num / den) for den > 0. */
+function floorDivide(num: bigint, den: bigint): bigint {
+  const quotient = num / den;
+  return num % den !== 0n && num < 0n ? quotient - 1n : quotient;
 }
 
 interface MasslessStacks {
@@ -426,12 +465,21 @@ function describeMassless(
     withChanPaton: row.withChanPaton,
   });
   const matter = self ? "" : "bifundamental ";
+  const traceCount = `light-cone trace count: ${plural(states, "state")}`;
 
   if (row.sector === "R") {
-    if (self) return content(`${plural(states, "fermion state")} (superpartners of the vector and scalars, adjoint of U(${a.count}))`);
+    // The 10d gaugino reduced to p + 1 dimensions keeps its 16 real components (common practice).
+    if (self) return content(`16 real fermions (superpartners of the gauge field and scalars, adjoint of U(${a.count})); ${traceCount}`);
     if (counts.ab !== counts.ba) {
       const holder = counts.ab > counts.ba ? `"${a.id}" to "${b.id}"` : `"${b.id}" to "${a.id}"`;
-      return content(`${plural(states, "chiral fermion state")} (strings from ${holder} only)`);
+      // nu = 8 leaves nn <= 1: a single fermionic state on a line (0+1) or a chiral fermion on a plane (1+1).
+      const kind =
+        classification.nn === 0
+          ? plural(states, "fermionic mode") + " in 0+1 dimensions"
+          : classification.nn === 1
+            ? plural(states, "chiral fermion state") + " in 1+1 dimensions"
+            : plural(states, "fermion state");
+      return content(`${kind} (strings from ${holder} only)`);
     }
     if (classification.nu === 0 && !sameOrientation) {
       return content(`${plural(states, `${matter}fermion state`)} per orientation, of the opposite chirality to the brane-brane case`);
@@ -445,20 +493,75 @@ function describeMassless(
     const nnAxes = axesOfType(classification, "NN");
     const ddAxes = axesOfType(classification, "DD");
     const ddList = `DD ${ddAxes.length === 1 ? "axis" : "axes"} ${formatAxisList(ddAxes)}`;
+    const scalars = `${plural(ddAxes.length, `${matter}scalar`)} (positions on ${ddList})`;
+    const wBoson = self ? "" : "; W-boson-like: massless because the stacks coincide";
     if (nnAxes.length === 0) {
+      // 0+1 dimensions: every position is a scalar and A_0 has no propagating polarisation (common practice).
       return content(
-        `${plural(states, "state")} of transverse motion along the ${ddList} (${matter}positions); a 0+1-dimensional ` +
-          "worldvolume carries no vector polarisations, and the light-cone count keeps D - 2 of them",
+        `${scalars} and a non-dynamical ${matter}A_0 (no propagating polarisation; it imposes Gauss's law); ${traceCount}${wBoson}`,
       );
     }
-    const scalars = `${plural(ddAxes.length, `${matter}scalar`)} (positions on ${ddList})`;
+    if (nnAxes.length === 1) {
+      // 1+1 dimensions: F_01 is a constant electric field, bound fundamental strings (common practice).
+      return content(
+        `${matter}gauge field with no propagating degrees of freedom in 1+1 dimensions (it still carries electric flux)` +
+          `${ddAxes.length > 0 ? ` and ${scalars}` : ""}; ${traceCount}${wBoson}`,
+      );
+    }
     const vector = `${matter}vector with ${plural(nnAxes.length - 1, "polarisation")} (NN axes ${formatAxisList(nnAxes)} less one light-cone direction)`;
-    const wBoson = self ? "" : "; W-boson-like: massless because the stacks coincide";
     return content(ddAxes.length > 0 ? `${vector} and ${scalars}${wBoson}` : `${vector}${wBoson}`);
   }
   if (self) return content(`${plural(states, "scalar state")} (adjoint of U(${a.count}))`);
-  const hyper = classification.nu === 4 && row.sector === "NS" ? "; hypermultiplet-like together with the R fermions" : "";
+  const hyper =
+    classification.nu === 4 && row.sector === "NS" ? "; with the R fermions they form a hypermultiplet of the 8 supercharges of the pair" : "";
   return content(`${plural(states, `${matter}scalar state`)} per orientation, localised on the common worldvolume${hyper}`);
+}
+
+/**
+ * The W-boson multiplet of two separated stacks with the same worldvolume and orientation: the
+ * states with N + a = 0, of mass M = y / (2 pi alpha'). The vector eats the scalar along the
+ * separation, so in p + 1 dimensions it has p polarisations (the little group SO(p) of a massive
+ * particle) and D - 2 - p scalars remain (common practice). Type II: with 8 + 8 states it is the
+ * short (BPS) massive vector multiplet of 16 supercharges, 2^(16/4) = 16 states where a long one has
+ * 2^(16/2) = 256 (common practice, from memory). Null when the rows do not hold exactly that content
+ * (a non-critical bosonic dimension, where nothing has N + a = 0 at the vector level).
+ */
+function describeWMultiplet(
+  rows: readonly LevelRow[],
+  classification: PairClassification,
+  theory: Configuration["theory"],
+  dimension: number,
+): SectorMultiplet | null {
+  const p = classification.nn;
+  const transverse = dimension - 2;
+  const bosons = rows.find((row) => (row.sector === "NS" && row.level === "1/2") || (row.sector === "bosonic" && row.level === "1"));
+  if (!bosons || bosons.states !== String(transverse) || bosons.mass === null) return null;
+  const scalars = transverse - p;
+  const parts: string[] = [];
+  if (p > 0) parts.push(`one massive vector (${plural(p, "polarisation")})`);
+  if (scalars > 0) parts.push(plural(scalars, "scalar"));
+  const spinless = p === 0 ? " (no spin in 0+1 dimensions)" : "";
+  if (theory === "bosonic") {
+    return {
+      name: "massive W bosons",
+      dimension: p + 1,
+      content: `${listInWords(parts)}${spinless}`,
+      states: bosons.states,
+      massSquared: bosons.massSquared,
+      mass: bosons.mass,
+    };
+  }
+  const fermions = rows.find((row) => row.sector === "R" && row.level === "0");
+  if (!fermions || fermions.states !== bosons.states) return null;
+  const total = 2 * transverse;
+  return {
+    name: "massive W-boson vector multiplet (short, 16 supercharges)",
+    dimension: p + 1,
+    content: `${listInWords([...parts, plural(fermions.states, "fermion state")])}${spinless}`,
+    states: String(total),
+    massSquared: bosons.massSquared,
+    mass: bosons.mass,
+  };
 }
 
 interface NoteInput {
@@ -470,19 +573,25 @@ interface NoteInput {
   sameOrientation: boolean;
   theory: Configuration["theory"];
   criticalSeparation: number | null;
+  multiplet: SectorMultiplet | null;
 }
 
 function sectorNotes(input: NoteInput): string[] {
-  const { self, a, b, classification, coincident, sameOrientation, theory, criticalSeparation } = input;
+  const { self, a, b, classification, coincident, sameOrientation, theory, criticalSeparation, multiplet } = input;
   if (self) return [];
   const notes: string[] = [];
   const { nu } = classification;
+  // A force needs a direction to pull along: a Dirichlet axis common to both stacks.
+  const separable = classification.dd > 0;
   if (nu === 0 && coincident && sameOrientation) {
     notes.push(`Coincident stacks: U(${a.count}) x U(${b.count}) is enhanced to U(${a.count + b.count}).`);
   }
   if (nu === 0 && !coincident && sameOrientation) {
     notes.push(
-      `Separated by y = ${formatDecimal(classification.separation)}: the lightest stretched strings are W-boson-like with M = y / (2 pi alpha').`,
+      multiplet
+        ? `Separated by y = ${formatDecimal(classification.separation)}: the lightest stretched strings form a ${multiplet.name} ` +
+            `in ${multiplet.dimension} dimensions: ${multiplet.content}, ${multiplet.states} states in all, with M = y / (2 pi alpha').`
+        : `Separated by y = ${formatDecimal(classification.separation)}: the stretched strings gain (y / 2 pi)^2 in alpha' M^2.`,
     );
   }
   if (theory !== "bosonic" && nu === 0 && !sameOrientation) {
@@ -490,53 +599,26 @@ function sectorNotes(input: NoteInput): string[] {
   }
   if (theory !== "bosonic" && nu === 8) {
     notes.push(
-      "nu = 8: NS and R agree level by level except for the single R ground state of one orientation, so the force is constant rather than zero.",
+      separable
+        ? "nu = 8: NS and R agree level by level except for the single R ground state of one orientation. Without a fundamental " +
+            "string stretched between the stacks they feel a constant force, whatever their separation; with one (such a string is " +
+            "created when the stacks cross) the configuration is supersymmetric (string creation: Bachas, Green and Schwimmer 1997; " +
+            "Danielsson, Ferretti and Klebanov 1997)."
+        : "nu = 8: NS and R agree level by level except for the single R ground state of one orientation.",
     );
   }
   if (theory !== "bosonic" && nu === 4) {
-    notes.push("nu = 4: NS and R agree level by level; the pair feels no force.");
+    notes.push(separable ? "nu = 4: NS and R agree level by level; the pair feels no force." : "nu = 4: NS and R agree level by level.");
   }
   if (criticalSeparation !== null) {
     notes.push(
       `Tachyonic below the critical separation y_c = ${formatDecimal(criticalSeparation)} (units of sqrt(alpha')); beyond it the lightest state is massive.`,
     );
   }
-  if (classification.dd === 0 && nu > 0) {
+  if (!separable && nu > 0) {
     notes.push(`No axis is Dirichlet for both ${describeStack(a)} and ${describeStack(b)}, so they cannot be pulled apart.`);
   }
   return notes;
-}
-
-function describeGaugeGroup(stacks: Stack[], theory: Configuration["theory"], dimension: number): string {
-  if (stacks.length === 0) return "none";
-  // Union-find over stacks that coincide: same worldvolume, same position, same orientation.
-  const parent = stacks.map((_, index) => index);
-  const find = (index: number): number => {
-    let root = index;
-    while (parent[root] !== root) root = parent[root] as number;
-    return root;
-  };
-  for (let i = 0; i < stacks.length; i += 1) {
-    for (let j = i + 1; j < stacks.length; j += 1) {
-      const a = stacks[i] as Stack;
-      const b = stacks[j] as Stack;
-      const classification = classifyPair(a, b, dimension);
-      const coincident =
-        classification.nu === 0 && classification.separationVector.every((component) => component.delta === 0);
-      if (coincident && (theory === "bosonic" || a.anti === b.anti)) parent[find(j)] = find(i);
-    }
-  }
-  const ranks = new Map<number, { rank: number; first: number }>();
-  stacks.forEach((stack, index) => {
-    const root = find(index);
-    const entry = ranks.get(root) ?? { rank: 0, first: index };
-    entry.rank += stack.count;
-    ranks.set(root, entry);
-  });
-  return [...ranks.values()]
-    .sort((x, y) => y.rank - x.rank || x.first - y.first)
-    .map((entry) => `U(${entry.rank})`)
-    .join(" x ");
 }
 
 function collectLightest(built: BuiltSector[], count: number): LightestState[] {
@@ -601,12 +683,4 @@ function formatAxisList(axes: number[]): string {
 /** "1 state", "8 states". */
 function plural(count: number | bigint | string, noun: string): string {
   return `${String(count)} ${noun}${String(count) === "1" ? "" : "s"}`;
-}
-
-function maxBig(x: bigint, y: bigint): bigint {
-  return x > y ? x : y;
-}
-
-function minBig(x: bigint, y: bigint): bigint {
-  return x < y ? x : y;
 }

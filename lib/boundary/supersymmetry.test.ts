@@ -121,7 +121,7 @@ function exactRank(rows: GaussianRational[][]): number {
 function referenceCount(stacks: Brane[]): number {
   if (stacks.length === 0) return 32;
   const chirality = toDenseMatrix(chiralityMatrix());
-  const weyl = chirality.map((row, r) => r).filter((r) => chirality[r]![r]!.re === 1);
+  const weyl = chirality.map((_, r) => r).filter((r) => chirality[r]![r]!.re === 1);
   const first = denseStackGamma(stacks[0]!);
   const rows: GaussianRational[][] = [];
   for (const stack of stacks.slice(1)) {

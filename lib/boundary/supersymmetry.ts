@@ -180,7 +180,153 @@ export function countSupercharges(
   options?: CountSuperchargesOptions,
 ): number {
   if (stacks.length === 0) return maximalSupercharges;
-  const chirality = options?.chirality ?? 1;
+  const solution = solveKillingSpinors(stacks, options?.chirality ?? 1);
+  return solution.classes.length;
+}
+
+/** Supercharges of a worldvolume theory, with their split by worldvolume chirality in 2d and 6d. */
+export interface WorldvolumeSupersymmetry {
+  /** Real supercharges preserved (as {@link countSupercharges}). */
+  supercharges: number;
+  /**
+   * How many of them have worldvolume chirality +1 and -1 under Gamma_wv = Gamma^0 Gamma^{i1} ... Gamma^{ip}
+   * (ascending axes), for a 2- or 6-dimensional worldvolume (p = 1 or 5, where Gamma_wv squares to 1);
+   * null in other dimensions and when Gamma_wv does not map the preserved spinors to themselves.
+   */
+  chirality: { positive: number; negative: number } | null;
+}
+
+/**
+ * The supersymmetry of a worldvolume theory: the supercharges preserved by `stacks` (those of the
+ * worldvolume and every stack whose strings to it fill it), and in 2d and 6d their split by the
+ * worldvolume chirality operator restricted to the preserved spinors.
+ *
+ * Method: the preserved eps_R form the merged groups of {@link countSupercharges}; each free group C
+ * gives the solution e_C (x_v = i^gain for v in C, 0 elsewhere), and distinct groups have disjoint
+ * supports, so they are orthogonal. Gamma_wv commutes with every constraint Gamma_1^{-1} Gamma_k (checked
+ * exactly), so it maps the solutions to themselves and its trace there is
+ * sum_C <e_C, Gamma_wv e_C> / |C|; the +1 and -1 eigenspaces have (n + trace) / 2 and (n - trace) / 2
+ * dimensions. The sign convention: positive means Gamma^0 Gamma^{i1} ... Gamma^{ip} eps = +eps with the axes
+ * in ascending order, the same order that defines a brane (see the module conventions).
+ *
+ * @param stacks - The stacks whose conditions count, in any order (at least one).
+ * @param worldvolume - Spatial Neumann axes of the worldvolume (1..9, any order); p = its length.
+ * @param options - {@link CountSuperchargesOptions}.
+ * @returns The count and, for p = 1 or 5, the chirality split.
+ * @throws RangeError for invalid axes (as {@link countSupercharges}) or an empty `stacks`.
+ * @example
+ * worldvolumeSupersymmetry([{ worldvolume: [1], anti: false }, { worldvolume: [1, 2, 3, 4, 5], anti: false }], [1])
+ * // => { supercharges: 8, chirality: { positive: 4, negative: 4 } }   (D1-D5: 2d (4,4))
+ * worldvolumeSupersymmetry([{ worldvolume: [1], anti: false }, { worldvolume: [1, 2, 3, 4, 5, 6, 7, 8, 9], anti: false }], [1])
+ * // => { supercharges: 8, chirality: { positive: 8, negative: 0 } }   (D1-D9: chiral)
+ */
+export function worldvolumeSupersymmetry(
+  stacks: readonly Pick<Stack, "worldvolume" | "anti">[],
+  worldvolume: readonly number[],
+  options?: CountSuperchargesOptions,
+): WorldvolumeSupersymmetry {
+  if (stacks.length === 0) throw new RangeError("worldvolumeSupersymmetry needs at least one stack");
+  const operator = braneProduct(axisMask(worldvolume));
+  const solution = solveKillingSpinors(stacks, options?.chirality ?? 1);
+  const supercharges = solution.classes.length;
+  const p = worldvolume.length;
+  if (p !== 1 && p !== 5) return { supercharges, chirality: null };
+  const first = stacks[0] as Pick<Stack, "worldvolume" | "anti">;
+  const firstInverse = invertMonomial(braneProduct(axisMask(first.worldvolume)));
+  for (const stack of stacks) {
+    const constraint = multiplyMonomial(firstInverse, braneProduct(axisMask(stack.worldvolume)));
+    if (!commutes(operator, constraint)) return { supercharges, chirality: null };
+  }
+  // Twice the trace, in units where each term is a power of i: sum over the groups of <e_C, G e_C> / |C|.
+  let trace = 0;
+  for (const members of solution.classes) {
+    let re = 0;
+    let im = 0;
+    for (const r of members) {
+      const c = operator.column[r] as number;
+      if (solution.root[c] !== solution.root[r]) continue;
+      const power = powerOfI((operator.phase[r] as number) + (solution.gain[c] as number) - (solution.gain[r] as number) + 8);
+      re += power.re;
+      im += power.im;
+    }
+    if (im !== 0 || re % members.length !== 0) throw new Error("worldvolume chirality is not diagonal on the preserved spinors");
+    trace += re / members.length;
+  }
+  const positive = (supercharges + trace) / 2;
+  if (!Number.isInteger(positive)) throw new Error("worldvolume chirality split is not integral");
+  return { supercharges, chirality: { positive, negative: supercharges - positive } };
+}
+
+/**
+ * The usual name of the supersymmetry of a theory in `dimension` spacetime dimensions with
+ * `supercharges` real supercharges: complex counting in 1d (N = Q/2), (p, q) in 2d (real supercharges
+ * of each chirality), 3d N = Q/2, 4d N = Q/4, 5d N = Q/8, 6d (p, q) in units of 8, and N = Q/16 in 7d
+ * to 10d (common practice, from memory: the minimal spinors have 2, 1, 2, 4, 8, 8 and 16 real
+ * components in 1d, 2d (per chirality), 3d, 4d, 5d, 6d (per chirality) and 7d-10d).
+ *
+ * @param dimension - Spacetime dimension of the theory, 1 to 10.
+ * @param supersymmetry - The count and, in 2d and 6d, the chirality split (see {@link worldvolumeSupersymmetry}).
+ * @returns E.g. "4d N=2", "2d (4,4)", "6d (1,0)", "no supersymmetry"; when the count does not fit the
+ *   minimal spinor of the dimension (or the split is missing in 2d or 6d), "Dd, Q supercharges".
+ * @example
+ * nameSupersymmetry(4, { supercharges: 8, chirality: null })                           // => "4d N=2"
+ * nameSupersymmetry(1, { supercharges: 16, chirality: null })                          // => "1d N=8"
+ * nameSupersymmetry(2, { supercharges: 8, chirality: { positive: 4, negative: 4 } })   // => "2d (4,4)"
+ */
+export function nameSupersymmetry(dimension: number, supersymmetry: WorldvolumeSupersymmetry): string {
+  const { supercharges, chirality } = supersymmetry;
+  if (supercharges === 0) return "no supersymmetry";
+  const plain = `${dimension}d, ${supercharges} supercharges`;
+  if (dimension === 2 || dimension === 6) {
+    if (chirality === null) return plain;
+    const unit = dimension === 2 ? 1 : 8;
+    if (chirality.positive % unit !== 0 || chirality.negative % unit !== 0) return plain;
+    return `${dimension}d (${chirality.positive / unit},${chirality.negative / unit})`;
+  }
+  const unit = minimalSpinor[dimension];
+  if (unit === undefined || supercharges % unit !== 0) return plain;
+  return `${dimension}d N=${supercharges / unit}`;
+}
+
+/** Real supercharges counted as one unit of N, by dimension (2d and 6d use (p, q) instead). */
+const minimalSpinor: Readonly<Record<number, number>> = { 1: 2, 3: 2, 4: 4, 5: 8, 7: 16, 8: 16, 9: 16, 10: 16 };
+
+/**
+ * Whether two stacks together preserve some supersymmetry (their {@link countSupercharges} > 0).
+ * By physics.md: nu = 0 with the same orientation (16), nu = 4 or 8 in either orientation (8);
+ * nu = 2 or 6, and a brane with an antibrane at nu = 0, preserve none.
+ *
+ * @param a - First stack (worldvolume axes and orientation).
+ * @param b - Second stack.
+ * @returns True when some supercharge survives.
+ * @throws RangeError as {@link countSupercharges}.
+ * @example
+ * pairPreservesSupersymmetry({ worldvolume: [], anti: false }, { worldvolume: [1, 2, 3, 4, 5, 6, 7, 8], anti: true }) // true
+ */
+export function pairPreservesSupersymmetry(
+  a: Pick<Stack, "worldvolume" | "anti">,
+  b: Pick<Stack, "worldvolume" | "anti">,
+): boolean {
+  return countSupercharges([a, b]) > 0;
+}
+
+/** The preserved eps_R as merged groups of basis vectors (see {@link countSupercharges}). */
+interface KillingSpinorSolution {
+  /** Members of each free group: one preserved spinor per group. */
+  classes: number[][];
+  /** Root of every basis vector's group. */
+  root: Int8Array;
+  /** x_v = i^gain[v] x_root[v]. */
+  gain: Int8Array;
+}
+
+/**
+ * Solves Gamma_1^{-1} Gamma_k eps_R = eps_R for every k on the chosen Weyl space. Each row of
+ * Gamma_1^{-1} Gamma_k - 1 is a binomial x_r - i^s x_c, so Gaussian elimination merges unknowns with
+ * exact gains in {1, i, -1, -i}; an unknown whose gains disagree around a cycle, or that lies outside
+ * the Weyl space, is forced to zero.
+ */
+function solveKillingSpinors(stacks: readonly Pick<Stack, "worldvolume" | "anti">[], chirality: 1 | -1): KillingSpinorSolution {
   const { weylDiagonal } = getGammas();
   const first = stacks[0] as Pick<Stack, "worldvolume" | "anti">;
   // (-A)^{-1} = -(A^{-1}): an antibrane's sign is carried as an extra i^2.
@@ -243,30 +389,27 @@ export function countSupercharges(
     }
   }
 
-  let free = 0;
+  const root = new Int8Array(spinorSize);
+  const members = new Map<number, number[]>();
   for (let v = 0; v < spinorSize; v++) {
-    if (parent[v] === v && zero[v] === 0) free++;
+    const r = find(v);
+    root[v] = r;
+    if (zero[r] === 1) continue;
+    const list = members.get(r);
+    if (list) list.push(v);
+    else members.set(r, [v]);
   }
-  return free;
+  return { classes: [...members.values()], root, gain };
 }
 
-/**
- * Whether two stacks together preserve some supersymmetry (their {@link countSupercharges} > 0).
- * By physics.md: nu = 0 with the same orientation (16), nu = 4 or 8 in either orientation (8);
- * nu = 2 or 6, and a brane with an antibrane at nu = 0, preserve none.
- *
- * @param a - First stack (worldvolume axes and orientation).
- * @param b - Second stack.
- * @returns True when some supercharge survives.
- * @throws RangeError as {@link countSupercharges}.
- * @example
- * pairPreservesSupersymmetry({ worldvolume: [], anti: false }, { worldvolume: [1, 2, 3, 4, 5, 6, 7, 8], anti: true }) // true
- */
-export function pairPreservesSupersymmetry(
-  a: Pick<Stack, "worldvolume" | "anti">,
-  b: Pick<Stack, "worldvolume" | "anti">,
-): boolean {
-  return countSupercharges([a, b]) > 0;
+/** Whether two monomial matrices commute (exactly). */
+function commutes(a: MonomialMatrix, b: MonomialMatrix): boolean {
+  const ab = multiplyMonomial(a, b);
+  const ba = multiplyMonomial(b, a);
+  for (let r = 0; r < a.size; r++) {
+    if (ab.column[r] !== ba.column[r] || ab.phase[r] !== ba.phase[r]) return false;
+  }
+  return true;
 }
 
 interface GammaTable {

@@ -45,7 +45,11 @@ export interface Configuration {
   dimension?: number;
   /** String scale M_s = 1/sqrt(alpha') in GeV, or null when masses stay in string units. */
   stringScaleGeV: number | null;
-  /** Highest oscillator level N reported per sector (0..200). */
+  /**
+   * Mass cap (0..200): every sector lists its states with alpha' M^2 <= levels at zero separation,
+   * i.e. N + a <= levels, so NS, R and bosonic rows stop at the same mass. The name is kept from
+   * file format 1, where engines before 1.1.0 read it as the highest oscillator level N per sector.
+   */
   levels: number;
   stacks: Stack[];
 }
@@ -68,7 +72,11 @@ export interface AxisExpansion {
   fermionModing?: { NS: Moding; R: Moding };
   /** Zero modes present: e.g. ["x", "p"] for NN, [] otherwise. */
   zeroModes: string[];
-  /** The mode expansion X(tau, sigma) as LaTeX, with the endpoint positions substituted. */
+  /**
+   * The mode expansion X(tau, sigma) as LaTeX, with the endpoint positions substituted. The fermions
+   * psi, psi~ depend only on the axis number and type, so they are not stored: `fermionExpansionLatex`
+   * writes them, and `lightConeAxis` names the axis paired with time.
+   */
   latex: string;
 }
 
@@ -106,6 +114,25 @@ export interface MasslessContent {
   withChanPaton?: string;
 }
 
+/**
+ * The named multiplet of the lightest states of a sector: the W-boson multiplet of two separated
+ * stacks with the same worldvolume and orientation.
+ */
+export interface SectorMultiplet {
+  /** E.g. "massive W-boson vector multiplet (short, 16 supercharges)". */
+  name: string;
+  /** Spacetime dimension the states move in: the common worldvolume, nn + 1. */
+  dimension: number;
+  /** Spin content, e.g. "one massive vector (3 polarisations), 5 scalars and 8 fermion states". */
+  content: string;
+  /** Light-cone trace count of the multiplet: states of one oriented string per Chan-Paton label. */
+  states: string;
+  /** alpha' M^2 of the multiplet, as a level row writes it. */
+  massSquared: string;
+  /** M sqrt(alpha') = y / (2 pi). */
+  mass: number;
+}
+
 export interface Sector {
   pair: [string, string];
   nn: number;
@@ -127,6 +154,8 @@ export interface Sector {
   axes: AxisExpansion[];
   levels: LevelRow[];
   massless: MasslessContent[];
+  /** The named multiplet of the lightest states (separated identical stacks), or null. */
+  multiplet: SectorMultiplet | null;
   notes: string[];
   /**
    * Set (true) on sectors of a paged API response whose `levels` and `axes` were left out to keep
@@ -145,12 +174,91 @@ export interface LightestState {
   withChanPaton: string;
 }
 
+/** A group of coincident stacks seen from another worldvolume (a flavour group or a defect). */
+export interface WorldvolumeGroup {
+  /** Ids of the stacks, in id order. */
+  stacks: string[];
+  /** U(N) with N the total count of the stacks. */
+  group: string;
+  /** Dimension p + 1 of their worldvolume. */
+  dimension: number;
+}
+
+/** Light states of strings from a worldvolume to other stacks that fill all of it. */
+export interface WorldvolumeMatter {
+  /** Ids of the stacks at the other end (one set of coincident stacks), in id order. */
+  stacks: string[];
+  /** nu of the pair. */
+  nu: number;
+  /**
+   * "flavour" when the other stacks are higher-dimensional (their group is a global symmetry here),
+   * "gauge" when they share the worldvolume (a parallel stack elsewhere: bifundamental matter).
+   */
+  role: "flavour" | "gauge";
+  /** E.g. "one fundamental hypermultiplet", "a massive W-boson multiplet in the bifundamental of U(2) x U(1)". */
+  description: string;
+  /** alpha' M^2 of the lightest of these states at the actual separation (exact or decimal). */
+  massSquared: string;
+}
+
+/** Where other stacks meet a worldvolume (y = 0) on a smaller intersection: states localised there. */
+export interface WorldvolumeDefect {
+  /** Ids of the stacks (one set of coincident stacks), in id order. */
+  stacks: string[];
+  /** Dimension nn + 1 of the intersection. */
+  dimension: number;
+}
+
+/**
+ * The theory on one worldvolume: one stack, or a set of coincident stacks of the same orientation
+ * whose U(N_a) x U(N_b) is enhanced to U(N_a + N_b). All axes are non-compact, so the groups of
+ * higher-dimensional stacks are flavour (global) symmetries here.
+ */
+export interface WorldvolumeTheory {
+  /** Ids of the stacks on this worldvolume, in id order. */
+  stacks: string[];
+  /** Spatial Neumann axes of the worldvolume. */
+  worldvolume: number[];
+  /** Spacetime dimension p + 1. */
+  dimension: number;
+  /** U(N), N the total count. */
+  gaugeGroup: string;
+  /** Massless content of its own strings (adjoint of the gauge group), in field-theory terms. */
+  content: string;
+  /** Groups of higher-dimensional stacks that contain this worldvolume: flavour symmetries. */
+  flavour: WorldvolumeGroup[];
+  /** Light states of strings to stacks that fill this worldvolume (flavour and parallel stacks). */
+  matter: WorldvolumeMatter[];
+  /** Stacks meeting this worldvolume (y = 0) on a smaller intersection (their strings live there). */
+  defects: WorldvolumeDefect[];
+  /**
+   * Real supercharges preserved by this worldvolume's stacks and every stack in `flavour` and
+   * `matter` (type II; null for bosonic).
+   */
+  supercharges: number | null;
+  /** In 2d and 6d: the supercharges of worldvolume chirality +1 and -1 (see `worldvolumeSupersymmetry`). */
+  chirality: { positive: number; negative: number } | null;
+  /** The usual name: "4d N=2", "2d (4,4)", "no supersymmetry", "no supersymmetry (bosonic string)". */
+  supersymmetry: string;
+  /**
+   * One line, e.g. "4d: U(2), one fundamental hypermultiplet; U(1) flavour"; past four matter entries
+   * or defects it says how many more `matter` and `defects` hold.
+   */
+  summary: string;
+}
+
 export interface SpectrumResult {
   engineVersion: string;
   theory: Theory;
   dimension: number;
   warnings: string[];
+  /**
+   * Every gauge factor over all worldvolumes, e.g. "U(2) x U(1)" (kept for lists and older readers;
+   * each factor is gauged only on its own worldvolume: see `worldvolumes`).
+   */
   gaugeGroup: string;
+  /** The theory on each worldvolume, in the id order of its first stack. */
+  worldvolumes: WorldvolumeTheory[];
   /** Supercharges preserved by the whole configuration (type II only; null for bosonic). */
   supercharges: number | null;
   /** True when all stacks are mutually supersymmetric (type II only). */

@@ -161,8 +161,9 @@ describe("edge cases", () => {
     expect(() => zeroPointEnergy("bosonic", { dimension: 25.5, nu: 0 })).toThrow(RangeError);
   });
 
-  it("rejects nu outside 0..D-2", () => {
-    expect(() => zeroPointEnergy("bosonic", { dimension: 26, nu: 25 })).toThrow(RangeError);
+  it("rejects nu outside 0..D-2 (0..D-1 for bosonic, whose nu = D - 1 is counted covariantly)", () => {
+    expect(() => zeroPointEnergy("bosonic", { dimension: 26, nu: 26 })).toThrow(RangeError);
+    expect(() => zeroPointEnergy("NS", { dimension: 10, nu: 9 })).toThrow(RangeError);
     expect(() => zeroPointEnergy("bosonic", { dimension: 26, nu: -1 })).toThrow(RangeError);
     expect(() => zeroPointEnergy("NS", { dimension: 10, nu: 1.5 })).toThrow(RangeError);
   });

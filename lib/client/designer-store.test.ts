@@ -1,6 +1,7 @@
 import { beforeEach, describe, expect, it } from "vitest";
 import type { Configuration } from "@/lib/boundary/types";
 import {
+  maxStacks,
   renameStack,
   setAnti,
   setColour,
@@ -222,5 +223,41 @@ describe("setDisplayAxes", () => {
     expect(store().displayAxes).toEqual({ horizontal: 3, vertical: 4 });
     store().setDisplayAxes({ horizontal: 4, vertical: 4 });
     expect(store().displayAxes).not.toEqual({ horizontal: 4, vertical: 4 });
+  });
+});
+
+describe("refusals", () => {
+  it("say why a stack was not added, and forget it after the next edit", () => {
+    for (let i = start.stacks.length; i < maxStacks; i++) store().addStack();
+    expect(store().notice).toBeNull();
+    expect(store().addStack()).toBeNull();
+    expect(store().notice).toMatch(/at most 64 stacks/);
+    expect(store().duplicateStacks(["a"])).toEqual([]);
+    expect(store().notice).toMatch(/at most 64 stacks/);
+    store().setCount("a", 2);
+    expect(store().notice).toBeNull();
+  });
+});
+
+describe("moveWorldvolume", () => {
+  it("moves a worldvolume direction as one undo step", () => {
+    store().toggleAxis("a", 1);
+    store().toggleAxis("a", 2);
+    store().moveWorldvolume("a", 2, 5);
+    expect(selectDocument(store()).stacks[0]?.worldvolume).toEqual([1, 5]);
+    store().undo();
+    expect(selectDocument(store()).stacks[0]?.worldvolume).toEqual([1, 2]);
+  });
+});
+
+describe("rebase", () => {
+  it("puts a merged document on top of a newer version, unsaved and undoable", () => {
+    const merged: Configuration = { ...start, title: "Merged" };
+    store().rebase(merged, 6);
+    expect(selectDocument(store())).toBe(merged);
+    expect(store().baseVersion).toBe(6);
+    expect(store().dirty).toBe(true);
+    store().undo();
+    expect(selectDocument(store())).toBe(start);
   });
 });

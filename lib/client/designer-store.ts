@@ -68,6 +68,8 @@ export interface DesignerState {
   lastGesture: string | null;
   /** The document as it was when the current gesture began: a drag's offsets are measured from it. */
   gestureStart: Configuration | null;
+  /** Why the last command was refused ("at most 64 stacks"), until it is dismissed or an edit succeeds. */
+  notice: string | null;
 
   load: (document: Configuration, options: LoadOptions) => void;
   endGesture: () => void;
@@ -102,8 +104,18 @@ export interface DesignerState {
   /** Typing into the title is one undo step. */
   setTitle: (title: string) => void;
   setTheory: (theory: Theory) => void;
+  /** Typing into the levels field is one undo step. */
   setLevels: (levels: number) => void;
+  /** Typing into the string scale field is one undo step. */
   setStringScale: (value: number | null) => void;
+  /** Moves one worldvolume direction of a stack from one axis to another, keeping p. */
+  moveWorldvolume: (id: string, from: number, to: number) => void;
+  /**
+   * Makes `document` the draft on top of the stored `version` (a merge of the draft with a newer
+   * save): one undo step, and the draft stays unsaved.
+   */
+  rebase: (document: Configuration, version: number) => void;
+  dismissNotice: () => void;
 
   undo: () => void;
   redo: () => void;
@@ -153,6 +165,7 @@ export const useDesignerStore = create<DesignerState>()((set, get) => {
     gridStep: defaultGridStep,
     lastGesture: null,
     gestureStart: null,
+    notice: null,
 
     load: (document, options) =>
       set({
@@ -165,6 +178,7 @@ export const useDesignerStore = create<DesignerState>()((set, get) => {
         viewport: null,
         lastGesture: null,
         gestureStart: null,
+        notice: null,
       }),
 
     endGesture: () => set({ lastGesture: null, gestureStart: null }),
@@ -173,7 +187,10 @@ export const useDesignerStore = create<DesignerState>()((set, get) => {
       const { select, ...stackOptions } = options;
       const state = get();
       const next = edits.addStack(state.history.present, stackOptions);
-      if (next === state.history.present) return null;
+      if (next === state.history.present) {
+        set({ notice: edits.addStackProblem(state.history.present) ?? "The stack could not be added." });
+        return null;
+      }
       // addStack appends the new stack.
       const id = next.stacks.at(-1)?.id ?? null;
       set(commit(state, next, { selection: select && id !== null ? [id] : undefined }));
@@ -184,8 +201,12 @@ export const useDesignerStore = create<DesignerState>()((set, get) => {
       const { select, ...duplicateOptions } = options;
       const state = get();
       const { config, newIds } = edits.duplicateStacks(state.history.present, ids, duplicateOptions);
-      if (newIds.length === 0) return [];
-      set(commit(state, config, { selection: select ? newIds : undefined }));
+      const full = newIds.length < new Set(ids).size ? edits.addStackProblem(config) : null;
+      if (newIds.length === 0) {
+        if (full) set({ notice: full });
+        return [];
+      }
+      set({ ...commit(state, config, { selection: select ? newIds : undefined }), notice: full });
       return newIds;
     },
 
@@ -210,8 +231,11 @@ export const useDesignerStore = create<DesignerState>()((set, get) => {
     renameStack: (id, newId) => apply((doc) => edits.renameStack(doc, id, newId)),
     setTitle: (title) => apply((doc) => edits.setTitle(doc, title), "title"),
     setTheory: (theory) => apply((doc) => edits.setTheory(doc, theory)),
-    setLevels: (levels) => apply((doc) => edits.setLevels(doc, levels)),
-    setStringScale: (value) => apply((doc) => edits.setStringScale(doc, value)),
+    setLevels: (levels) => apply((doc) => edits.setLevels(doc, levels), "levels"),
+    setStringScale: (value) => apply((doc) => edits.setStringScale(doc, value), "string-scale"),
+    moveWorldvolume: (id, from, to) => apply((doc) => edits.moveWorldvolume(doc, id, from, to)),
+    rebase: (document, version) => set((state) => ({ ...commit(state, document), baseVersion: version })),
+    dismissNotice: () => set({ notice: null }),
 
     undo: () => set((state) => stepTo(state, undoHistory(state.history))),
 
@@ -276,6 +300,7 @@ function commit(state: DesignerState, next: Configuration, options: CommitOption
   return {
     history: merge ? replacePresent(state.history, next) : pushHistory(state.history, next, designerHistoryLimit),
     dirty: true,
+    notice: null,
     lastGesture: gesture,
     gestureStart: gesture === null ? null : merge ? state.gestureStart : state.history.present,
     selection: pruneSelection(options.selection ?? state.selection, next),

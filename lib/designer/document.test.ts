@@ -1,12 +1,15 @@
 import { describe, expect, it } from "vitest";
 import type { Configuration } from "@/lib/boundary/types";
 import { configurationTitleMaxLength } from "@/lib/validations/configuration";
+import { checkConfiguration } from "@/lib/boundary";
 import {
   addStack,
+  addStackProblem,
   deleteStacks,
   duplicateStacks,
   maxStacks,
   moveStacks,
+  moveWorldvolume,
   nextStackId,
   renameProblem,
   renameStack,
@@ -233,6 +236,56 @@ describe("document settings", () => {
     expect(setStringScale(config, 1e16).stringScaleGeV).toBe(1e16);
     expect(setStringScale(config, -1)).toBe(config);
     expect(setStringScale(config, null).stringScaleGeV).toBeNull();
+    // The engine's ceiling, beyond the Planck scale (about 1.2e19 GeV, common practice).
+    expect(setStringScale(config, 1e21)).toBe(config);
+  });
+});
+
+describe("moveWorldvolume", () => {
+  it("moves one Neumann direction to a Dirichlet axis and keeps p", () => {
+    const config = { ...sample(), stacks: [{ ...sample().stacks[1]!, position: { "6": 2, "9": 3.5 } }] };
+    const moved = moveWorldvolume(config, "p", 4, 6);
+    expect(moved.stacks[0]?.worldvolume).toEqual([1, 2, 3, 6]);
+    // The stack keeps its place: the coordinate it had on x6 is now its coordinate on x4.
+    expect(moved.stacks[0]?.position).toEqual({ "4": 2, "9": 3.5 });
+    expect(stackDimension(moved.stacks[0]!)).toBe(4);
+  });
+
+  it("keeps a IIA document valid where a single flip would not", () => {
+    const config = sample();
+    // IIA allows only even p (common practice): one flip of a D4 makes a D3 or a D5.
+    const flipped = toggleAxis(config, "p", 4);
+    expect(checkConfiguration(flipped).some((issue) => /even p/.test(issue.message))).toBe(true);
+    expect(checkConfiguration(moveWorldvolume(config, "p", 4, 6))).toEqual([]);
+  });
+
+  it("does not mutate its input", () => {
+    const config = sample();
+    const copy = structuredClone(config);
+    moveWorldvolume(config, "p", 4, 6);
+    expect(config).toEqual(copy);
+  });
+
+  describe("edge cases", () => {
+    it("refuses a from axis that is not Neumann, a to axis that is not Dirichlet, time and unknown stacks", () => {
+      const config = sample();
+      expect(moveWorldvolume(config, "p", 6, 7)).toBe(config);
+      expect(moveWorldvolume(config, "p", 4, 3)).toBe(config);
+      expect(moveWorldvolume(config, "p", 4, 4)).toBe(config);
+      expect(moveWorldvolume(config, "p", 0, 6)).toBe(config);
+      expect(moveWorldvolume(config, "p", 4, 10)).toBe(config);
+      expect(moveWorldvolume(config, "nobody", 4, 6)).toBe(config);
+    });
+  });
+});
+
+describe("addStackProblem", () => {
+  it("explains the limit once the document is full, and is silent before", () => {
+    let config = sample();
+    expect(addStackProblem(config)).toBeNull();
+    while (config.stacks.length < maxStacks) config = addStack(config);
+    expect(addStackProblem(config)).toMatch(/at most 64 stacks/);
+    expect(addStack(config)).toBe(config);
   });
 });
 

@@ -233,15 +233,24 @@ export function setTitle(config: Configuration, title: string): Configuration {
   return { ...config, title: title.slice(0, configurationTitleMaxLength) };
 }
 
-/** Sets the highest oscillator level reported; refused outside 0..200 or for non-integers. */
+/** Sets the highest oscillator level reported; refused outside 0..{@link maxLevels} or for non-integers. */
 export function setLevels(config: Configuration, levels: number): Configuration {
-  if (!Number.isInteger(levels) || levels < 0 || levels > 200) return config;
+  if (!Number.isInteger(levels) || levels < 0 || levels > maxLevels) return config;
   return { ...config, levels };
 }
 
-/** Sets the string scale in GeV, or null; refused unless positive and finite. */
+/** Largest string scale in GeV the designer accepts (the engine's limit). */
+export const maxStringScaleGeV = configurationLimits.maxStringScaleGeV;
+
+/** Highest oscillator level the designer accepts (the engine's limit). */
+export const maxLevels = configurationLimits.maxLevel;
+
+/** Largest |position| in units of sqrt(alpha') (the engine's limit). */
+export const maxAbsPosition = configurationLimits.maxAbsPosition;
+
+/** Sets the string scale in GeV, or null; refused unless positive, finite and at most {@link maxStringScaleGeV}. */
 export function setStringScale(config: Configuration, value: number | null): Configuration {
-  if (value !== null && !(Number.isFinite(value) && value > 0)) return config;
+  if (value !== null && !(Number.isFinite(value) && value > 0 && value <= maxStringScaleGeV)) return config;
   return { ...config, stringScaleGeV: value };
 }
 
@@ -301,4 +310,32 @@ function samePosition(a: Record<string, number>, b: Record<string, number>): boo
   const keys = new Set([...Object.keys(a), ...Object.keys(b)]);
   for (const key of keys) if ((a[key] ?? 0) !== (b[key] ?? 0)) return false;
   return true;
+}
+
+/**
+ * Moves one worldvolume direction of a stack to another axis ("move the worldvolume from x4 to
+ * x6"): `from` becomes Dirichlet and `to` Neumann in one step, so p (and with it the IIA/IIB
+ * parity) stays what it was, where two single flips would pass through an invalid p. The stack
+ * keeps its place: its position on `to` moves over to `from`. Refused unless `from` is Neumann and
+ * `to` Dirichlet for the stack, and both are spatial axes.
+ */
+export function moveWorldvolume(config: Configuration, id: string, from: number, to: number): Configuration {
+  const axes = spatialAxes(config);
+  if (from === to || !axes.includes(from) || !axes.includes(to)) return config;
+  return updateStack(config, id, (stack) => {
+    if (!stack.worldvolume.includes(from) || stack.worldvolume.includes(to)) return stack;
+    const { [String(to)]: moved = 0, ...rest } = stack.position;
+    return {
+      ...stack,
+      worldvolume: normaliseAxes([...stack.worldvolume.filter((a) => a !== from), to], new Set(axes)),
+      position: { ...rest, [String(from)]: moved },
+    };
+  });
+}
+
+/** Why another stack cannot be added, or null when it can. */
+export function addStackProblem(config: Pick<Configuration, "stacks">): string | null {
+  return config.stacks.length >= maxStacks
+    ? `A configuration holds at most ${maxStacks} stacks, and this one has ${config.stacks.length}. Delete a stack, or fork the configuration to explore another set.`
+    : null;
 }

@@ -31,6 +31,7 @@ function sector(pair: [string, string], separation: number, rows: Array<[string,
       withChanPaton,
     })),
     massless: [],
+    multiplet: null,
     notes: [],
   };
 }

@@ -59,6 +59,30 @@ describe("buildScene", () => {
     expect(pq.points.slice(6, 8)).toEqual([240, 190]);
   });
 
+  it("adds the mass in GeV to a curve label when the document has a string scale", () => {
+    const massive = {
+      sectors: [
+        {
+          ...result.sectors[0]!,
+          tachyonic: false,
+          levels: [{ sector: "NS", level: "0", massSquared: "0.25", mass: 0.5, states: "1", withChanPaton: "4" }],
+        },
+      ],
+    } as unknown as SpectrumResult;
+    const withScale = buildScene({
+      document: { ...document, stringScaleGeV: 1000 },
+      result: massive,
+      axes: { horizontal: 8, vertical: 9 },
+      viewport,
+      width: 400,
+      height: 300,
+      selection: [],
+      gridStep: 1,
+    });
+    // M = (M sqrt(alpha')) x M_s = 0.5 x 1000 GeV (M_s = 1/sqrt(alpha'), common practice).
+    expect(withScale.curves[2]!.label).toBe("\u03b1\u2032M\u00b2 = 0.25 \u00b7 M = 500 GeV");
+  });
+
   it("has no curve labels without a result", () => {
     const bare = buildScene({ document, result: null, axes: { horizontal: 8, vertical: 9 }, viewport, width: 400, height: 300, selection: [], gridStep: 1 });
     expect(bare.curves.every((c) => c.label === "" && !c.tachyonic)).toBe(true);

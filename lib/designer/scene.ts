@@ -9,7 +9,7 @@ import { estimateTextWidth, placeLabels, stackLabelAnchor } from "@/lib/canvas/l
 import { isNeumann, positionOn, projectStack, type DisplayAxes, type ProjectedShape } from "@/lib/canvas/projection";
 import { gridLines } from "@/lib/canvas/snap";
 import { fitToPoints, toScreen, toWorld, visibleWorldRect, type Point, type Viewport } from "@/lib/canvas/viewport";
-import { formatMassSquared, lightestBySector, pairKey } from "@/lib/spectrum";
+import { formatMassSquared, formatNumber, lightestBySector, massInGeV, pairKey } from "@/lib/spectrum";
 import { stackKind } from "./stack-kind";
 
 /** Font size of canvas labels in pixels. */
@@ -78,7 +78,7 @@ export function buildScene(input: BuildSceneInput): Scene {
 
   const hitEntries: ShapeEntry[] = document.stacks.map((stack) => ({ id: stack.id, shape: projectStack(stack, axes) }));
   let fillSlot = 0;
-  const anchors = hitEntries.map(({ id, shape }) =>
+  const anchors = hitEntries.map(({ shape }) =>
     stackLabelAnchor(shape, viewport, stage, shape.kind === "fill" ? fillSlot++ : 0),
   );
   const labelTexts = document.stacks.map(
@@ -140,7 +140,10 @@ export function buildScene(input: BuildSceneInput): Scene {
     });
     const info = lightest.get(pairKey(a.id, b.id));
     const mid = curveMidpoint(curve);
-    const label = info ? `\u03b1\u2032M\u00b2 = ${formatMassSquared(info.row.massSquared)}${info.sector.tachyonic ? "  tachyon" : ""}` : "";
+    const gev = info ? massInGeV(info.row.mass, document.stringScaleGeV) : null;
+    const label = info
+      ? `\u03b1\u2032M\u00b2 = ${formatMassSquared(info.row.massSquared)}${gev !== null && gev > 0 ? ` \u00b7 M = ${formatNumber(gev)} GeV` : ""}${info.sector.tachyonic ? "  tachyon" : ""}`
+      : "";
     return {
       key: pairKey(a.id, b.id),
       pair: [a.id, b.id],

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { makeSector, makeSpectrumResult } from "@/tests/fixtures/spectrum-result-builders";
-import { quoteCsvField, spectrumCsvColumns, spectrumToCsv } from "./csv";
+import { neutralizeCsvFormula, quoteCsvField, spectrumCsvColumns, spectrumToCsv } from "./csv";
 
 describe("spectrumToCsv", () => {
   const result = makeSpectrumResult(
@@ -28,8 +28,9 @@ describe("spectrumToCsv", () => {
     expect(lines[1]).toBe(spectrumCsvColumns.join(","));
     // 2 comment/header records + 2 level rows + the empty string after the final CRLF
     expect(lines).toHaveLength(5);
-    expect(lines[2]).toBe('w,p,4,1,4,0,true,true,NS,0,-1/2,,1,4,"kept, brane, antibrane"');
-    expect(lines[3]).toBe("w,p,4,1,4,0,true,true,R,0,0,0,,16,");
+    // alpha_prime_mass_squared_at_y0 is N + a with the fixture's a = 0 in both sectors.
+    expect(lines[2]).toBe('w,p,4,1,4,0,true,true,NS,0,-1/2,0,,1,4,"kept, brane, antibrane"');
+    expect(lines[3]).toBe("w,p,4,1,4,0,true,true,R,0,0,0,0,,16,");
     expect(lines[4]).toBe("");
   });
 
@@ -51,5 +52,31 @@ describe("quoteCsvField", () => {
     expect(quoteCsvField('say "hi"')).toBe('"say ""hi"""');
     expect(quoteCsvField("two\nlines")).toBe('"two\nlines"');
     expect(quoteCsvField("cr\rhere")).toBe('"cr\rhere"');
+  });
+});
+
+describe("neutralizeCsvFormula", () => {
+  it("prefixes text a spreadsheet would run as a formula with an apostrophe (OWASP, CSV Injection)", () => {
+    for (const cell of ["=HYPERLINK(\"https://evil.example\")", "-2+3+cmd|' /C calc'!A0", "+SUM(A1)", "@SUM(A1)", "\tx", "\rx", "-", "=1"]) {
+      expect(neutralizeCsvFormula(cell)).toBe(`'${cell}`);
+    }
+  });
+
+  it("keeps plain numbers, negative and fractional ones included, and ordinary text", () => {
+    for (const cell of ["-1/2", "-0.25", "-1e-3", "+4", "0", "12345678901234567890", "w", "kept, brane", "a=b", ""]) {
+      expect(neutralizeCsvFormula(cell)).toBe(cell);
+    }
+  });
+
+  it("is applied to every cell of the spectrum CSV, stack names included", () => {
+    const hostile = makeSpectrumResult([
+      makeSector(["=HYPERLINK(\"https://evil.example\")", "@SUM(1)"], {
+        levels: [{ sector: "NS", level: "0", massSquared: "-1/2", mass: null, states: "1", withChanPaton: "4", note: "-2+3+cmd|' /C calc'!A0" }],
+      }),
+    ]);
+    const row = spectrumToCsv(hostile).split("\r\n")[2] ?? "";
+    expect(row.startsWith(`"'=HYPERLINK(""https://evil.example"")",'@SUM(1),`)).toBe(true);
+    expect(row).toContain(",-1/2,");
+    expect(row.endsWith(",'-2+3+cmd|' /C calc'!A0")).toBe(true);
   });
 });

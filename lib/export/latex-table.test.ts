@@ -35,8 +35,8 @@ describe("spectrumToLatexTable", () => {
     expect(tex).toContain("& $\\tfrac{1}{2}$ & $0.31$ & $32$ \\\\");
   });
 
-  it("keeps only levels up to maxLevel", () => {
-    const short = spectrumToLatexTable(result, { maxLevel: 1 });
+  it("keeps only levels up to the mass cap N + a (here a_NS = 0)", () => {
+    const short = spectrumToLatexTable(result, { massCap: 1 });
     expect(short).not.toContain("\\tfrac{3}{2}");
     expect(short).toContain("\\tfrac{1}{2}");
   });

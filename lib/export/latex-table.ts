@@ -1,43 +1,54 @@
 /**
- * Spectrum as a LaTeX table ready to paste into a paper (needs `\usepackage{booktabs}`).
- * alpha' M^2 is typeset as a fraction when exact; conventions and the caution go into the
- * caption and a leading comment.
+ * Spectrum as LaTeX tables ready to paste into a paper (needs `\usepackage{booktabs}`): the
+ * levels of every sector, then the theory on each worldvolume. alpha' M^2 is typeset as a
+ * fraction when exact; conventions and the caution go into the captions and leading comments,
+ * and the sectors' notes (with their multiplets) into comments.
  */
+import { rationalToNumber } from "@/lib/boundary/rational";
 import type { SpectrumResult } from "@/lib/boundary/types";
-import { parseExactRational, parseResultNumber } from "@/lib/spectrum";
+import { parseExactRational, unstretchedMassSquared } from "@/lib/spectrum";
 import { conventionsLine, exportCaution } from "./caution";
 
 export interface SpectrumToLatexTableOptions {
   /** Caption title (e.g. the configuration title). */
   title?: string;
-  /** Highest oscillator level to include, as a number (default: every level in the result). */
-  maxLevel?: number;
-  /** `\label{...}` of the table (default "tab:spectrum"). */
+  /** Highest alpha' M^2 at zero separation (N + a) to include (default: every level in the result). */
+  massCap?: number;
+  /** `\label{...}` of the levels table (default "tab:spectrum"; the worldvolume table adds "-worldvolumes"). */
   label?: string;
 }
 
 /**
- * Renders a spectrum result as a booktabs table, one row per (sector, level).
+ * Renders a spectrum result as booktabs tables: one row per (sector, level), then one per worldvolume.
  *
  * @example
  * spectrumToLatexTable(result).includes("\\toprule") // => true
  */
 export function spectrumToLatexTable(result: SpectrumResult, options: SpectrumToLatexTableOptions = {}): string {
+  const label = options.label ?? "tab:spectrum";
   const lines: string[] = [
     `% Mooring spectrum table. ${conventionsLine(result)}`,
     `% ${exportCaution}`,
     "% Requires \\usepackage{booktabs}.",
+  ];
+  // The notes name a sector's multiplet too (the W bosons of separated stacks).
+  for (const sector of result.sectors) {
+    for (const note of sector.notes) lines.push(`% ${sector.pair[0]}-${sector.pair[1]}: ${note.replace(/[\r\n]+/g, " ")}`);
+  }
+  lines.push(
     "\\begin{table}[ht]",
     "  \\centering",
     "  \\begin{tabular}{llrrlrr}",
     "    \\toprule",
-    "    Strings & $\\nu$ & $y/\\sqrt{\\alpha'}$ & Sector & $N$ & $\\alpha' M^2$ & States \\\\",
+    "    Strings & $\\nu$ & $y/\\sqrt{\\alpha'}$ & Sector & Level $N$ & $\\alpha' M^2$ & States \\\\",
     "    \\midrule",
-  ];
+  );
   for (const sector of result.sectors) {
-    const rows = sector.levels.filter(
-      (row) => options.maxLevel === undefined || parseResultNumber(row.level) <= options.maxLevel,
-    );
+    const rows = sector.levels.filter((row) => {
+      if (options.massCap === undefined) return true;
+      const unstretched = unstretchedMassSquared(row, sector.zeroPoint);
+      return unstretched === null || rationalToNumber(unstretched) <= options.massCap;
+    });
     for (const row of rows) {
       lines.push(
         "    " +
@@ -60,12 +71,70 @@ export function spectrumToLatexTable(result: SpectrumResult, options: SpectrumTo
     "  \\end{tabular}",
     `  \\caption{${title} spectrum, ${escapeLatex(result.theory)} in $D = ${result.dimension}$. ` +
       "Conventions: $\\alpha' = 1$, separations $y$ in units of $\\sqrt{\\alpha'}$, " +
-      "$\\alpha' M^2 = (y/2\\pi)^2 + N + a$; states counted over both orientations and all " +
+      "$\\alpha' M^2 = (y/2\\pi)^2 + N + a$ with $N$ the oscillator level, every sector listed up to the same " +
+      "$\\alpha' M^2$ at $y = 0$; states are light-cone trace counts over both orientations and all " +
       `Chan--Paton labels. ${escapeLatex(exportCaution)}}`,
-    `  \\label{${options.label ?? "tab:spectrum"}}`,
+    `  \\label{${label}}`,
     "\\end{table}",
   );
+  if (result.worldvolumes.length > 0) lines.push(...worldvolumeTable(result, options.title, label));
   return lines.join("\n") + "\n";
+}
+
+function worldvolumeTable(result: SpectrumResult, title: string | undefined, label: string): string[] {
+  const lines = [
+    "\\begin{table}[ht]",
+    "  \\centering",
+    "  \\begin{tabular}{lrlp{0.45\\linewidth}l}",
+    "    \\toprule",
+    "    Stacks & $d$ & Gauge group & Strings from other stacks & Supersymmetry \\\\",
+    "    \\midrule",
+  ];
+  for (const worldvolume of result.worldvolumes) {
+    const others = [
+      ...worldvolume.matter.map((matter) => `${matter.description} (${matter.role} stacks ${matter.stacks.join(", ")})`),
+      ...(worldvolume.flavour.length > 0 ? [`${worldvolume.flavour.map((group) => group.group).join(" x ")} flavour`] : []),
+      ...worldvolume.defects.map((defect) => `${defect.dimension}d defect with ${defect.stacks.join(", ")}`),
+    ];
+    lines.push(
+      "    " +
+        [
+          escapeLatex(worldvolume.stacks.join(", ")),
+          `$${worldvolume.dimension}$`,
+          `$${worldvolume.gaugeGroup}$`,
+          others.length > 0 ? latexProse(others.join("; ")) : "none",
+          latexProse(worldvolume.supersymmetry),
+        ].join(" & ") +
+        " \\\\",
+    );
+  }
+  const heading = title ? `${escapeLatex(title)}: worldvolume` : "Worldvolume";
+  lines.push(
+    "    \\bottomrule",
+    "  \\end{tabular}",
+    `  \\caption{${heading} theories, ${escapeLatex(result.theory)} in $D = ${result.dimension}$: gauge group of each set of ` +
+      "coincident stacks, light states of the strings from stacks that fill its worldvolume (the groups of higher-dimensional " +
+      `stacks act as flavour symmetries), and the supersymmetry it preserves. ${escapeLatex(exportCaution)}}`,
+    `  \\label{${label}-worldvolumes}`,
+    "\\end{table}",
+  );
+  return lines;
+}
+
+/**
+ * Escapes engine prose for LaTeX and typesets the few formulas it contains (alpha' M^2,
+ * M sqrt(alpha'), nu, "N=2"), with quoted ids as LaTeX quotes.
+ *
+ * @example
+ * latexProse("one fundamental hypermultiplet of mass M sqrt(alpha') = 0.2387") // => "one fundamental hypermultiplet of mass $M\\sqrt{\\alpha'}$ = 0.2387"
+ */
+export function latexProse(text: string): string {
+  return escapeLatex(text)
+    .replaceAll("alpha' M\\textasciicircum{}2", "$\\alpha' M^2$")
+    .replaceAll("M sqrt(alpha')", "$M\\sqrt{\\alpha'}$")
+    .replace(/\bnu = /g, "$\\nu$ = ")
+    .replace(/"([^"]*)"/g, "``$1''")
+    .replace(/N=(\d+)/g, "$\\mathcal{N}=$1$");
 }
 
 /**

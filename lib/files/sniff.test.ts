@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { extensionFor, sniffContentType } from "./sniff";
+import { attachmentFileNameFor, extensionFor, sniffContentType } from "./sniff";
 
 const bytes = (...values: number[]) => new Uint8Array(values);
 const text = (value: string) => new TextEncoder().encode(value);
@@ -37,5 +37,28 @@ describe("extensionFor", () => {
     expect(extensionFor("image/png")).toBe("png");
     expect(extensionFor("image/jpeg")).toBe("jpg");
     expect(extensionFor("application/pdf")).toBe("pdf");
+  });
+});
+
+describe("attachmentFileNameFor", () => {
+  it("gives the name the extension of the type found in the bytes", () => {
+    // An HTML page carrying PNG bytes must not be stored as .html (it would open as a page).
+    expect(attachmentFileNameFor("plot.html", "image/png")).toBe("plot.png");
+    expect(attachmentFileNameFor("figure.svg.html", "image/png")).toBe("figure.svg.png");
+    expect(attachmentFileNameFor("notes", "application/pdf")).toBe("notes.pdf");
+    expect(attachmentFileNameFor("scan.png", "image/jpeg")).toBe("scan.jpg");
+  });
+
+  it("keeps an extension that already names the type, as typed", () => {
+    expect(attachmentFileNameFor("figure.png", "image/png")).toBe("figure.png");
+    expect(attachmentFileNameFor("photo.JPEG", "image/jpeg")).toBe("photo.JPEG");
+    expect(attachmentFileNameFor("paper.Pdf", "application/pdf")).toBe("paper.Pdf");
+  });
+
+  describe("edge cases", () => {
+    it("treats a leading dot as part of the name and never leaves a bare extension", () => {
+      expect(attachmentFileNameFor(".htaccess", "image/png")).toBe(".htaccess.png");
+      expect(attachmentFileNameFor("x.", "image/png")).toBe("x.png");
+    });
   });
 });

@@ -39,3 +39,27 @@ export function sniffContentType(bytes: Uint8Array): AttachmentContentType | nul
 export function extensionFor(type: AttachmentContentType): "png" | "jpg" | "pdf" {
   return type === "image/png" ? "png" : type === "image/jpeg" ? "jpg" : "pdf";
 }
+
+/**
+ * The name an attachment is stored under: the uploaded name's stem with the extension of the
+ * sniffed type, whatever extension it had ("plot.html" holding PNG bytes becomes "plot.png"; an
+ * extension that already names the type, like ".jpeg" or ".PNG", is kept as typed).
+ *
+ * @param fileName - the cleaned-up uploaded name (see `attachmentFileNameSchema`)
+ * @param type - the type sniffed from the bytes
+ * @example
+ * attachmentFileNameFor("figure.svg.html", "image/png") // => "figure.svg.png"
+ */
+export function attachmentFileNameFor(fileName: string, type: AttachmentContentType): string {
+  const dot = fileName.lastIndexOf(".");
+  const stem = dot > 0 ? fileName.slice(0, dot) : fileName;
+  const extension = dot > 0 ? fileName.slice(dot + 1) : "";
+  if (knownExtensions[type].includes(extension.toLowerCase())) return fileName;
+  return `${stem || "attachment"}.${extensionFor(type)}`;
+}
+
+const knownExtensions: Record<AttachmentContentType, readonly string[]> = {
+  "image/png": ["png"],
+  "image/jpeg": ["jpg", "jpeg"],
+  "application/pdf": ["pdf"],
+};

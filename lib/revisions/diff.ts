@@ -7,7 +7,7 @@
  */
 import { dimensionOf } from "@/lib/boundary";
 import type { Configuration, SpectrumResult, Stack, Sector, SectorKind } from "@/lib/boundary/types";
-import { lightestLevel, pairKey, parseResultNumber } from "@/lib/spectrum";
+import { formatWorldvolume, lightestLevel, pairKey, parseResultNumber, worldvolumeKey } from "@/lib/spectrum";
 
 /** Boundary condition of one stack on one spatial axis. */
 export type Boundary = "N" | "D";
@@ -69,6 +69,16 @@ export interface SectorChange {
   supersymmetric: { before: boolean; after: boolean } | null;
 }
 
+/** A worldvolume whose theory changed, appeared or went: its one-line description before and after. */
+export interface WorldvolumeChange {
+  /** Ids of its stacks, joined (see `worldvolumeKey`). */
+  key: string;
+  /** The line before, or null when it is new. */
+  before: string | null;
+  /** The line after, or null when it is gone. */
+  after: string | null;
+}
+
 export interface SpectrumDiff {
   /** Sectors present only in the later result (a stack was added). */
   addedSectors: Array<[string, string]>;
@@ -78,6 +88,11 @@ export interface SpectrumDiff {
   bps: { before: boolean; after: boolean } | null;
   supercharges: { before: number | null; after: number | null } | null;
   gaugeGroup: { before: string; after: string } | null;
+  /**
+   * Worldvolumes whose theory (gauge and flavour groups, light matter, supersymmetry) changed;
+   * empty when either result was stored before worldvolumes were recorded.
+   */
+  worldvolumes: WorldvolumeChange[];
   identical: boolean;
 }
 
@@ -136,7 +151,8 @@ export function diffConfigurations(before: Configuration, after: Configuration):
  * @param after - the result stored with the later revision
  * @returns sectors added/removed, and sectors whose lightest surviving state (alpha' M^2,
  *   compared numerically so "-1/2" equals "-0.5"), tachyon status or supersymmetry changed;
- *   plus changes of the configuration-wide BPS flag, supercharge count and gauge group.
+ *   plus changes of the configuration-wide BPS flag, supercharge count and gauge group, and of
+ *   the theory on each worldvolume (matched by its stacks).
  *   Sectors are matched as unordered pairs of stack ids.
  * @example
  * diffSpectra(r, r).identical // => true
@@ -171,6 +187,7 @@ export function diffSpectra(before: SpectrumResult, after: SpectrumResult): Spec
     before.supercharges === after.supercharges ? null : { before: before.supercharges, after: after.supercharges };
   const gaugeGroup =
     before.gaugeGroup === after.gaugeGroup ? null : { before: before.gaugeGroup, after: after.gaugeGroup };
+  const worldvolumes = diffWorldvolumes(before, after);
 
   return {
     addedSectors,
@@ -179,14 +196,32 @@ export function diffSpectra(before: SpectrumResult, after: SpectrumResult): Spec
     bps,
     supercharges,
     gaugeGroup,
+    worldvolumes,
     identical:
       addedSectors.length === 0 &&
       removedSectors.length === 0 &&
       changedSectors.length === 0 &&
       !bps &&
       !supercharges &&
-      !gaugeGroup,
+      !gaugeGroup &&
+      worldvolumes.length === 0,
   };
+}
+
+function diffWorldvolumes(before: SpectrumResult, after: SpectrumResult): WorldvolumeChange[] {
+  // A result with sectors but no worldvolumes was stored before they were recorded: nothing to compare.
+  const unrecorded = (result: SpectrumResult) => result.worldvolumes.length === 0 && result.sectors.length > 0;
+  if (unrecorded(before) || unrecorded(after)) return [];
+  const lines = (result: SpectrumResult) => new Map(result.worldvolumes.map((w) => [worldvolumeKey(w), formatWorldvolume(w)]));
+  const was = lines(before);
+  const now = lines(after);
+  const changes: WorldvolumeChange[] = [];
+  for (const [key, line] of now) {
+    const previous = was.get(key) ?? null;
+    if (previous !== line) changes.push({ key, before: previous, after: line });
+  }
+  for (const [key, line] of was) if (!now.has(key)) changes.push({ key, before: line, after: null });
+  return changes;
 }
 
 function boundaryOf(stack: Stack, axis: number): Boundary {

@@ -2,13 +2,19 @@ import "server-only";
 import type { NextAuthOptions, User } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import type { Actor } from "@/db/queries/actor";
+import { endSession, startSession } from "@/db/queries/sessions";
 import { consumeSignInLinkToken, verifyPassword } from "@/db/queries/users";
 import { getAuthSecret } from "@/lib/server/auth-secret";
-import { limitSignInAttempt, signInAddress } from "@/lib/server/sign-in-limit";
+import { clientAddress } from "@/lib/server/rate-limit";
+import { limitSignInAttempt } from "@/lib/server/sign-in-limit";
 import { toDomainError } from "@/lib/errors";
 import { signInLinkSchema, signInSchema } from "@/lib/validations/auth";
 
-/** Sessions last 30 days; the user's role is re-read from the database on every request (lib/server/session.ts). */
+/**
+ * Sessions last 30 days. Each sign-in opens a row in `sessions` whose id the token carries; every
+ * request checks that row and re-reads the user's role (lib/server/session.ts), so a session ends
+ * at once when it is signed out or revoked.
+ */
 const sessionMaxAgeSeconds = 30 * 24 * 60 * 60;
 
 /**
@@ -38,7 +44,7 @@ export const authOptions: NextAuthOptions = {
         // Failed attempts are counted per e-mail and per client address in PostgreSQL (lib/server/sign-in-limit.ts).
         return toUser(
           await authorizeWith(() =>
-            limitSignInAttempt(email, signInAddress(req.headers), () => verifyPassword(null, email, password)),
+            limitSignInAttempt(email, clientAddress(req.headers), () => verifyPassword(null, email, password)),
           ),
         );
       },
@@ -55,9 +61,10 @@ export const authOptions: NextAuthOptions = {
     }),
   ],
   callbacks: {
-    jwt({ token, user }) {
+    async jwt({ token, user }) {
       // `user` is present only right after authorize(); later calls keep what the token holds.
       if (user) {
+        token.sid = await startSession(user.id);
         token.id = user.id;
         token.siteRole = user.siteRole;
         token.name = user.name;
@@ -67,9 +74,22 @@ export const authOptions: NextAuthOptions = {
     },
     session({ session, token }) {
       if (token.id && token.siteRole) {
-        session.user = { ...session.user, id: token.id, siteRole: token.siteRole, name: token.name, email: token.email };
+        session.user = {
+          ...session.user,
+          id: token.id,
+          siteRole: token.siteRole,
+          sessionId: token.sid,
+          name: token.name,
+          email: token.email,
+        };
       }
       return session;
+    },
+  },
+  events: {
+    // Signing out ends the session on the server too, so a copied token stops working with it.
+    async signOut({ token }) {
+      if (token?.id && token.sid) await endSession(token.id, token.sid);
     },
   },
 };

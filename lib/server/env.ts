@@ -15,6 +15,10 @@ const envSchema = z.object({
   SWEEP_JOB_EXPIRE_SECONDS: z.coerce.number().int().min(1).max(3600).default(120),
   /** How often sweep workers look for expired chunks. */
   SWEEP_MAINTENANCE_SECONDS: z.coerce.number().int().min(1).max(600).default(10),
+  /** Compute budget of POST /api/spectrum per minute, in units of about 500 sector-levels: per anonymous client address. */
+  SPECTRUM_BUDGET_ANONYMOUS: z.coerce.number().int().min(1).default(120),
+  /** The same per signed-in account and per API token. */
+  SPECTRUM_BUDGET_ACCOUNT: z.coerce.number().int().min(1).default(600),
 });
 
 /** Server environment, parsed once. */

@@ -1,6 +1,7 @@
 import "server-only";
 import nodemailer, { type Transporter } from "nodemailer";
 import { getEnv } from "@/lib/server/env";
+import { countOf, withArticle } from "@/lib/wording";
 
 /** One message: plain text always, HTML as a courtesy; both say the same. */
 export interface MailContent {
@@ -24,6 +25,28 @@ function getTransporter(): Transporter {
 /** Sends one message through SMTP; rejects when the server refuses it. */
 export async function sendMail(content: MailContent): Promise<void> {
   await getTransporter().sendMail({ from: getEnv().MAIL_FROM, ...content });
+}
+
+const inFlight = new Set<Promise<void>>();
+
+/**
+ * Sends mail after the caller has answered, so how long SMTP takes (or whether there was anything
+ * to send at all) never shows in a response's timing. `deliver` may do its own database work
+ * first (issuing a token). A failure is logged; the person can ask again.
+ *
+ * @param what - Names the message in the log, e.g. "a password-reset link".
+ */
+export function sendMailInBackground(what: string, deliver: () => Promise<void>): void {
+  const task: Promise<void> = new Promise<void>((resolve) => setImmediate(resolve))
+    .then(deliver)
+    .catch((error: unknown) => console.error(`Sending ${what} failed:`, error))
+    .finally(() => inFlight.delete(task));
+  inFlight.add(task);
+}
+
+/** Resolves once every message handed to `sendMailInBackground` so far has been sent or has failed. */
+export async function settleBackgroundMail(): Promise<void> {
+  while (inFlight.size > 0) await Promise.all([...inFlight]);
 }
 
 /** An absolute link into the app, based on NEXTAUTH_URL (the public address of the app). */
@@ -74,6 +97,53 @@ export async function sendPasswordResetMail({ to, name, token, expiresAt }: Pass
   );
 }
 
+export interface SignUpConfirmationMail {
+  to: string;
+  name: string;
+  token: string;
+  expiresAt: Date;
+  /** Where to go once the account exists (a safe same-site path); omitted for the dashboard. */
+  callbackQuery: string;
+}
+
+export async function sendSignUpConfirmationMail({ to, name, token, expiresAt, callbackQuery }: SignUpConfirmationMail): Promise<void> {
+  const url = absoluteUrl(`/sign-up/confirm/${encodeURIComponent(token)}${callbackQuery}`);
+  await sendMail(
+    renderMail({
+      to,
+      subject: "Confirm your address to finish your Mooring account",
+      greeting: `Hello ${name},`,
+      paragraphs: [
+        `To finish creating your Mooring account, open this link and enter the password you chose. It expires ${describeExpiry(expiresAt)}.`,
+      ],
+      action: { label: "Finish creating the account", url },
+      footnote: "If you did not sign up for Mooring, ignore this message: no account is created without it.",
+    }),
+  );
+}
+
+export interface ExistingAccountMail {
+  to: string;
+  name: string;
+}
+
+/** Sent instead of a confirmation when someone signs up with an address that already has an account. */
+export async function sendExistingAccountMail({ to, name }: ExistingAccountMail): Promise<void> {
+  await sendMail(
+    renderMail({
+      to,
+      subject: "You already have a Mooring account",
+      greeting: `Hello ${name},`,
+      paragraphs: [
+        "Someone, perhaps you, tried to create a Mooring account with this address. It already has an account, so nothing was changed.",
+        "Sign in with your password, or ask for a sign-in link or a password reset on the sign-in page.",
+      ],
+      action: { label: "Sign in to Mooring", url: absoluteUrl("/sign-in") },
+      footnote: "If it was not you, you can ignore this message; your account is as it was.",
+    }),
+  );
+}
+
 export interface InvitationMail {
   to: string;
   groupName: string;
@@ -92,7 +162,7 @@ export async function sendInvitationMail({ to, groupName, inviterName, role, acc
       subject: `${inviterName} invited you to ${groupName} on Mooring`,
       greeting: "Hello,",
       paragraphs: [
-        `${inviterName} invited you to join “${groupName}” on Mooring as ${role === "owner" ? "an owner" : `an ${role}`}.`,
+        `${inviterName} invited you to join “${groupName}” on Mooring as ${withArticle(role)}.`,
         `Accept with the link below; it expires ${describeExpiry(expiresAt)}. If you have no account yet, you can create one on the way.`,
       ],
       action: { label: `Join ${groupName}`, url },
@@ -127,10 +197,10 @@ ${paragraphs.map((p) => `<p style="margin:0 0 16px;line-height:1.5">${escapeHtml
 
 function describeExpiry(expiresAt: Date): string {
   const minutes = Math.max(1, Math.round((expiresAt.getTime() - Date.now()) / 60_000));
-  if (minutes < 120) return `in ${minutes} minutes`;
+  if (minutes < 120) return `in ${countOf(minutes, "minute")}`;
   const hours = Math.round(minutes / 60);
-  if (hours < 48) return `in ${hours} hours`;
-  return `in ${Math.round(hours / 24)} days`;
+  if (hours < 48) return `in ${countOf(hours, "hour")}`;
+  return `in ${countOf(Math.round(hours / 24), "day")}`;
 }
 
 function escapeHtml(value: string): string {

@@ -7,6 +7,7 @@ import {
   refundRateLimitBucket,
 } from "@/db/queries/rate-limits";
 import { isDatabaseUnavailable } from "@/lib/errors";
+import { clientAddressHeader } from "@/scripts/lib/client-address.mjs";
 
 /**
  * Fixed-window rate limiting with its counters in PostgreSQL (table `rate_limit_buckets`), so
@@ -102,13 +103,20 @@ export async function resetRateLimits(prefix = ""): Promise<void> {
 }
 
 /**
- * The caller's address for rate limiting: the first `x-forwarded-for` entry, else `x-real-ip`,
- * else "unknown". Trust these headers only behind a proxy that sets them.
+ * The caller's address for rate limiting, as the app's own server (scripts/serve.mjs) resolved it
+ * from the socket and the trusted proxies (TRUSTED_PROXY_COUNT) into the `x-mooring-client-address`
+ * header, which it overwrites on every request. X-Forwarded-For and X-Real-IP are never read here:
+ * a client can set them. Without the header (another server, a script calling a handler) every
+ * caller shares the one bucket "unknown", which is stricter, never a way around the limit.
+ *
+ * @param source - A request, or headers as a Headers object or next-auth's plain header object.
  */
-export function clientAddress(request: Request): string {
-  const forwarded = request.headers.get("x-forwarded-for")?.split(",")[0]?.trim();
-  if (forwarded) return forwarded;
-  return request.headers.get("x-real-ip")?.trim() || "unknown";
+export function clientAddress(source: Request | Headers | Record<string, unknown> | undefined): string {
+  const value =
+    source instanceof Request ? source.headers.get(clientAddressHeader)
+    : source instanceof Headers ? source.get(clientAddressHeader)
+    : source?.[clientAddressHeader];
+  return typeof value === "string" && value.trim() ? value.trim().slice(0, 64) : "unknown";
 }
 
 function windowStartAt(now: number, windowMs: number): Date {

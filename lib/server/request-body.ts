@@ -1,5 +1,6 @@
 import "server-only";
 import { InvalidJsonError, PayloadTooLargeError, ValidationError, type FieldIssue } from "@/lib/errors";
+import { isStorableText, unstorableTextMessage } from "@/lib/storable-text";
 
 /**
  * Reads a request body into memory, counting bytes as they arrive: a body over `limitBytes` is
@@ -74,9 +75,6 @@ export function readQuery(request: Request): Record<string, string> {
   return query;
 }
 
-// NUL, and UTF-16 surrogates that are not part of a pair.
-const unstorable = /\u0000|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/;
-
 /**
  * Rejects (422, with the JSON path of each bad string) NUL characters and unpaired surrogates in
  * any string or object key of a parsed JSON value: JSON allows them, but PostgreSQL's text and
@@ -91,13 +89,13 @@ export function assertStorableText(value: unknown): void {
     const node = pending.pop() as PathNode;
     const current = node.value;
     if (typeof current === "string") {
-      if (unstorable.test(current)) issues.push({ path: pathOf(node), message: "Text may not contain NUL characters or unpaired UTF-16 surrogates." });
+      if (!isStorableText(current)) issues.push({ path: pathOf(node), message: unstorableTextMessage });
     } else if (Array.isArray(current)) {
       for (let index = current.length - 1; index >= 0; index -= 1) pending.push({ value: current[index], key: index, parent: node });
     } else if (current !== null && typeof current === "object") {
       for (const [key, item] of Object.entries(current).reverse()) {
         const child: PathNode = { value: item, key, parent: node };
-        if (unstorable.test(key)) {
+        if (!isStorableText(key)) {
           issues.push({ path: pathOf(child), message: "Keys may not contain NUL characters or unpaired UTF-16 surrogates." });
         } else {
           pending.push(child);

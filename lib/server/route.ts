@@ -1,7 +1,9 @@
 import "server-only";
 import type { z } from "zod";
 import type { Actor } from "@/db/queries/actor";
+import type { ApiTokenScope } from "@/db/schema";
 import { NotFoundError, UnauthenticatedError, isDatabaseUnavailable, toErrorResponse } from "@/lib/errors";
+import { authenticateApiToken, type Credential } from "@/lib/server/api-token";
 import { readJsonBody, readQuery } from "@/lib/server/request-body";
 import { getCurrentUser } from "@/lib/server/session";
 
@@ -10,6 +12,9 @@ const defaultBodyLimitBytes = 64 * 1024;
 
 /** How a route treats the caller's session. */
 type AuthMode = "required" | "optional";
+
+/** Methods that read; every other method needs a read and write token. */
+const readingMethods = new Set(["GET", "HEAD", "OPTIONS"]);
 
 /** Options of {@link route}: who may call it and how its input is read. */
 export interface RouteOptions<
@@ -22,6 +27,12 @@ export interface RouteOptions<
   params?: readonly TParam[];
   /** "required" (default): 401 without a signed-in user. "optional": the handler gets `actor: null`. */
   auth?: TAuth;
+  /**
+   * What an API token needs for this route: "read" (default for GET) or "write" (default for every
+   * other method; a read-only token is refused with 403). A POST that changes nothing, such as the
+   * stateless compute, says "read".
+   */
+  scope?: ApiTokenScope;
   /** Schema of the JSON body; without it the body is not read. */
   body?: TBody;
   /** Largest JSON body, counted as it streams in (default 64 KiB). */
@@ -32,7 +43,12 @@ export interface RouteOptions<
    * Checks run after the actor and params are known and before the body is read (rate limits, a
    * role check before an upload is accepted): a refused caller never gets to send a body.
    */
-  before?: (input: { request: Request; actor: TAuth extends "optional" ? Actor | null : Actor; params: Record<TParam, string> }) => Promise<void>;
+  before?: (input: {
+    request: Request;
+    actor: TAuth extends "optional" ? Actor | null : Actor;
+    credential: Credential | null;
+    params: Record<TParam, string>;
+  }) => Promise<void>;
   /**
    * With `auth: "optional"`: treat the caller as anonymous when the session cannot be checked (the
    * database is down) instead of answering 503; for routes that need no database themselves.
@@ -44,6 +60,8 @@ export interface RouteOptions<
 export interface RouteInput<TParams, TBody, TQuery, TActor> {
   request: Request;
   actor: TActor;
+  /** How the actor signed in (null for an anonymous caller). */
+  credential: Credential | null;
   params: TParams;
   body: TBody;
   query: TQuery;
@@ -53,11 +71,15 @@ type Parsed<T> = T extends z.ZodType ? z.output<T> : undefined;
 
 /**
  * The one wrapper of Mooring's route handlers. In order: the actor (401 when required and missing,
- * before anything else is read), the route params, the `before` checks, the query and the JSON body (read with a byte
- * count, 400 for malformed JSON, 413 past the limit, 422 with every zod issue at its JSON path),
+ * before anything else is read; from the cookie session, or from a personal API token in
+ * `Authorization: Bearer`, checked against the route's `scope`), the query string (422 for NUL
+ * characters or unpaired surrogates, on every route), the route params, the `before` checks, the
+ * query schema and the JSON body (read with a byte count, 400 for malformed JSON, 413 past the
+ * limit, 422 with every zod issue at its JSON path),
  * then the handler. Thrown errors become their status (lib/errors.ts `toErrorResponse`); anything
- * unexpected is logged and answered 500. Responses to signed-in callers are `private, no-store`
- * unless the handler sets Cache-Control itself.
+ * unexpected is logged and answered 500. Every response to a caller with a session (errors
+ * included, and whatever the handler set) is `Cache-Control: private, no-store`: it may hold
+ * what only that user may see, and no cache, shared or the browser's, should keep it.
  *
  * @example
  * export const GET = route({ params: ["thingId"] }, async ({ actor, params }) =>
@@ -78,26 +100,31 @@ export function route<
   return async (request, context) => {
     let actor: Actor | null = null;
     try {
-      actor = await resolveActor(request, options);
+      const caller = await resolveCaller(request, options);
+      actor = caller.actor;
+      const { credential } = caller;
       if (!actor && (options.auth ?? "required") === "required") throw new UnauthenticatedError();
+      // Every route refuses a query string the database could not store, whether it reads it or not.
+      const rawQuery = readQuery(request);
       const params = await readParams(context, options.params ?? []);
       const typedActor = actor as TAuth extends "optional" ? Actor | null : Actor;
-      await options.before?.({ request, actor: typedActor, params });
-      const query = options.query ? options.query.parse(readQuery(request)) : undefined;
+      await options.before?.({ request, actor: typedActor, credential, params });
+      const query = options.query ? options.query.parse(rawQuery) : undefined;
       const body = options.body
         ? options.body.parse(await readJsonBody(request, options.bodyLimitBytes ?? defaultBodyLimitBytes))
         : undefined;
       const response = await handler({
         request,
         actor: typedActor,
+        credential,
         params,
         body: body as Parsed<TBody>,
         query: query as Parsed<TQuery>,
       });
-      return actor ? withPrivateCaching(response) : response;
+      return actor || hasSessionCookie(request) ? withPrivateCaching(response) : response;
     } catch (error) {
       const response = toErrorResponse(error);
-      return actor ? withPrivateCaching(response) : response;
+      return actor || hasSessionCookie(request) ? withPrivateCaching(response) : response;
     }
   };
 }
@@ -117,19 +144,38 @@ async function readParams<TParam extends string>(
   return params;
 }
 
-/** The signed-in user, or null; see `anonymousWhenSessionUnavailable` for a database that is down. */
-async function resolveActor(request: Request, options: { anonymousWhenSessionUnavailable?: boolean }): Promise<Actor | null> {
+/**
+ * The caller: by API token when the request carries an Authorization header (its cookies are then
+ * ignored), else by cookie session, else anonymous. See `anonymousWhenSessionUnavailable` for a
+ * database that is down.
+ */
+async function resolveCaller(
+  request: Request,
+  options: { scope?: ApiTokenScope; anonymousWhenSessionUnavailable?: boolean },
+): Promise<{ actor: Actor | null; credential: Credential | null }> {
   try {
-    return await getCurrentUser();
+    const authorization = request.headers.get("authorization");
+    if (authorization !== null) {
+      const needs = options.scope ?? (readingMethods.has(request.method.toUpperCase()) ? "read" : "write");
+      const caller = await authenticateApiToken(request, authorization, needs);
+      return { actor: caller.actor, credential: { kind: "token", tokenId: caller.tokenId, scope: caller.scope } };
+    }
+    const actor = await getCurrentUser();
+    return { actor, credential: actor ? { kind: "session" } : null };
   } catch (error) {
     if (!options.anonymousWhenSessionUnavailable || !isDatabaseUnavailable(error)) throw error;
     console.error(`${request.method} ${new URL(request.url).pathname}: session lookup failed; treating the caller as anonymous`, error);
-    return null;
+    return { actor: null, credential: null };
   }
 }
 
-/** Marks a response to a signed-in caller as not cacheable by shared caches, unless it says otherwise. */
+/** Marks a response to a signed-in caller as cacheable by nobody. */
 function withPrivateCaching(response: Response): Response {
-  if (!response.headers.has("cache-control")) response.headers.set("cache-control", "private, no-store");
+  response.headers.set("cache-control", "private, no-store");
   return response;
+}
+
+/** True when the request carries a next-auth session cookie (plain, __Secure- or chunked). */
+function hasSessionCookie(request: Request): boolean {
+  return /(?:^|;\s*)(?:__Secure-)?next-auth\.session-token(?:\.\d+)?=/.test(request.headers.get("cookie") ?? "");
 }

@@ -82,6 +82,24 @@ export function formatPair(pair: readonly [string, string]): string {
   return `${pair[0]}\u2013${pair[1]}`;
 }
 
+/**
+ * Shows the engine's plain-text physics prose (notes, worldvolume lines, multiplets) with the
+ * symbols of the interface: alpha' M^2 as α′M², M sqrt(alpha') as M√α′, 1/sqrt(alpha') as 1/√α′
+ * and alpha' alone as α′. Exports keep the engine's text.
+ *
+ * @param text - Prose as the engine writes it.
+ * @returns The same prose with those symbols; other text unchanged.
+ * @example
+ * formatEngineProse("of mass M sqrt(alpha') = 0.5") // => "of mass M\u221a\u03b1\u2032 = 0.5"
+ */
+export function formatEngineProse(text: string): string {
+  return text
+    .replaceAll("alpha' M^2", "\u03b1\u2032M\u00b2")
+    .replaceAll("M sqrt(alpha')", "M\u221a\u03b1\u2032")
+    .replaceAll("sqrt(alpha')", "\u221a\u03b1\u2032")
+    .replaceAll("alpha'", "\u03b1\u2032");
+}
+
 const missing = "\u2014";
 
 function withTrueMinus(text: string): string {

@@ -10,8 +10,18 @@ export { compareStateCounts, isSurviving, log10OfStateCount } from "./state-coun
 export { pairKey } from "./pair-key";
 export { lightestBySector, lightestLevel, type SectorLightest } from "./lightest";
 export { isTachyonicState, tachyonicSectors, type TachyonicSector, type TachyonSource } from "./tachyons";
-export { summarizeResult, summaryFacts, type ResultSummary, type SummaryFacts } from "./summary";
-export { displaySignificantDigits, formatMassSquared, formatNumber, formatPair, type FormatNumberOptions } from "./format";
+export { summarizeResult, summaryFacts, type ResultSummary, type SummaryFacts, type SummaryWorldvolume } from "./summary";
+export { massInGeV } from "./gev";
+export { highestUnstretchedMassSquared, unstretchedMassSquared, unstretchedMassSquaredText } from "./mass-cap";
+export { formatWorldvolume, stringCreationSectors, worldvolumeKey } from "./worldvolumes";
+export {
+  displaySignificantDigits,
+  formatEngineProse,
+  formatMassSquared,
+  formatNumber,
+  formatPair,
+  type FormatNumberOptions,
+} from "./format";
 export {
   pageSectorOverviews,
   resultOverview,

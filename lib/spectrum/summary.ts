@@ -4,9 +4,10 @@
  *
  * Invalid-input policy: an unreadable lightest alpha' M^2 is stored as null; nothing throws.
  */
-import type { Configuration, LightestState, SpectrumResult } from "@/lib/boundary/types";
+import type { Configuration, LightestState, Sector, SpectrumResult, WorldvolumeTheory } from "@/lib/boundary/types";
 import { parseResultNumber } from "./result-number";
 import { tachyonicSectors, type TachyonicSector, type TachyonSource } from "./tachyons";
+import { stringCreationSectors, worldvolumeKey } from "./worldvolumes";
 
 /** The summary columns of a configuration's current result. */
 export interface ResultSummary {
@@ -47,8 +48,19 @@ export function summarizeResult(
   };
 }
 
-/** Tachyonic sectors listed in a summary at most; `tachyonCount` says how many there are. */
+/** Tachyonic sectors and worldvolumes listed in a summary at most; the counts say how many there are. */
 const listedTachyons = 50;
+const listedWorldvolumes = 50;
+
+/** One worldvolume as the summary shows it. */
+export interface SummaryWorldvolume {
+  /** `worldvolumeKey` of the worldvolume. */
+  key: string;
+  stacks: string[];
+  summary: string;
+  supersymmetry: string;
+  supercharges: number | null;
+}
 
 /** What the one summary component shows of a result. */
 export interface SummaryFacts {
@@ -62,20 +74,34 @@ export interface SummaryFacts {
   /** How many sectors are tachyonic in all. */
   tachyonCount: number;
   sectorCount: number;
+  /**
+   * The first worldvolumes, in result order; null when the result was stored before worldvolumes
+   * were recorded (its warnings say so).
+   */
+  worldvolumes: SummaryWorldvolume[] | null;
+  /** How many worldvolumes there are in all. */
+  worldvolumeCount: number;
+  /** Pairs whose supersymmetry needs a created string (nu = 8 across a common Dirichlet axis). */
+  stringCreation: Array<[string, string]>;
 }
 
 /**
  * The facts of the summary component, from a full result or an overview (lib/spectrum/overview.ts).
  *
- * @param result - Supercharges, BPS flag, gauge group, lightest states and sectors are read.
- * @returns The facts, with at most fifty tachyonic sectors listed (and their total count).
+ * @param result - Theory, supercharges, BPS flag, gauge group, worldvolumes, lightest states and sectors are read.
+ * @returns The facts, with at most fifty tachyonic sectors and fifty worldvolumes listed (and their
+ *   total counts), and the pairs that are supersymmetric only with a created string.
  * @example
  * summaryFacts(result).tachyonCount // => 1 for a D4-antiD4 pair below y_c
  */
 export function summaryFacts(
-  result: Pick<SpectrumResult, "supercharges" | "bps" | "gaugeGroup" | "lightest"> & { sectors: readonly TachyonSource[] },
+  result: Pick<SpectrumResult, "theory" | "supercharges" | "bps" | "gaugeGroup" | "lightest" | "worldvolumes"> & {
+    sectors: readonly (TachyonSource & Pick<Sector, "nu" | "dd">)[];
+  },
 ): SummaryFacts {
   const tachyons = tachyonicSectors(result);
+  // A result with sectors but no worldvolumes was stored before they were recorded.
+  const recorded = result.worldvolumes.length > 0 || result.sectors.length === 0;
   return {
     supercharges: result.supercharges,
     bps: result.bps,
@@ -84,5 +110,13 @@ export function summaryFacts(
     tachyons: tachyons.slice(0, listedTachyons),
     tachyonCount: tachyons.length,
     sectorCount: result.sectors.length,
+    worldvolumes: recorded ? result.worldvolumes.slice(0, listedWorldvolumes).map(summaryWorldvolume) : null,
+    worldvolumeCount: result.worldvolumes.length,
+    stringCreation: result.bps ? stringCreationSectors(result).map((sector) => sector.pair) : [],
   };
+}
+
+function summaryWorldvolume(worldvolume: WorldvolumeTheory): SummaryWorldvolume {
+  const { stacks, summary, supersymmetry, supercharges } = worldvolume;
+  return { key: worldvolumeKey(worldvolume), stacks, summary, supersymmetry, supercharges };
 }

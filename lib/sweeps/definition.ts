@@ -9,7 +9,7 @@
 import { configurationLimits, dimensionOf } from "../boundary";
 import type { Configuration } from "../boundary/types";
 import { dimensionSize, valueAt, valuesLength } from "./dimension";
-import type { SweepDefinition, SweepDimension, SweepValues } from "./types";
+import type { SweepDefinition, SweepValues } from "./types";
 
 /**
  * Limits of one sweep.

@@ -41,6 +41,11 @@ export const signUpSchema = z
   })
   .refine(passwordsMatch, mismatch);
 
+export const confirmSignUpSchema = z.object({
+  token: linkTokenSchema,
+  password: z.string({ error: "Enter the password you chose." }).min(1, "Enter the password you chose."),
+});
+
 export const signInSchema = z.object({
   email: emailSchema,
   password: z.string({ error: "Enter your password." }).min(1, "Enter your password."),

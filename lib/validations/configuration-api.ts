@@ -39,13 +39,19 @@ export const updateConfigurationBodySchema = z.object({
 });
 export type UpdateConfigurationBody = z.infer<typeof updateConfigurationBodySchema>;
 
-/** Body of `POST /api/configurations/[configurationId]/fork`. */
+/** Query of `GET /api/configurations/[configurationId]/export`: the format, and a revision other than the current one. */
+export const exportQuerySchema = z.object({
+  format: z.enum(["json", "csv", "tex"], { error: "Choose json, csv or tex." }),
+  revision: z.uuid({ error: "Not a valid revision id." }).optional(),
+});
+
 /** The dashboard's `?deleted=<id>&title=<title>` after a delete, which offers an undo. */
 export const deletedNoticeSchema = z.object({
   deleted: uuid,
   title: z.string().max(configurationTitleMaxLength).catch(""),
 });
 
+/** Body of `POST /api/configurations/[configurationId]/fork`. */
 export const forkConfigurationBodySchema = z.object({
   targetGroupId: uuid,
   revisionId: uuid.optional(),
@@ -64,3 +70,16 @@ export function parseIfMatch(header: string | null): number | null {
   const match = /^\s*(?:W\/)?"?(\d{1,9})"?\s*$/.exec(header);
   return match ? Number(match[1]) : Number.NaN;
 }
+
+/** Query of `GET /api/configurations/[configurationId]`: `include=result` adds the current revision's stored result. */
+export const readConfigurationQuerySchema = z.object({
+  include: z.enum(["result"], { error: 'include may only be "result".' }).optional(),
+});
+
+/** Query of `GET .../revisions/[revisionId]/result/sectors`: a page of sector overviews, filtered. */
+export const sectorPageQuerySchema = z.object({
+  offset: z.coerce.number({ error: "offset must be a whole number." }).int().min(0).max(1_000_000).default(0),
+  limit: z.coerce.number({ error: "limit must be a whole number." }).int().min(1).max(500).default(100),
+  search: z.string().trim().max(120).optional(),
+  tachyonic: z.enum(["true", "false"]).transform((value) => value === "true").optional(),
+});

@@ -15,7 +15,8 @@ import type { Configuration, Stack } from "@/lib/boundary/types";
  */
 export const configurationTitleMaxLength = 200;
 
-const stackSchema = z.object({
+/** The shape of one stack. */
+export const stackSchema = z.object({
   id: z.string({ error: "A stack id must be text." }),
   label: z.string({ error: "A label must be text." }).max(120, "Keep the label under 120 characters.").default(""),
   count: z.number({ error: "The count must be a number." }),
@@ -50,7 +51,9 @@ export const configurationShapeSchema = z.object({
   theory: z.enum(["bosonic", "IIA", "IIB"], { error: 'The theory must be "bosonic", "IIA" or "IIB".' }),
   dimension: z.number({ error: "The dimension must be a number." }).optional(),
   stringScaleGeV: z.number({ error: "The string scale must be a number of GeV or null." }).nullable().default(null),
-  levels: z.number({ error: "Levels must be a number." }),
+  levels: z
+    .number({ error: "The mass cap (levels: the highest alpha' M^2 listed at zero separation) must be a number." })
+    .describe("Mass cap, a whole number 0 to 200: every sector lists its states with alpha' M^2 <= levels at zero separation (N + a <= levels)."),
   stacks: z.array(stackSchema, { error: "Stacks must be a list." }),
 });
 
@@ -68,6 +71,16 @@ export const configurationSchema = configurationShapeSchema.superRefine((configu
   }
 }) satisfies z.ZodType<Configuration>;
 
-/** Body of `POST /api/spectrum`: the configuration document itself. */
-export const spectrumRequestSchema = configurationSchema;
+/**
+ * Body of `POST /api/spectrum`: the configuration document itself, checked for shape here; the
+ * physics rules (p parity, axis ranges, limits, unique ids) are checked by the engine as it
+ * computes, in the same pass, and answered with the same 422 and JSON paths.
+ */
+export const spectrumRequestSchema = configurationShapeSchema;
 
+
+/** Query of `POST /api/spectrum`: sectors from `sectorOffset` keep their level rows until `maxRows` rows. */
+export const spectrumQuerySchema = z.object({
+  sectorOffset: z.coerce.number({ error: "sectorOffset must be a whole number." }).int().min(0).max(1_000_000).default(0),
+  maxRows: z.coerce.number({ error: "maxRows must be a whole number." }).int().min(1).max(20_000).default(10_000),
+});

@@ -20,3 +20,9 @@ export type CreateGroupFormInput = z.infer<typeof createGroupSchema>;
 
 /** Body of `PATCH /api/groups/[groupId]/members/[userId]`. */
 export const changeRoleSchema = z.object({ role: groupRoleSchema });
+
+/** Query of `GET /api/groups/[groupId]/audit`: how many entries, and only those before a moment. */
+export const auditQuerySchema = z.object({
+  limit: z.coerce.number().int().min(1).max(200).default(100),
+  before: z.iso.datetime({ offset: true }).transform((value) => new Date(value)).optional(),
+});

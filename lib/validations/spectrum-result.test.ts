@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { computeSpectrum } from "@/lib/boundary";
 import { CONVENTIONS_TEXT } from "@/lib/boundary/constants";
 import type { Configuration } from "@/lib/boundary/types";
-import { readStoredResult, StoredResultError } from "./spectrum-result";
+import { conventionsBeforeMassCap, readStoredResult, StoredResultError } from "./spectrum-result";
 
 /**
  * A D0 separated from a D8 in IIA (nu = 8: the R ground state sits in one orientation, so its rows
@@ -66,14 +66,17 @@ describe("readStoredResult", () => {
       }
     });
 
-    it("states the conventions, which have not changed since the first engine (alpha' = 1)", () => {
-      expect(upgraded.conventions).toBe(CONVENTIONS_TEXT);
+    it("states the conventions of the engines that stored none (alpha' = 1, levels cut by oscillator level)", () => {
+      expect(upgraded.conventions).toBe(conventionsBeforeMassCap);
+      expect(upgraded.conventions).not.toBe(CONVENTIONS_TEXT);
     });
 
     it("warns that supersymmetry and massless content were not recorded instead of presenting the defaults as physics", () => {
       expect(upgraded.warnings).toEqual([
         "Stored by engine 0.9.0, which did not record which sectors are supersymmetric or the massless content of each sector; " +
           "save the configuration again to recompute the result with the current engine.",
+        "Stored by engine 0.9.0, which listed every sector up to the oscillator level N = levels rather than up to the same alpha' M^2, " +
+          "so NS and R rows may stop at different masses; save the configuration again to cut them at one mass.",
       ]);
     });
 
@@ -82,6 +85,45 @@ describe("readStoredResult", () => {
       expect(upgraded.sectors.map((sector) => sector.levels)).toEqual(current.sectors.map((sector) => sector.levels));
       expect(upgraded.lightest).toEqual(current.lightest);
       expect(upgraded.gaugeGroup).toBe(current.gaugeGroup);
+    });
+  });
+
+  describe("a result of engine 1.0.1 (before the mass cap and the worldvolumes)", () => {
+    /** What 1.0.1 stored: no worldvolumes and no multiplets. */
+    function engine101Result(): Record<string, unknown> {
+      const result = stored();
+      delete result.worldvolumes;
+      for (const sector of result.sectors as Array<Record<string, unknown>>) delete sector.multiplet;
+      return { ...result, engineVersion: "1.0.1" };
+    }
+    const upgraded = readStoredResult(engine101Result());
+
+    it("fills the new fields with defaults that claim nothing: no worldvolumes and no multiplets", () => {
+      expect(upgraded.worldvolumes).toEqual([]);
+      for (const sector of upgraded.sectors) expect(sector.multiplet).toBeNull();
+    });
+
+    it("says what was not recorded and that its levels were cut by oscillator level, not by mass", () => {
+      // The fixture is IIA D0 and D8 along x9 (nu = 8): no separated identical stacks, so no multiplet is missing.
+      expect(upgraded.warnings.filter((warning) => warning.startsWith("Stored by engine"))).toEqual([
+        "Stored by engine 1.0.1, which did not record " +
+          "the theory on each worldvolume (gauge and flavour groups, light matter and supersymmetry); " +
+          "save the configuration again to recompute the result with the current engine.",
+        "Stored by engine 1.0.1, which listed every sector up to the oscillator level N = levels rather than up to the same alpha' M^2, " +
+          "so NS and R rows may stop at different masses; save the configuration again to cut them at one mass.",
+      ]);
+    });
+
+    it("keeps the conventions it stored", () => {
+      expect(upgraded.conventions).toBe(CONVENTIONS_TEXT);
+    });
+
+    it("names the missing W-boson multiplets only where separated stacks of one worldvolume could have one", () => {
+      const result = engine101Result();
+      const sectors = result.sectors as Array<Record<string, unknown>>;
+      sectors[0] = { ...sectors[0], nu: 0, separation: 1.5 };
+      const upgrade = readStoredResult(result).warnings.find((warning) => warning.startsWith("Stored by engine"));
+      expect(upgrade).toContain("the W-boson multiplets of separated stacks");
     });
   });
 

@@ -1,12 +1,13 @@
 import { z } from "zod";
-import { CONVENTIONS_TEXT } from "@/lib/boundary/constants";
 import type {
   AxisExpansion,
   LevelRow,
   LightestState,
   MasslessContent,
   Sector,
+  SectorMultiplet,
   SpectrumResult,
+  WorldvolumeTheory,
   ZeroPoint,
 } from "@/lib/boundary/types";
 import { parseExactRational, parseResultNumber } from "@/lib/spectrum";
@@ -64,13 +65,23 @@ const masslessSchema = z.object({
   withChanPaton: countText.optional(),
 }) satisfies z.ZodType<MasslessContent>;
 
+const multipletSchema = z.object({
+  name: z.string(),
+  dimension: z.number().int(),
+  content: z.string(),
+  states: countText,
+  massSquared: z.string(),
+  mass: z.number(),
+}) satisfies z.ZodType<SectorMultiplet>;
+
 /** Sector fields a result of an older engine may lack. */
-type UpgradedSectorField = "supersymmetric" | "massless" | "notes";
+type UpgradedSectorField = "supersymmetric" | "massless" | "notes" | "multiplet";
 
 /** A sector as stored by any engine version. */
 type StoredSector = Omit<Sector, UpgradedSectorField> & Partial<Pick<Sector, UpgradedSectorField>>;
 
-const storedSectorSchema = z.object({
+/** A sector as stored by any engine version (also the sector shape of the API reference). */
+export const storedSectorSchema = z.object({
   pair: z.tuple([z.string(), z.string()]),
   nn: z.number().int(),
   dd: z.number().int(),
@@ -84,6 +95,7 @@ const storedSectorSchema = z.object({
   axes: z.array(axisSchema),
   levels: z.array(levelRowSchema).superRefine(checkRowTexts),
   massless: z.array(masslessSchema).optional(),
+  multiplet: multipletSchema.nullable().optional(),
   notes: z.array(z.string()).optional(),
 }) satisfies z.ZodType<StoredSector>;
 
@@ -97,19 +109,46 @@ const lightestSchema = z.object({
   withChanPaton: z.string(),
 }) satisfies z.ZodType<LightestState>;
 
+const worldvolumeGroupSchema = z.object({ stacks: z.array(z.string()), group: z.string(), dimension: z.number().int() });
+
+const worldvolumeSchema = z.object({
+  stacks: z.array(z.string()),
+  worldvolume: z.array(z.number().int()),
+  dimension: z.number().int(),
+  gaugeGroup: z.string(),
+  content: z.string(),
+  flavour: z.array(worldvolumeGroupSchema),
+  matter: z.array(
+    z.object({
+      stacks: z.array(z.string()),
+      nu: z.number().int(),
+      role: z.enum(["flavour", "gauge"]),
+      description: z.string(),
+      massSquared: z.string(),
+    }),
+  ),
+  defects: z.array(z.object({ stacks: z.array(z.string()), dimension: z.number().int() })),
+  supercharges: z.number().int().nullable(),
+  chirality: z.object({ positive: z.number().int(), negative: z.number().int() }).nullable(),
+  supersymmetry: z.string(),
+  summary: z.string(),
+}) satisfies z.ZodType<WorldvolumeTheory>;
+
 /** Result fields a result of an older engine may lack. */
-type UpgradedResultField = "warnings" | "conventions";
+type UpgradedResultField = "warnings" | "conventions" | "worldvolumes";
 
 /** A spectrum result as stored by any engine version. */
 export type StoredSpectrumResult = Omit<SpectrumResult, UpgradedResultField | "sectors"> &
   Partial<Pick<SpectrumResult, UpgradedResultField>> & { sectors: StoredSector[] };
 
-const storedResultShape = z.object({
+/** A result as stored by any engine version, before the upgrade step (also the result shape of the API reference). */
+export const storedResultShape = z.object({
   engineVersion: z.string().min(1, "A stored result names the engine version that computed it."),
   theory: z.enum(["bosonic", "IIA", "IIB"]),
   dimension: z.number().int(),
   warnings: z.array(z.string()).optional(),
   gaugeGroup: z.string(),
+  worldvolumes: z.array(worldvolumeSchema).optional(),
   supercharges: z.number().int().nullable(),
   bps: z.boolean(),
   sectors: z.array(storedSectorSchema),
@@ -121,7 +160,7 @@ const storedResultShape = z.object({
  * A stored spectrum result of any engine version, checked and upgraded to the current shape.
  *
  * @example
- * storedSpectrumResultSchema.parse(resultStoredWithoutConventions).conventions // => CONVENTIONS_TEXT
+ * storedSpectrumResultSchema.parse(resultStoredWithoutConventions).conventions // => conventionsBeforeMassCap
  */
 export const storedSpectrumResultSchema = storedResultShape.transform(upgradeStoredResult) satisfies z.ZodType<SpectrumResult>;
 
@@ -157,24 +196,55 @@ export function readStoredResult(json: unknown): SpectrumResult {
 }
 
 /**
- * The upgrade step: missing lists become empty, missing conventions the engine's statement
- * (unchanged since the first version: alpha' = 1), and a sector without a supersymmetry flag
- * reads as not supersymmetric. Where a default hides physics the old engine did not record, a
- * warning names it, so that no screen presents a default as a computed result.
+ * The conventions statement of engines before 1.1.0, the default of a result stored without one:
+ * those engines listed each sector up to oscillator level N = levels, which the current
+ * `CONVENTIONS_TEXT` (a mass cap for every sector) would misstate.
+ *
+ * @example
+ * conventionsBeforeMassCap.startsWith("Conventions: alpha' = 1") // => true
+ */
+export const conventionsBeforeMassCap =
+  "Conventions: alpha' = 1; lengths (positions and separations y) are in units of sqrt(alpha'), " +
+  "the string length. Masses are given as alpha' M^2 = (y / 2 pi)^2 + N + a, where N is the " +
+  "oscillator level (integer or half-integer) and a the zero-point energy of the sector, from " +
+  "zeta(-1) = -1/12 and zeta(-1, 1/2) = 1/24 (bosonic: a = -(D - 2)/24 + nu/16; NS: a = -1/2 + nu/8; " +
+  "R: a = 0, with nu the number of ND/DN axes), and as M sqrt(alpha'). Degeneracies count " +
+  "light-cone oscillator states after the GSO projection, per oriented string and per Chan-Paton " +
+  "label. Continuous momentum along the common Neumann directions is not included. " +
+  "Caution: these are machine-computed results; anyone publishing them should check them independently.";
+
+/** The engine version from which `levels` is a mass cap, N + a <= levels, in every sector. */
+const massCapVersion = [1, 1, 0] as const;
+
+/**
+ * The upgrade step: missing lists become empty, missing conventions the statement of the engines
+ * that did not store one (`conventionsBeforeMassCap`), a sector without a supersymmetry flag reads
+ * as not supersymmetric, a sector without a multiplet as having none, and a result without
+ * worldvolumes as listing none. Where a default hides
+ * physics the old engine did not record, a warning names it, so that no screen presents a default
+ * as a computed result; a result of an engine before 1.1.0 also says that its sectors were cut by
+ * oscillator level rather than by mass.
  */
 function upgradeStoredResult(stored: StoredSpectrumResult): SpectrumResult {
   const unrecorded = new Set<string>();
   const sectors = stored.sectors.map((sector): Sector => {
     if (sector.supersymmetric === undefined && stored.theory !== "bosonic") unrecorded.add("which sectors are supersymmetric");
     if (sector.massless === undefined) unrecorded.add("the massless content of each sector");
+    // Only separated stacks with the same worldvolume can have a multiplet to name.
+    if (sector.multiplet === undefined && sector.nu === 0 && sector.separation > 0) unrecorded.add("the W-boson multiplets of separated stacks");
     return {
       ...sector,
       // The bosonic string has no supersymmetry, so its default is not a guess.
       supersymmetric: sector.supersymmetric ?? false,
       massless: sector.massless ?? [],
+      multiplet: sector.multiplet ?? null,
       notes: sector.notes ?? [],
     };
   });
+  // With no stacks there is no worldvolume, so the default is exact.
+  if (stored.worldvolumes === undefined && sectors.length > 0) {
+    unrecorded.add("the theory on each worldvolume (gauge and flavour groups, light matter and supersymmetry)");
+  }
   const warnings = [...(stored.warnings ?? [])];
   if (unrecorded.size > 0) {
     warnings.push(
@@ -182,7 +252,30 @@ function upgradeStoredResult(stored: StoredSpectrumResult): SpectrumResult {
         "save the configuration again to recompute the result with the current engine.",
     );
   }
-  return { ...stored, warnings, sectors, conventions: stored.conventions ?? CONVENTIONS_TEXT };
+  if (isVersionBefore(stored.engineVersion, massCapVersion) && sectors.length > 0) {
+    warnings.push(
+      `Stored by engine ${stored.engineVersion}, which listed every sector up to the oscillator level N = levels rather than ` +
+        "up to the same alpha' M^2, so NS and R rows may stop at different masses; save the configuration again to cut them at one mass.",
+    );
+  }
+  return {
+    ...stored,
+    warnings,
+    sectors,
+    worldvolumes: stored.worldvolumes ?? [],
+    conventions: stored.conventions ?? conventionsBeforeMassCap,
+  };
+}
+
+/** Whether a "major.minor.patch" version is older than `reference`; text of another form is not. */
+function isVersionBefore(version: string, reference: readonly [number, number, number]): boolean {
+  const match = /^(\d+)\.(\d+)\.(\d+)/.exec(version);
+  if (!match) return false;
+  for (let index = 0; index < 3; index += 1) {
+    const part = Number(match[index + 1]);
+    if (part !== reference[index]) return part < (reference[index] as number);
+  }
+  return false;
 }
 
 /** Adds an issue at each level, alpha' M^2 or count text of the rows that cannot be read. */

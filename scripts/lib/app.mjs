@@ -1,6 +1,7 @@
 // Steps on the application shared by `npm start` and `npm test`: migrate, seed, build, serve, mail.
 import { existsSync, mkdirSync } from "node:fs";
 import path from "node:path";
+import { isPortInUse } from "./net.mjs";
 import { bin, runStep, startService, waitForHttp } from "./processes.mjs";
 import { repoRoot } from "./postgres.mjs";
 import { hasNpmScript } from "./setup.mjs";
@@ -73,11 +74,14 @@ export async function clearMailbox(mailboxUrl) {
 }
 
 /**
- * Starts `next start` on 127.0.0.1:port from the build in `.next` (or NEXT_DIST_DIR), pushes its
- * handle on `services`, and waits until it answers.
+ * Serves the build in `.next` (or NEXT_DIST_DIR) on 127.0.0.1:port through scripts/serve.mjs (the
+ * custom server that resolves client addresses), pushes its handle on `services`, and waits until
+ * it answers.
  */
 export async function startApp({ port, env, services, inherit = false }) {
-  const handle = startService("app", bin("next"), ["start", "-H", "127.0.0.1", "-p", String(port)], {
+  // Something else answering there would pass the readiness check below in our server's place.
+  if (await isPortInUse(Number(port))) throw new Error(`port ${port} on 127.0.0.1 is already in use; the app was not started`);
+  const handle = startService("app", process.execPath, [path.join(repoRoot, "scripts", "serve.mjs"), "-H", "127.0.0.1", "-p", String(port)], {
     env: { ...env, NODE_ENV: "production" },
     inherit,
   });

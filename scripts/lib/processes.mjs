@@ -1,5 +1,5 @@
 // Child processes for `npm start` and `npm test`: steps that run to completion, and services
-// (maildev, next start) that run in their own process group so they can be stopped as a whole.
+// (maildev, the app server) that run in their own process group so they can be stopped as a whole.
 import { spawn } from "node:child_process";
 import path from "node:path";
 import { repoRoot } from "./postgres.mjs";

@@ -1,18 +1,27 @@
-import { expect, test } from "@playwright/test";
-import { demoAccounts, newAccount, signIn, signInTimeout, signOut, signUp, submitSignUpForm } from "./helpers/accounts";
+import { expect, test, type Page } from "@playwright/test";
+import { confirmSignUpFromMailbox, demoAccounts, newAccount, signIn, signInTimeout, signOut, signUp, submitSignUpForm } from "./helpers/accounts";
 import { extractFirstLink, waitForMessageTo } from "./helpers/mailbox";
+
+/** The page was sent to sign in and shows no signed-in account. */
+async function expectSignedOut(page: Page): Promise<void> {
+  await expect(page).toHaveURL(/\/sign-in(\?|$)/);
+  await expect(page.getByRole("heading", { name: "Sign in to Mooring" })).toBeVisible();
+  await expect(page.getByRole("button", { name: /^Account:/ })).toHaveCount(0);
+}
 
 test.describe("sign-up", () => {
   test("creates an account and opens its dashboard", async ({ page }) => {
     const account = newAccount("signup");
     await signUp(page, account);
-    await expect(page.getByRole("heading", { level: 1 })).toContainText("Welcome back");
+    // A new account is welcomed, not welcomed back.
+    await expect(page.getByRole("heading", { level: 1 })).toContainText(`Welcome to Mooring, ${account.name.split(" ")[0]}`);
     await expect(page.getByRole("heading", { name: "My configurations" })).toBeVisible();
     await expect(page.getByText("No configurations yet")).toBeVisible();
     await expect(page.getByRole("link", { name: "My space" })).toBeVisible();
   });
 
-  test("answers a taken e-mail on the e-mail field and keeps what was typed", async ({ page }) => {
+  test("answers a taken address like a new one and mails its owner instead of creating anything", async ({ page }) => {
+    const startedAt = new Date(Date.now() - 1_000);
     await page.goto("/sign-up");
     await page.getByLabel("Name").fill("Second Ada");
     await page.getByLabel("E-mail").fill("  ADA@mooring.test ");
@@ -20,12 +29,14 @@ test.describe("sign-up", () => {
     await page.getByLabel("Repeat the password").fill("another-password-9");
     await page.getByRole("button", { name: "Create account" }).click();
 
-    const email = page.getByLabel("E-mail");
-    await expect(email).toHaveAttribute("aria-invalid", "true", { timeout: signInTimeout });
-    await expect(page.locator("#email-error")).toHaveText("An account with this e-mail already exists.");
-    await expect(email).toHaveAttribute("aria-describedby", /email-error/);
-    await expect(page.getByLabel("Name")).toHaveValue("Second Ada");
-    await expect(page).toHaveURL(/\/sign-up$/);
+    // The same answer a new address gets: nothing tells that the address has an account.
+    await expect(page.getByRole("status").filter({ hasText: "Check your inbox" })).toContainText("We've sent a message to ada@mooring.test.", {
+      timeout: signInTimeout,
+    });
+    const notice = await waitForMessageTo(demoAccounts.ada.email, { after: startedAt, subjectIncludes: "You already have a Mooring account" });
+    expect(extractFirstLink(notice)).toMatch(/\/sign-in$/);
+    // Ada's own password still works; the attempt changed nothing.
+    await signIn(page, demoAccounts.ada);
   });
 
   test("checks the fields before anything is written", async ({ page }) => {
@@ -82,8 +93,57 @@ test.describe("sign-in and sign-out", () => {
     await page.getByRole("link", { name: "Create one" }).click();
     await expect(page).toHaveURL(/\/sign-up\?callbackUrl=%2Faccount$/);
     await submitSignUpForm(page, account);
+    await confirmSignUpFromMailbox(page, account);
     await expect(page).toHaveURL(/\/account$/, { timeout: signInTimeout });
     await expect(page.getByText(account.email)).toBeVisible();
+  });
+
+  test("a callback that points off-site, or holds control characters, stays on Mooring", async ({ page, baseURL }) => {
+    const origin = new URL(baseURL ?? "http://127.0.0.1:3100").origin;
+    // A tab, which the browser drops ("//evil.example"), and a CR LF that once broke the redirect header.
+    for (const callback of ["/\t/evil.example", "/\r\n/evil.example", "/.//evil.example"]) {
+      const opened = await page.goto(`/sign-in?callbackUrl=${encodeURIComponent(callback)}`);
+      expect(opened?.status()).toBe(200);
+      await expect(page.getByRole("link", { name: "Create one" })).toHaveAttribute("href", "/sign-up");
+    }
+    await page.getByLabel("E-mail").fill(demoAccounts.cora.email);
+    await page.getByLabel("Password").fill(demoAccounts.cora.password);
+    await page.getByRole("button", { name: "Sign in", exact: true }).click();
+    await expect(page).toHaveURL(`${origin}/dashboard`, { timeout: signInTimeout });
+    // Signed in, the sign-in page redirects at once: to the dashboard, not to the other site, and not a 500.
+    const again = await page.goto(`/sign-in?callbackUrl=${encodeURIComponent("/\n/evil.example")}`);
+    expect(again?.status()).toBe(200);
+    expect(page.url()).toBe(`${origin}/dashboard`);
+  });
+
+  test("a copied session cookie stops working once that session signs out", async ({ page, browser }) => {
+    await signIn(page, demoAccounts.ben);
+    const copied = await page.context().cookies();
+    await signOut(page);
+
+    const thief = await browser.newContext();
+    await thief.addCookies(copied);
+    const stolen = await thief.newPage();
+    // The token itself is still validly signed; the server refuses the session it names.
+    await stolen.goto("/dashboard");
+    await expectSignedOut(stolen);
+    await thief.close();
+  });
+
+  test("signing out of all devices ends the sessions in other browsers too", async ({ page, browser }) => {
+    test.slow();
+    const account = newAccount("everywhere");
+    await signUp(page, account);
+    const otherContext = await browser.newContext();
+    const other = await otherContext.newPage();
+    await signIn(other, account);
+
+    await page.goto("/account");
+    await page.getByRole("button", { name: "Sign out of all devices" }).click();
+    await expect(page).toHaveURL(/\/sign-in\?signedOut=1/, { timeout: signInTimeout });
+    await other.goto("/account");
+    await expectSignedOut(other);
+    await otherContext.close();
   });
 });
 

@@ -1,32 +1,17 @@
-import { expect, test, type Locator, type Page } from "@playwright/test";
+import { expect, test, type Locator } from "@playwright/test";
 import { computeSpectrum } from "@/lib/boundary";
 import type { Configuration } from "@/lib/boundary/types";
-import { formatMassSquared, parseResultNumber } from "@/lib/spectrum";
+import { formatEngineProse, formatMassSquared, parseResultNumber } from "@/lib/spectrum";
+import { slabAndPoint } from "../fixtures/slab-and-point";
 import { demoAccounts, signIn } from "./helpers/accounts";
+import { createInGroup, unique } from "./helpers/configurations";
+import { openDesigner, saveWithMessage } from "./helpers/designer";
 
 // The designer end to end: Konva draws to a <canvas>, so every assertion goes through the
 // boundary grid, the live preview and the results tables, which mirror the model.
 
-const groupSlug = "brane-engineering";
-
 /** A small IIA document of our own: a D4 and a D0 above it. */
-function twoStackDocument(title: string): Configuration {
-  return {
-    format: 1,
-    title,
-    theory: "IIA",
-    stringScaleGeV: null,
-    levels: 3,
-    stacks: [
-      { id: "a", label: "slab", count: 1, anti: false, worldvolume: [1, 2, 3, 4], position: {} },
-      { id: "b", label: "point", count: 1, anti: false, worldvolume: [], position: { "9": 1.5 } },
-    ],
-  };
-}
-
-function unique(label: string): string {
-  return `${label} ${Date.now().toString(36)}${Math.random().toString(36).slice(2, 6)}`;
-}
+const twoStackDocument = slabAndPoint;
 
 /** True when the Konva stage inside the canvas frame has the frame's current size in CSS pixels. */
 async function stageMatchesFrame(canvas: Locator): Promise<boolean> {
@@ -35,30 +20,6 @@ async function stageMatchesFrame(canvas: Locator): Promise<boolean> {
     const box = frame.getBoundingClientRect();
     return stage !== null && stage.style.width === `${Math.floor(box.width)}px` && stage.style.height === `${Math.floor(box.height)}px`;
   });
-}
-
-/** Creates a configuration in the shared demo group through the API; returns its id. */
-async function createInGroup(page: Page, document: Configuration): Promise<string> {
-  const groups = (await (await page.request.get("/api/groups")).json()) as Array<{ id: string; slug: string }>;
-  const group = groups.find((g) => g.slug === groupSlug);
-  expect(group).toBeDefined();
-  const response = await page.request.post("/api/configurations", { data: { groupId: group?.id, document, message: "Created by the test" } });
-  expect(response.status()).toBe(201);
-  return ((await response.json()) as { id: string }).id;
-}
-
-async function openDesigner(page: Page, id: string): Promise<void> {
-  await page.goto(`/configurations/${id}`);
-  // The first visit of a route may compile it on a development server: allow for that.
-  await expect(page.getByRole("application", { name: /Canvas showing/ })).toBeVisible({ timeout: 30_000 });
-  await expect(page.getByTestId("save-state")).toHaveText("All changes saved");
-}
-
-async function saveWithMessage(page: Page, message: string): Promise<void> {
-  await page.getByRole("button", { name: "Save", exact: true }).click();
-  const dialog = page.getByRole("dialog", { name: "Save a revision" });
-  await dialog.getByLabel("What changed?").fill(message);
-  await dialog.getByRole("button", { name: "Save revision" }).click();
 }
 
 test.describe("designer", () => {
@@ -210,6 +171,13 @@ test.describe("designer", () => {
       await expect(cells.nth(6)).toHaveText(state.withChanPaton);
     }
     await expect(page.getByTestId("spectrum-supersymmetry")).toHaveText(`${expected.supercharges} supercharges`);
+    // The theory on each worldvolume, as the engine describes it.
+    const worldvolumes = page.getByTestId("spectrum-worldvolumes").getByRole("listitem");
+    await expect(worldvolumes).toHaveCount(expected.worldvolumes.length);
+    for (const [i, worldvolume] of expected.worldvolumes.entries()) {
+      await expect(worldvolumes.nth(i)).toContainText(formatEngineProse(worldvolume.summary));
+      await expect(worldvolumes.nth(i)).toContainText(worldvolume.supersymmetry);
+    }
     const tachyonic = expected.sectors.filter((s) => s.tachyonic).length;
     await expect(page.getByTestId("spectrum-stability")).toHaveText(tachyonic === 0 ? "No tachyons" : new RegExp(`^${tachyonic} tachyonic sector`));
 
@@ -221,56 +189,6 @@ test.describe("designer", () => {
     const minimum = [...lightestAc.levels].sort((x, y) => parseResultNumber(x.massSquared) - parseResultNumber(y.massSquared))[0]!;
     await expect(firstRow.getByRole("cell").nth(2)).toContainText(formatMassSquared(minimum.massSquared));
     await expect(page.getByText(/Caution/).first()).toBeVisible();
-  });
-
-  test("a collaborator forks a saved configuration into their own space", async ({ page, browser }) => {
-    await signIn(page, demoAccounts.ada);
-    const title = unique("Fork source");
-    const id = await createInGroup(page, twoStackDocument(title));
-
-    const benContext = await browser.newContext();
-    const ben = await benContext.newPage();
-    await signIn(ben, demoAccounts.ben);
-    await openDesigner(ben, id);
-    await ben.getByRole("button", { name: "Fork", exact: true }).click();
-    const dialog = ben.getByRole("dialog", { name: "Fork this configuration" });
-    const personal = await dialog.locator("option", { hasText: "(personal)" }).getAttribute("value");
-    await dialog.getByLabel("Space").selectOption(personal ?? "");
-    await dialog.getByRole("button", { name: "Fork", exact: true }).click();
-    const forkedFrom = ben.getByTestId("forked-from");
-    await expect(forkedFrom).toContainText(`forked from ${title} (revision 1)`, { timeout: 30_000 });
-    await expect(ben).toHaveURL(/\/configurations\/[0-9a-f-]{36}$/);
-    expect(new URL(ben.url()).pathname).not.toBe(`/configurations/${id}`);
-    await expect(forkedFrom.getByRole("link")).toHaveAttribute("href", `/configurations/${id}`);
-    await expect(ben.getByText("Personal space")).toBeVisible();
-    await benContext.close();
-  });
-
-  test("a stale save shows the conflict dialog and can reload the latest version", async ({ page, browser }) => {
-    await signIn(page, demoAccounts.ada);
-    const id = await createInGroup(page, twoStackDocument(unique("Conflict")));
-    await openDesigner(page, id);
-
-    const benContext = await browser.newContext();
-    const ben = await benContext.newPage();
-    await signIn(ben, demoAccounts.ben);
-    await openDesigner(ben, id);
-    await ben.getByLabel("Number of branes N in stack a").fill("3");
-    await saveWithMessage(ben, "Three slabs");
-    await expect(ben.getByTestId("saved-version")).toHaveText("version 2");
-
-    await page.getByLabel("Label of stack b").fill("ada's point");
-    await saveWithMessage(page, "Renamed the point");
-    const conflict = page.getByRole("dialog", { name: "Someone saved a newer version" });
-    await expect(conflict).toBeVisible();
-    await expect(conflict).toContainText("You edited version 1, but version 2 is now stored");
-    await expect(conflict.getByRole("button", { name: "Save as fork" })).toBeVisible();
-    await conflict.getByRole("button", { name: /Reload latest/ }).click();
-    await expect(conflict).toBeHidden();
-    await expect(page.getByLabel("Number of branes N in stack a")).toHaveValue("3");
-    await expect(page.getByLabel("Label of stack b")).toHaveValue("point");
-    await expect(page.getByTestId("saved-version")).toHaveText("version 2");
-    await benContext.close();
   });
 
   test("the whole edit-and-save flow works by keyboard through the grid", async ({ page }) => {

@@ -77,4 +77,15 @@ test.describe("security in the browser", () => {
     });
     expect(own.status()).toBe(422);
   });
+
+  test("the running app refuses a cross-site server action with 403 instead of failing with a 500", async ({ page }) => {
+    for (const path of ["/sign-up", "/account"]) {
+      const forged = await page.request.post(path, {
+        headers: { "next-action": "7f".repeat(21), origin: "https://evil.example", "sec-fetch-site": "cross-site", "content-type": "text/plain;charset=UTF-8" },
+        data: "[]",
+      });
+      expect({ path, status: forged.status() }).toEqual({ path, status: 403 });
+      expect(((await forged.json()) as { error: string }).error).toBe("cross_site_request");
+    }
+  });
 });

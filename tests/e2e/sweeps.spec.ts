@@ -2,7 +2,7 @@ import { expect, test } from "@playwright/test";
 import { computeSweepPoint, pointDocument, pointVerdict, type SweepDefinition } from "@/lib/sweeps";
 import { braneAntibraneAtOrigin } from "@/lib/sweeps/test-configurations";
 import { demoAccounts, signIn } from "./helpers/accounts";
-import { createInDemoGroup } from "./helpers/configurations";
+import { createInGroup } from "./helpers/configurations";
 
 // A sweep end to end: define it on a saved configuration, start it, watch the worker that
 // scripts/test.mjs runs against the e2e database store its points, read the table and the map,
@@ -16,7 +16,7 @@ test.describe("sweeps", () => {
     const title = `Pull apart ${Date.now().toString(36)}`;
     // A D4 and an anti-D4, both at the origin, to be pulled apart along x9.
     const base = { ...braneAntibraneAtOrigin, title };
-    const id = await createInDemoGroup(page, base);
+    const id = await createInGroup(page, base);
 
     await page.goto(`/configurations/${id}/sweeps`);
     await expect(page.getByText("No sweeps yet")).toBeVisible({ timeout: 30_000 });

@@ -1,8 +1,12 @@
 import type { User } from "next-auth";
 import type { CredentialsConfig } from "next-auth/providers/credentials";
+import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
+import { db } from "@/db/index";
+import { sessions } from "@/db/schema";
 import { issueSignInLinkToken } from "@/db/queries/users";
 import { authOptions } from "@/lib/server/auth";
+import { clientAddressHeader } from "@/scripts/lib/client-address.mjs";
 import { createTestUser } from "@/tests/fixtures/users";
 
 type Authorize = (credentials: Record<string, string>) => Promise<User | null>;
@@ -15,7 +19,7 @@ function authorizeOf(id: "password" | "email-link"): Authorize {
   const authorize = provider?.options?.authorize;
   if (!authorize) throw new Error(`no credentials provider "${id}"`);
   // next-auth passes the request's headers; one documentation address stands in for the client.
-  return (credentials) => authorize(credentials, { headers: { "x-forwarded-for": "203.0.113.7" } });
+  return (credentials) => authorize(credentials, { headers: { [clientAddressHeader]: "203.0.113.7" } });
 }
 
 describe("password provider", () => {
@@ -59,23 +63,28 @@ describe("email-link provider", () => {
 });
 
 describe("session callbacks", () => {
-  it("carry id and site role from the signed-in user into the token and the session", async () => {
+  it("carry id, site role and a new session's id from the signed-in user into the token and the session", async () => {
     const jwt = authOptions.callbacks?.jwt;
     const session = authOptions.callbacks?.session;
     if (!jwt || !session) throw new Error("lib/server/auth.ts must define the jwt and session callbacks");
-    const user = { id: "5f0c6a53-8a4e-4f8e-9b1e-0d7f3b1c2a10", name: "Ada", email: "ada@test.mooring", siteRole: "admin" as const };
+    const created = await createTestUser({ label: "callbacks", siteRole: "admin" });
+    const user = { id: created.actor.id, name: "Ada", email: "ada@test.mooring", siteRole: "admin" as const };
 
     const token = await jwt({ token: { sub: user.id }, user, account: null, trigger: "signIn" });
     expect(token).toMatchObject({ id: user.id, siteRole: "admin", name: "Ada", email: "ada@test.mooring" });
+    // Each sign-in opens a session row; the token names it.
+    const [row] = await db.select().from(sessions).where(eq(sessions.id, String(token.sid)));
+    expect(row).toMatchObject({ userId: user.id, revokedAt: null });
 
-    // A later request: no `user`, the token keeps what it holds.
+    // A later request: no `user`, the token keeps what it holds (and opens no new session).
     const again = await jwt({ token, user: undefined as unknown as User, account: null });
-    expect(again).toMatchObject({ id: user.id, siteRole: "admin" });
+    expect(again).toMatchObject({ id: user.id, siteRole: "admin", sid: token.sid });
+    expect(await db.select().from(sessions).where(eq(sessions.userId, user.id))).toHaveLength(1);
 
     // next-auth hands the callback its default session, which lacks the fields the callback adds.
     const defaultSession = { user: { name: "Ada", email: "ada@test.mooring", image: null }, expires: "2099-01-01T00:00:00.000Z" };
     const input = { session: defaultSession, token: again, user: undefined, newSession: undefined, trigger: "update" };
     const result = await session(input as unknown as Parameters<typeof session>[0]);
-    expect(result.user).toMatchObject({ id: user.id, siteRole: "admin", email: "ada@test.mooring" });
+    expect(result.user).toMatchObject({ id: user.id, siteRole: "admin", email: "ada@test.mooring", sessionId: token.sid });
   });
 });

@@ -1,7 +1,6 @@
-import { readdirSync, readFileSync } from "node:fs";
-import path from "node:path";
 import { describe, expect, it, vi } from "vitest";
 import type { Actor } from "@/db/queries/actor";
+import { createApiToken } from "@/db/queries/api-tokens";
 import { uploadAttachment } from "@/db/queries/attachments";
 import { addComment } from "@/db/queries/comments";
 import { createConfiguration } from "@/db/queries/configurations";
@@ -9,7 +8,9 @@ import { createInvitation } from "@/db/queries/invitations";
 import { createShareLink } from "@/db/queries/share-links";
 import { startSweep } from "@/db/queries/sweeps";
 import { probeNearSevenBrane } from "@/lib/demo-configurations";
+import { clientAddressHeader } from "@/scripts/lib/client-address.mjs";
 import { createTestGroup, createTestUser, type TestUser } from "@/tests/fixtures/users";
+import { actionFiles, actionsOf, handlersOf, routeFiles, type Method } from "@/tests/support/app-modules";
 import { idleState } from "@/lib/action-state";
 
 // Every route handler under app/api against every kind of caller, from ONE table. The route files
@@ -44,8 +45,6 @@ const { runAs } = (await import("@/lib/server/session")) as unknown as {
 
 const roles = ["anonymous", "nonMember", "viewer", "editor", "owner", "admin"] as const;
 type Role = (typeof roles)[number];
-const methods = ["GET", "POST", "PUT", "PATCH", "DELETE"] as const;
-type Method = (typeof methods)[number];
 
 /** A research group with one member per role, a site admin outside it, and one of every kind of record. */
 interface World {
@@ -65,6 +64,8 @@ interface World {
   sweepId: string;
   /** A pending invitation to the acting user's own address (or a new address for anonymous), in another group. */
   acceptTokenFor: (role: Role) => Promise<string>;
+  /** The owner's personal API tokens. */
+  ownerTokens: { read: string; write: string };
 }
 
 async function createWorld(): Promise<World> {
@@ -84,12 +85,14 @@ async function createWorld(): Promise<World> {
   ]);
   const configuration = await createConfiguration(owner.actor, group.id, probeNearSevenBrane, "first");
   const png = new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13, 73, 72, 68, 82]);
-  const [attachment, comment, share, invitation, otherGroup, sweep] = await Promise.all([
+  const [attachment, comment, share, invitation, otherGroup, readToken, writeToken, sweep] = await Promise.all([
     uploadAttachment(editor.actor, configuration.id, { fileName: "figure.png", data: png }),
     addComment(editor.actor, configuration.id, { body: "Check the NS zero-point energy." }),
     createShareLink(owner.actor, configuration.id),
     createInvitation(owner.actor, group.id, { email: `pending-${Date.now()}-${Math.random()}@test.mooring`, role: "viewer" }),
     createTestGroup(host.actor),
+    createApiToken(owner.actor, { name: "matrix read", scope: "read", expiresInDays: 7 }),
+    createApiToken(owner.actor, { name: "matrix write", scope: "write", expiresInDays: 7 }),
     startSweep(owner.actor, configuration.id, { definition: sweepDefinition }),
   ]);
   const users = { nonMember, viewer, editor, owner, admin };
@@ -103,6 +106,7 @@ async function createWorld(): Promise<World> {
     commentId: comment.id,
     shareLinkId: share.link.id,
     invitationId: invitation.invitation.id,
+    ownerTokens: { read: readToken.secret, write: writeToken.secret },
     sweepId: sweep.id,
     acceptTokenFor: async (role) => {
       const email = role === "anonymous" ? `newcomer-${Date.now()}-${Math.random()}@test.mooring` : users[role].actor.email;
@@ -164,12 +168,13 @@ const matrix: Record<string, RouteEntry> = {
     excluded: "next-auth's own handler (sign-in, session, CSRF token); its cookies and limits are tested in security.test.ts and sign-in-limit.test.ts",
   },
   "health/route.ts": { methods: { GET: { request: () => ({ request: json("GET", "/api/health") }), expect: everyone(200) } } },
+  "openapi.json/route.ts": { methods: { GET: { request: () => ({ request: json("GET", "/api/openapi.json") }), expect: everyone(200) } } },
   "spectrum/route.ts": {
     methods: {
       POST: {
         request: (_w, role) => {
           const request = json("POST", "/api/spectrum", probeNearSevenBrane);
-          request.headers.set("x-forwarded-for", `matrix-${role}-${Math.random()}`);
+          request.headers.set(clientAddressHeader, `matrix-${role}-${Math.random()}`);
           return { request };
         },
         expect: everyone(200),
@@ -454,22 +459,12 @@ const matrix: Record<string, RouteEntry> = {
   },
 };
 
-const apiRoot = path.resolve(import.meta.dirname, "..", "..", "app", "api");
 
-/** Every route.ts under app/api, relative to it, found on disk. */
-function routeFiles(): string[] {
-  return (readdirSync(apiRoot, { recursive: true }) as string[])
-    .map((file) => file.split(path.sep).join("/"))
-    .filter((file) => file === "route.ts" || file.endsWith("/route.ts"))
-    .sort();
-}
-
-type Handler = (request: Request, context: { params: Promise<Params> }) => Promise<Response>;
-
-async function handlersOf(file: string): Promise<Partial<Record<Method, Handler>>> {
-  const module = (await import(/* @vite-ignore */ path.join(apiRoot, file))) as Record<string, unknown>;
-  return Object.fromEntries(methods.filter((method) => typeof module[method] === "function").map((method) => [method, module[method] as Handler]));
-}
+/**
+ * A cell that succeeds with PUT, PATCH or DELETE changes or removes the record it is about, so it
+ * gets a world of its own.
+ */
+const needsOwnWorld = (method: Method, status: number) => method !== "GET" && method !== "POST" && status < 400;
 
 describe("authorization matrix", () => {
   it("the table covers every route handler file under app/api and every method it exports", async () => {
@@ -485,11 +480,9 @@ describe("authorization matrix", () => {
     }
   });
 
-  // A cell that succeeds with PUT, PATCH or DELETE changes or removes the record it is about, so it
-  // gets a world of its own; every other cell (reads, creates, refusals) shares one world, so the
+  // A cell that succeeds with PUT, PATCH or DELETE gets a world of its own; every other cell (reads, creates, refusals) shares one world, so the
   // order of the cells does not matter. A refusal that wrongly wrote would show in later cells too.
   let shared: Promise<World> | undefined;
-  const needsOwnWorld = (method: Method, status: number) => method !== "GET" && method !== "POST" && status < 400;
   for (const [file, entry] of Object.entries(matrix)) {
     if ("excluded" in entry) continue;
     describe(file, () => {
@@ -502,6 +495,52 @@ describe("authorization matrix", () => {
             if (!handler) throw new Error(`${file} does not export ${method}`);
             const { request, params = {} } = await cell.request(world, role);
             const response = await runAs(actorOf(world, role), () => handler(request, { params: Promise.resolve(params) }));
+            const body = response.status >= 400 ? await response.text() : "";
+            expect({ status: response.status, body: body.slice(0, 200) }).toMatchObject({ status });
+            // Whatever a signed-in caller gets back, success or refusal, no cache may keep it. The
+            // OpenAPI document reads no caller: everyone gets the same public document.
+            if (role !== "anonymous" && file !== "openapi.json/route.ts") {
+              expect(response.headers.get("cache-control")).toBe("private, no-store");
+            }
+          });
+        }
+      }
+    });
+  }
+});
+
+// ---------------------------------------------------------------------------------------------
+// Personal API tokens against the same table: every route handler is called with the owner's
+// read-only and read-write tokens in `Authorization: Bearer` (and no session). Routes that take
+// tokens (the configuration routes and the compute) answer as they answer the owner's session,
+// except that a read-only token is refused (403) by every route that writes; every other route
+// refuses tokens (403), apart from the health check and the API document, which read no caller at all. With a session
+// cookie too, the token alone counts.
+// ---------------------------------------------------------------------------------------------
+
+/** The routes that accept tokens, as the issue names them (not read from the app's own policy). */
+const tokenRoutes = (file: string) => file === "spectrum/route.ts" || file === "configurations/route.ts" || file.startsWith("configurations/");
+/** Writing methods, except the stateless compute, which changes nothing. */
+const writes = (file: string, method: Method) => method !== "GET" && file !== "spectrum/route.ts";
+
+describe("authorization matrix with API tokens", () => {
+  let shared: Promise<World> | undefined;
+  for (const [file, entry] of Object.entries(matrix)) {
+    if ("excluded" in entry) continue;
+    describe(file, () => {
+      for (const [method, cell] of Object.entries(entry.methods) as [Method, Cell][]) {
+        for (const scope of ["read", "write"] as const) {
+          const ignoresCaller = file === "health/route.ts" || file === "openapi.json/route.ts";
+          const status = !ignoresCaller && (!tokenRoutes(file) || (scope === "read" && writes(file, method))) ? 403 : cell.expect.owner;
+          it(`${method} with the owner's ${scope} token -> ${status}`, async () => {
+            const world = needsOwnWorld(method, status) ? await createWorld() : await (shared ??= createWorld());
+            const handler = (await handlersOf(file))[method];
+            if (!handler) throw new Error(`${file} does not export ${method}`);
+            const { request, params = {} } = await cell.request(world, "owner");
+            request.headers.set("authorization", `Bearer ${world.ownerTokens[scope]}`);
+            // The admin's session beside a read-only token must not lend it the right to write.
+            const session = scope === "read" ? world.users.admin.actor : null;
+            const response = await runAs(session, () => handler(request, { params: Promise.resolve(params) }));
             const body = response.status >= 400 ? await response.text() : "";
             expect({ status: response.status, body: body.slice(0, 200) }).toMatchObject({ status });
           });
@@ -558,6 +597,18 @@ const actionMatrix: Record<string, ActionEntry> = {
   },
   "(workspace)/account/actions.ts": {
     actions: {
+      createApiTokenAction: {
+        call: (action) => action(...([idleState(), form({ name: "Matrix script", scope: "read", expiresInDays: "30" })] as never[])),
+        expect: okFor(signedInRoles),
+      },
+      // Only one's own token: the owner's token is "no such token" to everyone else, admins included.
+      revokeApiTokenAction: {
+        call: async (action, world) => {
+          const token = await createApiToken(world.users.owner.actor, { name: "to revoke", scope: "write", expiresInDays: 7 });
+          return action(...([token.token.id] as never[]));
+        },
+        expect: okFor(["owner"]),
+      },
       updateAccountNameAction: { call: (action) => action(...([idleState(), form({ name: "Renamed Person" })] as never[])), expect: okFor(signedInRoles) },
       changePasswordAction: {
         // Test accounts have no password yet, so no current password is asked for.
@@ -565,6 +616,7 @@ const actionMatrix: Record<string, ActionEntry> = {
           action(...([idleState(), form({ currentPassword: "", newPassword: "a brand new password", confirmPassword: "a brand new password" })] as never[])),
         expect: okFor(signedInRoles),
       },
+      signOutEverywhereAction: { call: (action) => action(...([] as never[])), expect: okFor(signedInRoles) },
     },
   },
   "(workspace)/admin/actions.ts": {
@@ -601,23 +653,6 @@ const actionMatrix: Record<string, ActionEntry> = {
     },
   },
 };
-
-const appRoot = path.resolve(import.meta.dirname, "..", "..", "app");
-
-/** Every file under app/ that starts with "use server", found on disk. */
-function actionFiles(): string[] {
-  return (readdirSync(appRoot, { recursive: true }) as string[])
-    .map((file) => file.split(path.sep).join("/"))
-    .filter((file) => /\.tsx?$/.test(file) && /^\s*["']use server["']/.test(readFileSync(path.join(appRoot, file), "utf8")))
-    .sort();
-}
-
-async function actionsOf(file: string): Promise<Record<string, (...args: never[]) => Promise<unknown>>> {
-  const module = (await import(/* @vite-ignore */ path.join(appRoot, file))) as Record<string, unknown>;
-  return Object.fromEntries(
-    Object.entries(module).filter((entry): entry is [string, (...args: never[]) => Promise<unknown>] => typeof entry[1] === "function"),
-  );
-}
 
 /** "ok" or "refused", from what an action returned or threw. */
 async function outcomeOf(run: () => Promise<unknown>): Promise<{ outcome: Outcome; detail: string }> {

@@ -4,7 +4,13 @@ import { describe, expect, it, vi } from "vitest";
 import { db } from "@/db/index";
 import type { Actor } from "@/db/queries/actor";
 import { addComment, deleteComment, listComments } from "@/db/queries/comments";
-import { createConfiguration, setConfigurationStarter, updateConfiguration } from "@/db/queries/configurations";
+import {
+  createConfiguration,
+  setConfigurationStarter,
+  softDeleteConfiguration,
+  undeleteConfiguration,
+  updateConfiguration,
+} from "@/db/queries/configurations";
 import { forkConfiguration } from "@/db/queries/forks";
 import { listStarterForks } from "@/db/queries/labs";
 import { createShareLink, getSharedConfiguration, listShareLinks, revokeShareLink } from "@/db/queries/share-links";
@@ -54,6 +60,20 @@ describe("share links", () => {
     await expect(getSharedConfiguration(token)).rejects.toBeInstanceOf(NotFoundError);
     // Revoking again is harmless.
     expect((await revokeShareLink(editor.actor, link.id)).revokedAt).not.toBeNull();
+  });
+
+  it("revokes a configuration's share links when it is deleted; undeleting it leaves them revoked", async () => {
+    const { editor, configuration } = await scenario();
+    const { token } = await createShareLink(editor.actor, configuration.id);
+    const { token: second } = await createShareLink(editor.actor, configuration.id);
+    await softDeleteConfiguration(editor.actor, configuration.id);
+    await undeleteConfiguration(editor.actor, configuration.id);
+    for (const link of [token, second]) await expect(getSharedConfiguration(link)).rejects.toBeInstanceOf(NotFoundError);
+    const links = await listShareLinks(editor.actor, configuration.id);
+    expect(links.map((link) => link.revokedAt)).toEqual([expect.any(Date), expect.any(Date)]);
+    // A link made after the undelete works as usual.
+    const { token: fresh } = await createShareLink(editor.actor, configuration.id);
+    expect((await getSharedConfiguration(fresh)).title).toBe(braneAntibranePair.title);
   });
 
   it("answers 404 for an unknown token", async () => {

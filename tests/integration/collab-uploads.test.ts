@@ -46,6 +46,39 @@ beforeEach(() => {
   session.actor = null;
 });
 
+/**
+ * A chunked upload with no Content-Length that produces up to `totalBytes` of a multipart body in
+ * 64 KiB pieces only as they are read, and counts how many bytes were read.
+ */
+function streamingUpload(url: string, totalBytes: number): { request: Request; delivered: () => number } {
+  const boundary = "mooring-test-boundary";
+  const head = new TextEncoder().encode(
+    `--${boundary}\r\ncontent-disposition: form-data; name="file"; filename="huge.png"\r\ncontent-type: image/png\r\n\r\n`,
+  );
+  let delivered = 0;
+  const chunk = new Uint8Array(64 * 1024);
+  chunk.set(pngBytes);
+  const body = new ReadableStream<Uint8Array>(
+    {
+      pull(controller) {
+        if (delivered >= totalBytes) return controller.close();
+        const piece = delivered === 0 ? head : chunk;
+        delivered += piece.byteLength;
+        controller.enqueue(piece);
+      },
+    },
+    // Nothing is produced before someone reads.
+    { highWaterMark: 0 },
+  );
+  const request = new Request(`http://test.local${url}`, {
+    method: "POST",
+    headers: { "content-type": `multipart/form-data; boundary=${boundary}` },
+    body,
+    duplex: "half",
+  } as RequestInit);
+  return { request, delivered: () => delivered };
+}
+
 describe("attachments", () => {
   it("stores a PNG for an editor, sniffed from its bytes, downloadable by members only", async () => {
     const { owner, viewer, outsider, configuration, params } = await scenario();
@@ -100,6 +133,53 @@ describe("attachments", () => {
     );
     expect(response.status).toBe(413);
     expect(await attachmentCount(configuration.id)).toBe(0);
+  });
+
+  it("reads no byte of an upload from a caller who may not attach (authorized before the body)", async () => {
+    const { viewer, outsider, configuration, params } = await scenario();
+    const url = `/api/configurations/${configuration.id}/attachments`;
+    for (const [actor, status] of [
+      [null, 401],
+      [outsider.actor, 404],
+      [viewer.actor, 403],
+    ] as const) {
+      session.actor = actor;
+      const upload = streamingUpload(url, 4 * 1024 * 1024);
+      const response = await attachmentsRoute.POST(upload.request, params);
+      expect({ status: response.status, bytesRead: upload.delivered() }).toEqual({ status, bytesRead: 0 });
+    }
+    expect(await attachmentCount(configuration.id)).toBe(0);
+  });
+
+  it("stops reading a chunked upload without Content-Length once it passes the limit (413)", async () => {
+    const { owner, configuration, params } = await scenario();
+    session.actor = owner.actor;
+    const upload = streamingUpload(`/api/configurations/${configuration.id}/attachments`, 64 * 1024 * 1024);
+    const response = await attachmentsRoute.POST(upload.request, params);
+    expect(response.status).toBe(413);
+    // The limit, the room allowed for the form's framing (16 KiB) and the piece that crossed it.
+    expect(upload.delivered()).toBeLessThanOrEqual(attachmentMaxBytes + 16 * 1024 + 64 * 1024);
+    expect(await attachmentCount(configuration.id)).toBe(0);
+  });
+
+  it("names a stored file by the type found in its bytes and drops bidirectional formatting characters", async () => {
+    const { owner, configuration, params } = await scenario();
+    session.actor = owner.actor;
+    const url = `/api/configurations/${configuration.id}/attachments`;
+    const names: string[] = [];
+    for (const sent of ["plot.html", "scan.JPEG", "invoice\u202Egnp.html", "\u2066figure\u2069.png", "notes"]) {
+      const bytes = sent === "scan.JPEG" ? new Uint8Array([0xff, 0xd8, 0xff, 0xe0, 0, 16]) : pngBytes;
+      const response = await attachmentsRoute.POST(upload(url, new Blob([bytes], { type: "text/html" }), sent), params);
+      expect(response.status).toBe(201);
+      const created = (await response.json()) as { id: string; fileName: string };
+      names.push(created.fileName);
+      const download = await attachmentRoute.GET(new Request(`http://test.local/api/attachments/${created.id}`), {
+        params: Promise.resolve({ attachmentId: created.id }),
+      });
+      expect(download.headers.get("content-disposition")).toContain(`filename="${created.fileName}"`);
+    }
+    // An HTML page with PNG bytes is stored (and downloads) as a PNG, never as .html.
+    expect(names).toEqual(["plot.png", "scan.JPEG", "invoicegnp.png", "figure.png", "notes.png"]);
   });
 
   it("refuses uploads by viewers (403)", async () => {
@@ -177,6 +257,20 @@ describe("import", () => {
     expect(tooBig.status).toBe(413);
   });
 
+  it("names a file that is not JSON by its content, and words a top-level list plainly", async () => {
+    const { owner } = await scenario();
+    session.actor = owner.actor;
+    const messageOf = async (body: BlobPart, name: string) => {
+      const response = await importRoute.POST(upload("/api/configurations/import", new Blob([body]), name));
+      expect(response.status).toBe(422);
+      return ((await response.json()) as { message: string }).message;
+    };
+    // PNG signature (RFC 2083): 89 50 4E 47 0D 0A 1A 0A, whatever the file is called.
+    expect(await messageOf(new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0]), "figure.json")).toContain("a PNG image");
+    expect(await messageOf("pair,sector,level\na-b,NS,0\n", "spectrum.json")).toContain("a CSV table");
+    expect(await messageOf(JSON.stringify([probeNearSevenBrane, probeNearSevenBrane]), "two.json")).toContain("holds a list");
+  });
+
   it("requires a session (401) and membership of the target group", async () => {
     const { outsider, group } = await scenario();
     const file = new Blob([JSON.stringify(probeNearSevenBrane)]);
@@ -189,7 +283,7 @@ describe("import", () => {
 
 describe("export", () => {
   it("serves JSON that re-imports, and CSV and LaTeX with conventions, to members only", async () => {
-    const { viewer, outsider, configuration, params } = await scenario();
+    const { viewer, outsider, params } = await scenario();
     session.actor = viewer.actor;
     const json = await exportRoute.GET(new Request(`http://test.local/x?format=json`), params);
     expect(json.status).toBe(200);

@@ -236,6 +236,17 @@ describe("forkConfiguration", () => {
     expect(fork).toMatchObject({ tachyonic: false, lightestMassSquared: 0 });
   });
 
+  it("gives a repeat fork into the same space a numbered title, document and row alike", async () => {
+    const { viewer, configuration } = await scenario();
+    const titles: string[] = [];
+    for (let i = 0; i < 3; i++) {
+      const fork = await forkConfiguration(viewer.actor, configuration.id, { targetGroupId: viewer.personalGroupId, title: "Pair (fork)" });
+      expect(fork.document.title).toBe(fork.title);
+      titles.push(fork.title);
+    }
+    expect(titles).toEqual(["Pair (fork)", "Pair (fork 2)", "Pair (fork 3)"]);
+  });
+
   it("needs read access to the source and editor access to the target", async () => {
     const { viewer, outsider, group, configuration } = await scenario();
     await expect(
@@ -354,6 +365,37 @@ describe("lab starters", () => {
     expect(forks.items.map((item) => [item.id, item.author.id])).toEqual([[fork.id, student.actor.id]]);
     await expect(listForksOfConfiguration(student.actor, starter.id)).rejects.toBeInstanceOf(ForbiddenError);
     await expect(setConfigurationStarter(student.actor, starter.id, false)).rejects.toBeInstanceOf(ForbiddenError);
+  });
+
+  it("lets the lab's instructors read a student's fork of a starter, and nobody else outside the student's space", async () => {
+    const instructor = await createTestUser({ label: "instructor" });
+    const assistant = await createTestUser({ label: "assistant" });
+    const student = await createTestUser({ label: "student" });
+    const classmate = await createTestUser({ label: "classmate" });
+    const lab = await createTestGroup(
+      instructor.actor,
+      [
+        { actor: assistant.actor, role: "editor" },
+        { actor: student.actor, role: "viewer" },
+        { actor: classmate.actor, role: "viewer" },
+      ],
+      "lab",
+    );
+    const starter = await createConfiguration(instructor.actor, lab.id, twoTwoBraneStacks, "Starter", { isStarter: true });
+    const fork = await forkConfiguration(student.actor, starter.id, { targetGroupId: student.personalGroupId });
+
+    const seen = await getConfiguration(instructor.actor, fork.id);
+    expect(seen).toMatchObject({ id: fork.id, role: "viewer", canEdit: false, forkedFrom: { configurationId: starter.id, title: twoTwoBraneStacks.title } });
+    expect((await getConfiguration(assistant.actor, fork.id)).role).toBe("viewer");
+    expect((await listRevisions(instructor.actor, fork.id)).map((revision) => revision.number)).toEqual([1]);
+    await expect(
+      updateConfiguration(instructor.actor, fork.id, { expectedVersion: 1, document: twoTwoBraneStacks, message: "not mine" }),
+    ).rejects.toBeInstanceOf(ForbiddenError);
+    // A fellow student of the lab is no instructor: the fork stays hidden.
+    await expect(getConfiguration(classmate.actor, fork.id)).rejects.toBeInstanceOf(NotFoundError);
+    // Once the starter is withdrawn the fork is the student's alone again.
+    await setConfigurationStarter(instructor.actor, starter.id, false);
+    await expect(getConfiguration(instructor.actor, fork.id)).rejects.toBeInstanceOf(NotFoundError);
   });
 
   it("refuses starters outside lab groups", async () => {

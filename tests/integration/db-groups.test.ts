@@ -61,6 +61,13 @@ describe("getGroupBySlug", () => {
     await expect(getGroupBySlug(outsider.actor, "no-such-group-anywhere")).rejects.toBeInstanceOf(NotFoundError);
     await expect(getGroupBySlug(null, group.slug)).rejects.toBeInstanceOf(UnauthenticatedError);
   });
+
+  it("treats text that cannot be a slug as no such group, without asking the database", async () => {
+    const owner = await createTestUser({ label: "slug-owner" });
+    for (const slug of ["a\u0000b", "\ud800", "../admin", ""]) {
+      await expect(getGroupBySlug(owner.actor, slug)).rejects.toBeInstanceOf(NotFoundError);
+    }
+  });
 });
 
 describe("listGroupsForUser", () => {

@@ -4,7 +4,9 @@ import fc from "fast-check";
 import { beforeAll, beforeEach, describe, expect, it, vi } from "vitest";
 import { db } from "@/db/index";
 import type { Actor } from "@/db/queries/actor";
-import { configurations } from "@/db/schema";
+import { createConfiguration } from "@/db/queries/configurations";
+import { attachments, configurations } from "@/db/schema";
+import { idleState, type ActionState } from "@/lib/action-state";
 import {
   bosonicTwentyFiveWithTwentyThree,
   braneAntibranePair,
@@ -12,8 +14,11 @@ import {
   probeNearSevenBrane,
   zeroFourBoundState,
 } from "@/lib/demo-configurations";
-import { createTestUser } from "@/tests/fixtures/users";
 import { resetRateLimits } from "@/lib/server/rate-limit";
+import { unstorableTextMessage } from "@/lib/storable-text";
+import { clientAddressHeader } from "@/scripts/lib/client-address.mjs";
+import { createTestGroup, createTestUser } from "@/tests/fixtures/users";
+import { actionFiles, actionsOf, handlersOf, paramNamesOf, routeFiles, type Method, type RouteHandler, type ServerAction } from "@/tests/support/app-modules";
 
 // Fuzzing of the two routes that take a whole configuration document from outside: random JSON,
 // valid documents with one part broken, text that is not JSON, odd numbers JSON.parse turns into
@@ -232,7 +237,7 @@ describe("POST /api/spectrum fuzzing", () => {
         const headers: Record<string, string> = { "content-type": "application/json" };
         // Signed-in callers spend the account's compute budget; anonymous ones come from a fresh address each time.
         if (signedIn) headers.cookie = "next-auth.session-token=fuzz";
-        else headers["x-forwarded-for"] = `fuzz-${randomUUID()}`;
+        else headers[clientAddressHeader] = `fuzz-${randomUUID()}`;
         const response = await spectrumRoute.POST(
           new Request("http://127.0.0.1/api/spectrum", { method: "POST", headers, body: text }),
         );
@@ -325,5 +330,140 @@ describe("POST /api/configurations/import fuzzing", () => {
     form.set("file", new Blob([json]), "p.json");
     const anonymous = await importRoute.POST(new Request("http://127.0.0.1/api/configurations/import", { method: "POST", body: form }));
     expect(anonymous.status).toBe(401);
+  });
+});
+
+// ---------------------------------------------------------------------------------------------
+// Text PostgreSQL cannot store (NUL characters, unpaired UTF-16 surrogates), in every way it can
+// come in: query strings on every route, JSON bodies on every route that reads one, multipart fields
+// and file names, and the fields of every form action. Each answers 422 (or the form's field error)
+// and never reaches the database, where it would fail as a 500.
+// ---------------------------------------------------------------------------------------------
+
+/** Text around one character the database refuses (fast-check's strings are ASCII, so none pairs up). */
+const unstorableText = fc
+  .tuple(fc.string({ maxLength: 8 }), fc.constantFrom("\u0000", "\ud800", "\udbff", "\udc00", "\udfff"), fc.string({ maxLength: 8 }))
+  .map(([before, bad, after]) => `${before}${bad}${after}`);
+
+/**
+ * Text with a NUL, for query strings, multipart and forms: these carry only well-formed text (a URL
+ * or a FormData turns an unpaired surrogate into U+FFFD), so NUL is what can still reach them.
+ */
+const nulText = fc.tuple(fc.string({ maxLength: 8 }), fc.string({ maxLength: 8 })).map(([before, after]) => `${before}\u0000${after}`);
+
+interface ValidationBody {
+  error: string;
+  issues: { path: (string | number)[]; message: string }[];
+}
+
+describe("text the database cannot store", () => {
+  const routes = async () => {
+    const found: { file: string; method: Method; handler: RouteHandler; params: Record<string, string> }[] = [];
+    for (const file of routeFiles()) {
+      // next-auth's own handler; health and the OpenAPI document read no input at all.
+      if (file.startsWith("auth/") || file === "health/route.ts" || file === "openapi.json/route.ts") continue;
+      const params = Object.fromEntries(paramNamesOf(file).map((name) => [name, randomUUID()]));
+      for (const [method, handler] of Object.entries(await handlersOf(file)) as [Method, RouteHandler][]) {
+        found.push({ file, method, handler, params });
+      }
+    }
+    return found;
+  };
+
+  it("in the query string: 422 from every route, whether it reads its query or not", async () => {
+    session.actor = owner;
+    const all = await routes();
+    expect(all.length).toBeGreaterThan(25);
+    await fc.assert(
+      fc.asyncProperty(fc.constantFrom(...all), fc.constantFrom("format", "note", "revision", "q"), nulText, async (route, key, value) => {
+        const url = new URL(`http://127.0.0.1/api/${route.file}`);
+        url.searchParams.set(key, value);
+        const response = await route.handler(new Request(url, { method: route.method }), { params: Promise.resolve(route.params) });
+        expect({ route: `${route.method} ${route.file}`, status: response.status }).toEqual({ route: `${route.method} ${route.file}`, status: 422 });
+        expect(((await response.json()) as ValidationBody).issues[0]?.path).toEqual([key]);
+      }),
+      { numRuns: 200, seed },
+    );
+  });
+
+  it("in a JSON body: 422 naming the string, from every route that reads JSON", async () => {
+    session.actor = owner;
+    const writes = (await routes()).filter((route) => route.method !== "GET" && route.method !== "DELETE");
+    const json = (body: string) => ({ method: "", headers: { "content-type": "application/json" }, body });
+    // A route reads a JSON body exactly when malformed JSON gets it to answer 400.
+    const readers: typeof writes = [];
+    for (const route of writes) {
+      const malformed = await route.handler(new Request("http://127.0.0.1/x", { ...json("{"), method: route.method }), { params: Promise.resolve(route.params) });
+      if (malformed.status === 400) readers.push(route);
+    }
+    expect(readers.length).toBeGreaterThanOrEqual(8);
+    await fc.assert(
+      fc.asyncProperty(fc.constantFrom(...readers), unstorableText, fc.boolean(), async (route, text, inKey) => {
+        const body = inKey ? { title: "x", stacks: [{ [text]: 1 }] } : { title: "x", stacks: [{ label: text }] };
+        const response = await route.handler(new Request("http://127.0.0.1/x", { ...json(JSON.stringify(body)), method: route.method }), {
+          params: Promise.resolve(route.params),
+        });
+        expect({ route: `${route.method} ${route.file}`, status: response.status }).toEqual({ route: `${route.method} ${route.file}`, status: 422 });
+        const issue = ((await response.json()) as ValidationBody).issues[0];
+        expect(issue?.path).toEqual(inKey ? ["stacks", 0, text] : ["stacks", 0, "label"]);
+      }),
+      { numRuns: 200, seed },
+    );
+  });
+
+  it("in a multipart field or file name: 422 from the import and attachment uploads, nothing stored", async () => {
+    session.actor = owner;
+    const group = await createTestGroup(owner);
+    const configuration = await createConfiguration(owner, group.id, probeNearSevenBrane, "first");
+    const attachmentsRoute = await import("@/app/api/configurations/[configurationId]/attachments/route");
+    const png = new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13]);
+    await fc.assert(
+      fc.asyncProperty(nulText, fc.constantFrom("import-group", "import-name", "attachment-name"), async (text, where) => {
+        const form = new FormData();
+        if (where === "attachment-name") {
+          form.set("file", new Blob([png]), `${text}.png`);
+          const response = await attachmentsRoute.POST(
+            new Request(`http://127.0.0.1/api/configurations/${configuration.id}/attachments`, { method: "POST", body: form }),
+            { params: Promise.resolve({ configurationId: configuration.id }) },
+          );
+          expect(response.status).toBe(422);
+          return;
+        }
+        form.set("file", new Blob([JSON.stringify(probeNearSevenBrane)]), where === "import-name" ? `${text}.json` : "ok.json");
+        if (where === "import-group") form.set("groupId", text);
+        const response = await importRoute.POST(new Request("http://127.0.0.1/api/configurations/import", { method: "POST", body: form }));
+        expect(response.status).toBe(422);
+        expect(((await response.json()) as ValidationBody).issues[0]?.path).toEqual([where === "import-group" ? "groupId" : "file"]);
+      }),
+      { numRuns: 60, seed },
+    );
+    const [stored] = await db.select({ n: count() }).from(attachments).where(eq(attachments.configurationId, configuration.id));
+    expect(stored?.n).toBe(0);
+  });
+
+  it("in a form: every form action answers an error on the field, never a failure of its own", async () => {
+    session.actor = owner;
+    // Every field name the forms use; each action reads its own and ignores the rest.
+    const fieldNames = ["name", "email", "password", "confirmPassword", "token", "currentPassword", "newPassword", "slug", "description", "kind", "userId", "siteRole", "callbackPath"];
+    const forms: { name: string; action: ServerAction }[] = [];
+    for (const file of actionFiles()) {
+      for (const [name, action] of Object.entries(await actionsOf(file))) {
+        // Form actions take (previous state, form data); the others take ids, not text fields.
+        if (action.length === 2) forms.push({ name: `${file} ${name}`, action });
+      }
+    }
+    expect(forms.length).toBeGreaterThanOrEqual(8);
+    await fc.assert(
+      fc.asyncProperty(fc.constantFrom(...forms), nulText, async ({ name, action }, text) => {
+        const data = new FormData();
+        for (const field of fieldNames) data.set(field, text);
+        const state = (await action(...([idleState(), data] as never[]))) as ActionState;
+        expect({ name, status: state.status }).toEqual({ name, status: "error" });
+        const messages = Object.values(state.fieldErrors).flat();
+        expect(messages.length).toBeGreaterThan(0);
+        expect(messages.every((message) => message === unstorableTextMessage)).toBe(true);
+      }),
+      { numRuns: 100, seed },
+    );
   });
 });

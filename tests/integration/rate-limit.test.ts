@@ -7,6 +7,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import { db } from "@/db/index";
 import { rateLimitBuckets } from "@/db/schema";
 import { clientAddress, consumeRateLimit, peekRateLimit, refundRateLimit, resetRateLimits } from "@/lib/server/rate-limit";
+import { clientAddressHeader } from "@/scripts/lib/client-address.mjs";
 
 const run = promisify(execFile);
 const root = path.resolve(import.meta.dirname, "..", "..");
@@ -115,9 +116,15 @@ describe("several app instances", () => {
 describe("clientAddress", () => {
   const request = (headers: Record<string, string>) => new Request("http://127.0.0.1/", { headers });
 
-  it("takes the first x-forwarded-for entry, then x-real-ip, then 'unknown'", () => {
-    expect(clientAddress(request({ "x-forwarded-for": "203.0.113.1, 10.0.0.1" }))).toBe("203.0.113.1");
-    expect(clientAddress(request({ "x-real-ip": "198.51.100.2" }))).toBe("198.51.100.2");
-    expect(clientAddress(request({}))).toBe("unknown");
+  it("reads only the address the app's server resolved, never headers a client can set", () => {
+    expect(clientAddress(request({ [clientAddressHeader]: "203.0.113.1" }))).toBe("203.0.113.1");
+    expect(clientAddress(new Headers({ [clientAddressHeader]: "203.0.113.2" }))).toBe("203.0.113.2");
+    // next-auth's authorize() gets the headers as a plain object.
+    expect(clientAddress({ [clientAddressHeader]: "203.0.113.3", "x-forwarded-for": "198.51.100.9" })).toBe("203.0.113.3");
+    // Without it every caller shares one bucket, whatever X-Forwarded-For or X-Real-IP say.
+    expect(clientAddress(request({ "x-forwarded-for": "203.0.113.1, 10.0.0.1" }))).toBe("unknown");
+    expect(clientAddress(request({ "x-real-ip": "198.51.100.2" }))).toBe("unknown");
+    expect(clientAddress({})).toBe("unknown");
+    expect(clientAddress(undefined)).toBe("unknown");
   });
 });

@@ -2,7 +2,6 @@ import { execFileSync } from "node:child_process";
 import { readdirSync, readFileSync, statSync } from "node:fs";
 import path from "node:path";
 import { eq } from "drizzle-orm";
-import NextAuth from "next-auth";
 import { NextRequest } from "next/server";
 import fc from "fast-check";
 import { afterEach, beforeAll, describe, expect, it } from "vitest";
@@ -13,6 +12,7 @@ import { authOptions } from "@/lib/server/auth";
 import { checkCrossSiteRequest } from "@/lib/server/csrf";
 import { config as proxyConfig, proxy } from "@/proxy";
 import { createTestUser } from "@/tests/fixtures/users";
+import { signInCookies } from "@/tests/support/next-auth";
 
 const root = path.resolve(import.meta.dirname, "..", "..");
 
@@ -34,6 +34,17 @@ describe("CSRF protection in proxy.ts", () => {
       expect(((await forged.json()) as { error: string }).error).toBe("cross_site_request");
       // An older browser that sends Origin but no Sec-Fetch-Site is refused too.
       expect((await call(pathname, method, { origin: "https://evil.example" })).status).toBe(403);
+    }
+  });
+
+  it("refuses a cross-site server action with 403, on any page, and lets a same-origin one through", async () => {
+    for (const pathname of ["/sign-up", "/account", "/groups/some-group"]) {
+      const forged = await call(pathname, "POST", { "next-action": "7f00aa", origin: "https://evil.example", "sec-fetch-site": "cross-site" });
+      expect(forged.status).toBe(403);
+      expect(((await forged.json()) as { error: string }).error).toBe("cross_site_request");
+      expect((await call(pathname, "POST", { "next-action": "7f00aa", origin: "https://evil.example" })).status).toBe(403);
+      const own = await call(pathname, "POST", { "next-action": "7f00aa", origin: app, "sec-fetch-site": "same-origin" });
+      expect(own.headers.get("x-middleware-next")).toBe("1");
     }
   });
 
@@ -63,6 +74,12 @@ describe("which /api requests reach the CSRF check (proxy.ts matcher)", () => {
     expect(matches("/api/configurations", { "sec-fetch-site": "none", origin: "https://evil.example" })).toBe(true);
     expect(matches("/api/spectrum", { origin: "https://evil.example" })).toBe(true);
     expect(matches("/api/spectrum", { origin: "null" })).toBe(true);
+  });
+
+  it("runs the check for server actions on every page", () => {
+    expect(matches("/sign-up", { "next-action": "7f00aa", origin: "https://evil.example" })).toBe(true);
+    expect(matches("/", { "next-action": "7f00aa" })).toBe(true);
+    expect(matches("/sign-up", {})).toBe(false);
   });
 
   it("skips the app's own requests and clients without browser headers", () => {
@@ -100,80 +117,7 @@ describe("session cookies (next-auth, lib/server/auth.ts)", () => {
     process.env.NEXTAUTH_URL = originalUrl;
   });
 
-  interface SetCookie {
-    name: string;
-    value: string;
-    /** Attribute names in lower case (httponly, secure, samesite, path, ...) with their values. */
-    attributes: Map<string, string>;
-  }
-
-  function parseSetCookie(header: string): SetCookie {
-    const [pair = "", ...attributes] = header.split(";").map((part) => part.trim());
-    const cut = pair.indexOf("=");
-    return {
-      name: pair.slice(0, cut),
-      value: pair.slice(cut + 1),
-      attributes: new Map(
-        attributes.map((attribute) => {
-          const [key = "", value = ""] = attribute.split("=");
-          return [key.toLowerCase(), value];
-        }),
-      ),
-    };
-  }
-
-  /** Calls next-auth's handler in its API-route form and returns the Set-Cookie headers and the body. */
-  async function callNextAuth(
-    action: string[],
-    method: string,
-    cookies: Record<string, string>,
-    body: Record<string, string> = {},
-  ): Promise<{ setCookies: SetCookie[]; body: unknown }> {
-    const host = new URL(process.env.NEXTAUTH_URL ?? "http://127.0.0.1:3000").host;
-    const headers = new Map<string, string | string[]>();
-    let sent: unknown;
-    const res = {
-      status: () => res,
-      setHeader: (key: string, value: string | string[]) => {
-        headers.set(key.toLowerCase(), value);
-        return res;
-      },
-      getHeader: (key: string) => headers.get(key.toLowerCase()),
-      send: (value: unknown) => {
-        sent = value;
-      },
-      json: (value: unknown) => {
-        sent = value;
-      },
-      end: () => undefined,
-    };
-    const req = {
-      method,
-      query: { nextauth: action },
-      headers: { host, "x-forwarded-for": "192.0.2.44" },
-      cookies,
-      body,
-    };
-    await (NextAuth as unknown as (req: unknown, res: unknown, options: typeof authOptions) => Promise<void>)(req, res, authOptions);
-    const raw = headers.get("set-cookie") ?? [];
-    return { setCookies: (Array.isArray(raw) ? raw : [raw]).map(parseSetCookie), body: sent };
-  }
-
-  /** Signs in with the password provider (CSRF token first, as a browser does) and returns every cookie set. */
-  async function signInCookies(email: string, password: string): Promise<SetCookie[]> {
-    const csrf = await callNextAuth(["csrf"], "GET", {});
-    const token = (csrf.body as { csrfToken: string }).csrfToken;
-    const callback = await callNextAuth(
-      ["callback", "password"],
-      "POST",
-      // A browser sends the cookie values back as they were set (URL-encoded); next-auth decodes them itself.
-      Object.fromEntries(csrf.setCookies.map((c) => [c.name, decodeURIComponent(c.value)])),
-      { email, password, csrfToken: token, json: "true" },
-    );
-    return [...csrf.setCookies, ...callback.setCookies];
-  }
-
-  it("are httpOnly and SameSite=Lax, and the session is a JWT (no session table)", async () => {
+  it("are httpOnly and SameSite=Lax, and the session is a JWT naming its session row", async () => {
     process.env.NEXTAUTH_URL = "http://127.0.0.1:3000";
     const user = await createTestUser({ label: "cookie", password: "correct horse battery" });
     const cookies = await signInCookies(user.actor.email, "correct horse battery");

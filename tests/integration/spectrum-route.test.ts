@@ -4,6 +4,7 @@ import type { Configuration, Sector, SpectrumResult } from "@/lib/boundary/types
 import { computeSpectrumJob } from "@/lib/server/compute/pool";
 import { largestConfiguration } from "@/tests/fixtures/large-configurations";
 import { resetRateLimits } from "@/lib/server/rate-limit";
+import { clientAddressHeader } from "@/scripts/lib/client-address.mjs";
 
 // The compute route needs no database; only the session lookup is replaced.
 const session = vi.hoisted(() => ({ signedIn: false }));
@@ -19,7 +20,7 @@ function post(body: string, headers: Record<string, string> = {}): Promise<Respo
   return POST(
     new Request("http://127.0.0.1/api/spectrum", {
       method: "POST",
-      headers: { "content-type": "application/json", "x-forwarded-for": "198.51.100.7", ...headers },
+      headers: { "content-type": "application/json", [clientAddressHeader]: "198.51.100.7", ...headers },
       body,
     }),
   );
@@ -45,9 +46,11 @@ describe("POST /api/spectrum", () => {
     expect(response.status).toBe(200);
     const result = (await response.json()) as SpectrumResult;
     expect(result.dimension).toBe(26);
+    // The mass cap levels = 1 lists alpha' M^2 <= 1: N = 0, 1, 2 with 1, 24, 324 states (OEIS A005758).
     expect(result.sectors[0]?.levels.map((row) => [row.massSquared, row.states])).toEqual([
       ["-1", "1"],
       ["0", "24"],
+      ["1", "324"],
     ]);
   });
 
@@ -106,14 +109,14 @@ describe("POST /api/spectrum", () => {
     vi.setSystemTime(new Date("2030-01-01T00:00:01Z"));
     try {
       let last: Response | undefined;
-      for (let i = 0; i < 121; i += 1) last = await post(body, { "x-forwarded-for": "203.0.113.5" });
+      for (let i = 0; i < 121; i += 1) last = await post(body, { [clientAddressHeader]: "203.0.113.5" });
       expect(last?.status).toBe(429);
       expect(Number(last?.headers.get("retry-after"))).toBeGreaterThan(0);
       // Another address still gets through.
-      expect((await post(body, { "x-forwarded-for": "203.0.113.6" })).status).toBe(200);
+      expect((await post(body, { [clientAddressHeader]: "203.0.113.6" })).status).toBe(200);
       // A signed-in caller from the limited address is counted against the account, not the address.
       session.signedIn = true;
-      const signedIn = await post(body, { "x-forwarded-for": "203.0.113.5", cookie: "next-auth.session-token=abc" });
+      const signedIn = await post(body, { [clientAddressHeader]: "203.0.113.5", cookie: "next-auth.session-token=abc" });
       expect(signedIn.status).toBe(200);
     } finally {
       vi.useRealTimers();
@@ -129,7 +132,7 @@ describe("POST /api/spectrum", () => {
     try {
       const statuses: number[] = [];
       for (let i = 0; i < 5; i += 1) {
-        const response = await post(`${body}`, { "x-forwarded-for": "203.0.113.9" });
+        const response = await post(`${body}`, { [clientAddressHeader]: "203.0.113.9" });
         statuses.push(response.status);
         await response.arrayBuffer();
       }
@@ -138,12 +141,12 @@ describe("POST /api/spectrum", () => {
       expect(statuses.slice(0, fit).every((status) => status === 200)).toBe(true);
       expect(statuses[fit]).toBe(429);
       // What is left of the minute still admits a cheap request from that address.
-      expect((await post(JSON.stringify(bosonic), { "x-forwarded-for": "203.0.113.9" })).status).toBe(200);
+      expect((await post(JSON.stringify(bosonic), { [clientAddressHeader]: "203.0.113.9" })).status).toBe(200);
       // A signed-in user has a budget of their own (600 units), also weighed by cost.
       session.signedIn = true;
       const signedIn: number[] = [];
       for (let i = 0; i <= Math.floor(600 / units); i += 1) {
-        const response = await post(body, { "x-forwarded-for": "203.0.113.9", cookie: "next-auth.session-token=abc" });
+        const response = await post(body, { [clientAddressHeader]: "203.0.113.9", cookie: "next-auth.session-token=abc" });
         signedIn.push(response.status);
         await response.arrayBuffer();
       }

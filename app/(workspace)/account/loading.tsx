@@ -9,7 +9,7 @@ export default function AccountLoading() {
           <Skeleton className="h-7 w-40" />
           <Skeleton className="h-4 w-80 max-w-full" />
         </div>
-        {[0, 1, 2].map((card) => (
+        {[0, 1, 2, 3].map((card) => (
           <Skeleton key={card} className="h-44 w-full rounded-lg" />
         ))}
       </div>

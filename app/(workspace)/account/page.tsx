@@ -1,10 +1,15 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { AccountNameForm } from "@/components/account/account-name-form";
+import { ApiTokenList } from "@/components/account/api-token-list";
 import { ChangePasswordForm } from "@/components/account/change-password-form";
+import { CreateApiTokenForm } from "@/components/account/create-api-token-form";
+import { SignOutEverywhereForm } from "@/components/account/sign-out-everywhere-form";
 import { RoleBadge } from "@/components/dashboard/role-badge";
 import { PageContainer } from "@/components/layout/page-container";
 import { Card, CardContent, CardDescription, CardHeader, CardTitle } from "@/components/ui/card";
 import { PageHeader } from "@/components/ui/page-header";
+import { listApiTokens, type ApiTokenDto } from "@/db/queries/api-tokens";
 import { getAccount } from "@/db/queries/users";
 import { formatDate } from "@/lib/format-date";
 import { requireUser } from "@/lib/server/session";
@@ -12,7 +17,9 @@ import { requireUser } from "@/lib/server/session";
 export const metadata: Metadata = { title: "Account" };
 
 export default async function AccountPage() {
-  const account = await getAccount(await requireUser("/account"));
+  const user = await requireUser("/account");
+  const [account, tokens] = await Promise.all([getAccount(user), listApiTokens(user)]);
+  const now = Date.now();
 
   return (
     <PageContainer>
@@ -59,7 +66,40 @@ export default async function AccountPage() {
             <ChangePasswordForm hasPassword={account.hasPassword} />
           </CardContent>
         </Card>
+        <Card aria-labelledby="account-tokens-title">
+          <CardHeader>
+            <CardTitle id="account-tokens-title">API tokens</CardTitle>
+            <CardDescription>
+              Scripts use a token to read configurations, compute spectra and, with write access, save revisions as you. A token acts
+              with your current rights and stops working when it expires or is revoked.{" "}
+              <Link href="/docs/api" className="text-accent underline-offset-2 hover:underline">
+                API reference
+              </Link>
+            </CardDescription>
+          </CardHeader>
+          <CardContent className="grid gap-6">
+            <CreateApiTokenForm />
+            <ApiTokenList tokens={tokens.map((token) => ({ ...token, status: statusOf(token, now) }))} />
+          </CardContent>
+        </Card>
+        <Card aria-labelledby="account-sessions-title">
+          <CardHeader>
+            <CardTitle id="account-sessions-title">Signed-in devices</CardTitle>
+            <CardDescription>
+              Signs out every browser and device where this account is signed in, this one included. Changing or resetting the
+              password does the same for the other devices.
+            </CardDescription>
+          </CardHeader>
+          <CardContent>
+            <SignOutEverywhereForm />
+          </CardContent>
+        </Card>
       </div>
     </PageContainer>
   );
+}
+
+function statusOf(token: ApiTokenDto, now: number): "live" | "expired" | "revoked" {
+  if (token.revokedAt) return "revoked";
+  return token.expiresAt.getTime() <= now ? "expired" : "live";
 }

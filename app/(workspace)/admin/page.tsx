@@ -3,7 +3,6 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { SiteRoleForm } from "@/components/admin/site-role-form";
 import { PageContainer } from "@/components/layout/page-container";
-import { Badge } from "@/components/ui/badge";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Input } from "@/components/ui/input";
@@ -14,6 +13,7 @@ import { listUsers } from "@/db/queries/users";
 import { getEnv } from "@/lib/server/env";
 import { formatDate } from "@/lib/format-date";
 import { requireUser } from "@/lib/server/session";
+import { countOf } from "@/lib/wording";
 
 export const metadata: Metadata = { title: "Users and roles" };
 
@@ -58,7 +58,7 @@ export default async function AdminPage({ searchParams }: { searchParams: Promis
       ) : (
         <Table>
           <TableCaption>
-            {items.length === total ? `${total} accounts` : `${items.length} of ${total} accounts`}
+            {items.length === total ? countOf(total, "account") : `${items.length} of ${countOf(total, "account")}`}
             {search ? ` matching “${search}”` : ""}
           </TableCaption>
           <TableHeader>
@@ -78,11 +78,6 @@ export default async function AdminPage({ searchParams }: { searchParams: Promis
                 </TableCell>
                 <TableCell>
                   <span className="font-mono text-[13px]">{row.email}</span>
-                  {row.lockedUntil ? (
-                    <Badge variant="danger" className="ml-2">
-                      locked
-                    </Badge>
-                  ) : null}
                 </TableCell>
                 <TableCell>
                   <SiteRoleForm userId={row.id} userName={row.name} siteRole={row.siteRole} />

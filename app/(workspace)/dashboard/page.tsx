@@ -5,6 +5,7 @@ import { DeletedNotice } from "@/components/dashboard/deleted-notice";
 import { MyConfigurationsPanelSkeleton } from "@/components/dashboard/my-configurations-panel";
 import { MyGroupsPanel, MyGroupsPanelSkeleton } from "@/components/dashboard/my-groups-panel";
 import { RecentActivityPanel, RecentActivityPanelSkeleton } from "@/components/dashboard/recent-activity-panel";
+import { listRecentActivityForUser } from "@/db/queries/auth";
 import { PageContainer } from "@/components/layout/page-container";
 import { PageHeader } from "@/components/ui/page-header";
 import { requireUser } from "@/lib/server/session";
@@ -16,10 +17,20 @@ export default async function DashboardPage({ searchParams }: { searchParams: Pr
   const user = await requireUser("/dashboard");
   // After a delete the designer comes here with ?deleted=<id>&title=<title> to offer an undo.
   const deleted = deletedNoticeSchema.safeParse(await searchParams);
+  // Someone who has not saved, forked, commented or joined anything yet is new here, not back.
+  const returning = (await listRecentActivityForUser(user, { limit: 1 })).length > 0;
+  const firstName = user.name.split(" ")[0] ?? user.name;
 
   return (
     <PageContainer className="grid gap-6">
-      <PageHeader title={`Welcome back, ${user.name.split(" ")[0] ?? user.name}`} description="Your configurations, groups and recent activity." />
+      <PageHeader
+        title={returning ? `Welcome back, ${firstName}` : `Welcome to Mooring, ${firstName}`}
+        description={
+          returning
+            ? "Your configurations, groups and recent activity."
+            : "Start with a new configuration, or open one your groups share. What you save, fork and comment on is listed here."
+        }
+      />
       {deleted.success ? <DeletedNotice configurationId={deleted.data.deleted} title={deleted.data.title} /> : null}
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,24rem)]">
         <div className="grid content-start gap-6">

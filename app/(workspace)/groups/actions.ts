@@ -5,7 +5,7 @@ import { redirect } from "next/navigation";
 import { setConfigurationStarter } from "@/db/queries/configurations";
 import { forkConfiguration } from "@/db/queries/forks";
 import { createGroup, getPersonalGroup } from "@/db/queries/groups";
-import { errorState, invalidState, readFields, type ActionState, type FieldsOf } from "@/lib/action-state";
+import { errorState, invalidState, parseFields, readFields, type ActionState, type FieldsOf } from "@/lib/action-state";
 import { getCurrentUser } from "@/lib/server/session";
 import { createGroupSchema } from "@/lib/validations/group";
 
@@ -15,7 +15,7 @@ const createGroupFields = ["name", "slug", "description", "kind"] as const;
 /** Creates a research group or lab owned by the signed-in user, then opens it. */
 export async function createGroupAction(_previous: CreateGroupState, formData: FormData): Promise<CreateGroupState> {
   const values = readFields(formData, createGroupFields);
-  const parsed = createGroupSchema.safeParse(values);
+  const parsed = parseFields(createGroupSchema, values);
   if (!parsed.success) return invalidState(parsed.error.issues, values);
   let slug: string;
   try {

@@ -1,26 +1,29 @@
-import { z } from "zod";
 import { configurationCost } from "@/lib/boundary";
 import { RateLimitError } from "@/lib/errors";
+import type { Credential } from "@/lib/server/api-token";
 import { computeSpectrumJob } from "@/lib/server/compute/pool";
+import { getEnv } from "@/lib/server/env";
 import { clientAddress, consumeRateLimit, type RateLimitOptions } from "@/lib/server/rate-limit";
 import { route } from "@/lib/server/route";
-import { spectrumRequestSchema } from "@/lib/validations/configuration";
+import { spectrumQuerySchema, spectrumRequestSchema } from "@/lib/validations/configuration";
 
 /**
  * Compute budget per minute, in units of about 500 sector-levels (sectors x (levels + 1)): an
  * ordinary configuration costs one unit, the largest accepted one about forty. Anonymous callers
- * are counted per client address, signed-in users per account. Computing needs no database, so
- * while PostgreSQL (which holds the counters) is down the limits are not enforced.
+ * are counted per client address (SPECTRUM_BUDGET_ANONYMOUS, default 120), signed-in users per
+ * account and each API token on its own (SPECTRUM_BUDGET_ACCOUNT, default 600; a script cannot use
+ * up its owner's budget in the browser). Computing needs no database, so while PostgreSQL (which
+ * holds the counters) is down the limits are not enforced.
  */
-const anonymousBudget: RateLimitOptions = { limit: 120, windowMs: 60_000, whenUnavailable: "allow" };
-const signedInBudget: RateLimitOptions = { limit: 600, windowMs: 60_000, whenUnavailable: "allow" };
+function budget(kind: "anonymous" | "account"): RateLimitOptions {
+  const env = getEnv();
+  return {
+    limit: kind === "anonymous" ? env.SPECTRUM_BUDGET_ANONYMOUS : env.SPECTRUM_BUDGET_ACCOUNT,
+    windowMs: 60_000,
+    whenUnavailable: "allow",
+  };
+}
 const sectorLevelsPerUnit = 500;
-
-/** Paging of the response: sectors from `sectorOffset` keep their level rows until `maxRows` rows. */
-const spectrumQuerySchema = z.object({
-  sectorOffset: z.coerce.number({ error: "sectorOffset must be a whole number." }).int().min(0).max(1_000_000).default(0),
-  maxRows: z.coerce.number({ error: "maxRows must be a whole number." }).int().min(1).max(20_000).default(10_000),
-});
 
 /**
  * POST /api/spectrum: stateless compute of a configuration's spectrum (body: the configuration
@@ -35,24 +38,31 @@ const spectrumQuerySchema = z.object({
 export const POST = route(
   {
     auth: "optional",
+    // Computing changes nothing, so a read-only API token may do it.
+    scope: "read",
     anonymousWhenSessionUnavailable: true,
     query: spectrumQuerySchema,
     // 64 KiB holds 64 verbose stacks.
     body: spectrumRequestSchema,
     bodyLimitBytes: 64 * 1024,
-    before: async ({ request, actor }) => spendBudget(request, actor?.id ?? null, 1),
+    before: async ({ request, actor, credential }) => spendBudget(budgetOf(request, actor?.id ?? null, credential), 1),
   },
-  async ({ request, actor, body, query }) => {
+  async ({ request, actor, credential, body, query }) => {
     const units = Math.ceil(configurationCost(body) / sectorLevelsPerUnit);
-    if (units > 1) await spendBudget(request, actor?.id ?? null, units - 1);
+    if (units > 1) await spendBudget(budgetOf(request, actor?.id ?? null, credential), units - 1);
     const outcome = await computeSpectrumJob({ document: body, page: { sectorOffset: query.sectorOffset, maxDetailRows: query.maxRows } });
     return new Response(outcome.json, { headers: { "content-type": "application/json", "cache-control": "no-store" } });
   },
 );
 
-async function spendBudget(request: Request, userId: string | null, units: number): Promise<void> {
-  const verdict = userId
-    ? await consumeRateLimit(`spectrum:user:${userId}`, signedInBudget, units)
-    : await consumeRateLimit(`spectrum:${clientAddress(request)}`, anonymousBudget, units);
+/** The rate-limit key and budget of the caller: its API token, its account or its address. */
+function budgetOf(request: Request, userId: string | null, credential: Credential | null): { key: string; budget: RateLimitOptions } {
+  if (credential?.kind === "token") return { key: `spectrum:token:${credential.tokenId}`, budget: budget("account") };
+  if (userId) return { key: `spectrum:user:${userId}`, budget: budget("account") };
+  return { key: `spectrum:${clientAddress(request)}`, budget: budget("anonymous") };
+}
+
+async function spendBudget({ key, budget }: { key: string; budget: RateLimitOptions }, units: number): Promise<void> {
+  const verdict = await consumeRateLimit(key, budget, units);
   if (!verdict.ok) throw new RateLimitError(verdict.retryAfterSeconds, "The compute budget for this minute is used up. Please wait and try again.");
 }

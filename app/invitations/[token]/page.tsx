@@ -11,6 +11,7 @@ import { NotFoundError } from "@/lib/errors";
 import { formatDateTime } from "@/lib/format-date";
 import { getCurrentUser } from "@/lib/server/session";
 import { linkTokenSchema } from "@/lib/validations/auth";
+import { withArticle } from "@/lib/wording";
 
 export const metadata: Metadata = { title: "Invitation" };
 
@@ -58,7 +59,7 @@ export default async function InvitationPage({ params }: InvitationPageProps) {
   return (
     <InvitationFrame
       title={`Join ${preview.groupName}`}
-      description={`${preview.invitedByName} invited ${preview.email} to this ${preview.groupKind === "lab" ? "lab" : "research group"} as ${preview.role === "owner" ? "an owner" : `an ${preview.role}`}. The link expires ${formatDateTime(preview.expiresAt)}.`}
+      description={`${preview.invitedByName} invited ${preview.email} to this ${preview.groupKind === "lab" ? "lab" : "research group"} as ${withArticle(preview.role)}. The link expires ${formatDateTime(preview.expiresAt)}.`}
     >
       <InvitationResponse
         token={token}

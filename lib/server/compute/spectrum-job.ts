@@ -4,7 +4,7 @@
  * a page of sectors with their level rows. Pure apart from the clock: it is imported by the worker
  * thread, so it must not import "server-only", the database or Next.
  */
-import { ConfigurationError, computeSpectrum, type ConfigurationProblem } from "../../boundary";
+import { tryComputeSpectrum, type ConfigurationProblem } from "../../boundary";
 import type { Configuration, Sector, SpectrumResult } from "../../boundary/types";
 import { resultOverview, summarizeResult, type ResultSummary } from "../../spectrum";
 
@@ -55,13 +55,10 @@ export type SpectrumJobOutcome =
  */
 export function runSpectrumJob(job: SpectrumJob): SpectrumJobOutcome {
   const started = performance.now();
-  let result: SpectrumResult;
-  try {
-    result = computeSpectrum(job.document);
-  } catch (error) {
-    if (error instanceof ConfigurationError) return { ok: false, problems: error.problems };
-    throw error;
-  }
+  // One pass of the engine's checks: the route parsed only the document's shape.
+  const attempt = tryComputeSpectrum(job.document);
+  if (!attempt.result) return { ok: false, problems: attempt.problems };
+  const result = attempt.result;
   const summary = summarizeResult(job.document, result);
   const overviewJson = job.overview ? JSON.stringify(resultOverview(result)) : null;
   const page = job.page ? pageSectors(result, job.page) : null;

@@ -7,7 +7,7 @@ import { runSpectrumJob, type SpectrumJob } from "./spectrum-job";
 
 parentPort?.on("message", (message: { id: number; job: SpectrumJob }) => {
   try {
-    parentPort?.postMessage({ id: message.id, outcome: runSpectrumJob(message.job) });
+    parentPort?.postMessage({ id: message.id, value: runSpectrumJob(message.job) });
   } catch (error) {
     parentPort?.postMessage({ id: message.id, error: error instanceof Error ? error.message : String(error) });
   }

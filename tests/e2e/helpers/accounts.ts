@@ -1,4 +1,5 @@
 import { expect, type Page } from "@playwright/test";
+import { extractFirstLink, waitForMessageTo } from "./mailbox";
 
 /**
  * Waiting time for a navigation that follows a bcrypt hash or check (sign-up, sign-in): the hash
@@ -32,21 +33,38 @@ export function newAccount(label: string): NewAccount {
   return { name: `Test ${label} ${unique}`, email: `e2e-${label}-${unique}@mooring.test`, password: `pw-${unique}-long` };
 }
 
-/** Creates the account through the sign-up form; ends signed in on the dashboard. */
+/** Creates the account through the sign-up form and its mailed confirmation link; ends signed in on the dashboard. */
 export async function signUp(page: Page, account: NewAccount): Promise<void> {
   await page.goto("/sign-up");
   await submitSignUpForm(page, account);
+  await confirmSignUpFromMailbox(page, account);
   await expect(page).toHaveURL(/\/dashboard$/, { timeout: signInTimeout });
   await expect(page.getByRole("button", { name: /^Account:/ })).toBeVisible();
 }
 
-/** Fills in and submits the sign-up form that is open on `page`. */
+/** Fills in and submits the sign-up form that is open on `page`, and waits for the "check your inbox" answer. */
 export async function submitSignUpForm(page: Page, account: NewAccount): Promise<void> {
   await page.getByLabel("Name").fill(account.name);
   await page.getByLabel("E-mail").fill(account.email);
   await page.getByLabel("Password", { exact: true }).fill(account.password);
   await page.getByLabel("Repeat the password").fill(account.password);
   await page.getByRole("button", { name: "Create account" }).click();
+  await expect(page.getByRole("status").filter({ hasText: "Check your inbox" })).toBeVisible({ timeout: signInTimeout });
+}
+
+/**
+ * Opens the confirmation link mailed to `account.email` (the newest one) and finishes the sign-up
+ * with the account's password; the page then opens wherever the sign-up was headed.
+ */
+export async function confirmSignUpFromMailbox(page: Page, account: NewAccount): Promise<void> {
+  const message = await waitForMessageTo(account.email, { subjectIncludes: "Confirm your address" });
+  const link = extractFirstLink(message);
+  expect(link).toMatch(/\/sign-up\/confirm\/[A-Za-z0-9_-]+(\?callbackUrl=[^\s]+)?$/);
+  const url = new URL(link ?? "");
+  await page.goto(`${url.pathname}${url.search}`);
+  await expect(page.getByText(`Creating the account for ${account.email}`)).toBeVisible();
+  await page.getByLabel("Your password").fill(account.password);
+  await page.getByRole("button", { name: "Finish and sign in" }).click();
 }
 
 /** Signs in through the password form and waits for the dashboard (or `expectPath`). */

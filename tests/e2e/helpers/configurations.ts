@@ -1,11 +1,16 @@
 import { expect, type Page } from "@playwright/test";
 import type { Configuration } from "@/lib/boundary/types";
 
-/** Slug of the seed's shared research group, where the demo researcher may write. */
+/** The seeded demo group the flows create their configurations in. */
 export const demoGroupSlug = "brane-engineering";
 
-/** Creates a configuration in the seed's shared group through the API as the signed-in user; returns its id. */
-export async function createInDemoGroup(page: Page, document: Configuration): Promise<string> {
+/** A title no other run uses. */
+export function unique(label: string): string {
+  return `${label} ${Date.now().toString(36)}${Math.random().toString(36).slice(2, 6)}`;
+}
+
+/** Creates a configuration in the shared demo group through the API; returns its id. */
+export async function createInGroup(page: Page, document: Configuration): Promise<string> {
   const groups = (await (await page.request.get("/api/groups")).json()) as Array<{ id: string; slug: string }>;
   const group = groups.find((g) => g.slug === demoGroupSlug);
   expect(group).toBeDefined();

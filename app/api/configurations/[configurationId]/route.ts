@@ -1,17 +1,13 @@
 import { getConfiguration, softDeleteConfiguration, updateConfiguration } from "@/db/queries/configurations";
-import { z } from "zod";
 import { getConfigurationWithResultText } from "@/db/queries/result-reads";
 import { ValidationError } from "@/lib/errors";
 import { route } from "@/lib/server/route";
 import {
   configurationBodyLimitBytes,
   parseIfMatch,
+  readConfigurationQuerySchema,
   updateConfigurationBodySchema,
 } from "@/lib/validations/configuration-api";
-
-const readQuerySchema = z.object({
-  include: z.enum(["result"], { error: 'include may only be "result".' }).optional(),
-});
 
 /**
  * GET /api/configurations/[configurationId][?include=result]: the configuration with its current
@@ -19,7 +15,7 @@ const readQuerySchema = z.object({
  * revision's stored result `{ revisionId, engineVersion, computeMs, createdAt, result }` (null before
  * the first save), sent as stored.
  */
-export const GET = route({ params: ["configurationId"], query: readQuerySchema }, async ({ actor, params, query }) => {
+export const GET = route({ params: ["configurationId"], query: readConfigurationQuerySchema }, async ({ actor, params, query }) => {
   if (query.include === "result") {
     const { text, version } = await getConfigurationWithResultText(actor, params.configurationId);
     return new Response(text, { headers: { "content-type": "application/json", etag: `"${version}"` } });

@@ -1,5 +1,4 @@
 import { importConfiguration } from "@/db/queries/configurations";
-import { decodeUtf8 } from "@/lib/server/request-body";
 import { readMultipartFile } from "@/lib/server/multipart";
 import { route } from "@/lib/server/route";
 import { importFieldsSchema, importMaxBytes } from "@/lib/validations/import";
@@ -16,7 +15,7 @@ export const POST = route({}, async ({ request, actor }) => {
   const created = await importConfiguration(actor, {
     groupId: fields.groupId,
     fileName: file.fileName,
-    text: decodeUtf8(file.data),
+    bytes: file.data,
   });
   return Response.json(created, { status: 201, headers: { location: `/configurations/${created.id}` } });
 });

@@ -55,6 +55,11 @@ export default async function HistoryPage({ params, searchParams }: HistoryPageP
         }
         title="History"
         description="Every save is a revision. Compare any two, or restore an old one as a new revision."
+        actions={
+          <Link href={`/configurations/${configurationId}/compare`} className="text-sm text-accent hover:underline">
+            {configuration.forkedFrom?.title ? "Compare with the source" : "Compare with its forks"}
+          </Link>
+        }
       />
 
       <Card aria-labelledby="revisions-title">

@@ -9,8 +9,10 @@ import { Table, TableBody, TableCaption, TableCell, TableHead, TableHeader, Tabl
 import { listAuditLog } from "@/db/queries/audit-log";
 import { getGroupBySlug } from "@/db/queries/groups";
 import { NotFoundError } from "@/lib/errors";
+import { activitySentence } from "@/lib/activity/sentences";
 import { formatDateTime } from "@/lib/format-date";
 import { requireUser } from "@/lib/server/session";
+import { countOf } from "@/lib/wording";
 
 export const metadata: Metadata = { title: "Audit log" };
 
@@ -56,14 +58,13 @@ export default async function AuditPage({ params, searchParams }: AuditPageProps
       ) : (
         <Table>
           <TableCaption>
-            {entries.length} entries{beforeDate ? ` before ${formatDateTime(beforeDate)}` : ""}.
+            {countOf(entries.length, "entry", "entries")}{beforeDate ? ` before ${formatDateTime(beforeDate)}` : ""}.
           </TableCaption>
           <TableHeader>
             <TableRow>
               <TableHead>When</TableHead>
               <TableHead>Who</TableHead>
-              <TableHead>Action</TableHead>
-              <TableHead>Details</TableHead>
+              <TableHead>What happened</TableHead>
             </TableRow>
           </TableHeader>
           <TableBody>
@@ -71,9 +72,8 @@ export default async function AuditPage({ params, searchParams }: AuditPageProps
               <TableRow key={entry.id}>
                 <TableCell className="whitespace-nowrap text-muted-foreground">{formatDateTime(entry.createdAt)}</TableCell>
                 <TableCell>{entry.actorName ?? "a deleted account"}</TableCell>
-                <TableCell className="font-mono text-xs">{entry.action}</TableCell>
-                <TableCell className="max-w-md truncate font-mono text-xs text-muted-foreground" title={JSON.stringify(entry.details)}>
-                  {describeDetails(entry.details)}
+                <TableCell title={entry.action}>
+                  {activitySentence(entry, { actor: entry.actorName ?? "A deleted account", configurationTitle: entry.configurationTitle })}
                 </TableCell>
               </TableRow>
             ))}
@@ -87,10 +87,4 @@ export default async function AuditPage({ params, searchParams }: AuditPageProps
       ) : null}
     </PageContainer>
   );
-}
-
-function describeDetails(details: Record<string, unknown>): string {
-  return Object.entries(details)
-    .map(([key, value]) => `${key}: ${typeof value === "string" ? value : JSON.stringify(value)}`)
-    .join(", ");
 }

@@ -1,4 +1,4 @@
-import { listAttachments, uploadAttachment } from "@/db/queries/attachments";
+import { assertMayAttach, listAttachments, uploadAttachment } from "@/db/queries/attachments";
 import { readMultipartFile } from "@/lib/server/multipart";
 import { route } from "@/lib/server/route";
 import { attachmentFileNameSchema, attachmentMaxBytes } from "@/lib/validations/attachment";
@@ -10,10 +10,18 @@ export const GET = route({ params: ["configurationId"] }, async ({ actor, params
 
 /**
  * POST /api/configurations/[configurationId]/attachments (multipart, field `file`): editors and
- * owners. 201 with the attachment; 413 over the size limit; 422 when the bytes are not PNG, JPEG or PDF.
+ * owners, checked before the upload is read (anyone else gets 401/403/404 without sending it).
+ * 201 with the attachment; 413 over the size limit, counted as the body streams in; 422 when the
+ * bytes are not PNG, JPEG or PDF. The stored name ends in the extension of the type found.
  */
-export const POST = route({ params: ["configurationId"] }, async ({ request, actor, params }) => {
-  const file = await readMultipartFile(request, "file", attachmentMaxBytes);
-  const fileName = attachmentFileNameSchema.parse(file.fileName);
-  return Response.json(await uploadAttachment(actor, params.configurationId, { fileName, data: file.data }), { status: 201 });
-});
+export const POST = route(
+  {
+    params: ["configurationId"],
+    before: ({ actor, params }) => assertMayAttach(actor, params.configurationId),
+  },
+  async ({ request, actor, params }) => {
+    const file = await readMultipartFile(request, "file", attachmentMaxBytes);
+    const fileName = attachmentFileNameSchema.parse(file.fileName);
+    return Response.json(await uploadAttachment(actor, params.configurationId, { fileName, data: file.data }), { status: 201 });
+  },
+);

@@ -1,4 +1,3 @@
-import { z } from "zod";
 import { getConfiguration } from "@/db/queries/configurations";
 import { getResultForRevision } from "@/db/queries/result-reads";
 import { getRevisionOfConfiguration } from "@/db/queries/revisions";
@@ -7,11 +6,7 @@ import { spectrumToCsv } from "@/lib/export/csv";
 import { spectrumToLatexTable } from "@/lib/export/latex-table";
 import { contentDisposition } from "@/lib/server/content-disposition";
 import { route } from "@/lib/server/route";
-
-const exportQuerySchema = z.object({
-  format: z.enum(["json", "csv", "tex"], { error: "Choose json, csv or tex." }),
-  revision: z.uuid({ error: "Not a valid revision id." }).optional(),
-});
+import { exportQuerySchema } from "@/lib/validations/configuration-api";
 
 const mediaTypes = {
   json: "application/json; charset=utf-8",

@@ -1,13 +1,6 @@
-import { z } from "zod";
 import { getResultSectorPage } from "@/db/queries/result-reads";
 import { route } from "@/lib/server/route";
-
-const sectorPageQuerySchema = z.object({
-  offset: z.coerce.number({ error: "offset must be a whole number." }).int().min(0).max(1_000_000).default(0),
-  limit: z.coerce.number({ error: "limit must be a whole number." }).int().min(1).max(500).default(100),
-  search: z.string().trim().max(120).optional(),
-  tachyonic: z.enum(["true", "false"]).transform((value) => value === "true").optional(),
-});
+import { sectorPageQuerySchema } from "@/lib/validations/configuration-api";
 
 /**
  * GET /api/configurations/[configurationId]/revisions/[revisionId]/result/sectors?offset=&limit=&search=&tachyonic=:
