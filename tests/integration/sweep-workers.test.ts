@@ -75,14 +75,21 @@ describe("sweep workers", () => {
 
     // Kill the first worker as soon as it takes a chunk, once some chunks are stored.
     await until("the first chunks", progress, (value) => value.donePoints >= sweep.chunkSize, logs);
+    // Other tests' sweeps share the queue, so only lines naming this sweep count; a line may
+    // arrive split over two reads.
+    const took = new RegExp(`took chunk (\\d+) of sweep ${sweep.id}`);
+    const storedLine = new RegExp(`stored chunk (\\d+) of sweep ${sweep.id}`);
     const taken = await new Promise<number>((resolve) => {
       let holding: number | null = null;
+      let partial = "";
       const check = (data: Buffer) => {
-        for (const line of data.toString().split("\n")) {
-          const took = /took chunk (\d+) of/.exec(line);
-          const stored = /stored chunk (\d+) of/.exec(line);
-          if (took) holding = Number(took[1]);
-          if (stored && Number(stored[1]) === holding) holding = null;
+        const lines = (partial + data.toString()).split("\n");
+        partial = lines.pop() ?? "";
+        for (const line of lines) {
+          const tookMatch = took.exec(line);
+          const storedMatch = storedLine.exec(line);
+          if (tookMatch) holding = Number(tookMatch[1]);
+          if (storedMatch && Number(storedMatch[1]) === holding) holding = null;
         }
         if (holding === null) return;
         first.child.kill("SIGKILL");
@@ -93,7 +100,7 @@ describe("sweep workers", () => {
     });
     await new Promise((resolve) => first.child.once("exit", resolve));
     // It died holding the chunk: it never stored it.
-    expect(first.log.join("")).not.toMatch(new RegExp(`stored chunk ${taken} of`));
+    expect(first.log.join("")).not.toMatch(new RegExp(`stored chunk ${taken} of sweep ${sweep.id}`));
 
     const finished = await until("the sweep to complete", progress, (value) => value.status === "completed", logs);
     expect(finished.donePoints).toBe(600);
