@@ -22,7 +22,7 @@ async function shutdown(code) {
   stopping = true;
   if (services.length > 0) {
     for (const handle of services.reverse()) await stopService(handle);
-    console.log("[mooring] stopped the app and the mail server; PostgreSQL keeps running (npm run db:stop)");
+    console.log("[mooring] stopped the app, the sweep workers and the mail server; PostgreSQL keeps running (npm run db:stop)");
   }
   process.exit(code);
 }
