@@ -3,7 +3,6 @@
 import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import { SessionProvider } from "next-auth/react";
 import { useState, type ReactNode } from "react";
-import "@/lib/client/zod-browser";
 
 export function Providers({ children }: { children: ReactNode }) {
   // One client per browser session; created lazily so server renders never share a cache.

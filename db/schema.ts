@@ -468,6 +468,8 @@ export const auditLog = pgTable(
 /**
  * Fixed-window counters for rate limiting, shared by every app instance.
  * `key` names the limited thing, e.g. "spectrum:ip:127.0.0.1" or "sign-in:email:a@b.c".
+ * The table is UNLOGGED (migration 0004, which drizzle-kit cannot express): counting a request costs
+ * no write-ahead-log flush, and a crash only forgets the current windows.
  */
 export const rateLimitBuckets = pgTable(
   "rate_limit_buckets",

@@ -12,7 +12,7 @@ import { announceSavedVersion, subscribeToSavedVersions } from "@/lib/client/ver
 import { ApiError } from "@/lib/client/api-client";
 import { selectDocument, useDesignerStore } from "@/lib/client/designer-store";
 import { limitText } from "@/lib/text-limit";
-import { configurationTitleMaxLength } from "@/lib/validations/configuration";
+import { configurationTitleMaxLength } from "@/lib/validations/limits";
 import { Alert } from "@/components/ui/alert";
 import { Badge } from "@/components/ui/badge";
 import { Button, ButtonLink } from "@/components/ui/button";
@@ -121,7 +121,7 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
 
   const newerStored = ready && baseVersion !== null && configuration.version > baseVersion;
 
-  const preview = useLivePreview(document);
+  const preview = useLivePreview(document, dirty);
   const blocked = preview.issues.length > 0;
 
   const openSave = useCallback(() => {

@@ -2,7 +2,7 @@
 
 import { useState } from "react";
 import { limitText } from "@/lib/text-limit";
-import { configurationTitleMaxLength } from "@/lib/validations/configuration";
+import { configurationTitleMaxLength } from "@/lib/validations/limits";
 import { Button } from "@/components/ui/button";
 import { Dialog } from "@/components/ui/dialog";
 import { Field } from "@/components/ui/field";

@@ -21,7 +21,8 @@ const demoId = "landing-demo";
 export function LandingDemo({ configuration }: LandingDemoProps) {
   const ready = useDesignerStore((s) => s.configurationId === demoId);
   const document = useDesignerStore(selectDocument);
-  const preview = useLivePreview(ready ? document : configuration);
+  // Read-only: the demo is never edited, so its shape is never in question.
+  const preview = useLivePreview(ready ? document : configuration, false);
 
   useEffect(() => {
     if (!ready) useDesignerStore.getState().load(configuration, { configurationId: demoId, baseVersion: null });

@@ -7,7 +7,7 @@ import { starterDocument } from "@/lib/designer/starter-document";
 import { useCreateConfiguration } from "@/lib/client/configurations";
 import { ApiError } from "@/lib/client/api-client";
 import { limitText } from "@/lib/text-limit";
-import { configurationTitleMaxLength } from "@/lib/validations/configuration";
+import { configurationTitleMaxLength } from "@/lib/validations/limits";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";

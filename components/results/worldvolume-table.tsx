@@ -1,9 +1,10 @@
 import type { WorldvolumeTheory } from "@/lib/boundary/types";
-import { formatEngineProse, formatMassSquared, worldvolumeKey } from "@/lib/spectrum";
+import { formatEngineProse, formatMassSquared, worldvolumeKey, type ListedWorldvolume } from "@/lib/spectrum";
 import { Badge } from "@/components/ui/badge";
 
 export interface WorldvolumeTableProps {
-  worldvolumes: WorldvolumeTheory[];
+  /** In full, or with their lists cut for the page (`listWorldvolume`), which the table then says. */
+  worldvolumes: Array<WorldvolumeTheory | ListedWorldvolume>;
 }
 
 /**
@@ -65,6 +66,7 @@ export function WorldvolumeTable({ worldvolumes }: WorldvolumeTableProps) {
                         {defect.dimension}d defect where stacks {defect.stacks.join(", ")} meet it: those strings live there
                       </li>
                     ))}
+                    <OmittedEntries worldvolume={worldvolume} />
                   </ul>
                 )}
               </td>
@@ -82,5 +84,22 @@ export function WorldvolumeTable({ worldvolumes }: WorldvolumeTableProps) {
         </tbody>
       </table>
     </div>
+  );
+}
+
+/** "and 56 more ..." under a worldvolume whose lists were cut for the page. */
+function OmittedEntries({ worldvolume }: { worldvolume: WorldvolumeTheory | ListedWorldvolume }) {
+  if (!("omitted" in worldvolume)) return null;
+  const { matter, flavour, defects } = worldvolume.omitted;
+  const parts = [
+    matter > 0 ? `${matter} more ${matter === 1 ? "entry" : "entries"} of strings from other stacks` : null,
+    flavour > 0 ? `${flavour} more flavour ${flavour === 1 ? "group" : "groups"}` : null,
+    defects > 0 ? `${defects} more ${defects === 1 ? "defect" : "defects"}` : null,
+  ].filter((part): part is string => part !== null);
+  if (parts.length === 0) return null;
+  return (
+    <li className="text-muted-foreground" data-testid="worldvolume-omitted">
+      And {parts.join(", ")}: every entry is in the sector list below and in the JSON export.
+    </li>
   );
 }

@@ -9,7 +9,7 @@ import { useForkConfiguration } from "@/lib/client/configurations";
 import { readDraft, writeDraft } from "@/lib/designer/draft-storage";
 import { formatMassSquared } from "@/lib/spectrum";
 import { dimensionLabel, pointDocument, type SweepDefinition, type SweepPointRow } from "@/lib/sweeps";
-import { configurationTitleMaxLength } from "@/lib/validations/configuration";
+import { configurationTitleMaxLength } from "@/lib/validations/limits";
 import { verdictLabels, verdictTextClass } from "./verdict-style";
 
 export interface SweepPointPanelProps {

@@ -4,7 +4,7 @@ import { and, asc, count, eq, ilike, inArray, isNull, sql, type SQL } from "driz
 import type { Configuration } from "../../lib/boundary/types";
 import { parseConfigurationFileBytes } from "../../lib/validations/import";
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from "../../lib/errors";
-import { db } from "../index";
+import { db, type Executor } from "../index";
 import { auditLog, configurations, groups, memberships, results, revisions, shareLinks, users, type GroupRole } from "../schema";
 import { assertUuid, requireActor, requireGroupRole, type Actor } from "./actor";
 import { recordAudit } from "./audit";
@@ -156,7 +156,8 @@ async function insertConfiguration(
  *
  * The write is one statement (see `saveRevisionStatement`): the role and version checks, the new
  * revision, its result, the configuration's new columns and the audit entry land together or not
- * at all. Only when it writes nothing is the reason looked up (404, 403 or 409).
+ * at all, and the configuration is read back in the same transaction. Only when it writes nothing
+ * is the reason looked up (404, 403 or 409).
  */
 export async function updateConfiguration(
   actor: Actor | null,
@@ -168,16 +169,21 @@ export async function updateConfiguration(
   assertExpectedVersion(input.expectedVersion);
   const computed = await resultForDocument(db, input.document);
   const columns = documentColumns(input.document, computed.summary);
-  let saved = false;
   try {
-    saved = await saveRevisionStatement(author, configurationId, input, columns, computed);
+    // The read-back shares the save's transaction: if the database fails after the write, the
+    // caller's error means nothing was saved (never a saved revision answered with a 503).
+    return await db.transaction(async (tx) => {
+      const saved = await saveRevisionStatement(tx, author, configurationId, input, columns, computed);
+      const access = await requireConfigurationRole(tx, actor, configurationId, saved ? "viewer" : "editor");
+      if (!saved) throw new ConflictError(access.row.version);
+      return toConfigurationDto(access.row, access.context, access.role);
+    });
   } catch (error) {
     // Two saves from the same version: the later one meets the earlier one's revision number.
     if (!isUniqueViolation(error)) throw error;
+    const access = await requireConfigurationRole(db, actor, configurationId, "editor");
+    throw new ConflictError(access.row.version);
   }
-  const access = await requireConfigurationRole(db, actor, configurationId, saved ? "viewer" : "editor");
-  if (!saved) throw new ConflictError(access.row.version);
-  return toConfigurationDto(access.row, access.context, access.role);
 }
 
 /** Refuses an `expectedVersion` that is not a positive whole number (422). */
@@ -196,6 +202,7 @@ function assertExpectedVersion(expectedVersion: number): void {
  * unique number (23505) and writes nothing.
  */
 async function saveRevisionStatement(
+  executor: Executor,
   author: Actor,
   configurationId: string,
   input: UpdateConfigurationInput,
@@ -212,7 +219,7 @@ async function saveRevisionStatement(
     result.source === "fresh"
       ? sql`select rev.id, ${result.engineVersion}, ${result.contentHash}, ${result.json}::jsonb, ${result.overviewJson}::jsonb, ${result.computeMs} from rev`
       : sql`select rev.id, s.engine_version, s.content_hash, s.result, s.overview, s.compute_ms from rev, ${results} s where s.id = ${result.resultId}`;
-  const outcome = await db.execute<{ version: number }>(sql`
+  const outcome = await executor.execute<{ version: number }>(sql`
     with rev as (
       insert into ${revisions} (id, configuration_id, number, document, author_id, message)
       select ${revisionId}, c.id, c.version + 1, ${document}::jsonb, ${author.id}, ${input.message.trim()}

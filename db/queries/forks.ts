@@ -3,7 +3,7 @@ import { and, eq, isNull } from "drizzle-orm";
 import type { Configuration } from "../../lib/boundary/types";
 import { ForbiddenError, NotFoundError, ValidationError } from "../../lib/errors";
 import { distinctTitle } from "../../lib/titles";
-import { configurationTitleMaxLength } from "../../lib/validations/configuration";
+import { configurationTitleMaxLength } from "../../lib/validations/limits";
 import { db } from "../index";
 import { configurations, groups, revisions } from "../schema";
 import { assertUuid, getGroupRole, requireActor, roleAtLeast, type Actor } from "./actor";

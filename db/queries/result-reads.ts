@@ -5,9 +5,11 @@ import type { Sector } from "../../lib/boundary/types";
 import { NotFoundError } from "../../lib/errors";
 import { massCurves as curvesOf, type MassCurve } from "../../lib/designer/plot-data";
 import {
+  listWorldvolume,
   pageSectorOverviews,
   resultOverview,
   summaryFacts,
+  type ListedWorldvolume,
   type ResultOverview,
   type SectorOverviewPage,
   type SectorPageQuery,
@@ -36,12 +38,16 @@ const firstPageSectors = 100;
  * pages and each sector's detail are read on demand.
  */
 export interface ResultHeadDto extends ResultMetaDto {
-  result: Omit<ResultOverview, "sectors">;
+  /** Each worldvolume's lists cut to `worldvolumeListEntries` (the full lists are in the stored result). */
+  result: Omit<ResultOverview, "sectors" | "worldvolumes"> & { worldvolumes: ListedWorldvolume[] };
   facts: SummaryFacts;
   massCurves: MassCurve[];
   showGeV: boolean;
   firstPage: SectorOverviewPage;
 }
+
+/** Entries of each worldvolume's matter, flavour and defect lists that the page shows. */
+const worldvolumeListEntries = 8;
 
 /** Sector overview marks drawn on the mass plot at most, over all curves. */
 const maxCurveMarks = 240;
@@ -83,7 +89,7 @@ export async function getResultHead(actor: Actor | null, configurationId: string
     engineVersion: meta.engineVersion,
     computeMs: meta.computeMs,
     createdAt: meta.createdAt,
-    result,
+    result: { ...result, worldvolumes: result.worldvolumes.map((worldvolume) => listWorldvolume(worldvolume, worldvolumeListEntries)) },
     facts: summaryFacts(overview),
     massCurves,
     // Every row carries a mass in GeV exactly when the configuration sets a string scale.

@@ -1,7 +1,7 @@
 import "server-only";
 import { and, eq, isNull, sql } from "drizzle-orm";
 import type { Configuration } from "../../lib/boundary/types";
-import { configurationTitleMaxLength } from "../../lib/validations/configuration";
+import { configurationTitleMaxLength } from "../../lib/validations/limits";
 import type { ResultSummary } from "../../lib/spectrum";
 import { ConflictError, NotFoundError, ValidationError } from "../../lib/errors";
 import type { Transaction } from "../index";

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import type { Configuration } from "@/lib/boundary/types";
-import { configurationTitleMaxLength } from "@/lib/validations/configuration";
+import { configurationTitleMaxLength } from "@/lib/validations/limits";
 import { checkConfiguration } from "@/lib/boundary";
 import {
   addStack,

@@ -10,7 +10,7 @@
 import { configurationLimits, dimensionOf } from "@/lib/boundary";
 import type { Configuration, Stack, Theory } from "@/lib/boundary/types";
 import { cleanNumber } from "@/lib/canvas/snap";
-import { configurationTitleMaxLength } from "@/lib/validations/configuration";
+import { configurationTitleMaxLength } from "@/lib/validations/limits";
 
 /** Stack ids: letters, digits, "-" and "_", starting with a letter or digit, at most 64 characters. */
 export const stackIdPattern = /^[A-Za-z0-9][A-Za-z0-9_-]{0,63}$/;

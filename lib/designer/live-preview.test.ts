@@ -5,6 +5,7 @@ import type { Configuration } from "@/lib/boundary/types";
 import { landingDemoConfiguration } from "@/lib/demo-configurations";
 import { configurationSchema } from "@/lib/validations/configuration";
 import { computeLivePreview, groupIssues } from "./live-preview";
+import { shapeIssuesOf } from "./shape-issues";
 
 // The engine's checker, wrapped so each test can count how often one preview runs it.
 vi.mock("@/lib/boundary/check", async (importOriginal) => {
@@ -43,12 +44,17 @@ describe("computeLivePreview", () => {
 
   it("lists shape and engine problems together, as the API's schema does, running the checker once", () => {
     const draft = { ...wrongParity, title: "t".repeat(1000) };
-    const preview = computeLivePreview(draft);
+    const preview = computeLivePreview(draft, { shapeIssues: shapeIssuesOf });
     expect(checker).toHaveBeenCalledTimes(1);
     expect(preview.result).toBeNull();
     const parsed = configurationSchema.safeParse(draft);
     expect(parsed.success).toBe(false);
     expect(preview.issues.map((issue) => issue.path)).toEqual(parsed.error?.issues.map((issue) => issue.path));
+  });
+
+  it("without the shape rules lists only the engine's problems (a document the server accepted)", () => {
+    const preview = computeLivePreview({ ...wrongParity, title: "t".repeat(1000) });
+    expect(preview.issues.map((issue) => issue.path)).toEqual([["stacks", 1, "worldvolume"]]);
   });
 
   it("reports the time between two readings of the given clock", () => {

@@ -1,12 +1,12 @@
 /**
- * The designer's live check and compute: the shape rules of the API's zod schema, then the engine's
- * checks and the spectrum in one pass (`tryComputeSpectrum`), so each edit runs the engine's checker
- * once. Runs in the browser on every edit.
+ * The designer's live check and compute: the shape rules of the API's zod schema (when the caller
+ * passes them, see shape-issues.ts), then the engine's checks and the spectrum in one pass
+ * (`tryComputeSpectrum`), so each edit runs the engine's checker once. Runs in the browser on
+ * every edit.
  */
 import { checkConfiguration, tryComputeSpectrum } from "@/lib/boundary";
 import type { Configuration, SpectrumResult } from "@/lib/boundary/types";
 import type { FieldIssue } from "@/lib/errors";
-import { configurationShapeSchema } from "@/lib/validations/configuration";
 
 /** Everything the preview shows for one draft. */
 export interface LivePreview {
@@ -22,16 +22,22 @@ export interface LivePreview {
 export interface ComputeLivePreviewOptions {
   /** Clock in milliseconds (performance.now by default). */
   now?: () => number;
+  /**
+   * The shape rules (`shapeIssuesOf` from shape-issues.ts). Left out, only the engine's problems
+   * are listed: right for a document the server's schema has already accepted.
+   */
+  shapeIssues?: (document: Configuration) => FieldIssue[];
 }
 
 /**
  * Validates a draft as the API would (`configurationSchema`: shape problems and the engine's
- * problems together) and, when it is valid, computes its spectrum.
+ * problems together, when `options.shapeIssues` is given) and, when it is valid, computes its
+ * spectrum.
  */
 export function computeLivePreview(document: Configuration, options: ComputeLivePreviewOptions = {}): LivePreview {
   const now = options.now ?? (() => performance.now());
   const started = now();
-  const shapeIssues = shapeIssuesOf(document);
+  const shapeIssues = options.shapeIssues?.(document) ?? [];
   // A draft with a shape problem (an over-long title) is not computed, but its engine problems are
   // still listed beside it, as the API's schema would list them.
   const attempt =
@@ -53,15 +59,6 @@ export function groupIssues(issues: FieldIssue[]): { byStack: Map<number, FieldI
     }
   }
   return { byStack, document: documentIssues };
-}
-
-function shapeIssuesOf(document: Configuration): FieldIssue[] {
-  const parsed = configurationShapeSchema.safeParse(document);
-  if (parsed.success) return [];
-  return parsed.error.issues.map((issue) => ({
-    path: issue.path.map((key) => (typeof key === "number" ? key : String(key))),
-    message: issue.message,
-  }));
 }
 
 function withoutDuplicates(issues: FieldIssue[]): FieldIssue[] {

@@ -13,7 +13,7 @@ export { isTachyonicState, tachyonicSectors, type TachyonicSector, type TachyonS
 export { summarizeResult, summaryFacts, type ResultSummary, type SummaryFacts, type SummaryWorldvolume } from "./summary";
 export { massInGeV } from "./gev";
 export { highestUnstretchedMassSquared, unstretchedMassSquared, unstretchedMassSquaredText } from "./mass-cap";
-export { formatWorldvolume, stringCreationSectors, worldvolumeKey } from "./worldvolumes";
+export { formatWorldvolume, listWorldvolume, stringCreationSectors, worldvolumeKey, type ListedWorldvolume } from "./worldvolumes";
 export {
   displaySignificantDigits,
   formatEngineProse,

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { computeSpectrum } from "@/lib/boundary";
 import type { Configuration } from "@/lib/boundary/types";
 import { makeSector, makeSpectrumResult } from "@/tests/fixtures/spectrum-result-builders";
-import { formatWorldvolume, stringCreationSectors, worldvolumeKey } from "./worldvolumes";
+import { formatWorldvolume, listWorldvolume, stringCreationSectors, worldvolumeKey } from "./worldvolumes";
 
 const pointAndWall: Configuration = {
   format: 1,
@@ -42,5 +42,29 @@ describe("stringCreationSectors", () => {
     const d1d9 = makeSpectrumResult([makeSector(["d1", "d9"], { nu: 8, dd: 0 })]);
     expect(stringCreationSectors(d1d9)).toEqual([]);
     expect(stringCreationSectors(makeSpectrumResult([makeSector(["a", "b"], { nu: 8, dd: 1 })], { theory: "bosonic" }))).toEqual([]);
+  });
+});
+
+describe("listWorldvolume", () => {
+  it("keeps the first entries of each list in the engine's order and counts the rest", () => {
+    // Six parallel D4s spread along x9 (a made-up layout, not a physics claim): each worldvolume
+    // lists the strings to the five others.
+    const slabs = Array.from({ length: 6 }, (_, index) => ({
+      id: `s${index}`, label: "", count: 1, anti: false, worldvolume: [1, 2, 3, 4], position: { "9": index * 3 },
+    }));
+    const full = computeSpectrum({ ...pointAndWall, stacks: slabs }).worldvolumes.find((worldvolume) => worldvolume.stacks.includes("s0"));
+    expect(full).toBeDefined();
+    if (!full) return;
+    expect(full.matter).toHaveLength(5);
+    const listed = listWorldvolume(full, 1);
+    expect(listed.matter).toEqual(full.matter.slice(0, 1));
+    expect(listed.defects).toEqual(full.defects.slice(0, 1));
+    expect(listed.omitted).toEqual({
+      matter: Math.max(0, full.matter.length - 1),
+      flavour: Math.max(0, full.flavour.length - 1),
+      defects: Math.max(0, full.defects.length - 1),
+    });
+    expect(listWorldvolume(full, 100).omitted).toEqual({ matter: 0, flavour: 0, defects: 0 });
+    expect(full.summary).toBe(listed.summary);
   });
 });

@@ -45,3 +45,34 @@ export function stringCreationSectors<S extends Pick<Sector, "nu" | "dd">>(
   if (result.theory === "bosonic") return [];
   return result.sectors.filter((sector) => sector.nu === 8 && sector.dd > 0);
 }
+
+/** A worldvolume with its lists cut for a page, and how many entries of each were left out. */
+export type ListedWorldvolume = WorldvolumeTheory & {
+  omitted: { matter: number; flavour: number; defects: number };
+};
+
+/**
+ * A worldvolume for a page: at most `max` entries of each of `matter`, `flavour` and `defects`
+ * (in the engine's order), with the counts left out. With 64 stacks every worldvolume meets
+ * dozens of others, and the full lists would make the results page megabytes long; the full
+ * lists stay in the stored result and its exports.
+ *
+ * @param worldvolume - Not mutated.
+ * @param max - Entries kept per list (at least 0).
+ * @example
+ * listWorldvolume(wideWorldvolume, 8).omitted.matter // => wideWorldvolume.matter.length - 8
+ */
+export function listWorldvolume(worldvolume: WorldvolumeTheory, max: number): ListedWorldvolume {
+  const keep = Math.max(0, Math.floor(max));
+  return {
+    ...worldvolume,
+    matter: worldvolume.matter.slice(0, keep),
+    flavour: worldvolume.flavour.slice(0, keep),
+    defects: worldvolume.defects.slice(0, keep),
+    omitted: {
+      matter: Math.max(0, worldvolume.matter.length - keep),
+      flavour: Math.max(0, worldvolume.flavour.length - keep),
+      defects: Math.max(0, worldvolume.defects.length - keep),
+    },
+  };
+}

@@ -1,4 +1,4 @@
-import { z } from "zod";
+import { z } from "./zod";
 import { configurationSchema } from "./configuration";
 import { storedResultShape, storedSectorSchema } from "./spectrum-result";
 

@@ -1,4 +1,4 @@
-import { z } from "zod";
+import { z } from "./zod";
 
 /** What a token may do: `read` reads and computes, `write` may also save, fork, comment and delete. */
 export const apiTokenScopeSchema = z.enum(["read", "write"], { error: "Choose read only or read and write." });

@@ -1,4 +1,4 @@
-import { z } from "zod";
+import { z } from "./zod";
 
 /** Largest attachment accepted, in bytes (5 MiB). The database allows more; the app caps here. */
 export const attachmentMaxBytes = 5 * 1024 * 1024;

@@ -1,4 +1,4 @@
-import { z } from "zod";
+import { z } from "./zod";
 
 /** Shortest accepted password; the DAL (db/queries/users.ts) enforces the same rule on the server. */
 export const minPasswordLength = 8;

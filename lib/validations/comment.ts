@@ -1,4 +1,4 @@
-import { z } from "zod";
+import { z } from "./zod";
 
 /** Longest comment body, in characters. */
 export const commentMaxLength = 4000;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { configurationTitleMaxLength } from "./configuration";
+import { configurationTitleMaxLength } from "./limits";
 import { deletedNoticeSchema, forkConfigurationBodySchema, listConfigurationsQuerySchema, parseIfMatch } from "./configuration-api";
 
 describe("parseIfMatch", () => {

@@ -1,5 +1,6 @@
-import { z } from "zod";
-import { configurationSchema, configurationTitleMaxLength } from "./configuration";
+import { z } from "./zod";
+import { configurationSchema } from "./configuration";
+import { configurationTitleMaxLength } from "./limits";
 
 /** Largest request body accepted by the configuration routes, in bytes. */
 export const configurationBodyLimitBytes = 256 * 1024;

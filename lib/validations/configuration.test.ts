@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { formatJsonPath, ValidationError } from "@/lib/errors";
-import { configurationSchema, configurationTitleMaxLength, spectrumRequestSchema } from "./configuration";
+import { configurationSchema, spectrumRequestSchema } from "./configuration";
+import { configurationTitleMaxLength } from "./limits";
 
 const valid = {
   format: 1,

@@ -1,6 +1,7 @@
-import { z } from "zod";
+import { z } from "./zod";
 import { checkConfiguration } from "@/lib/boundary/check";
 import type { Configuration, Stack } from "@/lib/boundary/types";
+import { configurationDescriptionMaxLength, configurationTitleMaxLength, stackLabelMaxLength } from "./limits";
 
 /**
  * Shapes of a configuration document (format 1, product.md "The configuration file"). The
@@ -9,16 +10,10 @@ import type { Configuration, Stack } from "@/lib/boundary/types";
  * issues at their JSON paths so that there is one source of truth for them.
  */
 
-/**
- * The longest configuration title, in characters after trimming. The one limit for the document
- * schema, the API bodies that carry a title, the forms and the data-access layer.
- */
-export const configurationTitleMaxLength = 200;
-
 /** The shape of one stack. */
 export const stackSchema = z.object({
   id: z.string({ error: "A stack id must be text." }),
-  label: z.string({ error: "A label must be text." }).max(120, "Keep the label under 120 characters.").default(""),
+  label: z.string({ error: "A label must be text." }).max(stackLabelMaxLength, `Keep the label under ${stackLabelMaxLength} characters.`).default(""),
   count: z.number({ error: "The count must be a number." }),
   anti: z.boolean({ error: "anti must be true or false." }).default(false),
   worldvolume: z.array(z.number({ error: "Worldvolume axes must be numbers." }), {
@@ -47,7 +42,7 @@ export const configurationShapeSchema = z.object({
     .trim()
     .min(1, "Give the configuration a title.")
     .max(configurationTitleMaxLength, `Use at most ${configurationTitleMaxLength} characters.`),
-  description: z.string().max(5000, "Keep the description under 5000 characters.").optional(),
+  description: z.string().max(configurationDescriptionMaxLength, `Keep the description under ${configurationDescriptionMaxLength} characters.`).optional(),
   theory: z.enum(["bosonic", "IIA", "IIB"], { error: 'The theory must be "bosonic", "IIA" or "IIB".' }),
   dimension: z.number({ error: "The dimension must be a number." }).optional(),
   stringScaleGeV: z.number({ error: "The string scale must be a number of GeV or null." }).nullable().default(null),

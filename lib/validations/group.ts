@@ -1,4 +1,4 @@
-import { z } from "zod";
+import { z } from "./zod";
 
 /** Roles inside a group, strongest first. */
 export const groupRoleSchema = z.enum(["owner", "editor", "viewer"]);

@@ -1,4 +1,4 @@
-import { z } from "zod";
+import { z } from "./zod";
 import { checkConfiguration } from "@/lib/boundary/check";
 import type { Configuration } from "@/lib/boundary/types";
 import { ValidationError, type FieldIssue } from "@/lib/errors";

@@ -1,4 +1,4 @@
-import { z } from "zod";
+import { z } from "./zod";
 import { emailSchema, linkTokenSchema, nameSchema, newPasswordSchema } from "./auth";
 import { groupRoleSchema } from "./group";
 

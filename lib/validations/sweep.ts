@@ -1,4 +1,4 @@
-import { z } from "zod";
+import { z } from "./zod";
 import { sweepLimits } from "@/lib/sweeps/definition";
 import type { SweepDefinition, SweepDimension, SweepValues } from "@/lib/sweeps/types";
 
