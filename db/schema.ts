@@ -18,6 +18,7 @@ import {
 } from "drizzle-orm/pg-core";
 import type { Configuration } from "../lib/boundary/types";
 import type { ResultOverview } from "../lib/spectrum/overview";
+import type { SweepDefinition } from "../lib/sweeps/types";
 import type { StoredSpectrumResult } from "../lib/validations/spectrum-result";
 
 /*
@@ -51,6 +52,7 @@ export const authTokenKindEnum = pgEnum("auth_token_kind", ["sign_in_link", "pas
 export const groupKindEnum = pgEnum("group_kind", ["personal", "research", "lab"]);
 export const groupRoleEnum = pgEnum("group_role", ["owner", "editor", "viewer"]);
 export const theoryEnum = pgEnum("theory", ["bosonic", "IIA", "IIB"]);
+export const sweepStatusEnum = pgEnum("sweep_status", ["running", "cancelled", "completed", "failed"]);
 export const apiTokenScopeEnum = pgEnum("api_token_scope", ["read", "write"]);
 
 // ---------------------------------------------------------------------------------------------
@@ -483,6 +485,94 @@ export const rateLimitBuckets = pgTable(
 );
 
 // ---------------------------------------------------------------------------------------------
+// Sweeps (lib/sweeps): a saved revision varied along dimensions; chunks of points run as jobs on
+// the pg-boss queue (schema "pgboss", managed by pg-boss itself), results are stored per point.
+// ---------------------------------------------------------------------------------------------
+
+export const sweeps = pgTable(
+  "sweeps",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    configurationId: uuid("configuration_id")
+      .notNull()
+      .references(() => configurations.id, { onDelete: "cascade" }),
+    /** The saved revision whose document every point varies (revisions are immutable). */
+    revisionId: uuid("revision_id")
+      .notNull()
+      .references(() => revisions.id, { onDelete: "cascade" }),
+    title: text("title").notNull().default(""),
+    definition: jsonb("definition").$type<SweepDefinition>().notNull(),
+    totalPoints: integer("total_points").notNull(),
+    chunkSize: integer("chunk_size").notNull(),
+    chunkCount: integer("chunk_count").notNull(),
+    /** Points stored so far; counts only rows actually inserted, so retried chunks never count twice. */
+    donePoints: integer("done_points").notNull().default(0),
+    status: sweepStatusEnum("status").notNull().default("running"),
+    /** Bumped on every resume; part of the queue's job ids, so a resumed sweep gets fresh jobs. */
+    generation: integer("generation").notNull().default(1),
+    /** On a lab starter: offered to students to run on their forks. */
+    attachedToStarter: boolean("attached_to_starter").notNull().default(false),
+    failure: text("failure"),
+    createdBy: uuid("created_by")
+      .notNull()
+      .references(() => users.id),
+    createdAt: createdAt(),
+    /** When the sweep last started or resumed (the rate and time left count from here). */
+    startedAt: timestamptz("started_at").notNull().defaultNow(),
+    /** Points stored when the sweep last started or resumed. */
+    startedPoints: integer("started_points").notNull().default(0),
+    finishedAt: timestamptz("finished_at"),
+  },
+  (t) => [
+    check("sweeps_points", sql`${t.donePoints} >= 0 and ${t.donePoints} <= ${t.totalPoints} and ${t.chunkSize} >= 1`),
+    index("sweeps_configuration_created_idx").on(t.configurationId, t.createdAt),
+    index("sweeps_created_by_status_idx").on(t.createdBy, t.status),
+    index("sweeps_revision_id_idx").on(t.revisionId),
+  ],
+);
+
+/** One row per chunk: its fair-share start tag and when it was stored. */
+export const sweepChunks = pgTable(
+  "sweep_chunks",
+  {
+    sweepId: uuid("sweep_id")
+      .notNull()
+      .references(() => sweeps.id, { onDelete: "cascade" }),
+    chunkIndex: integer("chunk_index").notNull(),
+    /** Start tag of fair scheduling (lib/sweeps/chunks.ts); the job's priority is its negative. */
+    tag: integer("tag").notNull(),
+    doneAt: timestamptz("done_at"),
+  },
+  (t) => [
+    primaryKey({ name: "sweep_chunks_pk", columns: [t.sweepId, t.chunkIndex] }),
+    index("sweep_chunks_waiting_tag_idx").on(t.tag).where(sql`${t.doneAt} is null`),
+    index("sweep_chunks_done_idx").on(t.sweepId, t.doneAt),
+  ],
+);
+
+/** The summary of one point; (sweep, point) is the idempotent key, so a retried chunk stores nothing twice. */
+export const sweepPoints = pgTable(
+  "sweep_points",
+  {
+    sweepId: uuid("sweep_id")
+      .notNull()
+      .references(() => sweeps.id, { onDelete: "cascade" }),
+    pointIndex: integer("point_index").notNull(),
+    /** Supercharges (type II); null for bosonic and for refused points. */
+    supercharges: integer("supercharges"),
+    tachyonicSectors: integer("tachyonic_sectors").notNull().default(0),
+    /** alpha' M^2 of the lightest state. */
+    lightestMassSquared: doublePrecision("lightest_mass_squared"),
+    /** Decimal string (counts outgrow 2^53). */
+    masslessStates: text("massless_states"),
+    gaugeGroup: text("gauge_group"),
+    /** Why the engine refused the point's configuration; null for computed points. */
+    problem: text("problem"),
+  },
+  (t) => [primaryKey({ name: "sweep_points_pk", columns: [t.sweepId, t.pointIndex] })],
+);
+
+// ---------------------------------------------------------------------------------------------
 // Row types
 // ---------------------------------------------------------------------------------------------
 
@@ -521,3 +611,8 @@ export type NewShareLinkRow = typeof shareLinks.$inferInsert;
 export type AuditLogRow = typeof auditLog.$inferSelect;
 export type NewAuditLogRow = typeof auditLog.$inferInsert;
 export type RateLimitBucketRow = typeof rateLimitBuckets.$inferSelect;
+export type SweepStatus = (typeof sweepStatusEnum.enumValues)[number];
+export type SweepRow = typeof sweeps.$inferSelect;
+export type NewSweepRow = typeof sweeps.$inferInsert;
+export type SweepChunkRow = typeof sweepChunks.$inferSelect;
+export type SweepPointRow = typeof sweepPoints.$inferSelect;

@@ -1,8 +1,10 @@
 #!/usr/bin/env node
 // `npm start`: install what is missing, start PostgreSQL and the fake mail server, migrate and seed
-// the `mooring` database, build, and serve the app on http://127.0.0.1:3000 until Ctrl-C.
+// the `mooring` database, build, and serve the app on http://127.0.0.1:3000 with sweep workers
+// (MOORING_WORKERS of them, default one per core) until Ctrl-C.
 // PostgreSQL keeps running afterwards (`npm run db:stop` stops it).
-import { appEnv, buildApp, dataDir, runNpmScriptIfPresent, startApp, startMaildev } from "./lib/app.mjs";
+import { availableParallelism } from "node:os";
+import { appEnv, buildApp, dataDir, runNpmScriptIfPresent, startApp, startMaildev, startWorkers } from "./lib/app.mjs";
 import { isPortInUse } from "./lib/net.mjs";
 import { createDatabase, databaseUrl, start as startPostgres } from "./lib/postgres.mjs";
 import { stopService } from "./lib/processes.mjs";
@@ -20,7 +22,7 @@ async function shutdown(code) {
   stopping = true;
   if (services.length > 0) {
     for (const handle of services.reverse()) await stopService(handle);
-    console.log("[mooring] stopped the app and the mail server; PostgreSQL keeps running (npm run db:stop)");
+    console.log("[mooring] stopped the app, the sweep workers and the mail server; PostgreSQL keeps running (npm run db:stop)");
   }
   process.exit(code);
 }
@@ -59,8 +61,10 @@ async function main() {
 
   await startMaildev({ smtpPort, webPort: mailboxPort, dir: dataDir("maildev"), services });
   const app = await startApp({ port: appPort, env, services, inherit: true });
+  const workers = Number(process.env.MOORING_WORKERS ?? availableParallelism());
+  startWorkers({ count: Number.isInteger(workers) && workers >= 0 ? workers : 1, env, services, inherit: true });
   console.log(`\n[mooring] Mooring is running at http://127.0.0.1:${appPort}  (captured mail: ${env.MAILBOX_URL})`);
-  console.log("[mooring] Ctrl-C stops the app and the mail server.\n");
+  console.log("[mooring] Ctrl-C stops the app, the sweep workers and the mail server.\n");
   const code = await app.exitedPromise;
   if (!stopping) return fail(`the app exited unexpectedly (code ${code})`);
 }

@@ -5,7 +5,7 @@
 // (scripts/fault-run.mjs: a throwaway PostgreSQL stopped and restarted under load) on the same build.
 // `node scripts/test.mjs unit integration` runs only the named parts (unit, integration, e2e).
 import { rmSync } from "node:fs";
-import { appEnv, buildApp, clearMailbox, dataDir, runNpmScriptIfPresent, startApp, startMaildev } from "./lib/app.mjs";
+import { appEnv, buildApp, clearMailbox, dataDir, runNpmScriptIfPresent, startApp, startMaildev, startWorkers } from "./lib/app.mjs";
 import { findFreePort, freePortNear } from "./lib/net.mjs";
 import {
   clusterState,
@@ -213,6 +213,8 @@ async function main() {
       const serveEnv = appEnv({ databaseUrl: databaseUrl(e2eDb, pg.port), ...ports, appPort: await freePortNear(appPort) });
       const serving = await step("serve the build", async () => {
         await startApp({ port: new URL(serveEnv.NEXTAUTH_URL).port, env: serveEnv, services });
+        // The sweep browser test needs a worker computing the points.
+        startWorkers({ count: 1, env: serveEnv, services });
         await clearMailbox(serveEnv.MAILBOX_URL);
         console.log(`[test] app on ${serveEnv.NEXTAUTH_URL}, mailbox on ${serveEnv.MAILBOX_URL}, browser ${chromiumPath}`);
         return { code: 0, output: "" };

@@ -2,15 +2,18 @@ import { SupersymmetryBadge, TachyonBadge } from "@/components/collaboration/res
 import { EmptyState } from "@/components/ui/empty-state";
 import { Table, TableBody, TableCaption, TableCell, TableHead, TableHeader, TableRow } from "@/components/ui/table";
 import type { StarterComparisonDto } from "@/db/queries/labs";
+import type { LabSweepDto } from "@/db/queries/sweeps";
 import { formatDateTime } from "@/lib/format-date";
 import { formatMassSquared } from "@/lib/spectrum";
 
 export interface StarterForksComparisonProps {
   comparison: StarterComparisonDto[];
+  /** The students' sweeps, by fork configuration id (db/queries/sweeps.ts `listLabSweeps`). */
+  sweeps?: Record<string, LabSweepDto[]>;
 }
 
 /** The instructor's view: per starter, each student's fork with its key results side by side. */
-export function StarterForksComparison({ comparison }: StarterForksComparisonProps) {
+export function StarterForksComparison({ comparison, sweeps = {} }: StarterForksComparisonProps) {
   if (comparison.length === 0) {
     return (
       <EmptyState
@@ -44,6 +47,7 @@ export function StarterForksComparison({ comparison }: StarterForksComparisonPro
                   <TableHead>Tachyons</TableHead>
                   <TableHead className="text-right">Lightest α′M²</TableHead>
                   <TableHead className="text-right">Revisions</TableHead>
+                  <TableHead>Sweeps</TableHead>
                   <TableHead>Last change</TableHead>
                 </TableRow>
               </TableHeader>
@@ -61,6 +65,9 @@ export function StarterForksComparison({ comparison }: StarterForksComparisonPro
                     </TableCell>
                     <TableCell className="text-right font-mono">{formatMassSquared(fork.lightestMassSquared)}</TableCell>
                     <TableCell className="text-right">{fork.version}</TableCell>
+                    <TableCell>
+                      <ForkSweeps sweeps={sweeps[fork.configurationId] ?? []} />
+                    </TableCell>
                     <TableCell className="text-muted-foreground">{formatDateTime(fork.updatedAt)}</TableCell>
                   </TableRow>
                 ))}
@@ -70,5 +77,20 @@ export function StarterForksComparison({ comparison }: StarterForksComparisonPro
         </section>
       ))}
     </div>
+  );
+}
+
+/** A fork's sweeps as the instructor sees them: status, progress and how many points were supersymmetric or tachyonic. */
+function ForkSweeps({ sweeps }: { sweeps: LabSweepDto[] }) {
+  if (sweeps.length === 0) return <span className="text-muted-foreground">none</span>;
+  return (
+    <ul className="grid gap-0.5 text-xs">
+      {sweeps.map((sweep) => (
+        <li key={sweep.id}>
+          {sweep.title || "Untitled sweep"}: {sweep.status}, {sweep.donePoints}/{sweep.totalPoints} points; {sweep.supersymmetricPoints} supersymmetric,{" "}
+          {sweep.tachyonicPoints} tachyonic
+        </li>
+      ))}
+    </ul>
   );
 }

@@ -263,6 +263,9 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
           <ButtonLink href={`/configurations/${id}/results`} variant="secondary" size="sm">
             Results
           </ButtonLink>
+          <ButtonLink href={`/configurations/${id}/sweeps`} variant="ghost" size="sm">
+            Sweeps
+          </ButtonLink>
           <ButtonLink href={`/configurations/${id}/history`} variant="ghost" size="sm">
             History
           </ButtonLink>

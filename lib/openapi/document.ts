@@ -29,6 +29,7 @@ import {
   updateConfigurationBodySchema,
 } from "@/lib/validations/configuration-api";
 import { storedSectorSchema } from "@/lib/validations/spectrum-result";
+import { startSweepBodySchema, sweepExportQuerySchema } from "@/lib/validations/sweep";
 import { auditQuerySchema, changeRoleSchema, createGroupSchema } from "@/lib/validations/group";
 import { importFieldsSchema } from "@/lib/validations/import";
 import { acceptInvitationSchema, createInvitationSchema } from "@/lib/validations/invitation";
@@ -75,6 +76,7 @@ const tags = {
   compute: { name: "Compute", description: "Stateless spectrum computation; open to everyone within a budget." },
   configurations: { name: "Configurations", description: "Saved configurations, their revisions and stored results." },
   collaboration: { name: "Collaboration", description: "Comments, attachments and read-only share links of a configuration." },
+  sweeps: { name: "Sweeps", description: "Sweeps of a saved revision over boundary choices, positions, counts and orientations, computed by workers from a queue." },
   groups: { name: "Groups", description: "Research groups and labs, members, invitations and the audit log." },
   service: { name: "Service", description: "Health check, this document, and the sign-in machinery the pages use." },
 } as const;
@@ -98,6 +100,16 @@ export const requestExamples = {
   changeRole: { role: "editor" },
   invitation: { email: "colleague@example.org", role: "viewer" },
   acceptInvitation: { token: "kV3mQ9b2Z1rT8nC5xW0yL7dF4hJ6sA2pE9gU1iO3qRk" },
+  startSweep: {
+    title: "Probe pulled away, both orientations",
+    definition: {
+      format: 1,
+      dimensions: [
+        { kind: "orientation", stack: "probe" },
+        { kind: "position", stack: "probe", axis: 8, values: { kind: "range", from: 0, to: 4, steps: 9 } },
+      ],
+    },
+  },
 } as const;
 
 const uuid = (what: string) => z.uuid().describe(`Id of the ${what}.`);
@@ -355,6 +367,74 @@ const operations: Operation[] = [
     summary: "Revoke a share link",
     access: "signed-in",
     success: { status: 200, description: "The link, revoked." },
+  },
+  {
+    method: "get",
+    path: "/api/configurations/{configurationId}/sweeps",
+    tag: "sweeps",
+    summary: "List sweeps",
+    description: "The configuration's sweeps, newest first, with their progress, and the sweeps its lab starter suggests. Any member.",
+    access: "signed-in",
+    success: listOf("`{ items, suggested }`."),
+  },
+  {
+    method: "post",
+    path: "/api/configurations/{configurationId}/sweeps",
+    tag: "sweeps",
+    summary: "Start a sweep",
+    description:
+      "Starts a sweep of the current revision (editors and owners): every combination of the dimensions' values is one point, at most 200,000 points. A definition that does not fit the configuration, or is over the point limit, is a 422 with the problems at their paths; past the account's running points the answer is 429. Workers compute the points; follow the progress at GET /api/sweeps/{sweepId}.",
+    access: "signed-in",
+    body: { schema: startSweepBodySchema, example: requestExamples.startSweep, limitBytes: 64 * 1024 },
+    success: { status: 201, description: "The sweep (Location header)." },
+  },
+  {
+    method: "get",
+    path: "/api/sweeps/{sweepId}",
+    tag: "sweeps",
+    summary: "Read a sweep",
+    description: "The sweep, its progress (points done of the total, status) and the document it varies. Members of its configuration.",
+    access: "signed-in",
+    success: { status: 200, description: "The sweep." },
+  },
+  {
+    method: "get",
+    path: "/api/sweeps/{sweepId}/points",
+    tag: "sweeps",
+    summary: "List a sweep's points",
+    description:
+      "Every stored point, column by column (`index`, `ok`, `supercharges`, `tachyonicSectors`, `lightestMassSquared` in units of 1/alpha', `masslessStates`, `gaugeGroup`, `problem`), compact enough for 200,000 points.",
+    access: "signed-in",
+    success: { status: 200, description: "The points' columns." },
+  },
+  {
+    method: "get",
+    path: "/api/sweeps/{sweepId}/export",
+    tag: "sweeps",
+    summary: "Export a sweep",
+    description: "The stored points with their dimension values, the conventions (alpha' = 1) and a caution, as CSV or JSON. Downloads as an attachment.",
+    access: "signed-in",
+    query: sweepExportQuerySchema,
+    success: { status: 200, description: "The file.", mediaType: "application/octet-stream" },
+  },
+  {
+    method: "post",
+    path: "/api/sweeps/{sweepId}/cancel",
+    tag: "sweeps",
+    summary: "Cancel a sweep",
+    description: "Stops a running sweep (editors and owners); the points stored so far stay. A no-op for a sweep that is not running.",
+    access: "signed-in",
+    success: { status: 200, description: "The sweep." },
+  },
+  {
+    method: "post",
+    path: "/api/sweeps/{sweepId}/resume",
+    tag: "sweeps",
+    summary: "Resume a sweep",
+    description: "Puts the points not yet stored of a cancelled or failed sweep back on the queue (editors and owners); a no-op for a running or completed one. 429 past the account's running points.",
+    access: "signed-in",
+    success: { status: 200, description: "The sweep." },
+    alsoAnswers: [429],
   },
   {
     method: "get",

@@ -11,6 +11,10 @@ const envSchema = z.object({
   MAIL_FROM: z.string().min(1).default("Mooring <no-reply@mooring.test>"),
   /** Web address of the local fake mailbox's API; set only when the fake SMTP server is in use. */
   MAILBOX_URL: z.url().optional(),
+  /** A sweep chunk still running after this long counts as lost (its worker died) and is retried. */
+  SWEEP_JOB_EXPIRE_SECONDS: z.coerce.number().int().min(1).max(3600).default(120),
+  /** How often sweep workers look for expired chunks. */
+  SWEEP_MAINTENANCE_SECONDS: z.coerce.number().int().min(1).max(600).default(10),
   /** Compute budget of POST /api/spectrum per minute, in units of about 500 sector-levels: per anonymous client address. */
   SPECTRUM_BUDGET_ANONYMOUS: z.coerce.number().int().min(1).default(120),
   /** The same per signed-in account and per API token. */

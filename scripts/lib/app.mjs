@@ -94,3 +94,17 @@ export async function startApp({ port, env, services, inherit = false }) {
 export function dataDir(name) {
   return path.join(repoRoot, ".data", name);
 }
+
+/**
+ * Starts `count` sweep workers (the script of `npm run worker`, run by node with tsx's loader so
+ * that stopping the service stops the worker itself) against `env`'s database; pushes their
+ * handles on `services`.
+ */
+export function startWorkers({ count, env, services, inherit = false }) {
+  for (let i = 1; i <= count; i += 1) {
+    const name = count > 1 ? `worker-${i}` : "worker";
+    services.push(
+      startService(name, process.execPath, ["--import", "tsx", "--conditions=react-server", "scripts/sweep-worker.ts"], { env, inherit }),
+    );
+  }
+}

@@ -6,6 +6,7 @@ import { addComment } from "@/db/queries/comments";
 import { createConfiguration } from "@/db/queries/configurations";
 import { createInvitation } from "@/db/queries/invitations";
 import { createShareLink } from "@/db/queries/share-links";
+import { startSweep } from "@/db/queries/sweeps";
 import { probeNearSevenBrane } from "@/lib/demo-configurations";
 import { clientAddressHeader } from "@/scripts/lib/client-address.mjs";
 import { createTestGroup, createTestUser, type TestUser } from "@/tests/fixtures/users";
@@ -59,6 +60,8 @@ interface World {
   shareLinkId: string;
   /** A pending invitation to an outside address. */
   invitationId: string;
+  /** A sweep of the configuration (never computed: no worker runs here). */
+  sweepId: string;
   /** A pending invitation to the acting user's own address (or a new address for anonymous), in another group. */
   acceptTokenFor: (role: Role) => Promise<string>;
   /** The owner's personal API tokens. */
@@ -82,7 +85,7 @@ async function createWorld(): Promise<World> {
   ]);
   const configuration = await createConfiguration(owner.actor, group.id, probeNearSevenBrane, "first");
   const png = new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13, 73, 72, 68, 82]);
-  const [attachment, comment, share, invitation, otherGroup, readToken, writeToken] = await Promise.all([
+  const [attachment, comment, share, invitation, otherGroup, readToken, writeToken, sweep] = await Promise.all([
     uploadAttachment(editor.actor, configuration.id, { fileName: "figure.png", data: png }),
     addComment(editor.actor, configuration.id, { body: "Check the NS zero-point energy." }),
     createShareLink(owner.actor, configuration.id),
@@ -90,6 +93,7 @@ async function createWorld(): Promise<World> {
     createTestGroup(host.actor),
     createApiToken(owner.actor, { name: "matrix read", scope: "read", expiresInDays: 7 }),
     createApiToken(owner.actor, { name: "matrix write", scope: "write", expiresInDays: 7 }),
+    startSweep(owner.actor, configuration.id, { definition: sweepDefinition }),
   ]);
   const users = { nonMember, viewer, editor, owner, admin };
   return {
@@ -103,12 +107,16 @@ async function createWorld(): Promise<World> {
     shareLinkId: share.link.id,
     invitationId: invitation.invitation.id,
     ownerTokens: { read: readToken.secret, write: writeToken.secret },
+    sweepId: sweep.id,
     acceptTokenFor: async (role) => {
       const email = role === "anonymous" ? `newcomer-${Date.now()}-${Math.random()}@test.mooring` : users[role].actor.email;
       return (await createInvitation(host.actor, otherGroup.id, { email, role: "viewer" })).token;
     },
   };
 }
+
+/** Two points: the probe's position on x8. */
+const sweepDefinition = { format: 1 as const, dimensions: [{ kind: "position" as const, stack: "probe", axis: 8, values: { kind: "list" as const, values: [1, 2] } }] };
 
 function actorOf(world: World, role: Role): Actor | null {
   return role === "anonymous" ? null : world.users[role].actor;
@@ -408,6 +416,37 @@ const matrix: Record<string, RouteEntry> = {
     methods: {
       GET: { request: (w) => ({ request: json("GET", `${configurationPath(w)}/share-links`), params: configurationParams(w) }), expect: editorsWrite(200) },
       POST: { request: (w) => ({ request: json("POST", `${configurationPath(w)}/share-links`), params: configurationParams(w) }), expect: editorsWrite(201) },
+    },
+  },
+  "configurations/[configurationId]/sweeps/route.ts": {
+    methods: {
+      GET: { request: (w) => ({ request: json("GET", `${configurationPath(w)}/sweeps`), params: configurationParams(w) }), expect: membersRead },
+      POST: {
+        request: (w) => ({ request: json("POST", `${configurationPath(w)}/sweeps`, { definition: sweepDefinition }), params: configurationParams(w) }),
+        expect: editorsWrite(201),
+      },
+    },
+  },
+  "sweeps/[sweepId]/route.ts": {
+    methods: { GET: { request: (w) => ({ request: json("GET", `/api/sweeps/${w.sweepId}`), params: { sweepId: w.sweepId } }), expect: membersRead } },
+  },
+  "sweeps/[sweepId]/points/route.ts": {
+    methods: { GET: { request: (w) => ({ request: json("GET", `/api/sweeps/${w.sweepId}/points`), params: { sweepId: w.sweepId } }), expect: membersRead } },
+  },
+  "sweeps/[sweepId]/export/route.ts": {
+    methods: {
+      GET: { request: (w) => ({ request: json("GET", `/api/sweeps/${w.sweepId}/export?format=csv`), params: { sweepId: w.sweepId } }), expect: membersRead },
+    },
+  },
+  // Cancel and resume are idempotent, so the cells may share one sweep in any order.
+  "sweeps/[sweepId]/cancel/route.ts": {
+    methods: {
+      POST: { request: (w) => ({ request: json("POST", `/api/sweeps/${w.sweepId}/cancel`), params: { sweepId: w.sweepId } }), expect: editorsWrite(200) },
+    },
+  },
+  "sweeps/[sweepId]/resume/route.ts": {
+    methods: {
+      POST: { request: (w) => ({ request: json("POST", `/api/sweeps/${w.sweepId}/resume`), params: { sweepId: w.sweepId } }), expect: editorsWrite(200) },
     },
   },
   "share-links/[shareLinkId]/route.ts": {

@@ -17,6 +17,7 @@ import {
 import { createCommentSchema } from "@/lib/validations/comment";
 import { changeRoleSchema, createGroupSchema } from "@/lib/validations/group";
 import { acceptInvitationSchema, createInvitationSchema } from "@/lib/validations/invitation";
+import { startSweepBodySchema } from "@/lib/validations/sweep";
 import { createTestUser } from "@/tests/fixtures/users";
 import { handlersOf, routeFiles, urlPathOf } from "@/tests/support/app-modules";
 
@@ -100,6 +101,7 @@ describe("the OpenAPI document", () => {
       changeRole: changeRoleSchema,
       invitation: createInvitationSchema,
       acceptInvitation: acceptInvitationSchema,
+      startSweep: startSweepBodySchema,
     };
     for (const [name, example] of Object.entries(requestExamples)) {
       expect({ name, ok: zodOf[name as keyof typeof requestExamples].safeParse(example).success }).toEqual({ name, ok: true });

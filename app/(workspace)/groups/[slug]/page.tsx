@@ -15,6 +15,7 @@ import { listConfigurationsForGroup } from "@/db/queries/configurations";
 import { getGroupBySlug, listMembers } from "@/db/queries/groups";
 import { listInvitations } from "@/db/queries/invitations";
 import { listStarterForks } from "@/db/queries/labs";
+import { listLabSweeps } from "@/db/queries/sweeps";
 import { NotFoundError } from "@/lib/errors";
 import { requireUser } from "@/lib/server/session";
 import { toJson } from "@/lib/client/api-client";
@@ -41,12 +42,13 @@ export default async function GroupPage({ params }: GroupPageProps) {
   const isLab = group.kind === "lab";
   const personal = group.kind === "personal";
   const pageSize = 10;
-  const [members, firstPage, labConfigurations, invitations, comparison] = await Promise.all([
+  const [members, firstPage, labConfigurations, invitations, comparison, labSweeps] = await Promise.all([
     listMembers(actor, group.id),
     listConfigurationsForGroup(actor, group.id, { sort: "updated", direction: "desc", limit: pageSize }),
     isLab ? listConfigurationsForGroup(actor, group.id, { sort: "title", direction: "asc", limit: 500, starter: isOwner ? undefined : true }) : null,
     isOwner && !personal ? listInvitations(actor, group.id) : Promise.resolve([]),
     isLab && roleAtLeast(group.role, "editor") ? listStarterForks(actor, group.id) : Promise.resolve(null),
+    isLab && roleAtLeast(group.role, "editor") ? listLabSweeps(actor, group.id) : Promise.resolve({}),
   ]);
 
   return (
@@ -117,10 +119,10 @@ export default async function GroupPage({ params }: GroupPageProps) {
         <Card aria-labelledby="forks-title">
           <CardHeader>
             <CardTitle id="forks-title">Student forks</CardTitle>
-            <CardDescription>Every student&apos;s fork of each starter, with its key results side by side.</CardDescription>
+            <CardDescription>Every student&apos;s fork of each starter, with its key results and the student&apos;s sweeps side by side.</CardDescription>
           </CardHeader>
           <CardContent>
-            <StarterForksComparison comparison={comparison} />
+            <StarterForksComparison comparison={comparison} sweeps={labSweeps} />
           </CardContent>
         </Card>
       ) : null}
