@@ -27,14 +27,18 @@ export const apiTokenPrefix = "mooring_";
 /** A token as sent in `Authorization: Bearer <token>`: the prefix and 43 base64url characters. */
 export const apiTokenSecretSchema = z.string().regex(/^mooring_[A-Za-z0-9_-]{43}$/, "Not a Mooring API token.");
 
-/** The routes that accept a token: the configuration routes and the stateless compute. */
-const tokenRoutePattern = /^\/api\/(?:configurations(?:\/.*)?|spectrum)$/;
+/**
+ * The routes that accept a token: the configuration routes (a configuration's sweeps among them),
+ * the stateless compute, and a sweep's own routes, so a script that starts a sweep can follow it.
+ */
+const tokenRoutePattern = /^\/api\/(?:configurations(?:\/.*)?|spectrum|sweeps\/.+)$/;
 
 /**
  * True when the route at `pathname` accepts `Authorization: Bearer <token>`.
  *
  * @example
  * acceptsApiTokens("/api/configurations/3f0c.../revisions") // => true
+ * acceptsApiTokens("/api/sweeps/9a1e.../points") // => true
  * acceptsApiTokens("/api/groups") // => false
  */
 export function acceptsApiTokens(pathname: string): boolean {

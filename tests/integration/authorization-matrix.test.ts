@@ -518,8 +518,12 @@ describe("authorization matrix", () => {
 // cookie too, the token alone counts.
 // ---------------------------------------------------------------------------------------------
 
-/** The routes that accept tokens, as the issue names them (not read from the app's own policy). */
-const tokenRoutes = (file: string) => file === "spectrum/route.ts" || file === "configurations/route.ts" || file.startsWith("configurations/");
+/**
+ * The routes that accept tokens, as the issues name them (not read from the app's own policy):
+ * configurations, the compute, and a sweep's routes (a script follows the sweep it started).
+ */
+const tokenRoutes = (file: string) =>
+  file === "spectrum/route.ts" || file === "configurations/route.ts" || file.startsWith("configurations/") || file.startsWith("sweeps/");
 /** Writing methods, except the stateless compute, which changes nothing. */
 const writes = (file: string, method: Method) => method !== "GET" && file !== "spectrum/route.ts";
 

@@ -70,11 +70,11 @@ describe("the OpenAPI document", () => {
     expect(documented).toEqual(onDisk);
   });
 
-  it("offers API tokens exactly on the configuration and compute routes", () => {
+  it("offers API tokens exactly on the configuration, compute and sweep routes", () => {
     for (const [apiPath, item] of Object.entries(document.paths)) {
       for (const operation of Object.values(item)) {
         const offersToken = JSON.stringify(operation.security ?? []).includes("apiToken");
-        expect({ apiPath, offersToken }).toEqual({ apiPath, offersToken: apiPath === "/api/spectrum" || apiPath.startsWith("/api/configurations") });
+        expect({ apiPath, offersToken }).toEqual({ apiPath, offersToken: apiPath === "/api/spectrum" || apiPath.startsWith("/api/configurations") || apiPath.startsWith("/api/sweeps/") });
       }
     }
   });
