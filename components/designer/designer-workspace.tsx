@@ -353,7 +353,7 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
           className="h-[min(56vh,560px)] min-w-0 xl:h-auto xl:min-h-[min(56vh,560px)]"
         />
         <div className="order-last min-w-0 rounded-lg border border-border bg-surface p-3 xl:order-none xl:max-h-[calc(100vh-6rem)] xl:overflow-y-auto">
-          <SpectrumPreview result={preview.result} issues={preview.issues} elapsedMs={preview.elapsedMs} stringScaleGeV={document.stringScaleGeV} />
+          <SpectrumPreview result={preview.result} issues={preview.issues} elapsedMs={preview.elapsedMs} stringScaleGeV={document.stringScaleGeV} stacks={document.stacks} />
         </div>
         <div className="flex min-w-0 flex-col gap-3 xl:col-span-2">
           <DocumentSettings readOnly={!canEdit} />

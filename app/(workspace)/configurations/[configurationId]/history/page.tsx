@@ -17,7 +17,7 @@ import { getResultForRevision } from "@/db/queries/result-reads";
 import { getRevisionByNumber, listRevisions } from "@/db/queries/revisions";
 import { NotFoundError } from "@/lib/errors";
 import { formatDateTime } from "@/lib/format-date";
-import { diffConfigurations, diffSpectra } from "@/lib/revisions/diff";
+import { bothSidesStacks, diffConfigurations, diffSpectra } from "@/lib/revisions/diff";
 import { requireUser } from "@/lib/server/session";
 
 export const metadata: Metadata = { title: "History" };
@@ -169,6 +169,7 @@ async function compare(
       ? await Promise.all([getResultForRevision(actor, before.id), getResultForRevision(actor, after.id)])
       : [null, null];
   return {
+    stacks: bothSidesStacks(before.document, after.document),
     configurationDiff: diffConfigurations(before.document, after.document),
     spectrumDiff: beforeResult && afterResult ? diffSpectra(beforeResult.result, afterResult.result) : null,
   };
