@@ -33,3 +33,4 @@ export {
 } from "./overview";
 export { compareNatural, sectorNames, type SectorName, type SectorNames, type StackNameSource } from "./sector-names";
 export { lightestHeadline, type HeadlineSector, type HeadlineState, type LightestHeadline } from "./headline";
+export { simplifyExpansionLatex } from "./expansion-display";
