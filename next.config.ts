@@ -8,6 +8,8 @@ const nextConfig: NextConfig = {
   distDir: process.env.NEXT_DIST_DIR || ".next",
   // pg and bcryptjs run on the server only; keep them out of the bundle.
   serverExternalPackages: ["pg"],
+  // forbidden() and forbidden.tsx: a page refused to a signed-in reader answers HTTP 403.
+  experimental: { authInterrupts: true },
   // Security headers and the content security policy on every response (lib/server/security-headers.ts).
   // Read when the server starts (next dev) or at build time (next build): build with the real NEXTAUTH_URL.
   async headers() {

@@ -9,7 +9,7 @@ export default async function LandingPage() {
   return (
     <PageContainer className="grid gap-10">
       <section className="grid max-w-3xl gap-4">
-        <p className="text-xs font-medium tracking-wide text-muted-foreground uppercase">A workbench for parallel D-branes</p>
+        <p className="text-xs font-medium text-muted-foreground">A workbench for parallel D-branes</p>
         <h1 className="text-3xl font-semibold tracking-tight text-balance sm:text-4xl">
           Sketch stacks of branes, read off the open-string spectrum as you draw.
         </h1>

@@ -30,6 +30,8 @@ export interface ConfigurationStageProps {
   snapping: boolean;
   tool: "select" | "pan";
   readOnly?: boolean;
+  /** Draw with the light palette whatever the theme (while a PNG is exported). */
+  lightPalette?: boolean;
   onViewportChange: (viewport: Viewport) => void;
   onSelect?: (ids: string[], mode: SelectionMode) => void;
   /** Moves the given stacks by a world offset on the display axes (axis number -> offset), as one gesture. */
@@ -53,10 +55,10 @@ let gestureCounter = 0;
  * (select, shift-select, marquee, drag, wheel zoom, pan). Browser only.
  */
 export function ConfigurationStage(props: ConfigurationStageProps) {
-  const { document, result, displayAxes, selection, viewport, gridStep, snapping, tool, readOnly = false } = props;
+  const { document, result, displayAxes, selection, viewport, gridStep, snapping, tool, readOnly = false, lightPalette = false } = props;
   const size = useMemo(() => ({ width: props.width, height: props.height }), [props.width, props.height]);
   const [drag, setDrag] = useState<Drag | null>(null);
-  const palette = useCanvasPalette();
+  const palette = useCanvasPalette(lightPalette);
 
   const { onViewportChange } = props;
   const scene = useMemo(
@@ -138,7 +140,7 @@ export function ConfigurationStage(props: ConfigurationStageProps) {
   const cursor = tool === "pan" || readOnly ? (drag?.kind === "pan" ? "grabbing" : "grab") : drag?.kind === "move" ? "move" : "default";
 
   return (
-    <div className="absolute inset-0" style={{ cursor }} data-snapping={snapping ? "on" : "off"}>
+    <div className="absolute inset-0" style={{ cursor }} data-snapping={snapping ? "on" : "off"} data-palette={lightPalette ? "light" : "theme"}>
       {scene && size.width > 0 ? (
         <Stage
           width={size.width}

@@ -14,7 +14,8 @@ export interface CanvasPalette {
   surface: string;
 }
 
-const fallback: CanvasPalette = {
+/** The light theme's colours: the canvas before the theme is read, and every PNG export. */
+export const lightCanvasPalette: CanvasPalette = {
   background: "#fafbfc",
   foreground: "#1f2633",
   muted: "#6b7385",
@@ -29,25 +30,29 @@ function readPalette(): CanvasPalette {
   const style = getComputedStyle(document.documentElement);
   const read = (name: string, fallbackValue: string) => style.getPropertyValue(name).trim() || fallbackValue;
   return {
-    background: read("--background", fallback.background),
-    foreground: read("--foreground", fallback.foreground),
-    muted: read("--muted-foreground", fallback.muted),
-    grid: read("--border", fallback.grid),
-    gridStrong: read("--border-strong", fallback.gridStrong),
-    accent: read("--accent", fallback.accent),
-    danger: read("--danger", fallback.danger),
-    surface: read("--surface", fallback.surface),
+    background: read("--background", lightCanvasPalette.background),
+    foreground: read("--foreground", lightCanvasPalette.foreground),
+    muted: read("--muted-foreground", lightCanvasPalette.muted),
+    grid: read("--border", lightCanvasPalette.grid),
+    gridStrong: read("--border-strong", lightCanvasPalette.gridStrong),
+    accent: read("--accent", lightCanvasPalette.accent),
+    danger: read("--danger", lightCanvasPalette.danger),
+    surface: read("--surface", lightCanvasPalette.surface),
   };
 }
 
-/** The canvas palette, refreshed when the light/dark class on <html> changes. */
-export function useCanvasPalette(): CanvasPalette {
-  const [palette, setPalette] = useState<CanvasPalette>(fallback);
+/**
+ * The canvas palette, refreshed when the light/dark class on <html> changes.
+ *
+ * @param light - Draw with the light palette whatever the theme (while exporting a PNG).
+ */
+export function useCanvasPalette(light = false): CanvasPalette {
+  const [palette, setPalette] = useState<CanvasPalette>(lightCanvasPalette);
   useEffect(() => {
     setPalette(readPalette());
     const observer = new MutationObserver(() => setPalette(readPalette()));
     observer.observe(document.documentElement, { attributes: true, attributeFilter: ["class"] });
     return () => observer.disconnect();
   }, []);
-  return palette;
+  return light ? lightCanvasPalette : palette;
 }

@@ -1,6 +1,7 @@
 import type { ReactNode } from "react";
 import { Badge } from "@/components/ui/badge";
-import { formatMassSquared, formatPair, pairKey } from "@/lib/spectrum";
+import { formatMassSquared, pairKey, sectorNames, type StackNameSource } from "@/lib/spectrum";
+import { SectorNameText } from "@/components/results/sector-name-text";
 import type { ConfigurationDiff, SpectrumDiff } from "@/lib/revisions/diff";
 
 export interface RevisionDiffViewProps {
@@ -11,6 +12,8 @@ export interface RevisionDiffViewProps {
   configurationDiff: ConfigurationDiff;
   /** Null when either revision has no stored result. */
   spectrumDiff: SpectrumDiff | null;
+  /** The stacks of both sides (the later side's label wins), so that sectors are named by label. */
+  stacks: readonly StackNameSource[];
 }
 
 const fieldLabels: Record<ConfigurationDiff["fields"][number]["field"], string> = {
@@ -23,7 +26,8 @@ const fieldLabels: Record<ConfigurationDiff["fields"][number]["field"], string> 
 };
 
 /** What changed between two revisions: the document, then the spectrum (alpha' = 1). */
-export function RevisionDiffView({ fromNumber, toNumber, sideLabels, configurationDiff, spectrumDiff }: RevisionDiffViewProps) {
+export function RevisionDiffView({ fromNumber, toNumber, sideLabels, configurationDiff, spectrumDiff, stacks }: RevisionDiffViewProps) {
+  const names = sectorNames(stacks);
   return (
     <div className="grid gap-6 text-sm" aria-live="polite">
       <section aria-labelledby="document-changes" className="grid gap-2">
@@ -122,18 +126,18 @@ export function RevisionDiffView({ fromNumber, toNumber, sideLabels, configurati
             {spectrumDiff.bps ? <li>All stacks mutually supersymmetric: {spectrumDiff.bps.after ? "now yes" : "no longer"}</li> : null}
             {spectrumDiff.addedSectors.map((pair) => (
               <li key={`as-${pairKey(...pair)}`}>
-                <Badge variant="success">new sector</Badge> {formatPair(pair)}
+                <Badge variant="success">new sector</Badge> <SectorNameText names={names} pair={pair} />
               </li>
             ))}
             {spectrumDiff.removedSectors.map((pair) => (
               <li key={`rs-${pairKey(...pair)}`}>
-                <Badge variant="danger">sector gone</Badge> {formatPair(pair)}
+                <Badge variant="danger">sector gone</Badge> <SectorNameText names={names} pair={pair} />
               </li>
             ))}
             {spectrumDiff.changedSectors.map((sector) => (
               <li key={`cs-${pairKey(...sector.pair)}`} className="grid gap-0.5">
                 <span>
-                  Sector <strong>{formatPair(sector.pair)}</strong>
+                  Sector <SectorNameText names={names} pair={sector.pair} className="font-semibold" />
                 </span>
                 <ul className="ml-6 list-disc text-muted-foreground">
                   {sector.lightest ? (

@@ -7,7 +7,8 @@ import { Table, TableBody, TableCell, TableHead, TableHeader, TableRow } from "@
 import type { SharedConfigurationDto } from "@/db/queries/share-links";
 import { dimensionOf } from "@/lib/boundary";
 import { stackKind } from "@/lib/designer/stack-kind";
-import { formatNumber, formatPair, pairKey, summaryFacts } from "@/lib/spectrum";
+import { formatNumber, pairKey, sectorNames, summaryFacts } from "@/lib/spectrum";
+import { SectorNameText } from "@/components/results/sector-name-text";
 
 export interface SharedConfigurationViewProps {
   shared: SharedConfigurationDto;
@@ -16,6 +17,7 @@ export interface SharedConfigurationViewProps {
 /** A read-only view of a shared configuration and its stored result. */
 export function SharedConfigurationView({ shared }: SharedConfigurationViewProps) {
   const { document, result } = shared;
+  const names = sectorNames(document.stacks);
   const dimension = dimensionOf(document);
   return (
     <div className="grid gap-6">
@@ -67,7 +69,7 @@ export function SharedConfigurationView({ shared }: SharedConfigurationViewProps
               <CardDescription>Stored result of revision {shared.revisionNumber}, engine {result.engineVersion}.</CardDescription>
             </CardHeader>
             <CardContent className="grid gap-4 text-sm">
-              <SpectrumSummary facts={summaryFacts(result)} />
+              <SpectrumSummary facts={summaryFacts(result)} stacks={document.stacks} />
               {result.warnings.length > 0 ? (
                 <ul className="list-disc pl-5 text-warning-soft-foreground">
                   {result.warnings.map((warning) => (
@@ -77,7 +79,7 @@ export function SharedConfigurationView({ shared }: SharedConfigurationViewProps
               ) : null}
               <div className="grid gap-1">
                 <h3 className="text-sm font-semibold">Lightest states</h3>
-                <LightestStatesTable states={result.lightest} label="Lightest states over all sectors" />
+                <LightestStatesTable states={result.lightest} stacks={document.stacks} label="Lightest states over all sectors" />
               </div>
             </CardContent>
           </Card>
@@ -87,10 +89,10 @@ export function SharedConfigurationView({ shared }: SharedConfigurationViewProps
               <CardTitle id="sectors-title">Sectors</CardTitle>
             </CardHeader>
             <CardContent className="grid gap-5">
-              {result.sectors.map((sector) => (
+              {[...result.sectors].sort((a, b) => names.compare(a.pair, b.pair)).map((sector) => (
                 <section key={pairKey(...sector.pair)} className="grid gap-2">
                   <h3 className="text-sm font-semibold">
-                    {formatPair(sector.pair)}{" "}
+                    <SectorNameText names={names} pair={sector.pair} />{" "}
                     <span className="font-normal text-muted-foreground">
                       ν = {sector.nu}, y = {formatNumber(sector.separation)}, Chan–Paton {sector.chanPaton}
                       {sector.tachyonic ? ", tachyonic" : ""}
@@ -98,7 +100,7 @@ export function SharedConfigurationView({ shared }: SharedConfigurationViewProps
                     </span>
                   </h3>
                   <SectorLevelsTable
-                    caption={`Levels of the ${formatPair(sector.pair)} sector`}
+                    caption={`Levels of the ${names.sector(sector.pair).text} sector`}
                     rows={sector.levels}
                     zeroPoint={sector.zeroPoint}
                     kind="all"

@@ -1,3 +1,4 @@
+import Link from "next/link";
 import { SupersymmetryBadge, TachyonBadge } from "@/components/collaboration/result-badges";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Table, TableBody, TableCaption, TableCell, TableHead, TableHeader, TableRow } from "@/components/ui/table";
@@ -27,7 +28,9 @@ export function StarterForksComparison({ comparison, sweeps = {} }: StarterForks
       {comparison.map((starter) => (
         <section key={starter.starterId} aria-labelledby={`starter-${starter.starterId}`} className="grid gap-2">
           <h3 id={`starter-${starter.starterId}`} className="text-sm font-semibold">
-            {starter.title}{" "}
+            <Link href={`/configurations/${starter.starterId}`} className="hover:text-accent hover:underline">
+              {starter.title}
+            </Link>{" "}
             <span className="font-normal text-muted-foreground">
               · {starter.forks.length === 1 ? "1 fork" : `${starter.forks.length} forks`}
             </span>
@@ -49,14 +52,19 @@ export function StarterForksComparison({ comparison, sweeps = {} }: StarterForks
                   <TableHead className="text-right">Revisions</TableHead>
                   <TableHead>Sweeps</TableHead>
                   <TableHead>Last change</TableHead>
+                  <TableHead className="text-right">Against the starter</TableHead>
                 </TableRow>
               </TableHeader>
               <TableBody>
                 {starter.forks.map((fork) => (
                   <TableRow key={fork.configurationId}>
                     <TableCell className="font-medium">{fork.student.name}</TableCell>
-                    {/* Forks live in the students' own spaces; the instructor sees the summary, not the document. */}
-                    <TableCell>{fork.title}</TableCell>
+                    {/* Forks live in the students' own spaces; the lab's instructors may read them (configuration-access.ts). */}
+                    <TableCell>
+                      <Link href={`/configurations/${fork.configurationId}`} className="text-accent hover:underline">
+                        {fork.title}
+                      </Link>
+                    </TableCell>
                     <TableCell>
                       <SupersymmetryBadge supercharges={fork.supercharges} />
                     </TableCell>
@@ -69,6 +77,15 @@ export function StarterForksComparison({ comparison, sweeps = {} }: StarterForks
                       <ForkSweeps sweeps={sweeps[fork.configurationId] ?? []} />
                     </TableCell>
                     <TableCell className="text-muted-foreground">{formatDateTime(fork.updatedAt)}</TableCell>
+                    <TableCell className="text-right">
+                      <Link
+                        href={`/configurations/${fork.configurationId}/compare?with=${starter.starterId}`}
+                        className="text-accent hover:underline"
+                        aria-label={`Compare ${fork.student.name}'s fork with the starter`}
+                      >
+                        Compare
+                      </Link>
+                    </TableCell>
                   </TableRow>
                 ))}
               </TableBody>

@@ -82,8 +82,8 @@ export function ConfigurationSide({ role, id, title, version, spaceName, authorN
             </TableBody>
           </Table>
         </div>
-        <SpectrumSummary facts={summaryFacts(result)} />
-        <LightestStatesTable states={result.lightest.slice(0, 6)} label={`Lightest states of ${title}`} compact stringScaleGeV={document.stringScaleGeV} />
+        <SpectrumSummary facts={summaryFacts(result)} stacks={document.stacks} />
+        <LightestStatesTable states={result.lightest.slice(0, 6)} stacks={document.stacks} label={`Lightest states of ${title}`} compact stringScaleGeV={document.stringScaleGeV} />
       </CardContent>
     </Card>
   );

@@ -15,7 +15,7 @@ export async function RecentActivityPanel({ actor }: { actor: Actor }) {
     <Card aria-labelledby="recent-activity-title">
       <CardHeader>
         <CardTitle id="recent-activity-title">Recent activity</CardTitle>
-        <CardDescription>Your latest changes across your groups.</CardDescription>
+        <CardDescription>Your latest changes across your groups, and forks others made of your configurations.</CardDescription>
       </CardHeader>
       <CardContent>
         {entries.length === 0 ? (
@@ -42,8 +42,8 @@ function ActivityLine({ entry }: { entry: ActivityDto }) {
   const groupLabel = entry.group.kind === "personal" ? "your personal space" : entry.group.name;
   const deletedTitle = typeof entry.details.title === "string" ? `“${entry.details.title}”` : "a configuration";
   return (
-    <p>
-      {capitalise(phrase.verb)}{" "}
+    <p data-testid={entry.otherActorName ? "activity-by-other" : undefined}>
+      {entry.otherActorName ? `${entry.otherActorName} ${phrase.verb}` : capitalise(phrase.verb)}{" "}
       {phrase.aboutConfiguration ? (
         entry.configuration ? (
           <Link href={`/configurations/${entry.configuration.id}`} className="font-medium hover:text-accent hover:underline">

@@ -24,6 +24,8 @@ export interface DesignerCanvasProps {
   onSaveShortcut?: () => void;
   /** Opens the paired flip for the one selected stack (button and M). */
   onMoveWorldvolume?: (id: string) => void;
+  /** Draw in the light palette whatever the theme (while a PNG is exported). */
+  lightPalette?: boolean;
   className?: string;
 }
 
@@ -32,7 +34,7 @@ export interface DesignerCanvasProps {
  * delete, undo, redo, help) and the keyboard shortcuts. The react-konva stage loads in the
  * browser only.
  */
-export function DesignerCanvas({ result, readOnly = false, onSaveShortcut, onMoveWorldvolume, className }: DesignerCanvasProps) {
+export function DesignerCanvas({ result, readOnly = false, onSaveShortcut, onMoveWorldvolume, lightPalette = false, className }: DesignerCanvasProps) {
   const document = useDesignerStore(selectDocument);
   const selection = useDesignerStore((s) => s.selection);
   const displayAxes = useDesignerStore((s) => s.displayAxes);
@@ -309,6 +311,7 @@ export function DesignerCanvas({ result, readOnly = false, onSaveShortcut, onMov
             snapping={snapping}
             tool={tool}
             readOnly={readOnly}
+            lightPalette={lightPalette}
             onViewportChange={setViewport}
             onSelect={(ids, mode) => {
               select(ids, mode);

@@ -18,6 +18,7 @@ import { Badge } from "@/components/ui/badge";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { Dialog } from "@/components/ui/dialog";
 import { exportCanvasPngWhenReady, pngFileName } from "@/components/canvas/export-canvas-png";
+import { pngLegend } from "@/lib/designer/png-legend";
 import { ExportMenu } from "@/components/configurations/export-menu";
 import { BoundaryGrid } from "./boundary-grid";
 import { ConflictDialog } from "./conflict-dialog";
@@ -75,6 +76,7 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
   const [forkPending, setForkPending] = useState(false);
   const [storageWarning, setStorageWarning] = useState(false);
   const [exportError, setExportError] = useState<string | null>(null);
+  const [exportingPng, setExportingPng] = useState(false);
 
   const update = useUpdateConfiguration(id);
   const fork = useForkConfiguration(id);
@@ -278,10 +280,15 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
             configurationId={id}
             onExportPng={() => {
               setExportError(null);
+              setExportingPng(true);
               const findFrame = () => window.document.querySelector<HTMLElement>("[data-designer-canvas]");
-              void exportCanvasPngWhenReady(findFrame, pngFileName(document.title)).then((done) => {
-                if (!done) setExportError("The canvas has not finished drawing, so there was nothing to export. Try again in a moment.");
-              });
+              const state = useDesignerStore.getState();
+              const legend = pngLegend(document, state.displayAxes, state.viewport?.scale ?? 0);
+              void exportCanvasPngWhenReady(findFrame, pngFileName(document.title), legend)
+                .then((done) => {
+                  if (!done) setExportError("The canvas has not finished drawing, so there was nothing to export. Try again in a moment.");
+                })
+                .finally(() => setExportingPng(false));
             }}
           />
           <Button variant="secondary" size="sm" onClick={() => setForkMode("saved")} disabled={writableGroups.length === 0}>
@@ -351,12 +358,13 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
         <DesignerCanvas
           result={preview.result}
           readOnly={!canEdit}
+          lightPalette={exportingPng}
           onSaveShortcut={openSave}
           onMoveWorldvolume={canEdit ? setMoveStackId : undefined}
           className="h-[min(56vh,560px)] min-w-0 xl:h-auto xl:min-h-[min(56vh,560px)]"
         />
         <div className="order-last min-w-0 rounded-lg border border-border bg-surface p-3 xl:order-none xl:max-h-[calc(100vh-6rem)] xl:overflow-y-auto">
-          <SpectrumPreview result={preview.result} issues={preview.issues} elapsedMs={preview.elapsedMs} stringScaleGeV={document.stringScaleGeV} />
+          <SpectrumPreview result={preview.result} issues={preview.issues} elapsedMs={preview.elapsedMs} stringScaleGeV={document.stringScaleGeV} stacks={document.stacks} />
         </div>
         <div className="flex min-w-0 flex-col gap-3 xl:col-span-2">
           <DocumentSettings readOnly={!canEdit} />

@@ -42,7 +42,7 @@ export function LandingDemo({ configuration }: LandingDemoProps) {
           {ready ? <BoundaryGrid issuesByStack={preview.byStack} readOnly /> : null}
         </div>
         <div className="min-w-0 rounded-lg border border-border bg-surface p-3">
-          <SpectrumPreview result={preview.result} issues={preview.issues} elapsedMs={preview.elapsedMs} lightestRows={6} />
+          <SpectrumPreview result={preview.result} issues={preview.issues} elapsedMs={preview.elapsedMs} lightestRows={6} stacks={(ready ? document : configuration).stacks} />
         </div>
       </div>
     </section>

@@ -3,7 +3,7 @@
 import type { SpectrumResult } from "@/lib/boundary/types";
 import type { FieldIssue } from "@/lib/errors";
 import { LightestStatesTable } from "@/components/results/lightest-states-table";
-import { formatNumber, massInGeV, summaryFacts } from "@/lib/spectrum";
+import { formatNumber, massInGeV, summaryFacts, type StackNameSource } from "@/lib/spectrum";
 import { SpectrumSummary } from "@/components/results/spectrum-summary";
 import { ConventionsNote } from "./conventions-note";
 
@@ -15,10 +15,12 @@ export interface SpectrumPreviewProps {
   lightestRows?: number;
   /** M_s in GeV of the draft: masses are shown in GeV too when set. */
   stringScaleGeV?: number | null;
+  /** The draft's stacks, so that sectors are named by label. */
+  stacks: readonly StackNameSource[];
 }
 
 /** The live spectrum beside the canvas: summary, tachyons, lightest states and warnings. */
-export function SpectrumPreview({ result, issues, elapsedMs, lightestRows = 8, stringScaleGeV = null }: SpectrumPreviewProps) {
+export function SpectrumPreview({ result, issues, elapsedMs, lightestRows = 8, stringScaleGeV = null, stacks }: SpectrumPreviewProps) {
   return (
     <section aria-labelledby="spectrum-preview-title" className="flex flex-col gap-3 text-sm">
       <div className="flex items-baseline justify-between gap-2">
@@ -45,18 +47,28 @@ export function SpectrumPreview({ result, issues, elapsedMs, lightestRows = 8, s
           </ul>
         </div>
       ) : (
-        <PreviewBody result={result} lightestRows={lightestRows} stringScaleGeV={stringScaleGeV} />
+        <PreviewBody result={result} lightestRows={lightestRows} stringScaleGeV={stringScaleGeV} stacks={stacks} />
       )}
       <ConventionsNote />
     </section>
   );
 }
 
-function PreviewBody({ result, lightestRows, stringScaleGeV }: { result: SpectrumResult; lightestRows: number; stringScaleGeV: number | null }) {
+function PreviewBody({
+  result,
+  lightestRows,
+  stringScaleGeV,
+  stacks,
+}: {
+  result: SpectrumResult;
+  lightestRows: number;
+  stringScaleGeV: number | null;
+  stacks: readonly StackNameSource[];
+}) {
   const firstMassive = result.lightest.find((state) => state.mass !== null && state.mass > 0) ?? null;
   return (
     <>
-      <SpectrumSummary facts={summaryFacts(result)} />
+      <SpectrumSummary facts={summaryFacts(result)} stacks={stacks} />
 
       {stringScaleGeV !== null ? (
         <p className="rounded-md border border-border bg-surface-muted/50 px-2.5 py-1.5 text-xs" data-testid="preview-string-scale">
@@ -73,7 +85,7 @@ function PreviewBody({ result, lightestRows, stringScaleGeV }: { result: Spectru
 
       <div>
         <h3 className="mb-1 text-xs font-semibold">Lightest states</h3>
-        <LightestStatesTable states={result.lightest.slice(0, lightestRows)} label="Lightest states" compact stringScaleGeV={stringScaleGeV} />
+        <LightestStatesTable states={result.lightest.slice(0, lightestRows)} stacks={stacks} label="Lightest states" compact stringScaleGeV={stringScaleGeV} />
       </div>
 
       {result.warnings.length > 0 ? (

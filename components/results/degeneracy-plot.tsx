@@ -5,7 +5,7 @@ import { useMemo, useState } from "react";
 import { CartesianGrid, Legend, Line, LineChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import { configurationQueries } from "@/lib/client/configurations";
 import { degeneracyRows } from "@/lib/designer/plot-data";
-import { formatNumber, formatPair, pairKey, type SectorOverview } from "@/lib/spectrum";
+import { formatNumber, pairKey, type SectorNames, type SectorOverview } from "@/lib/spectrum";
 import { axisStyle, horizontalAxisLabel, tooltipContentStyle, verticalAxisLabel } from "./chart-style";
 
 export interface DegeneracyPlotProps {
@@ -15,6 +15,7 @@ export interface DegeneracyPlotProps {
   sectors: SectorOverview[];
   /** How many sectors the result has in all. */
   total: number;
+  names: SectorNames;
 }
 
 const kinds = [
@@ -24,7 +25,7 @@ const kinds = [
 ] as const;
 
 /** log10 of the number of states (with Chan-Paton factors) against the level, for a chosen sector (loaded on its own). */
-export function DegeneracyPlot({ configurationId, revisionId, sectors, total }: DegeneracyPlotProps) {
+export function DegeneracyPlot({ configurationId, revisionId, sectors, total, names }: DegeneracyPlotProps) {
   const [index, setIndex] = useState(0);
   const chosen = sectors[Math.min(index, sectors.length - 1)];
   const detail = useQuery({ ...configurationQueries.resultSector(configurationId, revisionId, chosen?.index ?? 0), enabled: chosen !== undefined });
@@ -38,11 +39,11 @@ export function DegeneracyPlot({ configurationId, revisionId, sectors, total }: 
         <select
           value={index}
           onChange={(event) => setIndex(Number(event.target.value))}
-          className="h-7 rounded border border-border-strong bg-surface px-1 font-mono"
+          className="h-7 rounded border border-border-strong bg-surface px-1"
         >
           {sectors.map((s, i) => (
             <option key={pairKey(...s.pair)} value={i}>
-              {formatPair(s.pair)}
+              {names.sector(s.pair).text}
             </option>
           ))}
         </select>
@@ -50,7 +51,7 @@ export function DegeneracyPlot({ configurationId, revisionId, sectors, total }: 
       </label>
       {detail.isError ? (
         <p className="text-xs text-danger-soft-foreground" role="alert">
-          The levels of {formatPair(chosen.pair)} could not be loaded ({detail.error.message}).
+          The levels of {names.sector(chosen.pair).text} could not be loaded ({detail.error.message}).
         </p>
       ) : null}
       <div className="h-64 w-full" aria-busy={detail.isPending}>

@@ -1,10 +1,13 @@
 import type { LightestState } from "@/lib/boundary/types";
-import { formatNumber, formatPair, massInGeV, pairKey } from "@/lib/spectrum";
+import { formatNumber, isTachyonicState, massInGeV, pairKey, sectorNames, type StackNameSource } from "@/lib/spectrum";
 import { cn } from "@/lib/utils";
 import { MassSquaredText, MassText } from "./mass-text";
+import { SectorNameText } from "./sector-name-text";
 
 export interface LightestStatesTableProps {
   states: LightestState[];
+  /** The configuration's stacks, so that sectors are named by label. */
+  stacks: readonly StackNameSource[];
   /** Accessible name of the table. */
   label: string;
   /** Smaller type and padding, for the panel beside the canvas. */
@@ -31,7 +34,8 @@ const gevHeading: Heading = { text: "M (GeV)", short: "GeV" };
 const countHeadings: Heading[] = [{ text: "States" }, { text: "With Chan-Paton", short: "With CP" }];
 
 /** The lightest states over all sectors, as the engine sorted them (alpha' = 1). */
-export function LightestStatesTable({ states, label, compact = false, stringScaleGeV = null, "data-testid": testId }: LightestStatesTableProps) {
+export function LightestStatesTable({ states, stacks, label, compact = false, stringScaleGeV = null, "data-testid": testId }: LightestStatesTableProps) {
+  const names = sectorNames(stacks);
   const cell = compact ? "px-1.5 py-1" : "px-3 py-1.5";
   const showGeV = stringScaleGeV !== null;
   const headings = [...baseHeadings, ...(showGeV ? [gevHeading] : []), ...countHeadings];
@@ -68,8 +72,14 @@ export function LightestStatesTable({ states, label, compact = false, stringScal
             </tr>
           ) : (
             states.map((state, i) => (
-              <tr key={`${pairKey(...state.pair)}-${state.sector}-${state.level}-${i}`} className="border-t border-border">
-                <td className={cn(cell, "font-mono whitespace-nowrap")}>{formatPair(state.pair)}</td>
+              <tr
+                key={`${pairKey(...state.pair)}-${state.sector}-${state.level}-${i}`}
+                className={cn("border-t border-border", isTachyonicState(state) && "bg-danger-soft/60")}
+                data-tachyon={isTachyonicState(state) ? "true" : undefined}
+              >
+                <td className={cn(cell, "whitespace-nowrap")}>
+                  <SectorNameText names={names} pair={state.pair} />
+                </td>
                 <td className={cell}>{state.sector}</td>
                 <td className={cn(cell, "text-right font-mono")}>{state.level}</td>
                 <td className={cn(cell, "text-right font-mono whitespace-nowrap")}>

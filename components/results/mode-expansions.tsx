@@ -5,6 +5,7 @@ import "katex/dist/katex.min.css";
 import { useMemo } from "react";
 import { fermionExpansionLatex, lightConeAxis } from "@/lib/boundary/expansion";
 import type { AxisExpansion } from "@/lib/boundary/types";
+import { simplifyExpansionLatex } from "@/lib/spectrum";
 import { Badge } from "@/components/ui/badge";
 
 export interface ModeExpansionsProps {
@@ -22,7 +23,7 @@ export function ModeExpansions({ axes }: ModeExpansionsProps) {
       axes.map((axis) => {
         // Type II axes carry fermion modings; the expansions follow from the axis type alone.
         const latex = axis.fermionModing ? fermionExpansionLatex(axis) : null;
-        return { axis, latex, boson: typeset(axis.latex), fermions: latex ? { NS: typeset(latex.NS), R: typeset(latex.R) } : null };
+        return { axis, latex, boson: typeset(simplifyExpansionLatex(axis.latex)), fermions: latex ? { NS: typeset(latex.NS), R: typeset(latex.R) } : null };
       }),
     [axes],
   );

@@ -3,9 +3,9 @@
 import { useQuery } from "@tanstack/react-query";
 import dynamic from "next/dynamic";
 import { useRouter } from "next/navigation";
-import { useDeferredValue, useState } from "react";
+import { useDeferredValue, useMemo, useState } from "react";
 import type { SectorKind } from "@/lib/boundary/types";
-import { formatNumber } from "@/lib/spectrum";
+import { formatNumber, sectorNames } from "@/lib/spectrum";
 import { formatDateTime } from "@/lib/format-date";
 import {
   configurationQueries,
@@ -49,7 +49,8 @@ export interface ResultsViewProps {
 export function ResultsView({ configuration, revisions, revision, initialResult, writableGroups }: ResultsViewProps) {
   const router = useRouter();
   const { data: stored } = useQuery({ ...configurationQueries.resultHead(configuration.id, revision.id), initialData: initialResult });
-  const { result, facts, massCurves, showGeV, firstPage } = stored;
+  const { result, facts, massCurves, showGeV, firstPage, stacks } = stored;
+  const names = useMemo(() => sectorNames(stacks), [stacks]);
   const [kind, setKind] = useState<SectorKind | "all">("all");
   // alpha' M^2 at zero separation (N + a) up to which the tables list rows; null lists every row.
   const [massCap, setMassCap] = useState<number | null>(null);
@@ -108,7 +109,7 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
         <h2 id="summary-title" className="sr-only">
           Summary
         </h2>
-        <SpectrumSummary facts={facts} />
+        <SpectrumSummary facts={facts} stacks={stacks} />
       </section>
 
       <section aria-labelledby="worldvolumes-title" className="grid gap-2">
@@ -130,7 +131,7 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
         <h2 id="lightest-title" className="text-lg font-semibold">
           Lightest states
         </h2>
-        <LightestStatesTable states={result.lightest} label="Lightest states" data-testid="lightest-table" />
+        <LightestStatesTable states={result.lightest} stacks={stacks} label="Lightest states" data-testid="lightest-table" />
       </section>
 
       <section aria-labelledby="plots-title" className="grid gap-4">
@@ -144,7 +145,7 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
           </div>
           <div className="rounded-lg border border-border bg-surface p-4">
             <h3 className="mb-2 text-sm font-semibold">Degeneracy against level</h3>
-            <DegeneracyPlot configurationId={configuration.id} revisionId={revision.id} sectors={firstPage.items} total={firstPage.total} />
+            <DegeneracyPlot configurationId={configuration.id} revisionId={revision.id} sectors={firstPage.items} total={firstPage.total} names={names} />
           </div>
         </div>
       </section>
@@ -161,9 +162,9 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
                 type="search"
                 value={search}
                 onChange={(event) => setSearch(event.target.value)}
-                placeholder="id"
+                placeholder="label or id"
                 className="h-8 w-28 rounded border border-border-strong bg-surface px-2"
-                aria-label="Show sectors of stacks whose id contains"
+                aria-label="Show sectors of stacks whose label or id contains"
               />
             </label>
             <label className="flex items-center gap-1">
@@ -205,6 +206,7 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
           kind={kind}
           massCap={massCap ?? Number.POSITIVE_INFINITY}
           showGeV={showGeV}
+          names={names}
         />
       </section>
 

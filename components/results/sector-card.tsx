@@ -4,7 +4,7 @@ import { useQuery } from "@tanstack/react-query";
 import dynamic from "next/dynamic";
 import type { Sector, SectorKind } from "@/lib/boundary/types";
 import { configurationQueries } from "@/lib/client/configurations";
-import { formatEngineProse, formatMassSquared, formatNumber, formatPair, type SectorOverview } from "@/lib/spectrum";
+import { formatEngineProse, formatMassSquared, formatNumber, type SectorNames, type SectorOverview } from "@/lib/spectrum";
 import { Badge } from "@/components/ui/badge";
 import { SectorLevelsTable } from "./sector-levels-table";
 
@@ -25,14 +25,16 @@ export interface SectorCardProps {
   /** Rows with alpha' M^2 at zero separation (N + a) up to this value are listed. */
   massCap: number;
   showGeV: boolean;
+  names: SectorNames;
 }
 
 /**
  * One sector of a stored result: its header from the overview, and, once opened, its level table,
  * massless content, notes and mode expansions, loaded for this sector alone.
  */
-export function SectorCard({ configurationId, revisionId, sector, open, onToggle, typeTwo, kind, massCap, showGeV }: SectorCardProps) {
-  const title = formatPair(sector.pair);
+export function SectorCard({ configurationId, revisionId, sector, open, onToggle, typeTwo, kind, massCap, showGeV, names }: SectorCardProps) {
+  const name = names.sector(sector.pair);
+  const title = name.text;
   return (
     <details
       open={open}
@@ -41,7 +43,9 @@ export function SectorCard({ configurationId, revisionId, sector, open, onToggle
       data-testid={`sector-${sector.pair.join("-")}`}
     >
       <summary className="flex cursor-pointer flex-wrap items-center gap-x-4 gap-y-1 px-4 py-2 text-sm">
-        <span className="font-mono font-semibold">{title}</span>
+        <span className="font-semibold" title={name.ids === name.text ? undefined : `Stacks ${name.ids}`}>
+          {title}
+        </span>
         <span className="text-muted-foreground">
           NN {sector.nn} &middot; DD {sector.dd} &middot; &nu; = {sector.nu} &middot; y = {formatNumber(sector.separation)} &middot; Chan-Paton {sector.chanPaton}
         </span>

@@ -12,7 +12,7 @@ import {
 import { useMemo, useState } from "react";
 import type { LevelRow, SectorKind, ZeroPoint } from "@/lib/boundary/types";
 import { rationalToNumber } from "@/lib/boundary/rational";
-import { compareResultNumbers, compareStateCounts, formatNumber, unstretchedMassSquared } from "@/lib/spectrum";
+import { compareResultNumbers, compareStateCounts, formatNumber, isTachyonicState, unstretchedMassSquared } from "@/lib/spectrum";
 import { cn } from "@/lib/utils";
 import { MassSquaredText, MassText } from "./mass-text";
 
@@ -129,7 +129,11 @@ export function SectorLevelsTable({ caption, rows, zeroPoint, kind, massCap, sho
               </tr>
             ) : (
               visible.map((row) => (
-                <tr key={row.id} className="border-t border-border">
+                <tr
+                  key={row.id}
+                  className={cn("border-t border-border", isTachyonicState(row.original) && "bg-danger-soft/60")}
+                  data-tachyon={isTachyonicState(row.original) ? "true" : undefined}
+                >
                   {row.getVisibleCells().map((cell) => (
                     <td key={cell.id} className={cn("px-2 py-1 font-mono whitespace-nowrap", cell.column.id === "sector" ? "text-left font-sans" : "text-right")}>
                       {flexRender(cell.column.columnDef.cell, cell.getContext())}

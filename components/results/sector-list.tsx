@@ -5,7 +5,7 @@ import { useWindowVirtualizer } from "@tanstack/react-virtual";
 import { useEffect, useLayoutEffect, useMemo, useRef, useState } from "react";
 import type { SectorKind } from "@/lib/boundary/types";
 import { configurationQueries, type SectorOverviewPageJson } from "@/lib/client/configurations";
-import { pairKey, type SectorOverview } from "@/lib/spectrum";
+import { pairKey, type SectorNames, type SectorOverview } from "@/lib/spectrum";
 import { SectorCard } from "./sector-card";
 
 export interface SectorListProps {
@@ -20,6 +20,8 @@ export interface SectorListProps {
   /** Rows with alpha' M^2 at zero separation (N + a) up to this value are listed. */
   massCap: number;
   showGeV: boolean;
+  /** The revision's stack names (the server already sends the sectors in their natural order). */
+  names: SectorNames;
 }
 
 /** Up to this many sectors start open; a longer list starts closed. */
@@ -31,7 +33,7 @@ const openByDefault = 6;
  * near the viewport are in the page, each measured as it renders; a card loads its own detail
  * when it is opened. Two thousand sectors scroll as smoothly as ten.
  */
-export function SectorList({ configurationId, revisionId, filter, firstPage, typeTwo, kind, massCap, showGeV }: SectorListProps) {
+export function SectorList({ configurationId, revisionId, filter, firstPage, typeTwo, kind, massCap, showGeV, names }: SectorListProps) {
   const unfiltered = filter.search === "" && !filter.tachyonicOnly;
   const pages = useInfiniteQuery({
     ...configurationQueries.resultSectorPages(configurationId, revisionId, filter),
@@ -102,6 +104,7 @@ export function SectorList({ configurationId, revisionId, filter, firstPage, typ
                 kind={kind}
                 massCap={massCap}
                 showGeV={showGeV}
+                names={names}
               />
             ) : (
               <div className="h-10 animate-pulse rounded-lg border border-border bg-border/40" aria-hidden />

@@ -1,12 +1,25 @@
 import type { ReactNode } from "react";
-import { formatEngineProse, formatNumber, formatPair, pairKey, type SummaryFacts } from "@/lib/spectrum";
+import {
+  formatEngineProse,
+  formatNumber,
+  pairKey,
+  sectorNames,
+  type HeadlineState,
+  type LightestHeadline,
+  type SectorNames,
+  type StackNameSource,
+  type SummaryFacts,
+} from "@/lib/spectrum";
 import { Badge } from "@/components/ui/badge";
 import { cn } from "@/lib/utils";
 import { MassSquaredText } from "./mass-text";
+import { SectorNameText } from "./sector-name-text";
 
 export interface SpectrumSummaryProps {
   /** `summaryFacts(result)` of a full result, or the facts the server sends with a result's overview. */
   facts: SummaryFacts;
+  /** The configuration's stacks, so that sectors are named by label. */
+  stacks: readonly StackNameSource[];
 }
 
 /**
@@ -15,11 +28,13 @@ export interface SpectrumSummaryProps {
  * summary of the designer preview, the results page and the shared view; it lays itself out by
  * the width it is given (a list in a side panel, cards across a page).
  */
-export function SpectrumSummary({ facts }: SpectrumSummaryProps) {
+export function SpectrumSummary({ facts, stacks }: SpectrumSummaryProps) {
+  const names = sectorNames(stacks);
   const { tachyons, tachyonCount, lightest, worldvolumes, worldvolumeCount, stringCreation } = facts;
   const result = facts;
   return (
-    <div className="@container">
+    <div className="@container grid gap-2">
+      <SpectrumHeadline headline={facts.headline} names={names} />
       <dl className="grid gap-2 text-sm @2xl:grid-cols-3 @2xl:gap-3" aria-label="Spectrum summary">
         <SummaryItem
           term="Supersymmetry"
@@ -46,7 +61,8 @@ export function SpectrumSummary({ facts }: SpectrumSummaryProps) {
                 {stringCreation.map((pair, index) => (
                   <span key={pairKey(...pair)}>
                     {index > 0 ? "; " : ""}
-                    <span className="font-mono">{pair[0]}</span> and <span className="font-mono">{pair[1]}</span>
+                    <span title={pair[0] === names.stack(pair[0]) ? undefined : `Stack ${pair[0]}`}>{names.stack(pair[0])}</span> and{" "}
+                    <span title={pair[1] === names.stack(pair[1]) ? undefined : `Stack ${pair[1]}`}>{names.stack(pair[1])}</span>
                   </span>
                 ))}{" "}
                 (&nu; = 8: a string is created when the stacks cross); without it they feel a constant force.
@@ -70,7 +86,7 @@ export function SpectrumSummary({ facts }: SpectrumSummaryProps) {
               <ul className="grid gap-0.5" data-testid="spectrum-tachyons">
                 {tachyons.map((tachyon) => (
                   <li key={pairKey(...tachyon.pair)}>
-                    <span className="font-mono">{formatPair(tachyon.pair)}</span>: &alpha;&prime;M&sup2; ={" "}
+                    <SectorNameText names={names} pair={tachyon.pair} />: &alpha;&prime;M&sup2; ={" "}
                     <span className="font-mono">{tachyon.lightest ? <MassSquaredText value={tachyon.lightest.massSquared} /> : "?"}</span> at y ={" "}
                     <span className="font-mono">{formatNumber(tachyon.separation)}</span>
                     {tachyon.criticalSeparation !== null ? (
@@ -97,9 +113,14 @@ export function SpectrumSummary({ facts }: SpectrumSummaryProps) {
             )
           }
           detail={
-            lightest
-              ? `${formatPair(lightest.pair)}, ${lightest.sector} at oscillator level N = ${lightest.level}: ${lightest.withChanPaton} states with Chan-Paton factors.`
-              : "No state up to the mass cap survives."
+            lightest ? (
+              <>
+                <SectorNameText names={names} pair={lightest.pair} />, {lightest.sector} at oscillator level N = {lightest.level}: {lightest.withChanPaton} states
+                with Chan-Paton factors.
+              </>
+            ) : (
+              "No state up to the mass cap survives."
+            )
           }
         />
         <SummaryItem
@@ -140,6 +161,61 @@ export function SpectrumSummary({ facts }: SpectrumSummaryProps) {
   );
 }
 
+/** One line: the tachyon, the massless content and the first massive state, each with its sector. */
+function SpectrumHeadline({ headline, names }: { headline: LightestHeadline; names: SectorNames }) {
+  const { tachyon, massless, firstMassive } = headline;
+  const maxSectors = 3;
+  return (
+    <p className="text-sm" data-testid="spectrum-headline">
+      <span data-testid="headline-tachyon" className={tachyon ? "text-danger-soft-foreground" : undefined}>
+        {tachyon ? (
+          <>
+            Tachyon <HeadlineMass state={tachyon} names={names} />
+          </>
+        ) : (
+          "No tachyon"
+        )}
+      </span>
+      <span aria-hidden="true"> &middot; </span>
+      <span data-testid="headline-massless">
+        {massless ? (
+          <>
+            {massless.complete ? "" : "at least "}
+            {massless.withChanPaton} massless states in{" "}
+            {massless.pairs.slice(0, maxSectors).map((pair, index) => (
+              <span key={pairKey(...pair)}>
+                {index > 0 ? ", " : ""}
+                <SectorNameText names={names} pair={pair} />
+              </span>
+            ))}
+            {massless.pairs.length > maxSectors ? ` and ${massless.pairs.length - maxSectors} more sectors` : ""}
+          </>
+        ) : (
+          "no massless states"
+        )}
+      </span>
+      <span aria-hidden="true"> &middot; </span>
+      <span data-testid="headline-first-massive">
+        {firstMassive ? (
+          <>
+            first massive <HeadlineMass state={firstMassive} names={names} />
+          </>
+        ) : (
+          "no massive state listed"
+        )}
+      </span>
+    </p>
+  );
+}
+
+function HeadlineMass({ state, names }: { state: HeadlineState; names: SectorNames }) {
+  return (
+    <>
+      &alpha;&prime;M&sup2; = <span className="font-mono"><MassSquaredText value={state.massSquared} /></span> in <SectorNameText names={names} pair={state.pair} /> ({state.sector})
+    </>
+  );
+}
+
 function SummaryItem({ term, value, detail, className }: { term: string; value: ReactNode; detail: ReactNode; className?: string }) {
   return (
     <div
@@ -148,7 +224,7 @@ function SummaryItem({ term, value, detail, className }: { term: string; value: 
         className,
       )}
     >
-      <dt className="text-xs text-muted-foreground @2xl:font-semibold @2xl:tracking-wide @2xl:uppercase">{term}</dt>
+      <dt className="text-xs text-muted-foreground @2xl:font-semibold">{term}</dt>
       <dd className="font-medium @2xl:text-lg @2xl:font-semibold">{value}</dd>
       <dd className="col-start-2 text-xs text-muted-foreground @2xl:col-start-1 @2xl:text-sm">{detail}</dd>
     </div>

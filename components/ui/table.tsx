@@ -30,7 +30,7 @@ export function TableHead({ className, scope = "col", ...props }: ComponentProps
   return (
     <th
       scope={scope}
-      className={cn("h-9 px-4 text-left align-middle text-xs font-semibold tracking-wide text-muted-foreground uppercase", className)}
+      className={cn("h-9 px-4 text-left align-middle text-xs font-semibold text-muted-foreground", className)}
       {...props}
     />
   );

@@ -1,8 +1,8 @@
 import "server-only";
-import { and, desc, eq, isNull } from "drizzle-orm";
+import { and, desc, eq, isNull, ne, or } from "drizzle-orm";
 import { entryConfigurationId } from "./audit-log";
 import { db } from "../index";
-import { auditLog, configurations, groups, memberships, type GroupKind } from "../schema";
+import { auditLog, configurations, groups, memberships, users, type GroupKind } from "../schema";
 import { requireActor, type Actor } from "./actor";
 
 /** One entry of the signed-in user's own recent activity. */
@@ -15,6 +15,8 @@ export interface ActivityDto {
   group: { slug: string; name: string; kind: GroupKind };
   /** The configuration the entry is about, when it still exists. */
   configuration: { id: string; title: string } | null;
+  /** Who did it when it was someone else (another member forking the actor's configuration), else null. */
+  otherActorName: string | null;
   createdAt: Date;
 }
 
@@ -25,8 +27,9 @@ export interface ListRecentActivityOptions {
 }
 
 /**
- * The actor's own writes in groups they still belong to, newest first. Entries in groups the actor
- * has left are omitted, so nothing about those groups leaks; account-level events are left out.
+ * The actor's own writes in groups they still belong to, and other people's forks of the
+ * configurations the actor created, newest first. Entries in groups the actor has left are
+ * omitted, so nothing about those groups leaks; account-level events are left out.
  */
 export async function listRecentActivityForUser(
   actor: Actor | null,
@@ -44,6 +47,8 @@ export async function listRecentActivityForUser(
       groupKind: groups.kind,
       configurationId: configurations.id,
       configurationTitle: configurations.title,
+      actorId: auditLog.actorId,
+      actorName: users.name,
       createdAt: auditLog.createdAt,
     })
     .from(auditLog)
@@ -57,7 +62,14 @@ export async function listRecentActivityForUser(
         isNull(configurations.deletedAt),
       ),
     )
-    .where(eq(auditLog.actorId, signedIn.id))
+    .leftJoin(users, eq(users.id, auditLog.actorId))
+    .where(
+      or(
+        // One's own fork shows once, as the new configuration in the space it went to.
+        and(eq(auditLog.actorId, signedIn.id), ne(auditLog.action, "configuration.forked")),
+        and(eq(auditLog.action, "configuration.forked"), eq(configurations.createdBy, signedIn.id), ne(auditLog.actorId, signedIn.id)),
+      ),
+    )
     .orderBy(desc(auditLog.createdAt))
     .limit(limit);
 
@@ -67,6 +79,7 @@ export async function listRecentActivityForUser(
     details: row.details,
     group: { slug: row.groupSlug, name: row.groupName, kind: row.groupKind },
     configuration: row.configurationId && row.configurationTitle ? { id: row.configurationId, title: row.configurationTitle } : null,
+    otherActorName: row.actorId === signedIn.id ? null : (row.actorName ?? "Someone"),
     createdAt: row.createdAt,
   }));
 }

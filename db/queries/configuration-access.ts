@@ -174,3 +174,21 @@ function resolveAccess(found: AccessRow | undefined, actor: Actor, minimum: Grou
     : null;
   return { row: found.row, role, context: { group: found.group, authorName: found.authorName, source } };
 }
+
+/**
+ * Whether a configuration exists (not deleted, in a group that is not deleted) even though the
+ * actor was refused it. Only for pages, which answer 403 rather than 404 to a signed-in reader who
+ * holds the link to something they may not see; the API keeps answering 404 so that programs
+ * cannot probe for ids.
+ */
+export async function configurationExistsForSignedIn(actor: Actor | null, configurationId: string): Promise<boolean> {
+  requireActor(actor);
+  assertUuid(configurationId, "configuration");
+  const [found] = await db
+    .select({ id: configurations.id })
+    .from(configurations)
+    .innerJoin(groups, and(eq(groups.id, configurations.groupId), isNull(groups.deletedAt)))
+    .where(and(eq(configurations.id, configurationId), isNull(configurations.deletedAt)))
+    .limit(1);
+  return found !== undefined;
+}

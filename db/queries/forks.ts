@@ -1,15 +1,21 @@
 import "server-only";
-import { and, eq, isNull } from "drizzle-orm";
+import { and, eq, inArray, isNull } from "drizzle-orm";
 import type { Configuration } from "../../lib/boundary/types";
 import { ForbiddenError, NotFoundError, ValidationError } from "../../lib/errors";
 import { distinctTitle } from "../../lib/titles";
 import { configurationTitleMaxLength } from "../../lib/validations/limits";
 import { db } from "../index";
-import { configurations, groups, revisions } from "../schema";
+import { configurations, groups, memberships, revisions } from "../schema";
 import { assertUuid, getGroupRole, requireActor, roleAtLeast, type Actor } from "./actor";
 import { recordAudit } from "./audit";
 import { requireConfigurationRole } from "./configuration-access";
-import { toConfigurationDto, type ConfigurationDto, type ConfigurationPage, type ListConfigurationsOptions } from "./configuration-dtos";
+import {
+  toConfigurationDto,
+  type ConfigurationDto,
+  type ConfigurationPage,
+  type ConfigurationSummaryDto,
+  type ListConfigurationsOptions,
+} from "./configuration-dtos";
 import { listConfigurations } from "./configurations";
 import { resultForDocument } from "./results";
 import { addRevision, documentColumns } from "./revision-writes";
@@ -93,6 +99,15 @@ export async function forkConfiguration(
       entityId: row.id,
       details: { sourceConfigurationId: source.id, sourceRevisionId: revision.id, withDraft: input.document !== undefined },
     });
+    // The source's side of the fork, so its author and group see who forked it (issue 16).
+    await recordAudit(tx, {
+      actorId: author.id,
+      groupId: source.groupId,
+      action: "configuration.forked",
+      entityType: "configuration",
+      entityId: source.id,
+      details: { forkId: row.id, forkTitle: title, revisionNumber: revision.number },
+    });
     const [group] = await tx.select().from(groups).where(eq(groups.id, input.targetGroupId));
     if (!group) throw new NotFoundError("No such group.");
     const forkedFrom = { configurationId: source.id, revisionId: revision.id, title: source.title, revisionNumber: revision.number };
@@ -101,15 +116,56 @@ export async function forkConfiguration(
 }
 
 /**
- * Direct forks of a configuration, for the owners and editors of its group (a lab instructor
- * comparing students' forks of a starter). Summaries only, wherever the forks live.
+ * Direct forks of a configuration, for the owners and editors of its group and for its author (a
+ * lab instructor comparing students' forks of a starter, an author following her forks). Summaries
+ * only, wherever the forks live.
  */
 export async function listForksOfConfiguration(
   actor: Actor | null,
   configurationId: string,
   options: ListConfigurationsOptions = {},
 ): Promise<ConfigurationPage> {
-  await requireConfigurationRole(db, actor, configurationId, "editor");
+  await requireForkListAccess(actor, configurationId);
   return listConfigurations(eq(configurations.forkedFromConfigurationId, configurationId), options);
+}
+
+/** A fork as the source's page lists it: its summary and whether the actor may open it. */
+export type ForkListItemDto = ConfigurationSummaryDto & {
+  /** True when the actor can read the fork (a member of its space, the lab's instructors for a starter, an admin). */
+  readable: boolean;
+};
+
+/**
+ * Direct forks of a configuration with whether the actor may open each one (see
+ * {@link listForksOfConfiguration} for who may list them). Newest first, at most `limit` (default 50).
+ */
+export async function listForkLinks(actor: Actor | null, configurationId: string, limit = 50): Promise<ForkListItemDto[]> {
+  const { row, context, role } = await requireForkListAccess(actor, configurationId);
+  const page = await listConfigurations(eq(configurations.forkedFromConfigurationId, configurationId), { limit, sort: "updated", direction: "desc" });
+  const signedIn = requireActor(actor);
+  // A starter's forks are readable by the lab's owners and editors (configuration-access.ts).
+  const everything = signedIn.siteRole === "admin" || (row.isStarter && context.group.kind === "lab" && roleAtLeast(role, "editor"));
+  const groupIds = [...new Set(page.items.map((fork) => fork.group.id))];
+  const memberOf = everything || groupIds.length === 0
+    ? new Set<string>()
+    : new Set(
+        (
+          await db
+            .select({ groupId: memberships.groupId })
+            .from(memberships)
+            .where(and(eq(memberships.userId, signedIn.id), inArray(memberships.groupId, groupIds)))
+        ).map((membership) => membership.groupId),
+      );
+  return page.items.map((fork) => ({ ...fork, readable: everything || memberOf.has(fork.group.id) }));
+}
+
+/** Editors and owners of the configuration's group, and its author, may list its forks. */
+async function requireForkListAccess(actor: Actor | null, configurationId: string) {
+  const access = await requireConfigurationRole(db, actor, configurationId, "viewer");
+  const signedIn = requireActor(actor);
+  if (!roleAtLeast(access.role, "editor") && access.row.createdBy !== signedIn.id) {
+    throw new ForbiddenError("Only the author and the group's editors and owners can list its forks.");
+  }
+  return access;
 }
 

@@ -8,11 +8,13 @@ import {
   listWorldvolume,
   pageSectorOverviews,
   resultOverview,
+  sectorNames,
   summaryFacts,
   type ListedWorldvolume,
   type ResultOverview,
   type SectorOverviewPage,
   type SectorPageQuery,
+  type StackNameSource,
   type SummaryFacts,
 } from "../../lib/spectrum";
 import { readStoredResult } from "../../lib/validations/spectrum-result";
@@ -43,6 +45,8 @@ export interface ResultHeadDto extends ResultMetaDto {
   facts: SummaryFacts;
   massCurves: MassCurve[];
   showGeV: boolean;
+  /** The revision's stacks (id and label), so that the page names sectors by label. */
+  stacks: StackNameSource[];
   firstPage: SectorOverviewPage;
 }
 
@@ -76,10 +80,11 @@ export async function getResultText(actor: Actor | null, configurationId: string
 /** The head of a stored result (see {@link ResultHeadDto}). */
 export async function getResultHead(actor: Actor | null, configurationId: string, revisionId: string): Promise<ResultHeadDto> {
   const meta = await locateResult(actor, revisionId, configurationId);
-  const overview = await loadOverview(meta);
+  const [overview, stacks] = await Promise.all([loadOverview(meta), revisionStacks(revisionId)]);
+  const names = sectorNames(stacks);
   const { sectors, ...result } = overview;
   let marks = 0;
-  const massCurves = curvesOf(sectors.filter((sector) => sector.pair[0] !== sector.pair[1])).map((curve) => {
+  const massCurves = curvesOf(sectors.filter((sector) => sector.pair[0] !== sector.pair[1]), names).map((curve) => {
     const kept = curve.sectors.slice(0, Math.max(0, maxCurveMarks - marks));
     marks += kept.length;
     return { ...curve, sectors: kept };
@@ -94,14 +99,15 @@ export async function getResultHead(actor: Actor | null, configurationId: string
     massCurves,
     // Every row carries a mass in GeV exactly when the configuration sets a string scale.
     showGeV: overview.lightest.some((state) => "massGeV" in state) || sectors.some((sector) => sector.lightest?.massGeV !== undefined),
-    firstPage: pageSectorOverviews(sectors, { limit: firstPageSectors }),
+    stacks,
+    firstPage: pageSectorOverviews(sectors, { limit: firstPageSectors, names }),
   };
 }
 
 /** Options of {@link getResultSectorPage}. */
-export type ResultSectorPageQuery = Omit<SectorPageQuery, "labels">;
+export type ResultSectorPageQuery = Omit<SectorPageQuery, "names">;
 
-/** One page of a stored result's sector overviews that match a filter; the search matches stack ids and labels. */
+/** One page of a stored result's sector overviews that match a filter, in natural order of the stacks' labels; the search matches ids and labels. */
 export async function getResultSectorPage(
   actor: Actor | null,
   configurationId: string,
@@ -109,12 +115,17 @@ export async function getResultSectorPage(
   query: ResultSectorPageQuery,
 ): Promise<SectorOverviewPage> {
   const meta = await locateResult(actor, revisionId, configurationId);
-  const [overview, [revision]] = await Promise.all([
-    loadOverview(meta),
-    db.select({ stacks: sql<Array<{ id: string; label?: string }>>`${revisions.document} -> 'stacks'` }).from(revisions).where(eq(revisions.id, revisionId)),
-  ]);
-  const labels = new Map((revision?.stacks ?? []).map((stack) => [stack.id, stack.label ?? ""]));
-  return pageSectorOverviews(overview.sectors, { ...query, labels });
+  const [overview, stacks] = await Promise.all([loadOverview(meta), revisionStacks(revisionId)]);
+  return pageSectorOverviews(overview.sectors, { ...query, names: sectorNames(stacks) });
+}
+
+/** The id and label of each stack of a revision, read without the rest of its document. */
+async function revisionStacks(revisionId: string): Promise<StackNameSource[]> {
+  const [row] = await db
+    .select({ stacks: sql<Array<{ id: string; label?: string }> | null>`${revisions.document} -> 'stacks'` })
+    .from(revisions)
+    .where(eq(revisions.id, revisionId));
+  return (row?.stacks ?? []).map((stack) => ({ id: stack.id, label: stack.label ?? "" }));
 }
 
 /** The stored overview when the running engine stored it, else one built from the upgraded full result. */

@@ -27,6 +27,15 @@ describe("describeActivity", () => {
     });
   });
 
+  it("says that someone forked a configuration and what the fork is called", () => {
+    expect(describeActivity({ action: "configuration.forked", details: { forkTitle: "Wall (fork)" } })).toEqual({
+      verb: "forked",
+      aboutConfiguration: true,
+      rest: "as \u201cWall (fork)\u201d",
+    });
+    expect(describeActivity({ action: "configuration.forked", details: {} }).rest).toBe("");
+  });
+
   it("is about the group, not a configuration, for membership entries", () => {
     expect(describeActivity({ action: "membership.role_change", details: { from: "viewer", to: "editor" } })).toEqual({
       verb: "changed a member's role from viewer to editor",

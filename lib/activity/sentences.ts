@@ -58,6 +58,10 @@ export function describeActivity(entry: ActivityEntry): ActivityPhrase {
     }
     case "configuration.fork":
       return about("created", d.withDraft === true ? "as a fork, with unsaved changes" : "as a fork");
+    case "configuration.forked": {
+      const title = text("forkTitle");
+      return about("forked", title ? `as \u201c${title}\u201d` : "");
+    }
     case "configuration.restore": {
       const restored = number("restoredNumber");
       const version = number("version");

@@ -6,12 +6,13 @@ import { addRational, compareRational, formatRational, isNegativeRational, ratio
 import type { Sector, SectorKind } from "@/lib/boundary/types";
 import {
   formatMassSquared,
-  formatPair,
   isSurviving,
   log10OfStateCount,
   pairKey,
   parseExactRational,
   parseResultNumber,
+  sectorNames,
+  type SectorNames,
   type SectorOverview,
 } from "@/lib/spectrum";
 
@@ -41,7 +42,7 @@ export interface MassCurve {
  * massless ground state never shows a spurious crossing), and sectors with the same N + a share one
  * curve. Curves come in increasing N + a.
  */
-export function massCurves(sectors: readonly MassCurveSector[]): MassCurve[] {
+export function massCurves(sectors: readonly MassCurveSector[], names: SectorNames = sectorNames([])): MassCurve[] {
   const byIntercept = new Map<string, MassCurve & { exact: Rational }>();
   for (const sector of sectors) {
     const row = sector.lightest;
@@ -66,7 +67,7 @@ export function massCurves(sectors: readonly MassCurveSector[]): MassCurve[] {
       };
       byIntercept.set(interceptText, curve);
     }
-    curve.sectors.push({ key: pairKey(...sector.pair), label: formatPair(sector.pair), separation: sector.separation });
+    curve.sectors.push({ key: pairKey(...sector.pair), label: names.sector(sector.pair).text, separation: sector.separation });
   }
   return [...byIntercept.values()]
     .sort((x, y) => compareRational(x.exact, y.exact))

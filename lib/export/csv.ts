@@ -1,18 +1,26 @@
 /**
- * Spectrum as CSV (RFC 4180: CRLF line ends, fields quoted when they hold a comma, quote,
- * CR or LF, with quotes doubled). The first records are single-field comments starting with
- * "#": the conventions and the caution, then the theory on each worldvolume, then the notes of
- * each sector (which name its multiplet); spreadsheet users can delete them, and most CSV
- * readers accept a `comment: "#"` option.
+ * Spectrum as CSV, written by papaparse's `unparse` (RFC 4180: CRLF line ends, a field quoted
+ * when it holds a comma, a quote, a line break or edge spaces, quotes doubled). Every record is
+ * data: one header record, then one record per (sector, level). Nothing is rewritten: commas and
+ * quotes in labels and notes stay as they are, quoted.
+ *
+ * The conventions, the caution and the configuration's title are in the last column,
+ * `conventions`, of the first data record (empty below it), so the file stays one rectangular
+ * table that any reader loads without options. The theory on each worldvolume is in the
+ * `worldvolume` column of the rows of each stack's strings with itself, and a sector's notes
+ * (which name its multiplet) in `sector_notes` on each of its rows.
  */
+import Papa from "papaparse";
 import type { SpectrumResult } from "@/lib/boundary/types";
-import { formatWorldvolume, unstretchedMassSquaredText } from "@/lib/spectrum";
+import { formatWorldvolume, sectorNames, unstretchedMassSquaredText, type StackNameSource } from "@/lib/spectrum";
 import { conventionsLine, exportCaution } from "./caution";
 
 /** Column names of the spectrum CSV, one row per (sector, level). */
 export const spectrumCsvColumns = [
   "stack_a",
   "stack_b",
+  "stack_a_label",
+  "stack_b_label",
   "nn",
   "dd",
   "nu",
@@ -24,40 +32,50 @@ export const spectrumCsvColumns = [
   "alpha_prime_mass_squared",
   "alpha_prime_mass_squared_at_y0",
   "mass_sqrt_alpha_prime",
+  "mass_gev",
   "states",
   "with_chan_paton",
   "note",
+  "sector_notes",
+  "worldvolume",
+  "conventions",
 ] as const;
 
 export interface SpectrumToCsvOptions {
-  /** Title written into the comment record (e.g. the configuration title). */
+  /** Title written into the conventions cell (e.g. the configuration title). */
   title?: string;
+  /** The configuration's stacks, for the label columns (ids stand in where a stack is missing). */
+  stacks?: readonly StackNameSource[];
 }
 
 /**
  * Renders a spectrum result as CSV.
  *
  * @param result - the engine result (exact rationals stay as strings like "-1/2")
- * @returns CSV text with CRLF line ends and a trailing CRLF
+ * @param options - the title for the conventions cell and the stacks for the label columns
+ * @returns CSV text with CRLF line ends and a trailing CRLF; the first record is the header
  * @example
- * spectrumToCsv(result).split("\r\n")[1] // => "stack_a,stack_b,nn,..."
+ * spectrumToCsv(result).split("\r\n")[0] // => "stack_a,stack_b,stack_a_label,..."
  */
 export function spectrumToCsv(result: SpectrumResult, options: SpectrumToCsvOptions = {}): string {
-  const title = options.title ? `${options.title}. ` : "";
-  const comments = [`${title}${conventionsLine(result)} ${exportCaution}`];
+  const names = sectorNames(options.stacks ?? []);
+  const conventions = `${options.title ? `${options.title}. ` : ""}${conventionsLine(result)} ${exportCaution}`;
+  // The theory on a worldvolume goes on the rows of each of its stacks' strings with itself.
+  const worldvolumeOf = new Map<string, string>();
   for (const worldvolume of result.worldvolumes) {
-    comments.push(`Worldvolume of ${worldvolume.stacks.join(" + ")}: ${formatWorldvolume(worldvolume)}`);
+    const text = formatWorldvolume(worldvolume);
+    for (const stack of worldvolume.stacks) worldvolumeOf.set(stack, text);
   }
-  // The notes name a sector's multiplet too (the W bosons of separated stacks).
+  const records: string[][] = [];
   for (const sector of result.sectors) {
-    if (sector.notes.length > 0) comments.push(`Sector ${sector.pair[0]}-${sector.pair[1]}: ${sector.notes.join(" | ")}`);
-  }
-  const records: string[][] = [...comments.map((text) => [commentRecord(text)]), [...spectrumCsvColumns]];
-  for (const sector of result.sectors) {
+    const [a, b] = sector.pair;
+    const sectorNotes = sector.notes.join(" | ");
     for (const row of sector.levels) {
       records.push([
-        sector.pair[0],
-        sector.pair[1],
+        a,
+        b,
+        names.stack(a),
+        names.stack(b),
         String(sector.nn),
         String(sector.dd),
         String(sector.nu),
@@ -69,44 +87,27 @@ export function spectrumToCsv(result: SpectrumResult, options: SpectrumToCsvOpti
         row.massSquared,
         unstretchedMassSquaredText(row, sector.zeroPoint),
         row.mass === null ? "" : String(row.mass),
+        row.massGeV === undefined || row.massGeV === null ? "" : String(row.massGeV),
         row.states ?? "",
         row.withChanPaton,
         row.note ?? "",
+        sectorNotes,
+        a === b ? (worldvolumeOf.get(a) ?? "") : "",
+        records.length === 0 ? conventions : "",
       ]);
     }
   }
-  return records.map((record) => record.map((field) => quoteCsvField(neutralizeCsvFormula(field))).join(",")).join("\r\n") + "\r\n";
-}
-
-/** One comment record: a single unquoted field, so readers with `comment: "#"` skip it. */
-function commentRecord(text: string): string {
-  return `# ${text}`.replace(/[\r\n]+/g, " ").replace(/,/g, ";").replace(/"/g, "'");
+  if (records.length === 0) records.push(spectrumCsvColumns.map((column) => (column === "conventions" ? conventions : "")));
+  return `${Papa.unparse({ fields: [...spectrumCsvColumns], data: records }, { newline: "\r\n", escapeFormulae: formulaCell })}\r\n`;
 }
 
 /**
- * Quotes one CSV field per RFC 4180 section 2 (rules 5-7).
+ * Cells a spreadsheet would run as a formula (OWASP, "CSV Injection"): text starting with "-",
+ * "=", "+", "@", a tab or a CR, except plain numbers as the engine writes them (decimals,
+ * exponents, exact fractions such as "-1/2"). papaparse prefixes such a cell with an apostrophe.
  *
  * @example
- * quoteCsvField('say "hi", then') // => '"say ""hi"", then"'
+ * formulaCell.test("=HYPERLINK(\"x\")") // => true
+ * formulaCell.test("-1/2")               // => false
  */
-export function quoteCsvField(value: string): string {
-  return /[",\r\n]/.test(value) ? `"${value.replaceAll('"', '""')}"` : value;
-}
-
-// A spreadsheet reads a cell starting with one of these as a formula (OWASP, "CSV Injection").
-const formulaStart = /^[-=+@\t\r]/;
-// Numbers as the engine writes them: decimals, exponents and exact fractions such as "-1/2".
-const plainNumber = /^[-+]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[-+]?\d+)?(?:\/\d+)?$/i;
-
-/**
- * Keeps a spreadsheet from running a cell as a formula: text starting with "-", "=", "+", "@", a
- * tab or a CR gets a leading apostrophe (OWASP's advice). Plain numbers, negative masses squared
- * like "-1/4" included, stay as they are.
- *
- * @example
- * neutralizeCsvFormula("=HYPERLINK(\"x\")") // => "'=HYPERLINK(\"x\")"
- * neutralizeCsvFormula("-1/2")               // => "-1/2"
- */
-export function neutralizeCsvFormula(value: string): string {
-  return formulaStart.test(value) && !plainNumber.test(value) ? `'${value}` : value;
-}
+export const formulaCell = /^(?![-+]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[-+]?\d+)?(?:\/\d+)?$)[-=+@\t\r]/i;

@@ -1,3 +1,4 @@
+import Papa from "papaparse";
 import { describe, expect, it } from "vitest";
 import { computeSpectrum } from "@/lib/boundary";
 import type { Configuration, Stack } from "@/lib/boundary/types";
@@ -21,41 +22,44 @@ const d3d7 = computeSpectrum(config("IIB", [stack("d3", [1, 2, 3], { count: 2 })
 const d0d8 = computeSpectrum(config("IIA", [stack("d8", axes(1, 8)), stack("d0", [], { position: { "9": 1 } })]));
 const separated = computeSpectrum(config("IIB", [stack("a", [1, 2, 3]), stack("b", [1, 2, 3], { position: { "9": 2 * Math.PI } })]));
 
-function csvLines(result: ReturnType<typeof computeSpectrum>): string[] {
-  return spectrumToCsv(result, { title: "Classic" }).split("\r\n");
+function csvRows(result: ReturnType<typeof computeSpectrum>): Record<string, string>[] {
+  const csv = spectrumToCsv(result, { title: "Classic" }).replace(/\r\n$/, "");
+  const parsed = Papa.parse<Record<string, string>>(csv, { header: true, delimiter: ",", newline: "\r\n" });
+  expect(parsed.errors).toEqual([]);
+  expect(parsed.meta.fields).toEqual([...spectrumCsvColumns]);
+  return parsed.data;
 }
 
 describe("spectrumToCsv on the classic systems", () => {
-  it("writes one comment record per worldvolume (D3-D7: the 4d N=2 line) before the header", () => {
+  it("gives each worldvolume's theory on the rows of its stack's strings with itself (D3-D7: the 4d N=2 line)", () => {
     // D3-D7: 4d N=2 U(2), one fundamental hypermultiplet, U(1) flavour (common practice, from memory).
-    const lines = csvLines(d3d7);
-    expect(lines).toContain("# Worldvolume of d3: 4d: U(2); one fundamental hypermultiplet; U(1) flavour; 4d N=2");
-    expect(lines).toContain("# Worldvolume of d7: 8d: U(1); 4d defect with 'd3'; 8d N=1");
-    const header = lines.indexOf(spectrumCsvColumns.join(","));
-    expect(lines.slice(0, header).every((line) => line.startsWith("# ") && !line.includes(","))).toBe(true);
+    const rows = csvRows(d3d7);
+    const d3 = rows.filter((row) => row.stack_a === "d3" && row.stack_b === "d3");
+    expect(d3.length).toBeGreaterThan(0);
+    expect(d3.every((row) => row.worldvolume === d3.at(0)?.worldvolume)).toBe(true);
+    expect(d3.at(0)?.worldvolume).toMatch(/^4d: U\(2\). one fundamental hypermultiplet. U\(1\) flavour. 4d N=2$/);
+    expect(rows.find((row) => row.stack_a === "d7" && row.stack_b === "d7")?.worldvolume).toMatch(/^8d: U\(1\). 4d defect with "d3". 8d N=1$/);
+    expect(rows.filter((row) => row.stack_a !== row.stack_b).every((row) => row.worldvolume === "")).toBe(true);
   });
 
   it("labels the oscillator level and gives alpha' M^2 at y = 0 beside alpha' M^2", () => {
-    const lines = csvLines(separated);
-    const columns = lines[lines.indexOf(spectrumCsvColumns.join(","))]?.split(",") ?? [];
-    expect(columns).toContain("oscillator_level");
-    const row = lines.find((line) => line.startsWith("a,b,") && line.includes(",NS,1/2,"))?.split(",") ?? [];
+    const row = csvRows(separated).find((r) => r.stack_a === "a" && r.stack_b === "b" && r.sector === "NS" && r.oscillator_level === "1/2");
     // y = 2 pi: alpha' M^2 = 1 + N + a with N + a = 0 (physics.md, mass formula).
-    expect(row[columns.indexOf("alpha_prime_mass_squared")]).toBe("1");
-    expect(row[columns.indexOf("alpha_prime_mass_squared_at_y0")]).toBe("0");
+    expect(row?.alpha_prime_mass_squared).toBe("1");
+    expect(row?.alpha_prime_mass_squared_at_y0).toBe("0");
   });
 
-  it("carries the W-boson multiplet and the string-creation note as sector comments", () => {
-    const w = csvLines(separated).find((line) => line.startsWith("# Sector a-b:"));
-    expect(w).toContain("massive W-boson vector multiplet (short; 16 supercharges) in 4 dimensions: one massive vector (3 polarisations)");
-    const note = csvLines(d0d8).find((line) => line.startsWith("# Sector d0-d8:"));
+  it("carries the W-boson multiplet and the string-creation note in the sector notes", () => {
+    const w = csvRows(separated).find((row) => row.stack_a === "a" && row.stack_b === "b")?.sector_notes;
+    expect(w).toContain("massive W-boson vector multiplet (short, 16 supercharges) in 4 dimensions: one massive vector (3 polarisations)");
+    const note = csvRows(d0d8).find((row) => row.stack_a === "d0" && row.stack_b === "d8")?.sector_notes;
     expect(note).toContain("constant force");
     expect(note).toContain("string creation");
   });
 
-  it("states M_s = 1/sqrt(alpha') and the mass cap in the conventions record", () => {
-    expect(csvLines(d3d7)[0]).toContain("M_s = 1/sqrt(alpha')");
-    expect(csvLines(d3d7)[0]).toContain("N + a <= levels");
+  it("states M_s = 1/sqrt(alpha') and the mass cap in the conventions cell", () => {
+    expect(csvRows(d3d7)[0]?.conventions).toContain("M_s = 1/sqrt(alpha')");
+    expect(csvRows(d3d7)[0]?.conventions).toContain("N + a <= levels");
   });
 });
 
@@ -72,7 +76,7 @@ describe("spectrumToLatexTable on the classic systems", () => {
   });
 
   it("heads the levels table with the oscillator level N and alpha' M^2, and says the cap is one mass for all sectors", () => {
-    expect(tex).toContain("Strings & $\\nu$ & $y/\\sqrt{\\alpha'}$ & Sector & Level $N$ & $\\alpha' M^2$ & States \\\\");
+    expect(tex).toContain("Strings & $\\nu$ & $y/\\sqrt{\\alpha'}$ & Sector & Level $N$ & $\\alpha' M^2$ & States & With Chan--Paton \\\\");
     expect(tex).toContain("every sector listed up to the same $\\alpha' M^2$ at $y = 0$");
   });
 

@@ -31,8 +31,23 @@ describe("spectrumToLatexTable", () => {
   });
 
   it("typesets exact masses as fractions and escapes stack ids", () => {
-    expect(tex).toContain("    probe\\_1--wall & $4$ & $3.5$ & NS & $0$ & $-\\tfrac{1}{2}$ & $4$ \\\\");
-    expect(tex).toContain("& $\\tfrac{1}{2}$ & $0.31$ & $32$ \\\\");
+    expect(tex).toContain("    probe\\_1--wall & $4$ & $3.5$ & NS & $0$ & $-\\tfrac{1}{2}$ & $1$ & $4$ \\\\");
+    expect(tex).toContain("& $\\tfrac{1}{2}$ & $0.31$ & $8$ & $32$ \\\\");
+  });
+
+  it("gives States as the interface does (one oriented string per Chan-Paton index pair) beside the total with Chan-Paton", () => {
+    expect(tex).toContain("Level $N$ & $\\alpha' M^2$ & States & With Chan--Paton \\\\");
+    const differing = spectrumToLatexTable(
+      makeSpectrumResult([
+        makeSector(["a", "b"], { levels: [{ sector: "R", level: "0", massSquared: "0", mass: 0, states: null, withChanPaton: "1", note: "one orientation" }] }),
+      ]),
+    );
+    expect(differing).toContain("& $0$ & --- & $1$ \\\\");
+  });
+
+  it("names the strings by the stacks' labels when given", () => {
+    const named = spectrumToLatexTable(result, { stacks: [{ id: "probe_1", label: "probe D4" }, { id: "wall", label: "D8 wall" }] });
+    expect(named).toContain("    probe D4--D8 wall & $4$");
   });
 
   it("keeps only levels up to the mass cap N + a (here a_NS = 0)", () => {

@@ -6,7 +6,7 @@
  */
 import { rationalToNumber } from "@/lib/boundary/rational";
 import type { SpectrumResult } from "@/lib/boundary/types";
-import { parseExactRational, unstretchedMassSquared } from "@/lib/spectrum";
+import { parseExactRational, sectorNames, unstretchedMassSquared, type StackNameSource } from "@/lib/spectrum";
 import { conventionsLine, exportCaution } from "./caution";
 
 export interface SpectrumToLatexTableOptions {
@@ -16,6 +16,8 @@ export interface SpectrumToLatexTableOptions {
   massCap?: number;
   /** `\label{...}` of the levels table (default "tab:spectrum"; the worldvolume table adds "-worldvolumes"). */
   label?: string;
+  /** The configuration's stacks: the table names the strings by the stacks' labels (ids where missing). */
+  stacks?: readonly StackNameSource[];
 }
 
 /**
@@ -26,6 +28,7 @@ export interface SpectrumToLatexTableOptions {
  */
 export function spectrumToLatexTable(result: SpectrumResult, options: SpectrumToLatexTableOptions = {}): string {
   const label = options.label ?? "tab:spectrum";
+  const names = sectorNames(options.stacks ?? []);
   const lines: string[] = [
     `% Mooring spectrum table. ${conventionsLine(result)}`,
     `% ${exportCaution}`,
@@ -38,9 +41,9 @@ export function spectrumToLatexTable(result: SpectrumResult, options: SpectrumTo
   lines.push(
     "\\begin{table}[ht]",
     "  \\centering",
-    "  \\begin{tabular}{llrrlrr}",
+    "  \\begin{tabular}{lrrlrrrr}",
     "    \\toprule",
-    "    Strings & $\\nu$ & $y/\\sqrt{\\alpha'}$ & Sector & Level $N$ & $\\alpha' M^2$ & States \\\\",
+    "    Strings & $\\nu$ & $y/\\sqrt{\\alpha'}$ & Sector & Level $N$ & $\\alpha' M^2$ & States & With Chan--Paton \\\\",
     "    \\midrule",
   );
   for (const sector of result.sectors) {
@@ -53,12 +56,13 @@ export function spectrumToLatexTable(result: SpectrumResult, options: SpectrumTo
       lines.push(
         "    " +
           [
-            `${escapeLatex(sector.pair[0])}--${escapeLatex(sector.pair[1])}`,
+            `${escapeLatex(names.stack(sector.pair[0]))}--${escapeLatex(names.stack(sector.pair[1]))}`,
             `$${sector.nu}$`,
             `$${formatSeparation(sector.separation)}$`,
             row.sector,
             `$${toLatexNumber(row.level)}$`,
             `$${toLatexNumber(row.massSquared)}$`,
+            row.states === null ? "---" : `$${row.states}$`,
             `$${row.withChanPaton}$`,
           ].join(" & ") +
           " \\\\",
@@ -72,7 +76,8 @@ export function spectrumToLatexTable(result: SpectrumResult, options: SpectrumTo
     `  \\caption{${title} spectrum, ${escapeLatex(result.theory)} in $D = ${result.dimension}$. ` +
       "Conventions: $\\alpha' = 1$, separations $y$ in units of $\\sqrt{\\alpha'}$, " +
       "$\\alpha' M^2 = (y/2\\pi)^2 + N + a$ with $N$ the oscillator level, every sector listed up to the same " +
-      "$\\alpha' M^2$ at $y = 0$; states are light-cone trace counts over both orientations and all " +
+      "$\\alpha' M^2$ at $y = 0$. States are light-cone trace counts of one oriented string per Chan--Paton " +
+      "index pair (--- where the two orientations differ); With Chan--Paton totals both orientations and all " +
       `Chan--Paton labels. ${escapeLatex(exportCaution)}}`,
     `  \\label{${label}}`,
     "\\end{table}",

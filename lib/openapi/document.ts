@@ -247,7 +247,7 @@ const operations: Operation[] = [
     tag: "configurations",
     summary: "Read the head of a stored result",
     description:
-      "What the results page opens with: `{ revisionId, engineVersion, computeMs, createdAt, result, facts, massCurves, showGeV, firstPage }`: the result without its sectors, the summary facts, the lightest-state curves against the separation (one per exact N + a), and the first 100 sector overviews (each sector without its level rows, with its lightest row and row count).",
+      "What the results page opens with: `{ revisionId, engineVersion, computeMs, createdAt, result, facts, massCurves, showGeV, stacks, firstPage }`: the result without its sectors, the summary facts (with the headline of the lightest states), the revision's stacks (id and label, for naming sectors), the lightest-state curves against the separation (one per exact N + a), and the first 100 sector overviews (each sector without its level rows, with its lightest row and row count).",
     access: "signed-in",
     success: { status: 200, description: "The head of the result." },
   },

@@ -7,7 +7,7 @@
  */
 import { dimensionOf } from "@/lib/boundary";
 import type { Configuration, SpectrumResult, Stack, Sector, SectorKind } from "@/lib/boundary/types";
-import { formatWorldvolume, lightestLevel, pairKey, parseResultNumber, worldvolumeKey } from "@/lib/spectrum";
+import { formatWorldvolume, lightestLevel, pairKey, parseResultNumber, worldvolumeKey, type StackNameSource } from "@/lib/spectrum";
 
 /** Boundary condition of one stack on one spatial axis. */
 export type Boundary = "N" | "D";
@@ -270,4 +270,19 @@ function sameLightest(a: LightestStateSummary | null, b: LightestStateSummary | 
   const x = parseResultNumber(a.massSquared);
   const y = parseResultNumber(b.massSquared);
   return Math.abs(x - y) <= 1e-9 * Math.max(1, Math.abs(x), Math.abs(y));
+}
+
+/**
+ * The stacks of two documents for naming the sectors of their diff: every stack of either side,
+ * with the later side's label where both have the stack.
+ *
+ * @param before - The earlier document (not mutated).
+ * @param after - The later document (not mutated).
+ * @returns Id and label of each stack, the later side's first.
+ * @example
+ * bothSidesStacks(a, b).map((stack) => stack.id) // => ids of b, then ids only a has
+ */
+export function bothSidesStacks(before: Pick<Configuration, "stacks">, after: Pick<Configuration, "stacks">): StackNameSource[] {
+  const ids = new Set(after.stacks.map((stack) => stack.id));
+  return [...after.stacks, ...before.stacks.filter((stack) => !ids.has(stack.id))].map((stack) => ({ id: stack.id, label: stack.label }));
 }

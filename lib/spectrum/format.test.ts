@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { displaySignificantDigits, formatEngineProse, formatMassSquared, formatNumber, formatPair } from "./format";
+import { displaySignificantDigits, formatEngineProse, formatMassSquared, formatNumber } from "./format";
 
 const minus = "\u2212";
 
@@ -85,18 +85,13 @@ describe("formatMassSquared", () => {
   });
 });
 
-describe("formatPair", () => {
-  it("joins the two stack ids with an en dash", () => {
-    expect(formatPair(["wall", "probe"])).toBe("wall\u2013probe");
-    expect(formatPair(["a", "a"])).toBe("a\u2013a");
-  });
-});
-
 describe("formatEngineProse", () => {
   it("writes alpha' M^2, M sqrt(alpha') and alpha' with the interface's symbols", () => {
     expect(formatEngineProse("of mass M sqrt(alpha') = 0.5, lightest alpha' M^2 = -1/2, M = y / (2 pi alpha')")).toBe(
-      "of mass M\u221a\u03b1\u2032 = 0.5, lightest \u03b1\u2032M\u00b2 = -1/2, M = y / (2 pi \u03b1\u2032)",
+      "of mass M\u221a\u03b1\u2032 = 0.5, lightest \u03b1\u2032M\u00b2 = \u22121/2, M = y / (2 pi \u03b1\u2032)",
     );
+    // A hyphen between words or inside a range of axes is not a minus sign.
+    expect(formatEngineProse("D4-D8 strings on axes 1-4, a = -1/2 (N = -1)")).toBe("D4-D8 strings on axes 1-4, a = \u22121/2 (N = \u22121)");
     expect(formatEngineProse("4d: U(2); U(1) flavour")).toBe("4d: U(2); U(1) flavour");
   });
 });

@@ -71,21 +71,10 @@ export function formatMassSquared(value: string | number | null, options: Format
 }
 
 /**
- * Names a sector by its pair of stacks.
- *
- * @param pair - The stack ids, in the order of the result.
- * @returns The ids joined by an en dash.
- * @example
- * formatPair(["wall", "probe"]) // => "wall\u2013probe"
- */
-export function formatPair(pair: readonly [string, string]): string {
-  return `${pair[0]}\u2013${pair[1]}`;
-}
-
-/**
  * Shows the engine's plain-text physics prose (notes, worldvolume lines, multiplets) with the
- * symbols of the interface: alpha' M^2 as α′M², M sqrt(alpha') as M√α′, 1/sqrt(alpha') as 1/√α′
- * and alpha' alone as α′. Exports keep the engine's text.
+ * symbols of the interface: alpha' M^2 as α′M², M sqrt(alpha') as M√α′, 1/sqrt(alpha') as 1/√α′,
+ * alpha' alone as α′, and a negative number with a true minus sign (a hyphen between words or
+ * inside a range such as "1-4" stays). Exports keep the engine's text.
  *
  * @param text - Prose as the engine writes it.
  * @returns The same prose with those symbols; other text unchanged.
@@ -97,7 +86,8 @@ export function formatEngineProse(text: string): string {
     .replaceAll("alpha' M^2", "\u03b1\u2032M\u00b2")
     .replaceAll("M sqrt(alpha')", "M\u221a\u03b1\u2032")
     .replaceAll("sqrt(alpha')", "\u221a\u03b1\u2032")
-    .replaceAll("alpha'", "\u03b1\u2032");
+    .replaceAll("alpha'", "\u03b1\u2032")
+    .replace(/(^|[\s(=,:])-(?=\d)/g, "$1\u2212");
 }
 
 const missing = "\u2014";

@@ -19,7 +19,6 @@ export {
   formatEngineProse,
   formatMassSquared,
   formatNumber,
-  formatPair,
   type FormatNumberOptions,
 } from "./format";
 export {
@@ -32,3 +31,6 @@ export {
   type SectorOverviewPage,
   type SectorPageQuery,
 } from "./overview";
+export { compareNatural, sectorNames, type SectorName, type SectorNames, type StackNameSource } from "./sector-names";
+export { lightestHeadline, type HeadlineSector, type HeadlineState, type LightestHeadline } from "./headline";
+export { simplifyExpansionLatex } from "./expansion-display";

@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { computeSpectrum } from "@/lib/boundary";
 import { braneAntibranePair, landingDemoConfiguration } from "@/lib/demo-configurations";
 import { pageSectorOverviews, resultOverview } from "./overview";
+import { sectorNames } from "./sector-names";
 
 describe("resultOverview", () => {
   it("keeps every header field and drops only the detail, which together rebuild each sector", () => {
@@ -46,12 +47,23 @@ describe("pageSectorOverviews", () => {
 
   it("matches a stack's id or label, case-insensitively, and keeps only tachyonic sectors when asked", () => {
     const [first] = landingDemoConfiguration.stacks;
-    const labels = new Map(landingDemoConfiguration.stacks.map((stack) => [stack.id, stack.label]));
-    const byLabel = pageSectorOverviews(overview.sectors, { search: (first?.label ?? "").toUpperCase(), labels });
+    const names = sectorNames(landingDemoConfiguration.stacks);
+    const byLabel = pageSectorOverviews(overview.sectors, { search: (first?.label ?? "").toUpperCase(), names });
     expect(byLabel.total).toBe(landingDemoConfiguration.stacks.length);
     expect(byLabel.items.every((sector) => sector.pair.includes(first?.id ?? ""))).toBe(true);
     const tachyonic = pageSectorOverviews(overview.sectors, { tachyonicOnly: true });
     expect(tachyonic.items.every((sector) => sector.tachyonic)).toBe(true);
     expect(tachyonic.total).toBe(overview.sectors.filter((sector) => sector.tachyonic).length);
+  });
+
+  it("orders sectors naturally by the stacks' names when names are given: s2 before s10", () => {
+    const stacks = Array.from({ length: 11 }, (_, i) => ({ id: `s${i + 1}`, label: `stack ${i + 1}`, count: 1, anti: false, worldvolume: [1, 2, 3], position: { 9: i } }));
+    const sectors = resultOverview(computeSpectrum({ ...landingDemoConfiguration, stacks })).sectors;
+    // The engine keys stacks in code-unit id order, so "s10" comes before "s2" there.
+    expect(sectors.findIndex((s) => s.pair[0] === "s10")).toBeLessThan(sectors.findIndex((s) => s.pair[0] === "s2"));
+    const page = pageSectorOverviews(sectors, { names: sectorNames(stacks), limit: 100 });
+    const firsts = [...new Set(page.items.map((s) => s.pair[0]))];
+    expect(firsts).toEqual(stacks.map((stack) => stack.id));
+    expect(page.items.map((s) => s.index).sort((a, b) => a - b)).toEqual(sectors.map((s) => s.index));
   });
 });

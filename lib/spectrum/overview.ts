@@ -8,6 +8,7 @@
  */
 import type { LevelRow, Sector, SpectrumResult } from "@/lib/boundary/types";
 import { lightestLevel } from "./lightest";
+import type { SectorNames } from "./sector-names";
 
 /** The parts of a sector that live only in its detail. */
 export type SectorDetailField = "levels" | "axes" | "massless" | "notes";
@@ -68,12 +69,12 @@ export interface SectorPageQuery {
   offset?: number;
   /** How many matching sectors to return at most (default 100). */
   limit?: number;
-  /** Keep sectors one of whose stacks' id or label contains this text (case-insensitive). */
+  /** Keep sectors one of whose stacks' id or name contains this text (case-insensitive). */
   search?: string;
   /** Keep only tachyonic sectors. */
   tachyonicOnly?: boolean;
-  /** Stack labels by id, so that the search matches labels too. */
-  labels?: ReadonlyMap<string, string>;
+  /** The stacks' names: the search matches them too, and sectors come in natural order of them. */
+  names?: SectorNames;
 }
 
 /** One page of the sectors that match a filter. */
@@ -85,20 +86,22 @@ export interface SectorOverviewPage {
 }
 
 /**
- * One page of the overview sectors that match a filter, in result order.
+ * One page of the overview sectors that match a filter, in natural order of the stacks' names
+ * when `names` is given (else in result order).
  *
- * @param sectors - The overview's sectors.
- * @param query - Offset, page size, search text, tachyonic-only flag and stack labels.
+ * @param sectors - The overview's sectors (not mutated).
+ * @param query - Offset, page size, search text, tachyonic-only flag and stack names.
  * @returns The page, the number of matches and the offset used.
  * @example
  * pageSectorOverviews(overview.sectors, { search: "probe", limit: 20 }).total // => sectors of stacks named like "probe"
  */
 export function pageSectorOverviews(sectors: readonly SectorOverview[], query: SectorPageQuery = {}): SectorOverviewPage {
   const needle = query.search?.trim().toLowerCase() ?? "";
-  const matchesStack = (id: string) => id.toLowerCase().includes(needle) || (query.labels?.get(id)?.toLowerCase().includes(needle) ?? false);
-  const matching = sectors.filter(
-    (sector) => (!query.tachyonicOnly || sector.tachyonic) && (needle === "" || sector.pair.some(matchesStack)),
-  );
+  const names = query.names;
+  const matchesStack = (pair: readonly [string, string]) =>
+    names ? names.matches(pair, needle) : pair.some((id) => id.toLowerCase().includes(needle));
+  const matching = sectors.filter((sector) => (!query.tachyonicOnly || sector.tachyonic) && (needle === "" || matchesStack(sector.pair)));
+  if (names) matching.sort((a, b) => names.compare(a.pair, b.pair) || a.index - b.index);
   const offset = Math.min(Math.max(0, Math.floor(query.offset ?? 0)), matching.length);
   const limit = Math.max(1, Math.floor(query.limit ?? 100));
   return { items: matching.slice(offset, offset + limit), total: matching.length, offset };

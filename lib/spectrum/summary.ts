@@ -5,6 +5,8 @@
  * Invalid-input policy: an unreadable lightest alpha' M^2 is stored as null; nothing throws.
  */
 import type { Configuration, LightestState, Sector, SpectrumResult, WorldvolumeTheory } from "@/lib/boundary/types";
+import { lightestHeadline, type LightestHeadline } from "./headline";
+import { lightestLevel } from "./lightest";
 import { parseResultNumber } from "./result-number";
 import { tachyonicSectors, type TachyonicSector, type TachyonSource } from "./tachyons";
 import { stringCreationSectors, worldvolumeKey } from "./worldvolumes";
@@ -83,6 +85,8 @@ export interface SummaryFacts {
   worldvolumeCount: number;
   /** Pairs whose supersymmetry needs a created string (nu = 8 across a common Dirichlet axis). */
   stringCreation: Array<[string, string]>;
+  /** The most tachyonic state, the massless content and the first massive state, each with its sector. */
+  headline: LightestHeadline;
 }
 
 /**
@@ -113,6 +117,10 @@ export function summaryFacts(
     worldvolumes: recorded ? result.worldvolumes.slice(0, listedWorldvolumes).map(summaryWorldvolume) : null,
     worldvolumeCount: result.worldvolumes.length,
     stringCreation: result.bps ? stringCreationSectors(result).map((sector) => sector.pair) : [],
+    headline: lightestHeadline(
+      result.lightest,
+      result.sectors.map((sector) => ({ pair: sector.pair, lightest: "lightest" in sector ? sector.lightest : lightestLevel(sector) })),
+    ),
   };
 }
 

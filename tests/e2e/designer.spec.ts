@@ -1,7 +1,7 @@
 import { expect, test, type Locator } from "@playwright/test";
 import { computeSpectrum } from "@/lib/boundary";
 import type { Configuration } from "@/lib/boundary/types";
-import { formatEngineProse, formatMassSquared, parseResultNumber } from "@/lib/spectrum";
+import { formatEngineProse, formatMassSquared, parseResultNumber, sectorNames } from "@/lib/spectrum";
 import { slabAndPoint } from "../fixtures/slab-and-point";
 import { demoAccounts, signIn } from "./helpers/accounts";
 import { createInGroup, unique } from "./helpers/configurations";
@@ -76,7 +76,8 @@ test.describe("designer", () => {
     // (common practice; Banks and Susskind 1995, hep-th/9511194, from memory).
     await expect(page.getByTestId("spectrum-gauge-group")).toHaveText("U(2) x U(1) x U(1)");
     await expect(page.getByTestId("spectrum-stability")).toContainText("tachyonic sector");
-    await expect(page.getByTestId("spectrum-tachyons")).toContainText("a\u2013s2");
+    // Sectors are named by the stacks' labels (stack a is labelled "first stack"; a new stack by its id).
+    await expect(page.getByTestId("spectrum-tachyons")).toContainText("first stack\u2013s2");
 
     // An odd p is not allowed in IIA: shown inline, and saving is blocked until it is fixed.
     await page.getByRole("button", { name: "Stack s2, axis x5: Dirichlet" }).click();
@@ -159,12 +160,13 @@ test.describe("designer", () => {
     const id = await createInGroup(page, document);
     await page.goto(`/configurations/${id}/results`);
     const expected = computeSpectrum(document);
+    const names = sectorNames(document.stacks);
     const table = page.getByTestId("lightest-table");
     await expect(table.getByRole("row")).toHaveCount(expected.lightest.length + 1);
     const rows = await table.getByRole("row").all();
     for (const [i, state] of expected.lightest.entries()) {
       const cells = rows[i + 1]!.getByRole("cell");
-      await expect(cells.nth(0)).toHaveText(`${state.pair[0]}\u2013${state.pair[1]}`);
+      await expect(cells.nth(0)).toHaveText(names.sector(state.pair).text);
       await expect(cells.nth(1)).toHaveText(state.sector);
       await expect(cells.nth(2)).toHaveText(state.level);
       await expect(cells.nth(3)).toHaveText(formatMassSquared(state.massSquared));

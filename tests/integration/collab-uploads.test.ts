@@ -292,7 +292,7 @@ describe("export", () => {
 
     const csv = await exportRoute.GET(new Request(`http://test.local/x?format=csv`), params);
     expect(csv.headers.get("content-type")).toContain("text/csv");
-    expect((await csv.text()).startsWith("# ")).toBe(true);
+    expect((await csv.text()).startsWith("stack_a,stack_b,")).toBe(true);
     const tex = await exportRoute.GET(new Request(`http://test.local/x?format=tex`), params);
     expect(await tex.text()).toContain("\\toprule");
 

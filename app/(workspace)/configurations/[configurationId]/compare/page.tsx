@@ -15,7 +15,7 @@ import { getResultForRevision } from "@/db/queries/result-reads";
 import { computeSpectrum } from "@/lib/boundary";
 import type { SpectrumResult } from "@/lib/boundary/types";
 import { ForbiddenError, NotFoundError } from "@/lib/errors";
-import { diffConfigurations, diffSpectra, type ConfigurationDiff } from "@/lib/revisions/diff";
+import { bothSidesStacks, diffConfigurations, diffSpectra, type ConfigurationDiff } from "@/lib/revisions/diff";
 import { requireUser } from "@/lib/server/session";
 
 export const metadata: Metadata = { title: "Compare" };
@@ -84,6 +84,7 @@ export default async function ComparePage({ params, searchParams }: ComparePageP
             sideLabels={{ from: labels.before.toLowerCase(), to: labels.after.toLowerCase() }}
             configurationDiff={documentDiff}
             spectrumDiff={diffSpectra(beforeResult, afterResult)}
+            stacks={bothSidesStacks(before.document, after.document)}
           />
         </CardContent>
       </Card>

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { ForksList } from "@/components/collaboration/forks-list";
 import { RestoreRevisionButton } from "@/components/collaboration/restore-revision-button";
 import { RevisionDiffView } from "@/components/collaboration/revision-diff-view";
 import { PageContainer } from "@/components/layout/page-container";
@@ -13,11 +14,12 @@ import { Select } from "@/components/ui/select";
 import { Table, TableBody, TableCell, TableHead, TableHeader, TableRow } from "@/components/ui/table";
 import { getConfiguration } from "@/db/queries/configurations";
 import { type RevisionSummaryDto } from "@/db/queries/configuration-dtos";
+import { listForkLinks } from "@/db/queries/forks";
 import { getResultForRevision } from "@/db/queries/result-reads";
 import { getRevisionByNumber, listRevisions } from "@/db/queries/revisions";
 import { NotFoundError } from "@/lib/errors";
 import { formatDateTime } from "@/lib/format-date";
-import { diffConfigurations, diffSpectra } from "@/lib/revisions/diff";
+import { bothSidesStacks, diffConfigurations, diffSpectra } from "@/lib/revisions/diff";
 import { requireUser } from "@/lib/server/session";
 
 export const metadata: Metadata = { title: "History" };
@@ -44,6 +46,8 @@ export default async function HistoryPage({ params, searchParams }: HistoryPageP
   const to = pick(query.to, numbers) ?? newest;
   const from = pick(query.from, numbers) ?? numbers.find((number) => number < to) ?? to;
   const comparison = revisions.length > 1 ? await compare(actor, configurationId, from, to, revisions) : null;
+  // The author and the group's editors follow the forks; other readers do not see the list.
+  const forks = configuration.canEdit || configuration.author.id === actor.id ? await listForkLinks(actor, configurationId) : null;
 
   return (
     <PageContainer className="grid gap-6">
@@ -111,6 +115,20 @@ export default async function HistoryPage({ params, searchParams }: HistoryPageP
         </CardContent>
       </Card>
 
+      {forks ? (
+        <Card aria-labelledby="forks-title">
+          <CardHeader>
+            <CardTitle id="forks-title">Forks</CardTitle>
+            <CardDescription>
+              {forks.length === 1 ? "1 fork" : `${forks.length} forks`} made from this configuration, newest change first.
+            </CardDescription>
+          </CardHeader>
+          <CardContent>
+            <ForksList sourceId={configurationId} forks={forks} />
+          </CardContent>
+        </Card>
+      ) : null}
+
       {revisions.length > 1 ? (
         <Card aria-labelledby="compare-title">
           <CardHeader>
@@ -169,6 +187,7 @@ async function compare(
       ? await Promise.all([getResultForRevision(actor, before.id), getResultForRevision(actor, after.id)])
       : [null, null];
   return {
+    stacks: bothSidesStacks(before.document, after.document),
     configurationDiff: diffConfigurations(before.document, after.document),
     spectrumDiff: beforeResult && afterResult ? diffSpectra(beforeResult.result, afterResult.result) : null,
   };

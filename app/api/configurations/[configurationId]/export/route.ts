@@ -37,8 +37,8 @@ export const GET = route({ params: ["configurationId"], query: exportQuerySchema
     const { result } = await getResultForRevision(actor, revision.id);
     body =
       query.format === "csv"
-        ? spectrumToCsv(result, { title: document.title })
-        : spectrumToLatexTable(result, { title: document.title, label: `tab:${fileStem(document.title)}` });
+        ? spectrumToCsv(result, { title: document.title, stacks: document.stacks })
+        : spectrumToLatexTable(result, { title: document.title, label: `tab:${fileStem(document.title)}`, stacks: document.stacks });
   }
   return new Response(body, {
     headers: {

@@ -4,7 +4,7 @@ import { route } from "@/lib/server/route";
 /**
  * GET /api/configurations/[configurationId]/revisions/[revisionId]/result/overview: what the results
  * page opens with: `{ revisionId, engineVersion, computeMs, createdAt, result, facts, massCurves,
- * showGeV, firstPage }`, i.e. the stored result without its sectors, the summary facts, the
+ * showGeV, stacks, firstPage }`, i.e. the stored result without its sectors, the summary facts, the
  * lightest-state curves against the separation, and the first page of sector overviews (each
  * sector's lightest row and row count, without its level rows).
  */
