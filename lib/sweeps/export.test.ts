@@ -1,3 +1,4 @@
+import Papa from "papaparse";
 import { describe, expect, it } from "vitest";
 import { exportCaution } from "../export/caution";
 import { sweepToCsv, sweepToJson } from "./export";
@@ -28,14 +29,24 @@ describe("toPointRows", () => {
 });
 
 describe("sweepToCsv", () => {
-  it("writes a comment record with conventions and caution, a header, and points in order", () => {
-    const lines = sweepToCsv(source).split("\r\n");
-    expect(lines[0]).toMatch(/^"# Pull apart, with a, b\. alpha' = 1;.*Theory IIA, D = 10\./);
-    expect(lines[0]).toContain(exportCaution);
-    expect(lines[1]).toBe("point,N/D of a on x5,b x9,verdict,supercharges,tachyonic_sectors,lightest_alpha_prime_mass_squared,massless_states,gauge_group,problem");
-    expect(lines.slice(2, 6).map((line) => line.split(",")[0])).toEqual(["0", "1", "2", "3"]);
-    expect(lines[2]?.split(",").slice(0, 6)).toEqual(["0", "a D", "0", "tachyonic", "0", "1"]);
-    expect(lines.at(-1)).toBe("");
+  it("writes one rectangular table: a header, points in order, conventions and caution in the last column of the first row", () => {
+    const csv = sweepToCsv(source);
+    // Read back with papaparse, as a reader would, without options for comments.
+    const parsed = Papa.parse<string[]>(csv.trimEnd(), { newline: "\r\n" });
+    expect(parsed.errors).toEqual([]);
+    const [header, ...data] = parsed.data;
+    expect(header).toEqual([
+      "point", "N/D of a on x5", "b x9", "verdict", "supercharges", "tachyonic_sectors",
+      "lightest_alpha_prime_mass_squared", "massless_states", "gauge_group", "problem", "conventions",
+    ]);
+    expect(data.every((record) => record.length === header?.length)).toBe(true);
+    expect(data.map((record) => record[0])).toEqual(["0", "1", "2", "3"]);
+    expect(data[0]?.slice(0, 6)).toEqual(["0", "a D", "0", "tachyonic", "0", "1"]);
+    expect(data[0]?.at(-1)).toMatch(/^Pull apart, with a, b\. alpha' = 1;.*Theory IIA, D = 10\./);
+    expect(data[0]?.at(-1)).toContain(exportCaution);
+    expect(data.slice(1).map((record) => record.at(-1))).toEqual(["", "", ""]);
+    expect(csv.startsWith("#")).toBe(false);
+    expect(csv.endsWith("\r\n")).toBe(true);
   });
 });
 

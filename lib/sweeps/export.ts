@@ -1,13 +1,15 @@
 /**
- * A sweep's points as CSV (RFC 4180, like the spectrum CSV: CRLF line ends, a first comment
- * record with the conventions and the caution) and as JSON (the definition, the base
+ * A sweep's points as CSV (written like the spectrum CSV by papaparse: RFC 4180, CRLF line ends,
+ * one header record and only data below it, the title, conventions and caution in the last
+ * column, `conventions`, of the first data record) and as JSON (the definition, the base
  * configuration and one object per point).
  *
  * Invalid-input policy: pure formatting; nothing throws.
  */
 import { ENGINE_VERSION, dimensionOf } from "../boundary";
 import { exportCaution } from "../export/caution";
-import { quoteCsvField } from "../export/csv";
+import Papa from "papaparse";
+import { formulaCell } from "../export/csv";
 import { dimensionLabel } from "./dimension";
 import type { SweepExportSource } from "./point-rows";
 
@@ -24,20 +26,21 @@ export const sweepCsvColumns = [
   "massless_states",
   "gauge_group",
   "problem",
+  "conventions",
 ] as const;
 
 /**
  * Renders a sweep's points as CSV, one record per point in point order.
  *
  * @example
- * sweepToCsv(source).split("\r\n")[1] // => "point,probe x8,verdict,supercharges,..."
+ * sweepToCsv(source).split("\r\n")[0] // => "point,probe x8,verdict,supercharges,..."
  */
 export function sweepToCsv(source: SweepExportSource): string {
-  const comment = `# ${source.title}. ${conventionLine(source)} ${exportCaution}`;
+  const conventions = `${source.title}. ${conventionLine(source)} ${exportCaution}`;
   const header = ["point", ...source.definition.dimensions.map(dimensionLabel), ...sweepCsvColumns];
   const records = [...source.rows]
     .sort((a, b) => a.index - b.index)
-    .map((row) => [
+    .map((row, position) => [
       String(row.index),
       ...row.labels,
       row.verdict,
@@ -47,8 +50,10 @@ export function sweepToCsv(source: SweepExportSource): string {
       row.masslessStates ?? "",
       row.gaugeGroup ?? "",
       row.problem ?? "",
+      position === 0 ? conventions : "",
     ]);
-  return [[comment], header, ...records].map((record) => record.map(quoteCsvField).join(",")).join("\r\n") + "\r\n";
+  if (records.length === 0) records.push(header.map((column) => (column === "conventions" ? conventions : "")));
+  return `${Papa.unparse({ fields: header, data: records }, { newline: "\r\n", escapeFormulae: formulaCell })}\r\n`;
 }
 
 /**
