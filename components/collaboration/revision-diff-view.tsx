@@ -1,6 +1,7 @@
 import type { ReactNode } from "react";
 import { Badge } from "@/components/ui/badge";
 import { formatMassSquared, formatPair, pairKey } from "@/lib/spectrum";
+import { describeCompactDiff } from "@/lib/revisions/compact-diff";
 import type { ConfigurationDiff, SpectrumDiff } from "@/lib/revisions/diff";
 
 export interface RevisionDiffViewProps {
@@ -79,6 +80,11 @@ export function RevisionDiffView({ fromNumber, toNumber, sideLabels, configurati
                     </li>
                   ))}
                 </ul>
+              </li>
+            ))}
+            {describeCompactDiff(configurationDiff.compact).map((line) => (
+              <li key={line}>
+                <Badge variant="warning">circle</Badge> {line}
               </li>
             ))}
           </ul>

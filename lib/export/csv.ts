@@ -6,7 +6,7 @@
  * readers accept a `comment: "#"` option.
  */
 import type { SpectrumResult } from "@/lib/boundary/types";
-import { formatWorldvolume, unstretchedMassSquaredText } from "@/lib/spectrum";
+import { formatWorldvolume, quantumNumberText, resultHasTower, unstretchedMassSquaredText } from "@/lib/spectrum";
 import { conventionsLine, exportCaution } from "./caution";
 
 /** Column names of the spectrum CSV, one row per (sector, level). */
@@ -28,6 +28,13 @@ export const spectrumCsvColumns = [
   "with_chan_paton",
   "note",
 ] as const;
+
+/**
+ * Columns added after `spectrumCsvColumns` when the result has compact axes: "level" for a level
+ * row (the lightest momentum and winding) or "tower" for a tower state, and its quantum numbers
+ * ("n9 = 1; w8 = -2", momentum n on NN axes and winding w on DD axes).
+ */
+export const towerCsvColumns = ["row", "quantum_numbers"] as const;
 
 export interface SpectrumToCsvOptions {
   /** Title written into the comment record (e.g. the configuration title). */
@@ -52,18 +59,25 @@ export function spectrumToCsv(result: SpectrumResult, options: SpectrumToCsvOpti
   for (const sector of result.sectors) {
     if (sector.notes.length > 0) comments.push(`Sector ${sector.pair[0]}-${sector.pair[1]}: ${sector.notes.join(" | ")}`);
   }
-  const records: string[][] = [...comments.map((text) => [commentRecord(text)]), [...spectrumCsvColumns]];
+  const tower = resultHasTower(result);
+  const records: string[][] = [
+    ...comments.map((text) => [commentRecord(text)]),
+    tower ? [...spectrumCsvColumns, ...towerCsvColumns] : [...spectrumCsvColumns],
+  ];
   for (const sector of result.sectors) {
+    const header = [
+      sector.pair[0],
+      sector.pair[1],
+      String(sector.nn),
+      String(sector.dd),
+      String(sector.nu),
+      String(sector.separation),
+      String(sector.tachyonic),
+      String(sector.supersymmetric),
+    ];
     for (const row of sector.levels) {
       records.push([
-        sector.pair[0],
-        sector.pair[1],
-        String(sector.nn),
-        String(sector.dd),
-        String(sector.nu),
-        String(sector.separation),
-        String(sector.tachyonic),
-        String(sector.supersymmetric),
+        ...header,
         row.sector,
         row.level,
         row.massSquared,
@@ -72,7 +86,12 @@ export function spectrumToCsv(result: SpectrumResult, options: SpectrumToCsvOpti
         row.states ?? "",
         row.withChanPaton,
         row.note ?? "",
+        ...(tower ? ["level", ""] : []),
       ]);
+    }
+    for (const state of sector.tower ?? []) {
+      const mass = state.mass === null ? "" : String(state.mass);
+      records.push([...header, state.sector, state.level, state.massSquared, "", mass, state.states ?? "", state.withChanPaton, "", "tower", quantumNumberText(state, "; ")]);
     }
   }
   return records.map((record) => record.map((field) => quoteCsvField(neutralizeCsvFormula(field))).join(",")).join("\r\n") + "\r\n";

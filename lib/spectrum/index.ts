@@ -32,3 +32,11 @@ export {
   type SectorOverviewPage,
   type SectorPageQuery,
 } from "./overview";
+export {
+  quantumNumberText,
+  quantumNumbers,
+  resultHasTower,
+  towerPoints,
+  type QuantumNumber,
+  type TowerPoint,
+} from "./tower";
