@@ -335,22 +335,18 @@ export function computeTower(input: TowerInput): { rows: TowerState[]; truncated
   const rows = candidates.slice(0, limit).map(({ level, combination, value }): TowerState => {
     const momentum: Record<string, number> = {};
     const winding: Record<string, number> = {};
-    let exact: Rational | null = flatStretch === 0 ? level.exact : null;
     terms.forEach((term, index) => {
-      const number = combination.numbers[index] ?? 0;
-      (term.type === "NN" ? momentum : winding)[String(term.axis)] = number;
-      if (exact === null || (number === 0 && term.offset === 0)) return;
-      const square = exactScales[index];
-      exact = term.offset === 0 && square ? addRational(exact, multiplyRational(square, rational(number * number))) : null;
+      (term.type === "NN" ? momentum : winding)[String(term.axis)] = combination.numbers[index] ?? 0;
     });
-    const negative = exact !== null ? isNegativeRational(exact) : value < 0;
+    const exact = flatStretch === 0 ? exactMassSquared(level.exact, terms, exactScales, combination.numbers) : null;
+    const negative = exact !== null ? exact.negative : value < 0;
     const mass = negative ? null : Math.sqrt(Math.max(0, value));
     const row: TowerState = {
       sector: level.kind,
       level: level.level,
       momentum,
       winding,
-      massSquared: exact !== null ? formatRational(exact) : formatDecimal(value),
+      massSquared: exact !== null ? exact.text : formatDecimal(value),
       mass,
       states: level.states,
       withChanPaton: level.withChanPaton,
@@ -440,6 +436,53 @@ export function compactNotes(pair: CompactPair, self: boolean): string[] {
     );
   }
   return notes;
+}
+
+/**
+ * alpha' M^2 = N + a + sum scale^2 m^2 exactly, as text, or null when a term with a non-zero
+ * number has an offset or no exact scale. Whole-number arithmetic in doubles while it stays below
+ * 2^53 (radii with few decimals keep it there), exact BigInt rationals beyond: each row would
+ * otherwise pay several BigInt normalisations.
+ */
+function exactMassSquared(
+  level: Rational,
+  terms: readonly CompactAxisTerm[],
+  squares: readonly (Rational | null)[],
+  numbers: readonly number[],
+): { text: string; negative: boolean } | null {
+  let num = Number(level.num);
+  let den = Number(level.den);
+  let big: Rational | null = Number.isSafeInteger(num) && Number.isSafeInteger(den) ? null : level;
+  for (let index = 0; index < terms.length; index += 1) {
+    const m = numbers[index] ?? 0;
+    const term = terms[index] as CompactAxisTerm;
+    if (m === 0 && term.offset === 0) continue;
+    const square = squares[index];
+    if (term.offset !== 0 || !square) return null;
+    if (big === null) {
+      const p = Number(square.num) * m * m;
+      const q = Number(square.den);
+      const nextNum = num * q + p * den;
+      const nextDen = den * q;
+      if (Number.isSafeInteger(p) && Number.isSafeInteger(nextNum) && Number.isSafeInteger(nextDen)) {
+        const divisor = wholeGcd(Math.abs(nextNum), nextDen);
+        num = nextNum / divisor;
+        den = nextDen / divisor;
+        continue;
+      }
+      big = rational(num, den);
+    }
+    big = addRational(big, multiplyRational(square, rational(BigInt(m) * BigInt(m))));
+  }
+  if (big !== null) return { text: formatRational(big), negative: isNegativeRational(big) };
+  return { text: den === 1 ? String(num) : `${num}/${den}`, negative: num < 0 };
+}
+
+function wholeGcd(a: number, b: number): number {
+  let x = a;
+  let y = b;
+  while (y !== 0) [x, y] = [y, x % y];
+  return x === 0 ? 1 : x;
 }
 
 /**
