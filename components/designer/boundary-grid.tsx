@@ -8,7 +8,7 @@ import type { FieldIssue } from "@/lib/errors";
 import { selectDocument, useDesignerStore } from "@/lib/client/designer-store";
 import { cn } from "@/lib/utils";
 import { Button } from "@/components/ui/button";
-import { CompactAxisRow, WilsonLineField } from "./compact-axis-cells";
+import { CompactAxisRow, WilsonLineField, fieldNumber } from "./compact-axis-cells";
 import { NumberField } from "./number-field";
 
 export interface BoundaryGridProps {
@@ -260,6 +260,7 @@ function StackRows({ stack, index, document, axes, selected, issues, readOnly, o
                     disabled={readOnly}
                     onCommit={(value) => setPosition(stack.id, axis, value)}
                     name={`The position on x${axis}`}
+                    formatValue={fieldNumber}
                     min={-maxAbsPosition}
                     max={maxAbsPosition}
                     aria-label={`Position of stack ${stack.id} on x${axis}`}

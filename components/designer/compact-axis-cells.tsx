@@ -5,6 +5,14 @@ import { maxRadius, minRadius, wilsonPeriod } from "@/lib/designer/compact-edits
 import { useDesignerStore } from "@/lib/client/designer-store";
 import { NumberField } from "./number-field";
 
+/**
+ * A number as a field shows it: 12 significant digits, so that a T-dual position theta R' or an
+ * angle x / R reads 1.25 rather than 1.2499999999999998.
+ */
+export function fieldNumber(value: number): string {
+  return String(Number(value.toPrecision(12)));
+}
+
 export interface CompactAxisRowProps {
   document: Configuration;
   axes: number[];
@@ -43,6 +51,7 @@ export function CompactAxisRow({ document, axes, leadingColumns, trailingColumns
                 onCommit={(value) => setRadius(axis, value)}
                 onClear={() => setRadius(axis, null)}
                 placeholder="\u221e"
+                formatValue={fieldNumber}
                 aria-label={`Radius of the circle x${axis} (empty: non-compact)`}
                 className="w-11"
               />
@@ -84,6 +93,7 @@ export function WilsonLineField({ stack, axis, readOnly }: WilsonLineFieldProps)
       max={wilsonPeriod - 1e-9}
       disabled={readOnly}
       name={`The Wilson line on x${axis}`}
+      formatValue={fieldNumber}
       onCommit={(value) => setWilsonLine(stack.id, axis, value)}
       title="Wilson line theta in radians, 0 to 2 pi"
       aria-label={`Wilson line of stack ${stack.id} on x${axis} (radians)`}
