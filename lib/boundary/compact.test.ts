@@ -104,14 +104,24 @@ describe("compact axes in computeSpectrum", () => {
   });
 
   it("finds a brane-antibrane pair tachyonic at every position when the circle is shorter than the critical separation", () => {
-    // y_c = pi sqrt(2) ~ 4.44 (Banks and Susskind 1995, from memory); on a circle of radius 1 the
-    // nearest image is never further than pi R ~ 3.14.
-    const result = computeSpectrum(
-      configuration({ levels: 1, compact: { "9": 1 }, stacks: [stack("a", [], { position: { "9": 0 } }), stack("b", [], { anti: true, position: { "9": Math.PI } })] }),
-    );
-    const ab = sectorOf(result, "a", "b");
+    // y_c = pi sqrt(2) ~ 4.44 (Banks and Susskind 1995, from memory); two D8s are apart along x9 only,
+    // and on a circle of radius 1 the nearest image is never further than pi R ~ 3.14.
+    const walls = [1, 2, 3, 4, 5, 6, 7, 8];
+    const pair = (radius: number, x: number) =>
+      computeSpectrum(
+        configuration({ levels: 1, compact: { "9": radius }, stacks: [stack("a", walls, { position: { "9": 0 } }), stack("b", walls, { anti: true, position: { "9": x } })] }),
+      );
+    const ab = sectorOf(pair(1, Math.PI), "a", "b");
     expect(ab.separation).toBeCloseTo(Math.PI, 12);
     expect(ab.tachyonic).toBe(true);
+    expect(ab.notes.some((note) => note.includes("tachyonic wherever the stacks sit"))).toBe(true);
+    // On a circle of radius 2 the walls can be pi R ~ 6.28 apart, beyond y_c: no such note.
+    expect(sectorOf(pair(2, 1), "a", "b").notes.some((note) => note.includes("tachyonic wherever"))).toBe(false);
+    // Two D0s can also move apart along the eight flat axes: no such note either.
+    const points = computeSpectrum(
+      configuration({ levels: 1, compact: { "9": 1 }, stacks: [stack("a", [], { position: { "9": 0 } }), stack("b", [], { anti: true, position: { "9": 1 } })] }),
+    );
+    expect(sectorOf(points, "a", "b").notes.some((note) => note.includes("tachyonic wherever"))).toBe(false);
   });
 
   it("leaves format 1 results without tower fields", () => {

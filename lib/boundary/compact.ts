@@ -413,15 +413,17 @@ export function checkCompactAxes(configuration: Configuration, dimension: number
 }
 
 /**
- * Notes for a pair on compact axes: how its Wilson lines and circles shift the lightest states.
+ * Notes for a pair on compact axes: how its Wilson lines and circles shift the lightest states,
+ * and whether a tachyonic pair can get beyond its critical separation at all.
  *
  * @param pair - `describeCompactPair` of the pair.
  * @param self - True for a stack with itself.
+ * @param criticalSeparation - y_c of the pair, or null.
  * @returns Sentences, empty without compact axes.
  * @example
- * compactNotes(pair, false)[0] // => "Compact axes 9 (R = 2.5, NN): ..."
+ * compactNotes(pair, false, null)[0] // => "On the compact axis 9 (R = 2.5, momentum n) the tower adds ..."
  */
-export function compactNotes(pair: CompactPair, self: boolean): string[] {
+export function compactNotes(pair: CompactPair, self: boolean, criticalSeparation: number | null): string[] {
   if (pair.terms.length === 0) return [];
   const described = pair.terms.map((term) => `${term.axis} (R = ${formatDecimal(term.radius)}, ${term.type === "NN" ? "momentum n" : "winding w"})`);
   const notes = [
@@ -434,6 +436,19 @@ export function compactNotes(pair: CompactPair, self: boolean): string[] {
       `The Wilson lines differ, so the lightest strings gain ${formatDecimal(pair.momentumShift)} in alpha' M^2 ` +
         "and the gauge group is not enhanced (the T-dual stacks sit apart on the dual circle).",
     );
+  }
+  // Along circles the nearest image is never further than pi R: with every DD axis compact the
+  // stacks cannot get beyond sqrt(sum (pi R)^2).
+  const circles = pair.terms.filter((term) => term.type === "DD");
+  const separating = pair.classification.dd;
+  if (criticalSeparation !== null && separating > 0 && circles.length === separating) {
+    const farthest = Math.sqrt(circles.reduce((sum, term) => sum + (Math.PI * term.radius) ** 2, 0));
+    if (farthest < criticalSeparation) {
+      notes.push(
+        `The farthest the nearest images can be on these circles is ${formatDecimal(farthest)}, below y_c = ${formatDecimal(criticalSeparation)}: ` +
+          "the pair is tachyonic wherever the stacks sit.",
+      );
+    }
   }
   return notes;
 }

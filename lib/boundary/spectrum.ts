@@ -373,7 +373,7 @@ function buildSector(a: Stack, b: Stack, configuration: Configuration, context: 
 
   notes.push(
     ...sectorNotes({ self, a, b, classification, coincident, sameOrientation, theory, criticalSeparation, multiplet }),
-    ...compactNotes(compactPair, self),
+    ...compactNotes(compactPair, self, criticalSeparation),
   );
   if (covariant) {
     notes.unshift(
