@@ -12,7 +12,7 @@ import { computeSpectrum, countSupercharges, oscillatorDegeneracies, projectedDe
 import type { Configuration } from "../lib/boundary/types";
 import { landingDemoConfiguration } from "../lib/demo-configurations";
 import { computeLivePreview } from "../lib/designer/live-preview";
-import { benchPreviewDemo, benchTwelveStacks } from "../tests/fixtures/bench-12-stacks";
+import { benchPreviewDemo, benchTwelveStacks, benchTwelveStacksCompact } from "../tests/fixtures/bench-12-stacks";
 import { printRows, quantile } from "./lib/bench-report";
 
 /** Highest oscillator level of the degeneracy case (product.md: "degeneracies to level 200"). */
@@ -136,6 +136,14 @@ async function main(): Promise<void> {
     ...measure(() => computeSpectrum(benchTwelveStacks)),
   };
   cases.push(full);
+  // (a') the same twelve stacks on three circles: towers of momentum and winding states (issue 9).
+  const compactResult = computeSpectrum(benchTwelveStacksCompact);
+  const towerStates = compactResult.sectors.reduce((total, sector) => total + (sector.tower?.length ?? 0), 0);
+  const compact: CaseResult = {
+    name: `computeSpectrum, 12 stacks on 3 circles (mass cap ${benchTwelveStacksCompact.levels}, ${towerStates} tower states)`,
+    ...measure(() => computeSpectrum(benchTwelveStacksCompact)),
+  };
+  cases.push(compact);
   cases.push({
     name: "countSupercharges alone, 12 stacks",
     ...measure(() => countSupercharges(benchTwelveStacks.stacks)),
@@ -185,6 +193,14 @@ async function main(): Promise<void> {
       `${(degeneracy.medianMs / yardstick.medianMs).toFixed(2)}x`,
     ),
     judgeLatency("live preview recompute", preview, 4),
+    judgeLatency("12 stacks on 3 circles", compact, 50),
+    judge(
+      "12 stacks on 3 circles vs flat",
+      "p95 ratio <= 3",
+      compact.p95Ms <= 3 * full.p95Ms,
+      `${(compact.p95Ms / full.p95Ms).toFixed(2)}x (median ${(compact.medianMs / full.medianMs).toFixed(2)}x)`,
+    ),
+    judge("tower states of the circle case", ">= 2000", towerStates >= 2000, String(towerStates)),
   );
   if (!agrees) {
     targets.push({ target: "level-200 correctness", limit: "equal to yardstick", measured: "differs", status: "MISS" });

@@ -13,6 +13,7 @@ import type { Configuration, SpectrumResult } from "@/lib/boundary/types";
 import { hitTest, rectFromCorners, stacksInRect } from "@/lib/canvas/hit-test";
 import { draggableAxes, type DisplayAxes } from "@/lib/canvas/projection";
 import { panBy, toWorld, zoomAt, type Point, type Viewport } from "@/lib/canvas/viewport";
+import { buildCompactScene, type CompactStrip } from "@/lib/designer/compact-scene";
 import { buildScene, curveLabelWidth, sceneFontSize, type SceneCurve, type SceneStack } from "@/lib/designer/scene";
 import type { SelectionMode } from "@/lib/client/designer-store";
 import { useCanvasPalette, type CanvasPalette } from "./use-canvas-palette";
@@ -67,6 +68,11 @@ export function ConfigurationStage(props: ConfigurationStageProps) {
         ? buildScene({ document, result, axes: displayAxes, viewport, width: size.width, height: size.height, selection, gridStep })
         : null,
     [document, result, displayAxes, viewport, size, selection, gridStep],
+  );
+  const compactScene = useMemo(
+    () =>
+      scene ? buildCompactScene({ document, axes: displayAxes, viewport, width: size.width, height: size.height, stacks: scene.stacks }) : null,
+    [scene, document, displayAxes, viewport, size],
   );
 
   function pointer(event: Konva.KonvaEventObject<MouseEvent | WheelEvent>): Point {
@@ -168,6 +174,9 @@ export function ConfigurationStage(props: ConfigurationStageProps) {
                 strokeWidth={line.origin ? 1.25 : 0.75}
               />
             ))}
+            {compactScene?.strips.map((strip) => (
+              <CompactStripShape key={`strip-${strip.direction}`} strip={strip} width={size.width} height={size.height} palette={palette} />
+            ))}
             <Text
               x={size.width - 64}
               y={size.height - 22}
@@ -179,6 +188,11 @@ export function ConfigurationStage(props: ConfigurationStageProps) {
             <Text x={10} y={size.height - 22} text={`x${displayAxes.vertical} \u2191`} fontSize={sceneFontSize} fontFamily="IBM Plex Mono, monospace" fill={palette.muted} />
           </Layer>
           <Layer listening={false}>
+            {compactScene?.images.map((image) => (
+              <Group key={image.id} opacity={0.28}>
+                <StackShape stack={image} width={size.width} height={size.height} palette={palette} />
+              </Group>
+            ))}
             {scene.stacks
               .filter((s) => s.shape.kind === "fill")
               .map((stack) => (
@@ -276,6 +290,59 @@ function StackShape({ stack, width, height, palette }: StackShapeProps) {
       <Rect x={0} y={0} width={width} height={height} fill={colour} opacity={stack.selected ? 0.14 : 0.07} />
       <Rect x={2} y={2} width={width - 4} height={height - 4} stroke={colour} strokeWidth={anti ? 1 : 3} opacity={0.6} />
       {anti ? <Rect x={7} y={7} width={width - 14} height={height - 14} stroke={colour} strokeWidth={1} opacity={0.6} /> : null}
+    </Group>
+  );
+}
+
+interface CompactStripShapeProps {
+  strip: CompactStrip;
+  width: number;
+  height: number;
+  palette: CanvasPalette;
+}
+
+/**
+ * Visual language of a circle: the strip [0, 2 pi R) is lightly tinted, and each seam (where the
+ * circle closes on itself) is a pair of dotted rails with small matching ticks, so that the two
+ * edges read as one place; images of the stacks beyond the seams are drawn faintly.
+ */
+function CompactStripShape({ strip, width, height, palette }: CompactStripShapeProps) {
+  const horizontal = strip.direction === "horizontal";
+  const low = Math.min(strip.from, strip.to);
+  const extent = Math.abs(strip.to - strip.from);
+  const rail = (at: number, offset: number) => (horizontal ? [at + offset, 0, at + offset, height] : [0, at + offset, width, at + offset]);
+  const ticks = (at: number) =>
+    Array.from({ length: Math.ceil((horizontal ? height : width) / 48) }, (_, i) => {
+      const along = 24 + i * 48;
+      return horizontal ? [at - 5, along, at + 5, along - 6] : [along, at - 5, along + 6, at + 5];
+    });
+  return (
+    <Group>
+      <Rect
+        x={horizontal ? low : 0}
+        y={horizontal ? 0 : low}
+        width={horizontal ? extent : width}
+        height={horizontal ? height : extent}
+        fill={palette.accent}
+        opacity={0.05}
+      />
+      {strip.seams.map((at) => (
+        <Group key={at}>
+          <Line points={rail(at, -2)} stroke={palette.accent} strokeWidth={1} dash={[1, 4]} opacity={0.8} />
+          <Line points={rail(at, 2)} stroke={palette.accent} strokeWidth={1} dash={[1, 4]} opacity={0.8} />
+          {ticks(at).map((points) => (
+            <Line key={points.join(",")} points={points} stroke={palette.accent} strokeWidth={1} opacity={0.6} />
+          ))}
+        </Group>
+      ))}
+      <Text
+        x={horizontal ? low + 6 : 10}
+        y={horizontal ? 8 : low - sceneFontSize - 6}
+        text={strip.caption}
+        fontSize={sceneFontSize - 1}
+        fontFamily="IBM Plex Mono, monospace"
+        fill={palette.accent}
+      />
     </Group>
   );
 }

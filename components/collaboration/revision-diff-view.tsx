@@ -2,6 +2,7 @@ import type { ReactNode } from "react";
 import { Badge } from "@/components/ui/badge";
 import { formatMassSquared, pairKey, sectorNames, type StackNameSource } from "@/lib/spectrum";
 import { SectorNameText } from "@/components/results/sector-name-text";
+import { describeCompactDiff } from "@/lib/revisions/compact-diff";
 import type { ConfigurationDiff, SpectrumDiff } from "@/lib/revisions/diff";
 
 export interface RevisionDiffViewProps {
@@ -83,6 +84,11 @@ export function RevisionDiffView({ fromNumber, toNumber, sideLabels, configurati
                     </li>
                   ))}
                 </ul>
+              </li>
+            ))}
+            {describeCompactDiff(configurationDiff.compact).map((line) => (
+              <li key={line}>
+                <Badge variant="warning">circle</Badge> {line}
               </li>
             ))}
           </ul>

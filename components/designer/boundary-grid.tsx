@@ -8,6 +8,7 @@ import type { FieldIssue } from "@/lib/errors";
 import { selectDocument, useDesignerStore } from "@/lib/client/designer-store";
 import { cn } from "@/lib/utils";
 import { Button } from "@/components/ui/button";
+import { CompactAxisRow, WilsonLineField, fieldNumber } from "./compact-axis-cells";
 import { NumberField } from "./number-field";
 
 export interface BoundaryGridProps {
@@ -63,7 +64,9 @@ export function BoundaryGrid({ issuesByStack, readOnly = false, onMoveWorldvolum
         <div className="relative overflow-x-auto rounded-lg border border-border bg-surface" data-testid="boundary-grid-scroller">
           <table className="w-full border-collapse text-xs" aria-describedby="boundary-grid-help">
             <caption id="boundary-grid-help" className="sr-only">
-              One row per stack. Each axis cell toggles between Neumann and Dirichlet; Dirichlet cells hold the position.
+              One row per stack. Each axis cell toggles between Neumann and Dirichlet; Dirichlet cells hold the position, and
+              Neumann cells on a circle the Wilson line. The row under the axis names holds each axis&apos;s circle radius and its
+              T-duality command.
             </caption>
             <thead className="bg-surface-muted/70 text-muted-foreground">
               <tr>
@@ -93,6 +96,7 @@ export function BoundaryGrid({ issuesByStack, readOnly = false, onMoveWorldvolum
                   <span className="sr-only">Actions</span>
                 </th>
               </tr>
+              <CompactAxisRow document={document} axes={axes} leadingColumns={6} trailingColumns={2} readOnly={readOnly} />
             </thead>
             <tbody>
               {document.stacks.map((stack, index) => (
@@ -246,6 +250,9 @@ function StackRows({ stack, index, document, axes, selected, issues, readOnly, o
                 >
                   {neumann ? "N" : "D"}
                 </button>
+                {neumann && document.compact?.[String(axis)] !== undefined ? (
+                  <WilsonLineField stack={stack} axis={axis} readOnly={readOnly} />
+                ) : null}
                 {!neumann ? (
                   <NumberField
                     value={position}
@@ -253,6 +260,7 @@ function StackRows({ stack, index, document, axes, selected, issues, readOnly, o
                     disabled={readOnly}
                     onCommit={(value) => setPosition(stack.id, axis, value)}
                     name={`The position on x${axis}`}
+                    formatValue={fieldNumber}
                     min={-maxAbsPosition}
                     max={maxAbsPosition}
                     aria-label={`Position of stack ${stack.id} on x${axis}`}

@@ -2,7 +2,8 @@
 
 import dynamic from "next/dynamic";
 import { useCallback, useEffect, useRef, useState } from "react";
-import type { SpectrumResult } from "@/lib/boundary/types";
+import type { Configuration, SpectrumResult } from "@/lib/boundary/types";
+import type { DisplayAxes } from "@/lib/canvas/projection";
 import { baseScale, zoomAt } from "@/lib/canvas/viewport";
 import { spatialAxes } from "@/lib/designer/document";
 import { fitSceneViewport } from "@/lib/designer/scene";
@@ -295,7 +296,7 @@ export function DesignerCanvas({ result, readOnly = false, onSaveShortcut, onMov
         role="application"
         data-designer-canvas=""
         aria-roledescription="brane canvas"
-        aria-label={`Canvas showing x${displayAxes.horizontal} across and x${displayAxes.vertical} up. ${selection.length} selected. Arrow keys move the selection; press ? for shortcuts.`}
+        aria-label={`Canvas showing x${displayAxes.horizontal} across and x${displayAxes.vertical} up${circleNote(document, displayAxes)}. ${selection.length} selected. Arrow keys move the selection; press ? for shortcuts.`}
         className="relative min-h-[280px] flex-1 bg-background focus-visible:outline-2 focus-visible:-outline-offset-2 focus-visible:outline-ring"
       >
         {viewport && size.width > 0 ? (
@@ -400,4 +401,12 @@ function ToolButton({ label, pressed, disabled, onClick, children }: ToolButtonP
       {children}
     </button>
   );
+}
+
+/** ", x9 a circle of radius 2.5" for the compact display axes, so the canvas's name says what the strips show. */
+function circleNote(document: Pick<Configuration, "compact">, axes: DisplayAxes): string {
+  return [axes.horizontal, axes.vertical]
+    .filter((axis) => document.compact?.[String(axis)] !== undefined)
+    .map((axis) => `, x${axis} a circle of radius ${document.compact?.[String(axis)] ?? ""}`)
+    .join("");
 }

@@ -25,6 +25,7 @@ import { ConflictDialog } from "./conflict-dialog";
 import { DesignerCanvas } from "./designer-canvas";
 import { DocumentSettings } from "./document-settings";
 import { MoveWorldvolumeDialog } from "./move-worldvolume-dialog";
+import { DualityNotice } from "./duality-notice";
 import { ForkDialog, type WritableGroup } from "./fork-dialog";
 import { ForkedFromNote } from "./forked-from-note";
 import { SaveDialog } from "./save-dialog";
@@ -330,6 +331,7 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
           </button>
         </Alert>
       ) : null}
+      <DualityNotice onFork={writableGroups.length > 0 ? () => setForkMode("draft") : undefined} />
       {newerStored && !conflictOpen ? (
         <div role="status" className="rounded-md border border-warning/40 bg-warning-soft px-3 py-2 text-sm text-warning-soft-foreground" data-testid="newer-version">
           <p>

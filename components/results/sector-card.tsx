@@ -7,6 +7,7 @@ import { configurationQueries } from "@/lib/client/configurations";
 import { formatEngineProse, formatMassSquared, formatNumber, type SectorNames, type SectorOverview } from "@/lib/spectrum";
 import { Badge } from "@/components/ui/badge";
 import { SectorLevelsTable } from "./sector-levels-table";
+import { TowerPanel } from "./tower-panel";
 
 const ModeExpansions = dynamic(() => import("./mode-expansions").then((m) => m.ModeExpansions), {
   ssr: false,
@@ -111,6 +112,7 @@ function SectorDetail({ configurationId, revisionId, sector, title, kind, massCa
         massCap={massCap}
         showGeV={showGeV}
       />
+      {detail.tower ? <TowerPanel sector={detail} title={title} kind={kind} showGeV={showGeV} /> : null}
       {detail.massless.length > 0 ? (
         <div className="text-xs">
           <h4 className="font-semibold">Massless content</h4>

@@ -12,6 +12,7 @@
  */
 
 import { classifyPair } from "./classify";
+import { checkCompactAxes } from "./compact";
 import { bosonicCriticalDimension, superstringCriticalDimension } from "./constants";
 import type { Configuration, Stack } from "./types";
 
@@ -169,6 +170,7 @@ export function checkConfiguration(config: Configuration): ConfigurationProblem[
     }
     checkStack(stack, index, config.theory, dimension, problems);
   });
+  problems.push(...checkCompactAxes(config, dimension));
 
   return problems;
 }

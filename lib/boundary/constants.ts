@@ -27,10 +27,14 @@ import { rational, type Rational } from "./rational";
  *   axis ND are counted covariantly instead of listing no levels. Notes and massless descriptions
  *   for nu = 8 (string creation), D0 and D1 content; a D7 caution; conventions state M_s.
  *
+ * - 1.2.0: compact axes and Wilson lines (file format 2): `Sector.compactAxes`, `Sector.tower` (momentum
+ *   and winding states up to the mass cap) and `Sector.towerTruncated`; separations on circles are
+ *   those of the nearest image, and Wilson lines shift the lightest momenta. Format 1 results are unchanged.
+ *
  * @example
- * ENGINE_VERSION // => "1.1.0"
+ * ENGINE_VERSION // => "1.2.0"
  */
-export const ENGINE_VERSION = "1.1.0";
+export const ENGINE_VERSION = "1.2.0";
 
 /**
  * Critical dimension of the bosonic string (Lorentz invariance of the light-cone quantisation

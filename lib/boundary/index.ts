@@ -37,6 +37,23 @@ export { expandAxis, expandPair, bosonModing, fermionModing, fermionExpansionLat
 export { formatDecimal, listInWords } from "./format";
 export { resultInputKey } from "./result-key";
 export {
+  canonicalPosition,
+  turnsOnCircle,
+  checkCompactAxes,
+  compactLimits,
+  compactRadius,
+  computeTower,
+  describeCompactPair,
+  hasCompactAxes,
+  towerRowLimit,
+  wilsonLine,
+  withCompactConventions,
+  type CompactPair,
+  type TowerInput,
+  type TowerLevel,
+} from "./compact";
+export { dualTheory, tDualize } from "./t-duality";
+export {
   ENGINE_VERSION,
   CONVENTIONS_TEXT,
   bosonicCriticalDimension,

@@ -6,7 +6,7 @@
  * Left out because no field of the result reads them: the document's `title` and `description`
  * and each stack's display `colour`. Made canonical because the result does not depend on them:
  * the order of the stacks (sectors and warnings come in id order), the order of object keys, and
- * whether a Dirichlet position of 0 is written or left out (a missing position sits at 0). Every
+ * whether a Dirichlet position or a Wilson line of 0 is written or left out (a missing one is 0). Every
  * other field is kept as it is, so a field added to the format changes the key until it is listed
  * here on purpose.
  */
@@ -34,7 +34,12 @@ export function resultInputKey(config: Configuration): string {
     .map((stack) => {
       const kept = Object.entries(stack).filter(([key]) => !displayOnlyStackFields.has(key));
       const position = Object.entries(stack.position ?? {}).filter(([, value]) => value !== 0);
-      return Object.fromEntries(kept.map(([key, value]) => [key, key === "position" ? Object.fromEntries(position) : value]));
+      const wilson = Object.entries(stack.wilson ?? {}).filter(([, value]) => value !== 0);
+      return Object.fromEntries(
+        kept
+          .filter(([key]) => key !== "wilson" || wilson.length > 0)
+          .map(([key, value]) => [key, key === "position" ? Object.fromEntries(position) : key === "wilson" ? Object.fromEntries(wilson) : value]),
+      );
     });
   return canonicalJson(Object.fromEntries(entries.map(([key, value]) => [key, key === "stacks" ? stacks : value])));
 }

@@ -24,6 +24,15 @@ import {
   type ConfigurationProblem,
 } from "./check";
 import { classifyPair, type PairClassification } from "./classify";
+import {
+  compactNotes,
+  computeTower,
+  describeCompactPair,
+  hasCompactAxes,
+  towerRowLimit,
+  withCompactConventions,
+  type TowerLevel,
+} from "./compact";
 import { CONVENTIONS_TEXT, ENGINE_VERSION } from "./constants";
 import { oscillatorDegeneracies, projectedDegeneracies, type OrientedCounts } from "./degeneracy";
 import { expandPair } from "./expansion";
@@ -62,7 +71,7 @@ const defaultLightestCount = 10;
 /**
  * Computes the full spectrum result of a configuration.
  *
- * @param configuration - A configuration document (format 1); it is validated first and not mutated.
+ * @param configuration - A configuration document (format 1 or 2); it is validated first and not mutated.
  * @param options - `lightestCount`: how many entries `lightest` holds (default 10, a whole number >= 0).
  * @returns The result of product.md ("The spectrum result"): one sector per unordered pair of
  *   stacks (each stack with itself included), in id order; exact alpha' M^2 at zero separation
@@ -91,7 +100,7 @@ export type SpectrumAttempt =
  * and result as `computeSpectrum`, for callers that show the problems instead of catching them
  * (the designer's live preview validates each keystroke with this single pass).
  *
- * @param configuration - A configuration document (format 1); it is validated first and not mutated.
+ * @param configuration - A configuration document (format 1 or 2); it is validated first and not mutated.
  * @param options - As for `computeSpectrum`.
  * @returns `{ problems, result: null }` with every problem `checkConfiguration` finds (at least
  *   one), or `{ problems: [], result }` with the result `computeSpectrum` would return.
@@ -147,7 +156,7 @@ function computeCheckedSpectrum(configuration: Configuration, options: ComputeSp
     bps: supercharges !== null && stacks.length > 0 && supercharges > 0,
     sectors: built.map((entry) => entry.sector),
     lightest: collectLightest(built, lightestCount),
-    conventions: CONVENTIONS_TEXT,
+    conventions: hasCompactAxes(configuration) ? withCompactConventions(CONVENTIONS_TEXT) : CONVENTIONS_TEXT,
   };
 }
 
@@ -204,6 +213,8 @@ export interface SectorContext {
   series(kind: SectorKind, nu: number, sameOrientation: boolean): SectorSeries;
   /** Supersymmetry flag of a pair of distinct stacks, memoised by worldvolumes and orientations. */
   pairSupersymmetric(a: Stack, b: Stack): boolean;
+  /** Most tower rows per sector (`towerRowLimit` of the configuration's sector count). */
+  towerLimit: number;
 }
 
 /**
@@ -222,8 +233,10 @@ export function createSectorContext(configuration: Configuration): SectorContext
   const cap = rational(configuration.levels);
   const seriesMemo = new Map<string, SectorSeries>();
   const susyMemo = new Map<string, boolean>();
+  const stackCount = configuration.stacks.length;
   return {
     dimension,
+    towerLimit: towerRowLimit((stackCount * (stackCount + 1)) / 2),
     series(kind, nu, sameOrientation) {
       const key = `${kind}|${nu}|${kind === "bosonic" || sameOrientation}`;
       let series = seriesMemo.get(key);
@@ -288,11 +301,13 @@ function buildSector(a: Stack, b: Stack, configuration: Configuration, context: 
   const theory = configuration.theory;
   // Ids are unique within a configuration, so equal ids mean the stack with itself.
   const self = a.id === b.id;
-  const classification = classifyPair(a, b, dimension);
+  // On compact axes: the nearest image of b, and the lightest momentum its Wilson lines allow.
+  const compactPair = describeCompactPair(classifyPair(a, b, dimension), a, b, configuration);
+  const { classification } = compactPair;
   const { nu } = classification;
   // Exact zero only when every DD difference is exactly zero (a tiny difference can square to 0).
-  const coincident = classification.separationVector.every((component) => component.delta === 0);
-  const stretch = coincident ? 0 : classification.separationSquared / (4 * Math.PI * Math.PI);
+  const coincident = compactPair.aligned && classification.separationVector.every((component) => component.delta === 0);
+  const stretch = coincident ? 0 : classification.separationSquared / (4 * Math.PI * Math.PI) + compactPair.momentumShift;
   const sameOrientation = theory === "bosonic" || a.anti === b.anti;
   const kinds: SectorKind[] = theory === "bosonic" ? ["bosonic"] : ["NS", "R"];
   // No axis left for the light-cone gauge (a bosonic pair with every spatial axis ND): counted covariantly.
@@ -324,11 +339,13 @@ function buildSector(a: Stack, b: Stack, configuration: Configuration, context: 
     stringScaleGeV: configuration.stringScaleGeV,
   };
   let lowest: LevelTemplate | null = null;
+  const towerLevels: TowerLevel[][] = [];
   // Rows with N + a = 0: massless at coincidence, the W-boson multiplet when the stacks are apart.
   const zeroRows: LevelRow[] = [];
   for (const kind of kinds) {
     const series = context.series(kind, nu, sameOrientation);
     zeroPoint[kind] = formatRational(series.zeroPoint);
+    if (compactPair.terms.length > 0) towerLevels.push(series.levels.map((template) => towerLevel(template, rowContext)));
     if (series.lowest && (lowest === null || compareRational(series.lowest.exact, lowest.exact) < 0)) {
       lowest = series.lowest;
     }
@@ -356,6 +373,7 @@ function buildSector(a: Stack, b: Stack, configuration: Configuration, context: 
 
   notes.push(
     ...sectorNotes({ self, a, b, classification, coincident, sameOrientation, theory, criticalSeparation, multiplet }),
+    ...compactNotes(compactPair, self, criticalSeparation),
   );
   if (covariant) {
     notes.unshift(
@@ -363,7 +381,20 @@ function buildSector(a: Stack, b: Stack, configuration: Configuration, context: 
         `(X^0 and the b, c ghosts leave prod (1 - q^n)^(+1) (1 - q^(n-1/2))^(-${nu})), with a = -(D - 2)/24 + nu/16 = ${zeroPoint.bosonic ?? "?"}.`,
     );
   }
-  const sector = { ...base, zeroPoint, tachyonic, criticalSeparation, levels, massless, multiplet, notes };
+  const sector: Sector = { ...base, zeroPoint, tachyonic, criticalSeparation, levels, massless, multiplet, notes };
+  if (hasCompactAxes(configuration)) {
+    const tower = computeTower({
+      terms: compactPair.terms,
+      flatStretch: compactPair.flatStretch,
+      levels: towerLevels,
+      cap: configuration.levels,
+      limit: context.towerLimit,
+      stringScaleGeV: configuration.stringScaleGeV,
+    });
+    sector.compactAxes = compactPair.terms;
+    sector.tower = tower.rows;
+    sector.towerTruncated = tower.truncated;
+  }
   return { sector, values, lowest: lowest?.exact ?? null, stretch, coincident };
 }
 
@@ -374,6 +405,19 @@ interface RowContext {
   stretch: number;
   factor: number;
   stringScaleGeV: number | null;
+}
+
+/** A level as the tower reads it: its counts with the Chan-Paton factor of the pair. */
+function towerLevel(template: LevelTemplate, context: RowContext): TowerLevel {
+  const { ab, ba } = template;
+  return {
+    kind: template.kind,
+    level: template.level,
+    exact: template.exact,
+    exactValue: template.exactValue,
+    states: context.self || ab === ba ? template.abText : null,
+    withChanPaton: multiplyCount(context.factor, context.self ? ab : ab + ba),
+  };
 }
 
 function buildRow(template: LevelTemplate, context: RowContext): LevelRow {
@@ -586,7 +630,8 @@ function sectorNotes(input: NoteInput): string[] {
   if (nu === 0 && coincident && sameOrientation) {
     notes.push(`Coincident stacks: U(${a.count}) x U(${b.count}) is enhanced to U(${a.count + b.count}).`);
   }
-  if (nu === 0 && !coincident && sameOrientation) {
+  // Stacks apart only by their Wilson lines are described by `compactNotes`.
+  if (nu === 0 && sameOrientation && classification.separationVector.some((component) => component.delta !== 0)) {
     notes.push(
       multiplet
         ? `Separated by y = ${formatDecimal(classification.separation)}: the lightest stretched strings form a ${multiplet.name} ` +

@@ -30,11 +30,16 @@ export interface Stack {
   position: Record<string, number>;
   /** Optional display colour (CSS hex), interface only. */
   colour?: string;
+  /**
+   * Wilson lines (file format 2): an angle theta in [0, 2 pi) per compact Neumann axis, keyed by the
+   * axis number as a string; a missing key is theta = 0. See `compact.ts`.
+   */
+  wilson?: Record<string, number>;
 }
 
-/** A configuration document, file format 1. */
+/** A configuration document, file format 1 or 2 (format 1 plus optional fields such as `compact`). */
 export interface Configuration {
-  format: 1;
+  format: 1 | 2;
   title: string;
   description?: string;
   theory: Theory;
@@ -52,6 +57,11 @@ export interface Configuration {
    */
   levels: number;
   stacks: Stack[];
+  /**
+   * Compact spatial axes (file format 2): the radius R_k > 0 of each circle, in units of sqrt(alpha'),
+   * keyed by the axis number as a string. Every other axis is non-compact. See `compact.ts`.
+   */
+  compact?: Record<string, number>;
 }
 
 /** Boundary condition pair on one axis: first letter at sigma = 0 (stack a), second at sigma = pi (stack b). */
@@ -157,11 +167,63 @@ export interface Sector {
   /** The named multiplet of the lightest states (separated identical stacks), or null. */
   multiplet: SectorMultiplet | null;
   notes: string[];
+  /** The compact axes on which this pair has momentum (NN) or winding (DD) states; absent without compact axes. */
+  compactAxes?: CompactAxisTerm[];
+  /**
+   * The tower of momentum and winding states with alpha' M^2 <= levels, lightest first; absent
+   * without compact axes. At most `towerRowLimit(sectors)` rows: see `towerTruncated`.
+   */
+  tower?: TowerState[];
+  /** True when more tower states lie within the mass cap than `tower` lists (the lightest are kept). */
+  towerTruncated?: boolean;
   /**
    * Set (true) on sectors of a paged API response whose `levels` and `axes` were left out to keep
    * the response small; the engine itself never sets it.
    */
   detailOmitted?: boolean;
+}
+
+/**
+ * One compact axis of a pair: its states add (scale (m + offset))^2 to alpha' M^2 for every integer m
+ * (the momentum n on an NN axis, the winding w on a DD axis).
+ */
+export interface CompactAxisTerm {
+  axis: number;
+  /** NN: momentum states; DD: winding states (ND and DN axes carry neither). */
+  type: "NN" | "DD";
+  /** Radius R of the circle, in units of sqrt(alpha'). */
+  radius: number;
+  /** 1 / R on an NN axis (p = (n + offset) / R), R on a DD axis ((Delta x + 2 pi R w) / 2 pi = R (w + offset)). */
+  scale: number;
+  /**
+   * NN: (theta_b - theta_a) / 2 pi; DD: Delta x / (2 pi R), with Delta x = x_b - x_a of the positions read
+   * modulo 2 pi R into [0, 2 pi R). Either way in (-1, 1).
+   */
+  offset: number;
+}
+
+/** One state of the tower: an oscillator level with momentum and winding numbers on the compact axes. */
+export interface TowerState {
+  sector: SectorKind;
+  /** Oscillator level N, exact. */
+  level: string;
+  /** Momentum number n per compact NN axis of the pair (string from stack a to stack b), keyed by axis. */
+  momentum: Record<string, number>;
+  /** Winding number w per compact DD axis of the pair, keyed by axis. */
+  winding: Record<string, number>;
+  /** alpha' M^2: exact rational string where rational, else a decimal string. */
+  massSquared: string;
+  /** M sqrt(alpha'), or null for a tachyon. */
+  mass: number | null;
+  /** Mass in GeV when the configuration sets a string scale, else absent. */
+  massGeV?: number | null;
+  /** As `LevelRow.states`: per oriented string and Chan-Paton label, null where the orientations differ. */
+  states: string | null;
+  /**
+   * As `LevelRow.withChanPaton`: both orientations, the string from b to a counted with the opposite
+   * numbers (-n, -w), which have the same mass.
+   */
+  withChanPaton: string;
 }
 
 export interface LightestState {

@@ -261,3 +261,31 @@ describe("rebase", () => {
     expect(selectDocument(store())).toBe(start);
   });
 });
+
+describe("compact axes", () => {
+  it("types a radius as one undo step and T-dualises in one more, undone in one", () => {
+    store().setRadius(9, 1);
+    store().setRadius(9, 2);
+    expect(selectDocument(store()).compact).toEqual({ "9": 2 });
+    store().tDualize(9);
+    const dual = selectDocument(store());
+    expect(dual.theory).toBe("IIB");
+    expect(dual.compact).toEqual({ "9": 0.5 });
+    expect(dual.stacks.map((stack) => stack.worldvolume)).toEqual([[9], [9]]);
+    expect(store().lastDuality).toEqual({ axis: 9, radiusBefore: 2, radiusAfter: 0.5, theoryBefore: "IIA", theoryAfter: "IIB" });
+    store().undo();
+    expect(selectDocument(store()).theory).toBe("IIA");
+    expect(store().lastDuality).toBeNull();
+    store().undo();
+    expect(selectDocument(store())).toBe(start);
+  });
+
+  it("drops a Wilson line when its axis is flipped to Dirichlet", () => {
+    store().setRadius(9, 2);
+    store().tDualize(9);
+    const withWilson = selectDocument(store()).stacks[1]?.wilson;
+    expect(withWilson?.["9"]).toBeCloseTo(1, 12);
+    store().toggleAxis("b", 9);
+    expect(selectDocument(store()).stacks[1]).not.toHaveProperty("wilson");
+  });
+});

@@ -14,6 +14,7 @@ import type { DisplayAxes } from "@/lib/canvas/projection";
 import { defaultGridStep } from "@/lib/canvas/snap";
 import type { Viewport } from "@/lib/canvas/viewport";
 import { normaliseDisplayAxes, suggestDisplayAxes } from "@/lib/designer/display-axes";
+import * as compactEdits from "@/lib/designer/compact-edits";
 import * as edits from "@/lib/designer/document";
 import {
   createHistory,
@@ -70,6 +71,8 @@ export interface DesignerState {
   gestureStart: Configuration | null;
   /** Why the last command was refused ("at most 64 stacks"), until it is dismissed or an edit succeeds. */
   notice: string | null;
+  /** The last T-duality, while it is the latest edit: the designer offers to fork the dual configuration. */
+  lastDuality: { axis: number; radiusBefore: number; radiusAfter: number; theoryBefore: Theory; theoryAfter: Theory } | null;
 
   load: (document: Configuration, options: LoadOptions) => void;
   endGesture: () => void;
@@ -110,6 +113,12 @@ export interface DesignerState {
   setStringScale: (value: number | null) => void;
   /** Moves one worldvolume direction of a stack from one axis to another, keeping p. */
   moveWorldvolume: (id: string, from: number, to: number) => void;
+  /** Makes an axis compact with a radius, or non-compact with null; typing into one radius field is one undo step. */
+  setRadius: (axis: number, radius: number | null) => void;
+  /** Typing into one Wilson line field is one undo step. */
+  setWilsonLine: (id: string, axis: number, theta: number) => void;
+  /** T-dualises a compact axis: one undo step. */
+  tDualize: (axis: number) => void;
   /**
    * Makes `document` the draft on top of the stored `version` (a merge of the draft with a newer
    * save): one undo step, and the draft stays unsaved.
@@ -148,7 +157,8 @@ export const useDesignerStore = create<DesignerState>()((set, get) => {
   /** Applies a pure edit to the draft and commits it; nothing happens when the edit is refused. */
   function apply(change: (document: Configuration, state: DesignerState) => Configuration, gesture?: string): void {
     const state = get();
-    const next = change(state.history.present, state);
+    // A flip to Dirichlet or a change of theory can leave Wilson lines or radii without an axis.
+    const next = compactEdits.tidyCompactAxes(change(state.history.present, state));
     if (next !== state.history.present) set(commit(state, next, { gesture }));
   }
 
@@ -166,6 +176,7 @@ export const useDesignerStore = create<DesignerState>()((set, get) => {
     lastGesture: null,
     gestureStart: null,
     notice: null,
+    lastDuality: null,
 
     load: (document, options) =>
       set({
@@ -179,6 +190,7 @@ export const useDesignerStore = create<DesignerState>()((set, get) => {
         lastGesture: null,
         gestureStart: null,
         notice: null,
+        lastDuality: null,
       }),
 
     endGesture: () => set({ lastGesture: null, gestureStart: null }),
@@ -234,6 +246,24 @@ export const useDesignerStore = create<DesignerState>()((set, get) => {
     setLevels: (levels) => apply((doc) => edits.setLevels(doc, levels), "levels"),
     setStringScale: (value) => apply((doc) => edits.setStringScale(doc, value), "string-scale"),
     moveWorldvolume: (id, from, to) => apply((doc) => edits.moveWorldvolume(doc, id, from, to)),
+    setRadius: (axis, radius) => apply((doc) => compactEdits.setRadius(doc, axis, radius), `radius:${axis}`),
+    setWilsonLine: (id, axis, theta) => apply((doc) => compactEdits.setWilsonLine(doc, id, axis, theta), `wilson:${id}:${axis}`),
+    tDualize: (axis) => {
+      const state = get();
+      const before = state.history.present;
+      const next = compactEdits.tDualizeAxis(before, axis);
+      if (next === before) return;
+      set({
+        ...commit(state, next),
+        lastDuality: {
+          axis,
+          radiusBefore: before.compact?.[String(axis)] ?? 0,
+          radiusAfter: next.compact?.[String(axis)] ?? 0,
+          theoryBefore: before.theory,
+          theoryAfter: next.theory,
+        },
+      });
+    },
     rebase: (document, version) => set((state) => ({ ...commit(state, document), baseVersion: version })),
     dismissNotice: () => set({ notice: null }),
 
@@ -301,6 +331,7 @@ function commit(state: DesignerState, next: Configuration, options: CommitOption
     history: merge ? replacePresent(state.history, next) : pushHistory(state.history, next, designerHistoryLimit),
     dirty: true,
     notice: null,
+    lastDuality: null,
     lastGesture: gesture,
     gestureStart: gesture === null ? null : merge ? state.gestureStart : state.history.present,
     selection: pruneSelection(options.selection ?? state.selection, next),
@@ -321,6 +352,7 @@ function stepTo(state: DesignerState, history: History<Configuration>): Partial<
     dirty: true,
     lastGesture: null,
     gestureStart: null,
+    lastDuality: null,
     selection: pruneSelection(state.selection, history.present),
     displayAxes: normaliseDisplayAxes(state.displayAxes, history.present),
   };

@@ -12,7 +12,7 @@
  */
 import Papa from "papaparse";
 import type { SpectrumResult } from "@/lib/boundary/types";
-import { formatWorldvolume, sectorNames, unstretchedMassSquaredText, type StackNameSource } from "@/lib/spectrum";
+import { formatWorldvolume, quantumNumberText, resultHasTower, sectorNames, unstretchedMassSquaredText, type StackNameSource } from "@/lib/spectrum";
 import { conventionsLine, exportCaution } from "./caution";
 
 /** Column names of the spectrum CSV, one row per (sector, level). */
@@ -41,6 +41,13 @@ export const spectrumCsvColumns = [
   "conventions",
 ] as const;
 
+/**
+ * Columns added before `conventions` when the result has compact axes: "level" for a level
+ * row (the lightest momentum and winding) or "tower" for a tower state, and its quantum numbers
+ * ("n9 = 1; w8 = -2", momentum n on NN axes and winding w on DD axes).
+ */
+export const towerCsvColumns = ["row", "quantum_numbers"] as const;
+
 export interface SpectrumToCsvOptions {
   /** Title written into the conventions cell (e.g. the configuration title). */
   title?: string;
@@ -66,22 +73,31 @@ export function spectrumToCsv(result: SpectrumResult, options: SpectrumToCsvOpti
     const text = formatWorldvolume(worldvolume);
     for (const stack of worldvolume.stacks) worldvolumeOf.set(stack, text);
   }
+  const tower = resultHasTower(result);
+  const fields: string[] = tower
+    ? [...spectrumCsvColumns.slice(0, -1), ...towerCsvColumns, "conventions"]
+    : [...spectrumCsvColumns];
   const records: string[][] = [];
+  const conventionsCell = () => (records.length === 0 ? conventions : "");
   for (const sector of result.sectors) {
     const [a, b] = sector.pair;
     const sectorNotes = sector.notes.join(" | ");
+    const worldvolume = a === b ? (worldvolumeOf.get(a) ?? "") : "";
+    const head = [
+      a,
+      b,
+      names.stack(a),
+      names.stack(b),
+      String(sector.nn),
+      String(sector.dd),
+      String(sector.nu),
+      String(sector.separation),
+      String(sector.tachyonic),
+      String(sector.supersymmetric),
+    ];
     for (const row of sector.levels) {
       records.push([
-        a,
-        b,
-        names.stack(a),
-        names.stack(b),
-        String(sector.nn),
-        String(sector.dd),
-        String(sector.nu),
-        String(sector.separation),
-        String(sector.tachyonic),
-        String(sector.supersymmetric),
+        ...head,
         row.sector,
         row.level,
         row.massSquared,
@@ -92,13 +108,33 @@ export function spectrumToCsv(result: SpectrumResult, options: SpectrumToCsvOpti
         row.withChanPaton,
         row.note ?? "",
         sectorNotes,
-        a === b ? (worldvolumeOf.get(a) ?? "") : "",
-        records.length === 0 ? conventions : "",
+        worldvolume,
+        ...(tower ? ["level", ""] : []),
+        conventionsCell(),
+      ]);
+    }
+    for (const state of sector.tower ?? []) {
+      records.push([
+        ...head,
+        state.sector,
+        state.level,
+        state.massSquared,
+        "",
+        state.mass === null ? "" : String(state.mass),
+        state.massGeV === undefined || state.massGeV === null ? "" : String(state.massGeV),
+        state.states ?? "",
+        state.withChanPaton,
+        "",
+        sectorNotes,
+        worldvolume,
+        "tower",
+        quantumNumberText(state, "; "),
+        conventionsCell(),
       ]);
     }
   }
-  if (records.length === 0) records.push(spectrumCsvColumns.map((column) => (column === "conventions" ? conventions : "")));
-  return `${Papa.unparse({ fields: [...spectrumCsvColumns], data: records }, { newline: "\r\n", escapeFormulae: formulaCell })}\r\n`;
+  if (records.length === 0) records.push(fields.map((column) => (column === "conventions" ? conventions : "")));
+  return `${Papa.unparse({ fields, data: records }, { newline: "\r\n", escapeFormulae: formulaCell })}\r\n`;
 }
 
 /**

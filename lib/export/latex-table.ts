@@ -6,7 +6,7 @@
  */
 import { rationalToNumber } from "@/lib/boundary/rational";
 import type { SpectrumResult } from "@/lib/boundary/types";
-import { parseExactRational, sectorNames, unstretchedMassSquared, type StackNameSource } from "@/lib/spectrum";
+import { parseExactRational, quantumNumbers, resultHasTower, sectorNames, unstretchedMassSquared, type StackNameSource } from "@/lib/spectrum";
 import { conventionsLine, exportCaution } from "./caution";
 
 export interface SpectrumToLatexTableOptions {
@@ -83,7 +83,48 @@ export function spectrumToLatexTable(result: SpectrumResult, options: SpectrumTo
     "\\end{table}",
   );
   if (result.worldvolumes.length > 0) lines.push(...worldvolumeTable(result, options.title, label));
+  if (resultHasTower(result)) lines.push(...towerTable(result, options.title, label));
   return lines.join("\n") + "\n";
+}
+
+/** The tower of momentum and winding states of every sector (a result on compact axes). */
+function towerTable(result: SpectrumResult, title: string | undefined, label: string): string[] {
+  const lines = [
+    "\\begin{table}[ht]",
+    "  \\centering",
+    "  \\begin{tabular}{lllrr}",
+    "    \\toprule",
+    "    Strings & Sector, level $N$ & Momentum $n$, winding $w$ & $\\alpha' M^2$ & States \\\\",
+    "    \\midrule",
+  ];
+  for (const sector of result.sectors) {
+    for (const state of sector.tower ?? []) {
+      const numbers = quantumNumbers(state).map((entry) => `${entry.kind}_{${entry.axis}} = ${entry.value}`);
+      lines.push(
+        "    " +
+          [
+            `${escapeLatex(sector.pair[0])}--${escapeLatex(sector.pair[1])}`,
+            `${state.sector}, $${toLatexNumber(state.level)}$`,
+            numbers.length > 0 ? `$${numbers.join(",\\ ")}$` : "none",
+            `$${toLatexNumber(state.massSquared)}$`,
+            `$${state.withChanPaton}$`,
+          ].join(" & ") +
+          " \\\\",
+      );
+    }
+  }
+  const heading = title ? `${escapeLatex(title)}: momentum` : "Momentum";
+  lines.push(
+    "    \\bottomrule",
+    "  \\end{tabular}",
+    `  \\caption{${heading} and winding states on the compact axes, up to the mass cap: $\\alpha' M^2 = N + a + ` +
+      "\\sum_{NN} ((n + (\\theta_b - \\theta_a)/2\\pi)/R)^2 + \\sum_{DD} ((\\Delta x + 2\\pi R w)/2\\pi)^2$ " +
+      "(plus the stretching along non-compact axes), $\\alpha' = 1$, radii and positions in units of $\\sqrt{\\alpha'}$; " +
+      `the string from $b$ to $a$ has the opposite numbers. ${escapeLatex(exportCaution)}}`,
+    `  \\label{${label}-tower}`,
+    "\\end{table}",
+  );
+  return lines;
 }
 
 function worldvolumeTable(result: SpectrumResult, title: string | undefined, label: string): string[] {

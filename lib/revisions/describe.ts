@@ -5,6 +5,7 @@
  * Pure. Invalid-input policy: none needed; every diff describes.
  */
 import { formatNumber } from "@/lib/spectrum";
+import { describeCompactDiff } from "./compact-diff";
 import type { ConfigurationDiff } from "./diff";
 
 const fieldNames: Record<ConfigurationDiff["fields"][number]["field"], string> = {
@@ -38,6 +39,7 @@ export function describeConfigurationDiff(diff: ConfigurationDiff): string[] {
     for (const move of change.positions) parts.push(`x${move.axis} position ${show(move.before)} → ${show(move.after)}`);
     lines.push(`Stack ${change.id}: ${parts.join(", ")}`);
   }
+  lines.push(...describeCompactDiff(diff.compact));
   return lines;
 }
 

@@ -8,6 +8,7 @@
 import { dimensionOf } from "@/lib/boundary";
 import type { Configuration, SpectrumResult, Stack, Sector, SectorKind } from "@/lib/boundary/types";
 import { formatWorldvolume, lightestLevel, pairKey, parseResultNumber, worldvolumeKey, type StackNameSource } from "@/lib/spectrum";
+import { diffCompactAxes, type CompactDiff } from "./compact-diff";
 
 /** Boundary condition of one stack on one spatial axis. */
 export type Boundary = "N" | "D";
@@ -50,6 +51,8 @@ export interface ConfigurationDiff {
   added: Stack[];
   removed: Stack[];
   changed: StackChange[];
+  /** Radii and Wilson lines that changed (file format 2). */
+  compact: CompactDiff;
   /** True when nothing differs. */
   identical: boolean;
 }
@@ -135,12 +138,20 @@ export function diffConfigurations(before: Configuration, after: Configuration):
     if (change) changed.push(change);
   }
 
+  const compact = diffCompactAxes(before, after);
   return {
     fields,
     added,
     removed,
     changed,
-    identical: fields.length === 0 && added.length === 0 && removed.length === 0 && changed.length === 0,
+    compact,
+    identical:
+      fields.length === 0 &&
+      added.length === 0 &&
+      removed.length === 0 &&
+      changed.length === 0 &&
+      compact.radii.length === 0 &&
+      compact.wilsonLines.length === 0,
   };
 }
 

@@ -14,6 +14,7 @@
  */
 import { dimensionOf } from "@/lib/boundary";
 import type { Configuration, Stack } from "@/lib/boundary/types";
+import { mergeCompactAxes } from "./compact-merge";
 
 /** One field both sides changed differently. */
 export interface MergeConflict {
@@ -84,9 +85,10 @@ export function mergeConfigurations(base: Configuration, mine: Configuration, th
     else if (!sameStack(was, my, axisCount)) conflicts.push({ field: `stack ${my.id}`, mine: "changed", theirs: "deleted" });
   }
 
-  if (conflicts.length > 0) return { document: null, conflicts };
   const axes = dimensionOf(merged) - 1;
-  return { document: { ...merged, stacks: stacks.map((stack) => dropAxesBeyond(stack, axes)) }, conflicts: [] };
+  const document = mergeCompactAxes(base, mine, theirs, { ...merged, stacks: stacks.map((stack) => dropAxesBeyond(stack, axes)) }, conflicts);
+  if (conflicts.length > 0) return { document: null, conflicts };
+  return { document, conflicts: [] };
 }
 
 function mergeStack(base: Stack, mine: Stack, theirs: Stack, axisCount: number, conflicts: MergeConflict[]): Stack {

@@ -34,3 +34,11 @@ export {
 export { compareNatural, sectorNames, type SectorName, type SectorNames, type StackNameSource } from "./sector-names";
 export { lightestHeadline, type HeadlineSector, type HeadlineState, type LightestHeadline } from "./headline";
 export { simplifyExpansionLatex } from "./expansion-display";
+export {
+  quantumNumberText,
+  quantumNumbers,
+  resultHasTower,
+  towerPoints,
+  type QuantumNumber,
+  type TowerPoint,
+} from "./tower";

@@ -1,6 +1,6 @@
 /**
  * The overview of a result: everything but the per-sector detail (level rows, mode expansions,
- * massless content and notes), with each sector's lightest surviving row and its row count. The
+ * massless content, notes and the tower of a compact configuration), with each sector's lightest surviving row and its row count. The
  * results page opens with it and loads a sector's detail when it is shown, so a 64-stack result
  * (2080 sectors, tens of thousands of rows) opens as fast as a small one.
  *
@@ -11,7 +11,7 @@ import { lightestLevel } from "./lightest";
 import type { SectorNames } from "./sector-names";
 
 /** The parts of a sector that live only in its detail. */
-export type SectorDetailField = "levels" | "axes" | "massless" | "notes";
+export type SectorDetailField = "levels" | "axes" | "massless" | "notes" | "tower";
 
 /** A sector without its detail. */
 export type SectorOverview = Omit<Sector, SectorDetailField | "detailOmitted"> & {
@@ -52,7 +52,7 @@ export function resultOverview(result: SpectrumResult): ResultOverview {
  * @returns The sector without levels, axes, massless content and notes, with its lightest row and counts.
  */
 export function sectorOverview(sector: Sector, index: number): SectorOverview {
-  const { levels, axes: _axes, massless, notes, detailOmitted: _omitted, ...header } = sector;
+  const { levels, axes: _axes, massless, notes, tower: _tower, detailOmitted: _omitted, ...header } = sector;
   return {
     ...header,
     index,

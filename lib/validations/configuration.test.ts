@@ -41,7 +41,7 @@ describe("configurationSchema", () => {
   });
 
   it("reports shape problems with their paths", () => {
-    expect(issuesOf({ ...valid, format: 2 }).map((issue) => issue.path)).toEqual(["format"]);
+    expect(issuesOf({ ...valid, format: 3 }).map((issue) => issue.path)).toEqual(["format"]);
     expect(issuesOf({ ...valid, theory: "heterotic" }).map((issue) => issue.path)).toEqual(["theory"]);
     expect(issuesOf({ ...valid, title: "  " }).map((issue) => issue.path)).toEqual(["title"]);
     const badColour = { ...valid, stacks: [{ ...valid.stacks[0], colour: "red" }] };

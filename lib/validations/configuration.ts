@@ -4,11 +4,25 @@ import type { Configuration, Stack } from "@/lib/boundary/types";
 import { configurationDescriptionMaxLength, configurationTitleMaxLength, stackLabelMaxLength } from "./limits";
 
 /**
- * Shapes of a configuration document (format 1, product.md "The configuration file"). The
+ * Shapes of a configuration document (format 1 or 2, product.md "The configuration file"). The
  * schema checks types and text lengths; the physics rules (p parity per theory, axis ranges,
  * limits, unique ids, positions on Dirichlet axes) come from `checkConfiguration`, added as
  * issues at their JSON paths so that there is one source of truth for them.
  */
+
+/** Wilson lines of a stack (format 2): angles in radians by compact Neumann axis; ranges are the engine's. */
+const wilsonSchema = z
+  .record(z.string(), z.number({ error: "Wilson lines must be finite numbers (radians)." }), {
+    error: 'Wilson lines must be an object such as { "9": 1.2 } (radians, by axis).',
+  })
+  .describe("Format 2: a Wilson line theta in [0, 2 pi) radians per compact Neumann axis of the stack, keyed by axis.");
+
+/** Radii of the compact axes (format 2), by axis, in units of sqrt(alpha'); ranges are the engine's. */
+export const compactSchema = z
+  .record(z.string(), z.number({ error: "Radii must be finite numbers (units of sqrt(alpha'))." }), {
+    error: 'Compact axes must be an object such as { "9": 2.5 } (radius by axis).',
+  })
+  .describe("Format 2: compact spatial axes, each with its radius R in units of sqrt(alpha'), keyed by axis.");
 
 /** The shape of one stack. */
 export const stackSchema = z.object({
@@ -28,6 +42,7 @@ export const stackSchema = z.object({
     .string()
     .regex(/^#[0-9a-fA-F]{6}$/, "The colour must be a hex colour such as #1f77b4.")
     .optional(),
+  wilson: wilsonSchema.optional(),
 }) satisfies z.ZodType<Stack>;
 
 /**
@@ -36,7 +51,7 @@ export const stackSchema = z.object({
  * and computes in one engine pass); everything else uses {@link configurationSchema}.
  */
 export const configurationShapeSchema = z.object({
-  format: z.literal(1, { error: "Only file format 1 is known." }),
+  format: z.union([z.literal(1), z.literal(2)], { error: "The file format must be 1 or 2." }),
   title: z
     .string({ error: "The title must be text." })
     .trim()
@@ -50,6 +65,7 @@ export const configurationShapeSchema = z.object({
     .number({ error: "The mass cap (levels: the highest alpha' M^2 listed at zero separation) must be a number." })
     .describe("Mass cap, a whole number 0 to 200: every sector lists its states with alpha' M^2 <= levels at zero separation (N + a <= levels)."),
   stacks: z.array(stackSchema, { error: "Stacks must be a list." }),
+  compact: compactSchema.optional(),
 });
 
 /**

@@ -32,6 +32,27 @@ describe("parseConfigurationFile", () => {
     expect(paths).toEqual(expect.arrayContaining(["title", "stacks.1.id", "stacks.0.worldvolume"]));
   });
 
+  it("reads format 1 and format 2 files, with compact axes and Wilson lines in format 2", () => {
+    expect(parseConfigurationFile(JSON.stringify(valid)).format).toBe(1);
+    const onCircle = { ...valid, format: 2, compact: { "4": 2.5 }, stacks: [{ id: "a", count: 1, worldvolume: [1, 2, 3, 4], wilson: { "4": 1.2 } }] };
+    const parsed = parseConfigurationFile(JSON.stringify(onCircle));
+    expect(parsed.compact).toEqual({ "4": 2.5 });
+    expect(parsed.stacks[0]?.wilson).toEqual({ "4": 1.2 });
+  });
+
+  it("names every problem of compact axes and Wilson lines at its JSON path", () => {
+    const file = {
+      ...valid,
+      compact: { "4": 0, "9": "wide" },
+      stacks: [{ id: "a", count: 1, worldvolume: [1, 2, 3, 4], wilson: { "4": 7, "5": 1 } }],
+    };
+    const paths = issuesOf(() => parseConfigurationFile(JSON.stringify(file))).map((issue) => issue.path.join("."));
+    expect(paths).toEqual(["compact.9"]);
+    const shaped = { ...file, compact: { "4": 0 } };
+    const engine = issuesOf(() => parseConfigurationFile(JSON.stringify(shaped))).map((issue) => issue.path.join("."));
+    expect(engine).toEqual(["format", "compact.4", "stacks.0.wilson.4", "stacks.0.wilson.5"]);
+  });
+
   it("words a top-level list plainly", () => {
     const [issue] = issuesOf(() => parseConfigurationFile(JSON.stringify([valid, valid])));
     expect(issue?.message).toMatch(/^The file holds a list \(it starts with “\[”\) of 2 items; a configuration file is one object/);

@@ -2,7 +2,7 @@ import { z } from "./zod";
 import { checkConfiguration } from "@/lib/boundary/check";
 import type { Configuration } from "@/lib/boundary/types";
 import { ValidationError, type FieldIssue } from "@/lib/errors";
-import { configurationSchema, stackSchema } from "./configuration";
+import { compactSchema, configurationSchema, stackSchema } from "./configuration";
 
 /** Largest configuration file accepted by `POST /api/configurations/import`, in bytes (256 KiB). */
 export const importMaxBytes = 256 * 1024;
@@ -81,9 +81,21 @@ function engineIssuesOfWellFormedStacks(raw: Record<string, unknown>): FieldIssu
     }
   });
   const dimension = typeof raw.dimension === "number" ? { dimension: raw.dimension } : {};
-  const probe: Configuration = { format: 1, title: "probe", theory, ...dimension, stringScaleGeV: null, levels: 0, stacks };
+  // Wilson lines are judged against the compact axes, so only when those are well formed.
+  const compact = compactSchema.optional().safeParse(raw.compact);
+  const probe: Configuration = {
+    format: 2,
+    title: "probe",
+    theory,
+    ...dimension,
+    stringScaleGeV: null,
+    levels: 0,
+    stacks,
+    ...(compact.success && compact.data ? { compact: compact.data } : {}),
+  };
   return checkConfiguration(probe)
     .filter((issue) => issue.path[0] === "stacks" && typeof issue.path[1] === "number")
+    .filter((issue) => compact.success || issue.path[2] !== "wilson")
     .map((issue) => ({ path: ["stacks", indices[issue.path[1] as number] ?? (issue.path[1] as number), ...issue.path.slice(2)], message: issue.message }));
 }
 

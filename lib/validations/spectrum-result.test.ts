@@ -178,3 +178,20 @@ describe("readStoredResult", () => {
     });
   });
 });
+
+describe("readStoredResult with compact axes", () => {
+  const onCircle: Configuration = { ...document, format: 2, compact: { "9": 1.5 } };
+
+  it("reads back the tower of a result on a circle unchanged", () => {
+    const result = computeSpectrum(onCircle);
+    expect(result.sectors.some((sector) => (sector.tower?.length ?? 0) > 0)).toBe(true);
+    expect(readStoredResult(JSON.parse(JSON.stringify(result)))).toEqual(JSON.parse(JSON.stringify(result)));
+  });
+
+  it("names a tower row whose numbers cannot be read", () => {
+    const result = JSON.parse(JSON.stringify(computeSpectrum(onCircle))) as { sectors: { tower: { massSquared: string }[] }[] };
+    const first = result.sectors[0]?.tower[0];
+    if (first) first.massSquared = "heavy";
+    expect(() => readStoredResult(result)).toThrow(StoredResultError);
+  });
+});

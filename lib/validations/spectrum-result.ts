@@ -1,6 +1,8 @@
 import { z } from "./zod";
 import type {
   AxisExpansion,
+  CompactAxisTerm,
+  TowerState,
   LevelRow,
   LightestState,
   MasslessContent,
@@ -52,6 +54,28 @@ const levelRowSchema = z.object({
   note: z.string().optional(),
 }) satisfies z.ZodType<LevelRow>;
 
+const compactAxisSchema = z.object({
+  axis: z.number().int(),
+  type: z.enum(["NN", "DD"]),
+  radius: z.number(),
+  scale: z.number(),
+  offset: z.number(),
+}) satisfies z.ZodType<CompactAxisTerm>;
+
+const quantumNumbers = z.record(z.string(), z.number().int());
+
+const towerStateSchema = z.object({
+  sector: sectorKind,
+  level: z.string(),
+  momentum: quantumNumbers,
+  winding: quantumNumbers,
+  massSquared: z.string(),
+  mass: z.number().nullable(),
+  massGeV: z.number().nullable().optional(),
+  states: z.string().nullable(),
+  withChanPaton: z.string(),
+}) satisfies z.ZodType<TowerState>;
+
 const zeroPointSchema = z.object({
   bosonic: exactText.optional(),
   NS: exactText.optional(),
@@ -97,6 +121,10 @@ export const storedSectorSchema = z.object({
   massless: z.array(masslessSchema).optional(),
   multiplet: multipletSchema.nullable().optional(),
   notes: z.array(z.string()).optional(),
+  // Engine 1.2.0 on, only for configurations with compact axes: absent means none, not unrecorded.
+  compactAxes: z.array(compactAxisSchema).optional(),
+  tower: z.array(towerStateSchema).superRefine(checkRowTexts).optional(),
+  towerTruncated: z.boolean().optional(),
 }) satisfies z.ZodType<StoredSector>;
 
 const lightestSchema = z.object({

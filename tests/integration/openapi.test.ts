@@ -113,7 +113,10 @@ describe("the OpenAPI document", () => {
     const [first, ...rest] = requestExamples.spectrum.stacks;
     expect(spectrum({ ...requestExamples.spectrum, theory: "IIC" })).toBe(false);
     expect(spectrum({ ...requestExamples.spectrum, stacks: [{ ...first, count: "two" }, ...rest] })).toBe(false);
-    expect(spectrum({ ...requestExamples.spectrum, format: 2 })).toBe(false);
+    expect(spectrum({ ...requestExamples.spectrum, format: 3 })).toBe(false);
+    expect(spectrum({ ...requestExamples.spectrum, compact: { "9": "wide" } })).toBe(false);
+    // Format 2 (issue 9): format 1 plus compact axes with radii.
+    expect(spectrum({ ...requestExamples.spectrum, format: 2, compact: { "9": 2.5 } })).toBe(true);
     expect(requestSchema("/api/configurations", "post")({ document: requestExamples.spectrum })).toBe(false);
   });
 

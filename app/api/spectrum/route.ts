@@ -27,7 +27,7 @@ const sectorLevelsPerUnit = 500;
 
 /**
  * POST /api/spectrum: stateless compute of a configuration's spectrum (body: the configuration
- * document, file format 1). 200 with the SpectrumResult and a `page`: sectors from `sectorOffset`
+ * document, file format 1 or 2). 200 with the SpectrumResult and a `page`: sectors from `sectorOffset`
  * (query, default 0) carry their level rows and mode expansions until `maxRows` rows (default
  * 10,000); the others are marked `detailOmitted`, and `page.nextSectorOffset` names the next page.
  * 400 for malformed JSON; 413 past 64 KiB; 422 `{ error, message, issues: [{ path, jsonPath, message }] }`

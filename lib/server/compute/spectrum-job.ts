@@ -75,7 +75,7 @@ export function runSpectrumJob(job: SpectrumJob): SpectrumJobOutcome {
 }
 
 /**
- * Keeps level rows and expansions for the sectors of one page and marks the others
+ * Keeps level rows, towers and expansions for the sectors of one page and marks the others
  * `detailOmitted` (their headers stay: pair, nu, separation, zero points, tachyon, massless
  * content, notes). Mutates `result`, which the caller owns.
  */
@@ -85,12 +85,16 @@ function pageSectors(result: SpectrumResult, options: SectorPageOptions): Sector
   let rows = 0;
   let end = sectorOffset;
   // At least one sector per page, however many rows it has, so paging always moves on.
-  while (end < sectorCount && (end === sectorOffset || rows + (result.sectors[end] as Sector).levels.length <= options.maxDetailRows)) {
-    rows += (result.sectors[end] as Sector).levels.length;
+  // The tower of a compact configuration is detail too, and counts as rows.
+  const detailRows = (sector: Sector): number => sector.levels.length + (sector.tower?.length ?? 0);
+  while (end < sectorCount && (end === sectorOffset || rows + detailRows(result.sectors[end] as Sector) <= options.maxDetailRows)) {
+    rows += detailRows(result.sectors[end] as Sector);
     end += 1;
   }
   result.sectors = result.sectors.map((sector, index) =>
-    index >= sectorOffset && index < end ? sector : { ...sector, levels: [], axes: [], detailOmitted: true },
+    index >= sectorOffset && index < end
+      ? sector
+      : { ...sector, levels: [], axes: [], ...(sector.tower ? { tower: [] } : {}), detailOmitted: true },
   );
   return { sectorOffset, sectorsWithDetail: end - sectorOffset, sectorCount, nextSectorOffset: end < sectorCount ? end : null };
 }
