@@ -63,3 +63,4 @@ export {
 export { stacksUnderPlane, omegaTwistedCounts, groupName, planeGeometry, type StackUnderPlane } from "./orientifold";
 export { maxOrientifolds } from "./orientifold-check";
 export { planeCharge, tadpoleBalance } from "./tadpole";
+export { interactionCurves, interactionSampleCount, INTERACTION_CONVENTIONS, type InteractionCurve } from "./interaction";

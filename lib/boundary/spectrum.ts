@@ -63,7 +63,7 @@ const defaultLightestCount = 10;
 /**
  * Computes the full spectrum result of a configuration.
  *
- * @param configuration - A configuration document (format 1); it is validated first and not mutated.
+ * @param configuration - A configuration document (format 1 or 2); it is validated first and not mutated.
  * @param options - `lightestCount`: how many entries `lightest` holds (default 10, a whole number >= 0).
  * @returns The result of product.md ("The spectrum result"): one sector per unordered pair of
  *   stacks (each stack with itself included), in id order; exact alpha' M^2 at zero separation
@@ -92,7 +92,7 @@ export type SpectrumAttempt =
  * and result as `computeSpectrum`, for callers that show the problems instead of catching them
  * (the designer's live preview validates each keystroke with this single pass).
  *
- * @param configuration - A configuration document (format 1); it is validated first and not mutated.
+ * @param configuration - A configuration document (format 1 or 2); it is validated first and not mutated.
  * @param options - As for `computeSpectrum`.
  * @returns `{ problems, result: null }` with every problem `checkConfiguration` finds (at least
  *   one), or `{ problems: [], result }` with the result `computeSpectrum` would return.

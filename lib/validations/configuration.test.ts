@@ -40,7 +40,7 @@ describe("configurationSchema", () => {
   });
 
   it("reports shape problems with their paths", () => {
-    expect(issuesOf({ ...valid, format: 2 }).map((issue) => issue.path)).toEqual(["format"]);
+    expect(issuesOf({ ...valid, format: 3 }).map((issue) => issue.path)).toEqual(["format"]);
     expect(issuesOf({ ...valid, theory: "heterotic" }).map((issue) => issue.path)).toEqual(["theory"]);
     expect(issuesOf({ ...valid, title: "  " }).map((issue) => issue.path)).toEqual(["title"]);
     const badColour = { ...valid, stacks: [{ ...valid.stacks[0], colour: "red" }] };
@@ -61,5 +61,27 @@ describe("configurationSchema", () => {
     // Out of range for the engine (levels at most 200), but a well-formed document.
     expect(spectrumRequestSchema.safeParse({ ...valid, levels: 201 }).success).toBe(true);
     expect(configurationSchema.safeParse({ ...valid, levels: 201 }).success).toBe(false);
+  });
+});
+
+describe("configurationSchema: orientifold planes (format 2)", () => {
+  const base = {
+    format: 2,
+    title: "plane",
+    theory: "IIB",
+    levels: 1,
+    stacks: [{ id: "a", count: 16, worldvolume: [1, 2, 3, 4, 5, 6, 7, 8, 9] }],
+    orientifolds: [{ id: "o", type: "O-", worldvolume: [1, 2, 3, 4, 5, 6, 7, 8, 9] }],
+  };
+  it("accepts a plane and fills its position", () => {
+    const parsed = configurationSchema.safeParse(base);
+    expect(parsed.success).toBe(true);
+    expect(parsed.data?.orientifolds?.[0]?.position).toEqual({});
+  });
+  it("reports a bad type and a format-1 document with planes at their JSON paths", () => {
+    const badType = configurationSchema.safeParse({ ...base, orientifolds: [{ ...base.orientifolds[0], type: "O" }] });
+    expect(badType.error?.issues.map((issue) => issue.path)).toContainEqual(["orientifolds", 0, "type"]);
+    const formatOne = configurationSchema.safeParse({ ...base, format: 1 });
+    expect(formatOne.error?.issues.map((issue) => issue.path)).toContainEqual(["orientifolds"]);
   });
 });

@@ -1,9 +1,9 @@
 import { z } from "zod";
 import { checkConfiguration } from "@/lib/boundary/check";
-import type { Configuration, Stack } from "@/lib/boundary/types";
+import type { Configuration, OrientifoldPlane, Stack } from "@/lib/boundary/types";
 
 /**
- * Shapes of a configuration document (format 1, product.md "The configuration file"). The
+ * Shapes of a configuration document (format 1, and format 2 with optional `orientifolds`, product.md "The configuration file"). The
  * schema checks types and text lengths; the physics rules (p parity per theory, axis ranges,
  * limits, unique ids, positions on Dirichlet axes) come from `checkConfiguration`, added as
  * issues at their JSON paths so that there is one source of truth for them.
@@ -35,13 +35,28 @@ export const stackSchema = z.object({
     .optional(),
 }) satisfies z.ZodType<Stack>;
 
+/** The shape of one orientifold plane (file format 2). */
+export const orientifoldPlaneSchema = z.object({
+  id: z.string({ error: "A plane id must be text." }),
+  label: z.string({ error: "A label must be text." }).max(120, "Keep the label under 120 characters.").optional(),
+  type: z.enum(["O-", "O+"], { error: 'The plane type must be "O-" or "O+".' }),
+  worldvolume: z.array(z.number({ error: "Worldvolume axes must be numbers." }), {
+    error: "The worldvolume must be a list of axis numbers.",
+  }),
+  position: z
+    .record(z.string(), z.number({ error: "Positions must be finite numbers." }), {
+      error: 'Positions must be an object such as { "9": 0 }.',
+    })
+    .default({}),
+}) satisfies z.ZodType<OrientifoldPlane>;
+
 /**
  * The document's shape alone: types, text lengths and the file format, without the engine's
  * problems. For a caller that runs `checkConfiguration` itself (the designer's live preview checks
  * and computes in one engine pass); everything else uses {@link configurationSchema}.
  */
 export const configurationShapeSchema = z.object({
-  format: z.literal(1, { error: "Only file format 1 is known." }),
+  format: z.union([z.literal(1), z.literal(2)], { error: "Only file formats 1 and 2 are known." }),
   title: z
     .string({ error: "The title must be text." })
     .trim()
@@ -55,6 +70,7 @@ export const configurationShapeSchema = z.object({
     .number({ error: "The mass cap (levels: the highest alpha' M^2 listed at zero separation) must be a number." })
     .describe("Mass cap, a whole number 0 to 200: every sector lists its states with alpha' M^2 <= levels at zero separation (N + a <= levels)."),
   stacks: z.array(stackSchema, { error: "Stacks must be a list." }),
+  orientifolds: z.array(orientifoldPlaneSchema, { error: "Orientifolds must be a list of planes." }).optional(),
 });
 
 /**

@@ -26,7 +26,7 @@ export default async function ImportPage({ searchParams }: ImportPageProps) {
     <PageContainer className="grid max-w-3xl gap-6">
       <PageHeader
         title="Import a configuration"
-        description="Upload a Mooring configuration file (JSON, format 1, up to 256 kB). Every problem is listed with its place in the file; nothing is saved from an invalid file."
+        description="Upload a Mooring configuration file (JSON, format 1 or 2, up to 256 kB). Every problem is listed with its place in the file; nothing is saved from an invalid file."
       />
       <Card>
         <CardContent className="pt-5">
