@@ -2,6 +2,9 @@ import { create, all, type BigNumber } from "mathjs";
 import { describe, expect, it } from "vitest";
 import { annulusCurve, braneAntibraneSupergravity, createAnnulusCache } from "./annulus";
 
+/** The 40-digit reference takes seconds on a loaded machine: a generous limit, not a speed check. */
+const referenceTimeoutMs = 120_000;
+
 const shapes = [0, 2, 4, 6, 8].flatMap((nu) => [true, false].map((sameOrientation) => ({ nu, sameOrientation })));
 
 describe("annulus: Jacobi's identity (theta_3^4 = theta_2^4 + theta_4^4, Whittaker and Watson section 21.3, from memory)", () => {
@@ -122,12 +125,12 @@ describe("annulus: numerics against a 40-digit evaluation (mathjs BigNumber, tan
     const coarse = referencePotential({ nu: 0, nn: 3, sameOrientation: false }, 6, 1 / 8);
     const fine = referencePotential({ nu: 0, nn: 3, sameOrientation: false }, 6, 1 / 16);
     expect(Math.abs(coarse / fine - 1)).toBeLessThan(1e-14);
-  });
+  }, referenceTimeoutMs);
   it.each(cases)("nu = $nu, nn = $nn, same orientation $sameOrientation, y = $y: relative error below 1e-8", ({ y, ...shape }) => {
     const engine = createAnnulusCache()(shape).potential(y) ?? Number.NaN;
     const reference = referencePotential(shape, y, 1 / 16);
     expect(Math.abs(engine / reference - 1)).toBeLessThan(1e-8);
-  });
+  }, referenceTimeoutMs);
 });
 
 // ---- The 40-digit reference: products of f1..f4 straight from their definitions (Polchinski vol. 2,
