@@ -1,6 +1,6 @@
 /**
  * The interaction potential V(y) of every pair of distinct stacks (and of stacks with images) of a
- * computed result, sampled for plots and exports. Computed on demand from the pure engine, not
+ * configuration, sampled for plots and exports. Computed on demand from the pure engine, not
  * stored with results: a curve depends only on the pair's shape (nu, nn, orientations), so pairs of
  * one shape share one set of samples.
  *
@@ -10,14 +10,14 @@
  * there is no tachyon) to 12 string lengths beyond it; the value at the pair's own separation is
  * given separately.
  *
- * Invalid-input policy: expects the configuration the result was computed from; pairs whose ids it
- * does not know are left out.
+ * Invalid-input policy: expects a configuration that `checkConfiguration` passes.
  */
 
-import { classifyPair } from "./classify";
-import { dimensionOf } from "./check";
 import { createAnnulusCache, type AnnulusShape } from "./annulus";
-import type { Configuration, SpectrumResult } from "./types";
+import { compareStackIds, dimensionOf } from "./check";
+import { classifyPair } from "./classify";
+import { stacksUnderPlane, type StackUnderPlane } from "./orientifold";
+import type { Configuration, Stack } from "./types";
 
 /** How many samples each curve holds. */
 export const interactionSampleCount = 200;
@@ -48,43 +48,48 @@ export interface InteractionCurve {
 }
 
 /**
- * V(y) for every sector of a result between two different stacks (or a stack and an image) that
- * share a Dirichlet axis, in the order of `result.sectors`.
+ * V(y) for every pair of different stacks of a configuration, and (with an orientifold plane) of
+ * every stack with the image of a stack off the plane, that share a Dirichlet axis: the pairs of the
+ * engine's sectors, in the same order (pairs in id order, then stacks with images).
  *
- * @param configuration - The configuration of the result.
- * @param result - Its spectrum result (type II; the bosonic theory yields [] because its closed-string
- *   tachyon makes the annulus diverge).
+ * @param configuration - A configuration that `checkConfiguration` passes (type II; the bosonic
+ *   theory yields [] because its closed-string tachyon makes the annulus diverge).
  * @returns One curve per separable pair.
  * @example
- * interactionCurves(d3AntiD3, computeSpectrum(d3AntiD3))[0]?.criticalSeparation // => 4.442882938158366
+ * interactionCurves(d3AntiD3)[0]?.criticalSeparation // => 4.442882938158366
  */
-export function interactionCurves(configuration: Configuration, result: SpectrumResult): InteractionCurve[] {
+export function interactionCurves(configuration: Configuration): InteractionCurve[] {
   if (configuration.theory === "bosonic") return [];
   const dimension = dimensionOf(configuration);
-  const stacks = new Map(configuration.stacks.map((stack) => [stack.id, stack]));
-  const images = new Map((result.orientifold?.images ?? []).map((image) => [image.id, image]));
-  const fixed = new Set((result.orientifold?.images ?? []).filter((image) => image.onPlane).map((image) => image.of));
+  const stacks = [...configuration.stacks].sort(compareStackIds);
+  const plane = configuration.orientifolds?.[0];
+  const entries = plane ? stacksUnderPlane(stacks, plane, configuration.theory, dimension) : null;
+  const ends = stacks.map((stack, index) => ({ stack, labels: stack.count * (entries?.[index]?.fixed ? 2 : 1) }));
+  const pairs: { a: Stack; b: Stack; labels: number }[] = [];
+  for (let i = 0; i < ends.length; i += 1) {
+    for (let j = i + 1; j < ends.length; j += 1) {
+      const a = ends[i] as (typeof ends)[number];
+      const b = ends[j] as (typeof ends)[number];
+      pairs.push({ a: a.stack, b: b.stack, labels: a.labels * b.labels });
+    }
+  }
+  if (entries) {
+    for (let i = 0; i < entries.length; i += 1) {
+      for (let j = i; j < entries.length; j += 1) {
+        const a = entries[i] as StackUnderPlane;
+        const image = (entries[j] as StackUnderPlane).image;
+        if (!a.fixed && image) pairs.push({ a: a.stack, b: image, labels: a.stack.count * image.count });
+      }
+    }
+  }
   const curveOf = createAnnulusCache();
   const samplesMemo = new Map<string, { y: number; v: number }[]>();
-  const resolve = (id: string) => {
-    const stack = stacks.get(id);
-    if (stack) return { stack, anti: stack.anti, position: stack.position };
-    const image = images.get(id);
-    const of = image ? stacks.get(image.of) : undefined;
-    return image && of ? { stack: of, anti: image.anti, position: image.position } : null;
-  };
   const curves: InteractionCurve[] = [];
-  for (const sector of result.sectors) {
-    const [idA, idB] = sector.pair;
-    if (idA === idB) continue;
-    const a = resolve(idA);
-    const b = resolve(idB);
-    if (!a || !b) continue;
-    const classification = classifyPair({ worldvolume: a.stack.worldvolume, position: a.position }, { worldvolume: b.stack.worldvolume, position: b.position }, dimension);
+  for (const { a, b, labels } of pairs) {
+    const classification = classifyPair(a, b, dimension);
     if (classification.dd === 0) continue;
     const shape: AnnulusShape = { nu: classification.nu, nn: classification.nn, sameOrientation: a.anti === b.anti };
     const curve = curveOf(shape);
-    const labels = a.stack.count * (fixed.has(a.stack.id) ? 2 : 1) * b.stack.count * (fixed.has(b.stack.id) && idB === b.stack.id ? 2 : 1);
     const key = `${shape.nu}|${shape.nn}|${shape.sameOrientation}`;
     let perLabel = samplesMemo.get(key);
     if (!perLabel) {
@@ -101,7 +106,7 @@ export function interactionCurves(configuration: Configuration, result: Spectrum
     }
     const own = curve.potential(classification.separation);
     curves.push({
-      pair: [idA, idB],
+      pair: [a.id, b.id],
       nu: shape.nu,
       nn: shape.nn,
       dd: classification.dd,
