@@ -32,6 +32,8 @@ export const spectrumCsvColumns = [
 export interface SpectrumToCsvOptions {
   /** Title written into the comment record (e.g. the configuration title). */
   title?: string;
+  /** Extra comment lines after the worldvolumes (the orientifold summary and V(y) of each pair). */
+  commentLines?: readonly string[];
 }
 
 /**
@@ -48,6 +50,7 @@ export function spectrumToCsv(result: SpectrumResult, options: SpectrumToCsvOpti
   for (const worldvolume of result.worldvolumes) {
     comments.push(`Worldvolume of ${worldvolume.stacks.join(" + ")}: ${formatWorldvolume(worldvolume)}`);
   }
+  comments.push(...(options.commentLines ?? []));
   // The notes name a sector's multiplet too (the W bosons of separated stacks).
   for (const sector of result.sectors) {
     if (sector.notes.length > 0) comments.push(`Sector ${sector.pair[0]}-${sector.pair[1]}: ${sector.notes.join(" | ")}`);

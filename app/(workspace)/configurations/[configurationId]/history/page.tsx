@@ -17,7 +17,7 @@ import { getResultForRevision } from "@/db/queries/result-reads";
 import { getRevisionByNumber, listRevisions } from "@/db/queries/revisions";
 import { NotFoundError } from "@/lib/errors";
 import { formatDateTime } from "@/lib/format-date";
-import { diffConfigurations, diffSpectra } from "@/lib/revisions/diff";
+import { diffConfigurations, diffInteractions, diffSpectra } from "@/lib/revisions/diff";
 import { requireUser } from "@/lib/server/session";
 
 export const metadata: Metadata = { title: "History" };
@@ -171,5 +171,6 @@ async function compare(
   return {
     configurationDiff: diffConfigurations(before.document, after.document),
     spectrumDiff: beforeResult && afterResult ? diffSpectra(beforeResult.result, afterResult.result) : null,
+    potentialChanges: diffInteractions(before.document, after.document),
   };
 }
