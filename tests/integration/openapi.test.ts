@@ -111,7 +111,7 @@ describe("the OpenAPI document", () => {
     const [first, ...rest] = requestExamples.spectrum.stacks;
     expect(spectrum({ ...requestExamples.spectrum, theory: "IIC" })).toBe(false);
     expect(spectrum({ ...requestExamples.spectrum, stacks: [{ ...first, count: "two" }, ...rest] })).toBe(false);
-    expect(spectrum({ ...requestExamples.spectrum, format: 2 })).toBe(false);
+    expect(spectrum({ ...requestExamples.spectrum, format: 3 })).toBe(false);
     expect(requestSchema("/api/configurations", "post")({ document: requestExamples.spectrum })).toBe(false);
   });
 
