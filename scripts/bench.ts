@@ -8,11 +8,11 @@ import { mkdirSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { performance } from "node:perf_hooks";
-import { computeSpectrum, countSupercharges, oscillatorDegeneracies, projectedDegeneracies } from "../lib/boundary";
+import { computeSpectrum, countSupercharges, interactionCurves, interactionSampleCount, oscillatorDegeneracies, projectedDegeneracies } from "../lib/boundary";
 import type { Configuration } from "../lib/boundary/types";
 import { landingDemoConfiguration } from "../lib/demo-configurations";
 import { computeLivePreview } from "../lib/designer/live-preview";
-import { benchPreviewDemo, benchTwelveStacks, benchTwelveStacksCompact } from "../tests/fixtures/bench-12-stacks";
+import { benchPreviewDemo, benchTwelveStacks, benchTwelveStacksCompact, benchTwelveStacksWithPlane } from "../tests/fixtures/bench-12-stacks";
 import { printRows, quantile } from "./lib/bench-report";
 
 /** Highest oscillator level of the degeneracy case (product.md: "degeneracies to level 200"). */
@@ -183,7 +183,25 @@ async function main(): Promise<void> {
     ...measure(() => computeSpectrum(benchPreviewDemo)),
   });
 
+  // (e) the annulus potential V(y) at 200 points for every separable pair of the 12 stacks (issue 12),
+  // from scratch on each call: series, quadrature grid and samples of each pair shape, and V at each separation.
+  const separable = interactionCurves(benchTwelveStacks);
+  const potentials: CaseResult = {
+    name: `interactionCurves: V(y) at ${interactionSampleCount} points, 12 stacks (${separable.length} separable pairs)`,
+    ...measure(() => interactionCurves(benchTwelveStacks)),
+  };
+  cases.push(potentials);
+  cases.push({
+    name: `interactionCurves with an O8- plane (${interactionCurves(benchTwelveStacksWithPlane).length} pairs with images, informational)`,
+    ...measure(() => interactionCurves(benchTwelveStacksWithPlane)),
+  });
+  cases.push({
+    name: "computeSpectrum, 12 stacks with an O8- plane (images and projection, informational)",
+    ...measure(() => computeSpectrum(benchTwelveStacksWithPlane)),
+  });
+
   targets.push(
+    judgeLatency("V(y) at 200 points, 12 stacks", potentials, 100),
     judgeLatency("12-stack full result", full, 25),
     judgeLatency("level-200 degeneracies", degeneracy, 100),
     judge(

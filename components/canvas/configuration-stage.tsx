@@ -14,7 +14,7 @@ import { hitTest, rectFromCorners, stacksInRect } from "@/lib/canvas/hit-test";
 import { draggableAxes, type DisplayAxes } from "@/lib/canvas/projection";
 import { panBy, toWorld, zoomAt, type Point, type Viewport } from "@/lib/canvas/viewport";
 import { buildCompactScene, type CompactStrip } from "@/lib/designer/compact-scene";
-import { buildScene, curveLabelWidth, sceneFontSize, type SceneCurve, type SceneStack } from "@/lib/designer/scene";
+import { buildScene, curveLabelWidth, sceneFontSize, type SceneCurve, type ScenePlane, type SceneStack } from "@/lib/designer/scene";
 import type { SelectionMode } from "@/lib/client/designer-store";
 import { useCanvasPalette, type CanvasPalette } from "./use-canvas-palette";
 
@@ -193,6 +193,15 @@ export function ConfigurationStage(props: ConfigurationStageProps) {
                 <StackShape stack={image} width={size.width} height={size.height} palette={palette} />
               </Group>
             ))}
+            {scene.planes.map((plane) => (
+              <PlaneShape key={plane.id} plane={plane} width={size.width} height={size.height} palette={palette} />
+            ))}
+            {scene.images.map((image) => (
+              <Group key={image.id} opacity={0.32}>
+                <StackShape stack={image} width={size.width} height={size.height} palette={palette} />
+                <Text x={image.labelAt.x} y={image.labelAt.y} text={image.label} fontSize={sceneFontSize - 1} fontFamily="IBM Plex Sans, sans-serif" fill={palette.foreground} />
+              </Group>
+            ))}
             {scene.stacks
               .filter((s) => s.shape.kind === "fill")
               .map((stack) => (
@@ -231,6 +240,56 @@ export function ConfigurationStage(props: ConfigurationStageProps) {
         </Stage>
       ) : null}
     </div>
+  );
+}
+
+interface PlaneShapeProps {
+  plane: ScenePlane;
+  width: number;
+  height: number;
+  palette: CanvasPalette;
+}
+
+/**
+ * Visual language of an orientifold plane, unlike any stack: a dashed "mirror" with short hatches
+ * on one side (a line), a hollow diamond (a point) or a dashed frame (the whole view); O+ hatches
+ * point the other way. The label names the plane and O-p with its sign.
+ */
+function PlaneShape({ plane, width, height, palette }: PlaneShapeProps) {
+  const { shape, screen } = plane;
+  const colour = palette.muted;
+  const tick = plane.type === "O-" ? 6 : -6;
+  const labelText = <Text x={screen.x + 8} y={screen.y + 6} text={plane.label} fontSize={sceneFontSize - 1} fontFamily="IBM Plex Mono, monospace" fill={colour} />;
+  if (shape.kind === "point") {
+    const r = 9;
+    return (
+      <Group>
+        <Line points={[screen.x, screen.y - r, screen.x + r, screen.y, screen.x, screen.y + r, screen.x - r, screen.y]} closed stroke={colour} strokeWidth={1.5} dash={[3, 2]} />
+        {labelText}
+      </Group>
+    );
+  }
+  if (shape.kind === "horizontal-line" || shape.kind === "vertical-line") {
+    const horizontal = shape.kind === "horizontal-line";
+    const hatches: number[][] = [];
+    for (let at = 0; at < (horizontal ? width : height); at += 14) {
+      hatches.push(horizontal ? [at, screen.y, at + 5, screen.y + tick] : [screen.x, at, screen.x + tick, at + 5]);
+    }
+    return (
+      <Group>
+        <Line points={horizontal ? [0, screen.y, width, screen.y] : [screen.x, 0, screen.x, height]} stroke={colour} strokeWidth={1.5} dash={[8, 4]} />
+        {hatches.map((points) => (
+          <Line key={points.join(",")} points={points} stroke={colour} strokeWidth={1} />
+        ))}
+        <Text x={horizontal ? 12 : screen.x + 8} y={horizontal ? screen.y + 8 : 12} text={plane.label} fontSize={sceneFontSize - 1} fontFamily="IBM Plex Mono, monospace" fill={colour} />
+      </Group>
+    );
+  }
+  return (
+    <Group>
+      <Rect x={4} y={4} width={width - 8} height={height - 8} stroke={colour} strokeWidth={1} dash={[8, 4]} />
+      <Text x={12} y={height - 40} text={plane.label} fontSize={sceneFontSize - 1} fontFamily="IBM Plex Mono, monospace" fill={colour} />
+    </Group>
   );
 }
 

@@ -3,7 +3,7 @@ import { Badge } from "@/components/ui/badge";
 import { formatMassSquared, pairKey, sectorNames, type StackNameSource } from "@/lib/spectrum";
 import { SectorNameText } from "@/components/results/sector-name-text";
 import { describeCompactDiff } from "@/lib/revisions/compact-diff";
-import type { ConfigurationDiff, SpectrumDiff } from "@/lib/revisions/diff";
+import type { ConfigurationDiff, LineChange, SpectrumDiff } from "@/lib/revisions/diff";
 
 export interface RevisionDiffViewProps {
   fromNumber: number;
@@ -15,6 +15,8 @@ export interface RevisionDiffViewProps {
   spectrumDiff: SpectrumDiff | null;
   /** The stacks of both sides (the later side's label wins), so that sectors are named by label. */
   stacks: readonly StackNameSource[];
+  /** Changes of V(y) at each pair's separation (from the two documents); absent where not computed. */
+  potentialChanges?: LineChange[];
 }
 
 const fieldLabels: Record<ConfigurationDiff["fields"][number]["field"], string> = {
@@ -27,7 +29,7 @@ const fieldLabels: Record<ConfigurationDiff["fields"][number]["field"], string> 
 };
 
 /** What changed between two revisions: the document, then the spectrum (alpha' = 1). */
-export function RevisionDiffView({ fromNumber, toNumber, sideLabels, configurationDiff, spectrumDiff, stacks }: RevisionDiffViewProps) {
+export function RevisionDiffView({ fromNumber, toNumber, sideLabels, configurationDiff, spectrumDiff, stacks, potentialChanges }: RevisionDiffViewProps) {
   const names = sectorNames(stacks);
   return (
     <div className="grid gap-6 text-sm" aria-live="polite">
@@ -43,6 +45,9 @@ export function RevisionDiffView({ fromNumber, toNumber, sideLabels, configurati
               <li key={change.field}>
                 {fieldLabels[change.field]}: <Old>{show(change.before)}</Old> → <New>{show(change.after)}</New>
               </li>
+            ))}
+            {configurationDiff.planes.map((change) => (
+              <LineChangeItem key={`plane-${change.key}`} label={<>orientifold plane <code>{change.key}</code></>} change={change} />
             ))}
             {configurationDiff.added.map((stack) => (
               <li key={`added-${stack.id}`}>
@@ -111,18 +116,13 @@ export function RevisionDiffView({ fromNumber, toNumber, sideLabels, configurati
               </li>
             ) : null}
             {spectrumDiff.worldvolumes.map((change) => (
-              <li key={`wv-${change.key}`}>
-                Worldvolume <code>{change.key.split("|").join(", ")}</code>:{" "}
-                {change.before === null ? (
-                  <New>{change.after}</New>
-                ) : change.after === null ? (
-                  <Old>{change.before}</Old>
-                ) : (
-                  <>
-                    <Old>{change.before}</Old> → <New>{change.after}</New>
-                  </>
-                )}
-              </li>
+              <LineChangeItem key={`wv-${change.key}`} label={<>Worldvolume <code>{change.key.split("|").join(", ")}</code></>} change={change} />
+            ))}
+            {spectrumDiff.orientifold.map((change) => (
+              <LineChangeItem key={`orientifold-${change.key}`} label={<>{change.key}</>} change={change} />
+            ))}
+            {(potentialChanges ?? []).map((change) => (
+              <LineChangeItem key={`potential-${change.key}`} label={<>V(y) of <code>{change.key}</code></>} change={change} />
             ))}
             {spectrumDiff.supercharges ? (
               <li>
@@ -182,4 +182,22 @@ function Old({ children }: { children: ReactNode }) {
 
 function New({ children }: { children: ReactNode }) {
   return <ins className="rounded bg-success-soft px-1 text-success-soft-foreground no-underline">{children}</ins>;
+}
+
+/** One line that changed, appeared or went: "label: before → after". */
+function LineChangeItem({ label, change }: { label: ReactNode; change: LineChange }) {
+  return (
+    <li>
+      {label}:{" "}
+      {change.before === null ? (
+        <New>{change.after}</New>
+      ) : change.after === null ? (
+        <Old>{change.before}</Old>
+      ) : (
+        <>
+          <Old>{change.before}</Old> → <New>{change.after}</New>
+        </>
+      )}
+    </li>
+  );
 }

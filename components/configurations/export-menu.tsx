@@ -2,7 +2,7 @@
 
 import { DropdownMenu, DropdownMenuItem, DropdownMenuLabel, DropdownMenuSeparator } from "@/components/ui/dropdown-menu";
 
-export type ExportFormat = "json" | "csv" | "tex";
+export type ExportFormat = "json" | "csv" | "tex" | "potential";
 
 export interface ExportMenuProps {
   configurationId: string;
@@ -19,6 +19,7 @@ const formats: ReadonlyArray<{ format: ExportFormat; label: string; hint: string
   { format: "json", label: "Configuration (JSON)", hint: "re-importable file" },
   { format: "csv", label: "Spectrum (CSV)", hint: "one row per level" },
   { format: "tex", label: "Spectrum (LaTeX table)", hint: "booktabs" },
+  { format: "potential", label: "Interaction potentials V(y) (CSV)", hint: "200 samples per pair" },
 ];
 
 /** The URL of a server-side export; the response carries Content-Disposition: attachment. */

@@ -2,7 +2,7 @@
 
 import { useState, type ReactNode } from "react";
 import type { Configuration, Stack } from "@/lib/boundary/types";
-import { maxAbsPosition, maxStackCount, maxStacks, renameProblem, spatialAxes } from "@/lib/designer/document";
+import { maxStackCount, maxStacks, renameProblem, spatialAxes } from "@/lib/designer/document";
 import { stackKind } from "@/lib/designer/stack-kind";
 import type { FieldIssue } from "@/lib/errors";
 import { selectDocument, useDesignerStore } from "@/lib/client/designer-store";
@@ -10,6 +10,8 @@ import { cn } from "@/lib/utils";
 import { Button } from "@/components/ui/button";
 import { CompactAxisRow, WilsonLineField, fieldNumber } from "./compact-axis-cells";
 import { NumberField } from "./number-field";
+import { BoundaryAxisCell } from "./boundary-axis-cell";
+import { OrientifoldGrid } from "./orientifold-grid";
 
 export interface BoundaryGridProps {
   /** Problems per stack index (from the same zod schema as the API, and the engine's checks). */
@@ -117,6 +119,7 @@ export function BoundaryGrid({ issuesByStack, readOnly = false, onMoveWorldvolum
           </table>
         </div>
       )}
+      <OrientifoldGrid readOnly={readOnly} />
     </section>
   );
 }
@@ -229,46 +232,25 @@ function StackRows({ stack, index, document, axes, selected, issues, readOnly, o
         </td>
         {axes.map((axis) => {
           const neumann = stack.worldvolume.includes(axis);
-          const position = stack.position[String(axis)] ?? 0;
           return (
-            <td key={axis} className={cn("px-1 py-1", neumann ? "bg-surface-muted/60" : "")}>
-              <div className="flex items-center justify-center gap-0.5">
-                <button
-                  type="button"
-                  disabled={readOnly}
-                  aria-label={`Stack ${stack.id}, axis x${axis}: ${neumann ? "Neumann" : "Dirichlet"}`}
-                  title={`Make x${axis} ${neumann ? "Dirichlet" : "Neumann"} for ${name}`}
-                  onClick={() => toggleAxis(stack.id, axis)}
-                  className={cn(
-                    "h-7 w-6 rounded font-mono text-xs font-semibold",
-                    neumann
-                      ? "bg-foreground text-background"
-                      : "border border-border-strong bg-surface text-foreground",
-                    "focus-visible:outline-2 focus-visible:outline-offset-1 focus-visible:outline-ring disabled:opacity-60",
-                  )}
-                  aria-describedby={describedBy}
-                >
-                  {neumann ? "N" : "D"}
-                </button>
-                {neumann && document.compact?.[String(axis)] !== undefined ? (
-                  <WilsonLineField stack={stack} axis={axis} readOnly={readOnly} />
-                ) : null}
-                {!neumann ? (
-                  <NumberField
-                    value={position}
-                    step={0.5}
-                    disabled={readOnly}
-                    onCommit={(value) => setPosition(stack.id, axis, value)}
-                    name={`The position on x${axis}`}
-                    formatValue={fieldNumber}
-                    min={-maxAbsPosition}
-                    max={maxAbsPosition}
-                    aria-label={`Position of stack ${stack.id} on x${axis}`}
-                    className="w-11"
-                  />
-                ) : null}
-              </div>
-            </td>
+            <BoundaryAxisCell
+              key={axis}
+              axis={axis}
+              neumann={neumann}
+              position={stack.position[String(axis)] ?? 0}
+              readOnly={readOnly}
+              toggleLabel={`Stack ${stack.id}, axis x${axis}: ${neumann ? "Neumann" : "Dirichlet"}`}
+              title={`Make x${axis} ${neumann ? "Dirichlet" : "Neumann"} for ${name}`}
+              positionLabel={`Position of stack ${stack.id} on x${axis}`}
+              describedBy={describedBy}
+              formatValue={fieldNumber}
+              onToggle={() => toggleAxis(stack.id, axis)}
+              onCommit={(value) => setPosition(stack.id, axis, value)}
+            >
+              {neumann && document.compact?.[String(axis)] !== undefined ? (
+                <WilsonLineField stack={stack} axis={axis} readOnly={readOnly} />
+              ) : null}
+            </BoundaryAxisCell>
           );
         })}
         <td className="px-2 py-1">

@@ -20,7 +20,9 @@ import { ExportMenu } from "@/components/configurations/export-menu";
 import { ConventionsNote } from "@/components/designer/conventions-note";
 import { ForkDialog, type WritableGroup } from "@/components/designer/fork-dialog";
 import { ForkedFromNote } from "@/components/designer/forked-from-note";
+import type { Configuration } from "@/lib/boundary/types";
 import { LightestStatesTable } from "./lightest-states-table";
+import { OrientifoldPanel } from "./orientifold-panel";
 import { SectorList } from "./sector-list";
 import { SpectrumSummary } from "./spectrum-summary";
 import { WorldvolumeTable } from "./worldvolume-table";
@@ -28,6 +30,10 @@ import { WorldvolumeTable } from "./worldvolume-table";
 const MassPlot = dynamic(() => import("./mass-plot").then((m) => m.MassPlot), {
   ssr: false,
   loading: () => <div className="h-72 animate-pulse rounded-md bg-border/50" />,
+});
+const InteractionPlot = dynamic(() => import("./interaction-plot").then((m) => m.InteractionPlot), {
+  ssr: false,
+  loading: () => <div className="h-64 animate-pulse rounded-md bg-border/50" />,
 });
 const DegeneracyPlot = dynamic(() => import("./degeneracy-plot").then((m) => m.DegeneracyPlot), {
   ssr: false,
@@ -40,13 +46,15 @@ export interface ResultsViewProps {
   revision: RevisionSummaryJson;
   initialResult: ResultHeadJson;
   writableGroups: WritableGroup[];
+  /** The revision's document (the interaction potentials are computed from it on demand). */
+  document: Configuration;
 }
 
 /**
  * The results panel of one saved revision: summaries, per-sector tables with mode expansions,
  * plots, conventions, exports and forking.
  */
-export function ResultsView({ configuration, revisions, revision, initialResult, writableGroups }: ResultsViewProps) {
+export function ResultsView({ configuration, revisions, revision, initialResult, writableGroups, document }: ResultsViewProps) {
   const router = useRouter();
   const { data: stored } = useQuery({ ...configurationQueries.resultHead(configuration.id, revision.id), initialData: initialResult });
   const { result, facts, massCurves, showGeV, firstPage, stacks } = stored;
@@ -119,6 +127,15 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
         <WorldvolumeTable worldvolumes={result.worldvolumes} />
       </section>
 
+      {result.orientifold ? (
+        <section aria-labelledby="orientifold-title" className="grid gap-2">
+          <h2 id="orientifold-title" className="text-lg font-semibold">
+            Orientifold plane and tadpoles
+          </h2>
+          <OrientifoldPanel summary={result.orientifold} />
+        </section>
+      ) : null}
+
       {result.warnings.length > 0 ? (
         <ul className="list-disc space-y-1 rounded-md border border-warning/40 bg-warning-soft py-2 pr-3 pl-7 text-sm text-warning-soft-foreground">
           {result.warnings.map((w) => (
@@ -146,6 +163,10 @@ export function ResultsView({ configuration, revisions, revision, initialResult,
           <div className="rounded-lg border border-border bg-surface p-4">
             <h3 className="mb-2 text-sm font-semibold">Degeneracy against level</h3>
             <DegeneracyPlot configurationId={configuration.id} revisionId={revision.id} sectors={firstPage.items} total={firstPage.total} names={names} />
+          </div>
+          <div className="rounded-lg border border-border bg-surface p-4 lg:col-span-2">
+            <h3 className="mb-2 text-sm font-semibold">Interaction potential V(y) from the annulus</h3>
+            <InteractionPlot document={document} />
           </div>
         </div>
       </section>

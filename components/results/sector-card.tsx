@@ -61,6 +61,12 @@ export function SectorCard({ configurationId, revisionId, sector, open, onToggle
             tachyon{sector.criticalSeparation !== null ? `, y_c = ${formatNumber(sector.criticalSeparation)}` : ""}
           </Badge>
         ) : null}
+        {sector.orientifold?.imageOf ? <Badge variant="outline">with an image</Badge> : null}
+        {sector.orientifold?.representation ? (
+          <span className="text-xs text-muted-foreground" data-testid={`projection-${sector.pair.join("-")}`}>
+            {sector.orientifold.representation}
+          </span>
+        ) : null}
         {typeTwo ? (
           <Badge variant={sector.supersymmetric ? "success" : "outline"}>{sector.supersymmetric ? "supersymmetric" : "no supersymmetry"}</Badge>
         ) : null}

@@ -60,13 +60,23 @@ export function SectorLevelsTable({ caption, rows, zeroPoint, kind, massCap, sho
         sortingFn: (a, b) => compareStateCounts(a.original.states, b.original.states),
         cell: ({ row }) => row.original.states ?? <span title={row.original.note}>&mdash;</span>,
       },
+      ...(rows.some((row) => row.projected)
+        ? [
+            {
+              id: "projected",
+              header: "Symmetric / antisymmetric",
+              cell: ({ row }) =>
+                row.original.projected ? `${row.original.projected.symmetric} / ${row.original.projected.antisymmetric}` : "\u2014",
+            } satisfies ColumnDef<LevelRow>,
+          ]
+        : []),
       {
         accessorKey: "withChanPaton",
         header: "With Chan-Paton",
         sortingFn: (a, b) => compareStateCounts(a.original.withChanPaton, b.original.withChanPaton),
       },
     ],
-    [showGeV, zeroPoint],
+    [showGeV, zeroPoint, rows],
   );
   const columnFilters = useMemo(
     () => [

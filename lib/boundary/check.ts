@@ -14,6 +14,7 @@
 import { classifyPair } from "./classify";
 import { checkCompactAxes } from "./compact";
 import { bosonicCriticalDimension, superstringCriticalDimension } from "./constants";
+import { checkOrientifolds } from "./orientifold-check";
 import type { Configuration, Stack } from "./types";
 
 /** One reason a configuration cannot be computed, at the JSON path of the offending value. */
@@ -171,6 +172,7 @@ export function checkConfiguration(config: Configuration): ConfigurationProblem[
     checkStack(stack, index, config.theory, dimension, problems);
   });
   problems.push(...checkCompactAxes(config, dimension));
+  checkOrientifolds(config, dimension, problems);
 
   return problems;
 }
@@ -239,12 +241,15 @@ export function configurationWarnings(config: Configuration): string[] {
     for (const stack of lowCodimension) {
       const p = stack.worldvolume.length;
       const why =
-        p === 9
+        p === 9 && config.orientifolds?.length
+          ? "a space-filling D9 stack needs its RR tadpole cancelled: see the tadpole balance with the orientifold plane"
+          : p === 9
           ? "a space-filling D9 stack needs its RR tadpole cancelled (e.g. by an orientifold plane, as in type I with 32 D9 branes)"
           : p === 8
             ? "a D8 stack is a domain wall of codimension one: its RR charge sources a varying dilaton (massive IIA) and needs orientifolds or other D8s for consistency"
             : "a D7 stack has codimension two: it makes a deficit angle in the transverse plane and a coupling (axio-dilaton) that runs logarithmically with the distance, and a compact transverse space needs 24 of them (or orientifolds) to close up";
-      warnings.push(`${capitalise(describeStack(stack))} is a D${p}: ${why}. The open-string spectrum is shown without these ingredients.`);
+      const shown = config.orientifolds?.length ? "with the orientifold plane, without the other ingredients" : "without these ingredients";
+      warnings.push(`${capitalise(describeStack(stack))} is a D${p}: ${why}. The open-string spectrum is shown ${shown}.`);
     }
   }
   for (let i = 0; i < stacks.length; i += 1) {
@@ -324,6 +329,20 @@ function checkStack(
     }
   }
 
+  checkPositions(stack, name, dimension, at, problems);
+}
+
+/**
+ * Adds a problem for every position key that is not a Dirichlet spatial axis of the object, and for
+ * every value that is not finite or lies beyond `configurationLimits.maxAbsPosition`.
+ */
+export function checkPositions(
+  stack: Pick<Stack, "worldvolume" | "position">,
+  name: string,
+  dimension: number,
+  at: (...rest: (string | number)[]) => (string | number)[],
+  problems: ConfigurationProblem[],
+): void {
   const neumann = new Set(stack.worldvolume);
   for (const [key, value] of Object.entries(stack.position)) {
     const axis = Number(key);
@@ -350,8 +369,8 @@ function checkStack(
 }
 
 /** Returns true when every worldvolume axis is a valid spatial axis, so p is meaningful. */
-function checkWorldvolume(
-  stack: Stack,
+export function checkWorldvolume(
+  stack: Pick<Stack, "worldvolume">,
   name: string,
   dimension: number,
   at: (...rest: (string | number)[]) => (string | number)[],

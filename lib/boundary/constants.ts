@@ -26,6 +26,10 @@ import { rational, type Rational } from "./rational";
  *   `fermionExpansionLatex` and `lightConeAxis` (they need only the axis types). Bosonic pairs with every spatial
  *   axis ND are counted covariantly instead of listing no levels. Notes and massless descriptions
  *   for nu = 8 (string creation), D0 and D1 content; a D7 caution; conventions state M_s.
+ * - 1.2.0: orientifold planes (file format 2): image stacks and their sectors, the orientifold
+ *   projection (`LevelRow.projected`, `Sector.orientifold`), SO and USp groups, the RR tadpole
+ *   balance (`SpectrumResult.orientifold`); a plane counts in the supercharges. Results of
+ *   configurations without planes are unchanged.
  *
  * - 1.2.0: compact axes and Wilson lines (file format 2): `Sector.compactAxes`, `Sector.tower` (momentum
  *   and winding states up to the mass cap) and `Sector.towerTruncated`; separations on circles are

@@ -70,3 +70,14 @@ export {
 } from "./supersymmetry";
 export { describeWorldvolumes, type DescribeWorldvolumesInput, type PairSummary } from "./worldvolume";
 export { parseRational, formatRational, rationalToNumber, compareRational, type Rational } from "./rational";
+export {
+  annulusCurve,
+  createAnnulusCache,
+  braneAntibraneSupergravity,
+  type AnnulusCurve,
+  type AnnulusShape,
+} from "./annulus";
+export { stacksUnderPlane, omegaTwistedCounts, groupName, planeGeometry, type StackUnderPlane } from "./orientifold";
+export { maxOrientifolds } from "./orientifold-check";
+export { planeCharge, tadpoleBalance } from "./tadpole";
+export { interactionCurves, interactionSampleCount, INTERACTION_CONVENTIONS, type InteractionCurve } from "./interaction";

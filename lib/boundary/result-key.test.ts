@@ -69,3 +69,23 @@ describe("resultInputKey", () => {
     );
   });
 });
+
+describe("resultInputKey: orientifold planes (format 2)", () => {
+  const planeDocument: Configuration = {
+    format: 2,
+    title: "planes",
+    theory: "IIB",
+    stringScaleGeV: null,
+    levels: 1,
+    stacks: [{ id: "a", label: "", count: 1, anti: false, worldvolume: [1, 2, 3], position: { "9": 1 } }],
+    orientifolds: [{ id: "o", label: "wall", type: "O-", worldvolume: [1, 2, 3], position: { "9": 0 } }],
+  };
+  it("changes with the plane's type and position, and not with its label or a written zero", () => {
+    const key = resultInputKey(planeDocument);
+    const plane = planeDocument.orientifolds?.[0] as NonNullable<Configuration["orientifolds"]>[number];
+    expect(resultInputKey({ ...planeDocument, orientifolds: [{ ...plane, type: "O+" }] })).not.toBe(key);
+    expect(resultInputKey({ ...planeDocument, orientifolds: [{ ...plane, position: { "9": 0.5 } }] })).not.toBe(key);
+    expect(resultInputKey({ ...planeDocument, orientifolds: [{ ...plane, label: "other", position: {} }] })).toBe(key);
+    expect(resultInputKey({ ...planeDocument, format: 2, orientifolds: undefined })).not.toBe(key);
+  });
+});

@@ -6,7 +6,8 @@
  * Left out because no field of the result reads them: the document's `title` and `description`
  * and each stack's display `colour`. Made canonical because the result does not depend on them:
  * the order of the stacks (sectors and warnings come in id order), the order of object keys, and
- * whether a Dirichlet position or a Wilson line of 0 is written or left out (a missing one is 0). Every
+ * whether a Dirichlet position or a Wilson line of 0 is written or left out (a missing one is 0); the
+ * same for orientifold planes (their `label` is display-only, their order is by id). Every
  * other field is kept as it is, so a field added to the format changes the key until it is listed
  * here on purpose.
  */
@@ -17,6 +18,8 @@ import type { Configuration } from "./types";
 const displayOnlyFields = new Set(["title", "description"]);
 /** Stack fields that no part of the result reads. */
 const displayOnlyStackFields = new Set(["colour"]);
+/** Orientifold plane fields that no part of the result reads. */
+const displayOnlyPlaneFields = new Set(["label"]);
 
 /**
  * Canonical JSON text of the result-relevant part of a configuration.
@@ -29,19 +32,27 @@ const displayOnlyStackFields = new Set(["colour"]);
  */
 export function resultInputKey(config: Configuration): string {
   const entries = Object.entries(config).filter(([key]) => !displayOnlyFields.has(key));
-  const stacks = [...config.stacks]
+  const canonical: Record<string, unknown> = {
+    stacks: canonicalObjects(config.stacks, displayOnlyStackFields),
+    orientifolds: config.orientifolds ? canonicalObjects(config.orientifolds, displayOnlyPlaneFields) : undefined,
+  };
+  return canonicalJson(Object.fromEntries(entries.map(([key, value]) => [key, key in canonical ? canonical[key] : value])));
+}
+
+/** Objects with an id and positions in id order, without their display-only fields and zero positions or Wilson lines. */
+function canonicalObjects<T extends { id: string; position: Record<string, number>; wilson?: Record<string, number> }>(list: readonly T[], displayOnly: ReadonlySet<string>): unknown[] {
+  return [...list]
     .sort((x, y) => (x.id < y.id ? -1 : x.id > y.id ? 1 : 0))
-    .map((stack) => {
-      const kept = Object.entries(stack).filter(([key]) => !displayOnlyStackFields.has(key));
-      const position = Object.entries(stack.position ?? {}).filter(([, value]) => value !== 0);
-      const wilson = Object.entries(stack.wilson ?? {}).filter(([, value]) => value !== 0);
+    .map((item) => {
+      const kept = Object.entries(item).filter(([key]) => !displayOnly.has(key));
+      const position = Object.entries(item.position ?? {}).filter(([, value]) => value !== 0);
+      const wilson = Object.entries(item.wilson ?? {}).filter(([, value]) => value !== 0);
       return Object.fromEntries(
         kept
           .filter(([key]) => key !== "wilson" || wilson.length > 0)
           .map(([key, value]) => [key, key === "position" ? Object.fromEntries(position) : key === "wilson" ? Object.fromEntries(wilson) : value]),
       );
     });
-  return canonicalJson(Object.fromEntries(entries.map(([key, value]) => [key, key === "stacks" ? stacks : value])));
 }
 
 /** JSON with object keys sorted at every depth (arrays keep their order). */

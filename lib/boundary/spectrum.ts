@@ -49,6 +49,7 @@ import {
   type Rational,
 } from "./rational";
 import { describeWorldvolumes, type PairSummary } from "./worldvolume";
+import { applyOrientifold } from "./orientifold";
 import { countSupercharges, pairPreservesSupersymmetry } from "./supersymmetry";
 import type {
   ComputeSpectrumOptions,
@@ -135,15 +136,36 @@ function computeCheckedSpectrum(configuration: Configuration, options: ComputeSp
   }
 
   const superstring = configuration.theory !== "bosonic";
-  const supercharges = superstring ? countSupercharges(stacks) : null;
+  const plane = configuration.orientifolds?.[0];
+  // A plane preserves the supersymmetry of a brane along it (common practice, from memory).
+  const preserving: Stack[] = plane ? [...stacks, { id: plane.id, label: "", count: 1, anti: false, worldvolume: plane.worldvolume, position: plane.position }] : stacks;
+  const supercharges = superstring ? countSupercharges(preserving) : null;
   const warnings = configurationWarnings(configuration);
   if (stacks.length === 0) warnings.push("The configuration has no stacks yet, so there are no open strings.");
-  const { worldvolumes, gaugeGroup } = describeWorldvolumes({
+  let { worldvolumes, gaugeGroup } = describeWorldvolumes({
     stacks,
     theory: configuration.theory,
     dimension: context.dimension,
     pair: (i, j) => built[pairIndex(Math.min(i, j), Math.max(i, j))] as BuiltSector,
   });
+  const orientifold = plane
+    ? applyOrientifold({
+        stacks,
+        plane,
+        theory: configuration.theory,
+        dimension: context.dimension,
+        built,
+        pairIndex,
+        build: (a, b) => buildSector(a, b, configuration, context),
+        worldvolumes,
+        gaugeGroup,
+      })
+    : null;
+  if (orientifold) {
+    built.push(...orientifold.extra);
+    warnings.push(...orientifold.warnings);
+    ({ worldvolumes, gaugeGroup } = orientifold);
+  }
 
   return {
     engineVersion: ENGINE_VERSION,
@@ -157,6 +179,7 @@ function computeCheckedSpectrum(configuration: Configuration, options: ComputeSp
     sectors: built.map((entry) => entry.sector),
     lightest: collectLightest(built, lightestCount),
     conventions: hasCompactAxes(configuration) ? withCompactConventions(CONVENTIONS_TEXT) : CONVENTIONS_TEXT,
+    ...(orientifold ? { orientifold: orientifold.summary } : {}),
   };
 }
 

@@ -37,7 +37,30 @@ export interface Stack {
   wilson?: Record<string, number>;
 }
 
-/** A configuration document, file format 1 or 2 (format 1 plus optional fields such as `compact`). */
+/** Kind of orientifold plane: O- (negative charge, SO groups on it) or O+ (positive, USp). */
+export type OrientifoldType = "O-" | "O+";
+
+/**
+ * An orientifold plane (file format 2): an Op-plane along `worldvolume`, at `position` on its
+ * Dirichlet axes (missing = 0). It reflects those axes through its position; every stack off the
+ * plane gets an image there (see `orientifold.ts`).
+ */
+export interface OrientifoldPlane {
+  /** Unique id among stacks and planes: letters, digits, "-" and "_". */
+  id: string;
+  /** Free-text label shown on the canvas. */
+  label?: string;
+  type: OrientifoldType;
+  /** Spatial Neumann axes, sorted, without duplicates; p = worldvolume.length. */
+  worldvolume: number[];
+  /** Positions along Dirichlet axes, keyed by the axis number as a string. */
+  position: Record<string, number>;
+}
+
+/**
+ * A configuration document, file format 1 or 2 (format 1 plus optional fields: `compact` and
+ * stacks' `wilson`, `orientifolds`).
+ */
 export interface Configuration {
   format: 1 | 2;
   title: string;
@@ -62,6 +85,8 @@ export interface Configuration {
    * keyed by the axis number as a string. Every other axis is non-compact. See `compact.ts`.
    */
   compact?: Record<string, number>;
+  /** Orientifold planes (format 2 only; at most one). */
+  orientifolds?: OrientifoldPlane[];
 }
 
 /** Boundary condition pair on one axis: first letter at sigma = 0 (stack a), second at sigma = pi (stack b). */
@@ -106,6 +131,11 @@ export interface LevelRow {
   withChanPaton: string;
   /** Explanations, e.g. which orientation holds an unpaired R ground state. */
   note?: string;
+  /**
+   * Orientifold-projected rows only: of the `states` oscillator states, how many pair with the
+   * symmetric and with the antisymmetric Chan-Paton representation.
+   */
+  projected?: { symmetric: string; antisymmetric: string };
 }
 
 export interface ZeroPoint {
@@ -176,6 +206,8 @@ export interface Sector {
   tower?: TowerState[];
   /** True when more tower states lie within the mass cap than `tower` lists (the lightest are kept). */
   towerTruncated?: boolean;
+  /** Present when an orientifold plane is set: what the projection does to this sector. */
+  orientifold?: SectorOrientifold;
   /**
    * Set (true) on sectors of a paged API response whose `levels` and `axes` were left out to keep
    * the response small; the engine itself never sets it.
@@ -309,6 +341,57 @@ export interface WorldvolumeTheory {
   summary: string;
 }
 
+/** How the orientifold projection acts on one sector. */
+export interface SectorOrientifold {
+  /** Id of the stack whose image is the second end (the pair then reads ["a", "b'"]), or null. */
+  imageOf: string | null;
+  /** True when the orientifold projection splits the Chan-Paton labels (see `LevelRow.projected`). */
+  projected: boolean;
+  /** E.g. "adjoint of SO(4)", "antisymmetric of U(2) and its conjugate at the vector level". */
+  representation: string | null;
+}
+
+/** The image of a stack in the orientifold plane. */
+export interface ImageStack {
+  /** `${of}'`. */
+  id: string;
+  /** Id of the stack. */
+  of: string;
+  /** Id of the plane. */
+  plane: string;
+  /** RR orientation of the image (type II): flipped when the stack and plane have nu = 2 mod 4. */
+  anti: boolean;
+  /** Reflected positions on the stack's Dirichlet axes. */
+  position: Record<string, number>;
+  /** True when the stack lies on the plane: it is its own image (SO or USp), and no separate image exists. */
+  onPlane: boolean;
+}
+
+/** RR charge balance of one p: stacks (physical branes, images not counted again) and planes. */
+export interface TadpoleEntry {
+  p: number;
+  /** Sum of +N (branes) and -N (antibranes), exact. */
+  stacks: string;
+  /** Charge of the planes of this p: -2^(p-5) (O-) or +2^(p-5) (O+), exact. */
+  planes: string;
+  /** stacks + planes, exact. */
+  net: string;
+  /** "cancelled"; "tadpole" (space-filling p = 9, uncancelled: inconsistent); "net charge" (p < 9: flux escapes to infinity); "projected out". */
+  status: "cancelled" | "tadpole" | "net charge" | "projected out";
+  /** Plain sentence of the balance. */
+  message: string;
+  /** What would cancel it, or null when cancelled. */
+  toCancel: string | null;
+}
+
+/** The orientifold part of a result (only when the configuration has a plane). */
+export interface OrientifoldSummary {
+  planes: { id: string; type: OrientifoldType; p: number; charge: string }[];
+  images: ImageStack[];
+  tadpoles: TadpoleEntry[];
+  notes: string[];
+}
+
 export interface SpectrumResult {
   engineVersion: string;
   theory: Theory;
@@ -328,6 +411,8 @@ export interface SpectrumResult {
   sectors: Sector[];
   lightest: LightestState[];
   conventions: string;
+  /** Planes, images and RR tadpoles, when the configuration has an orientifold plane. */
+  orientifold?: OrientifoldSummary;
 }
 
 export interface ComputeSpectrumOptions {

@@ -9,13 +9,14 @@
  * snapping applies.
  */
 import { create } from "zustand";
-import type { Configuration, Theory } from "@/lib/boundary/types";
+import type { Configuration, OrientifoldType, Theory } from "@/lib/boundary/types";
 import type { DisplayAxes } from "@/lib/canvas/projection";
 import { defaultGridStep } from "@/lib/canvas/snap";
 import type { Viewport } from "@/lib/canvas/viewport";
 import { normaliseDisplayAxes, suggestDisplayAxes } from "@/lib/designer/display-axes";
 import * as compactEdits from "@/lib/designer/compact-edits";
 import * as edits from "@/lib/designer/document";
+import * as planeEdits from "@/lib/designer/orientifold-document";
 import {
   createHistory,
   pushHistory,
@@ -99,6 +100,13 @@ export interface DesignerState {
   /** Typing into one count field is one undo step. */
   setCount: (id: string, count: number) => void;
   setAnti: (id: string, anti: boolean) => void;
+  /** Orientifold planes (format 2): add one parallel to the first stack, remove, and edit type, axes and positions. */
+  addPlane: () => void;
+  removePlane: (id: string) => void;
+  setPlaneType: (id: string, type: OrientifoldType) => void;
+  togglePlaneAxis: (id: string, axis: number) => void;
+  /** Typing into one plane position field is one undo step. */
+  setPlanePosition: (id: string, axis: number, value: number) => void;
   /** Typing into one label is one undo step. */
   setLabel: (id: string, label: string) => void;
   /** Dragging through the colour picker is one undo step. */
@@ -238,6 +246,11 @@ export const useDesignerStore = create<DesignerState>()((set, get) => {
     setPosition: (id, axis, value) => apply((doc) => edits.setPosition(doc, id, axis, value), `position:${id}:${axis}`),
     setCount: (id, count) => apply((doc) => edits.setCount(doc, id, count), `count:${id}`),
     setAnti: (id, anti) => apply((doc) => edits.setAnti(doc, id, anti)),
+    addPlane: () => apply((doc) => planeEdits.addPlane(doc)),
+    removePlane: (id) => apply((doc) => planeEdits.removePlane(doc, id)),
+    setPlaneType: (id, type) => apply((doc) => planeEdits.setPlaneType(doc, id, type)),
+    togglePlaneAxis: (id, axis) => apply((doc) => planeEdits.togglePlaneAxis(doc, id, axis)),
+    setPlanePosition: (id, axis, value) => apply((doc) => planeEdits.setPlanePosition(doc, id, axis, value), `plane-position:${id}:${axis}`),
     setLabel: (id, label) => apply((doc) => edits.setLabel(doc, id, label), `label:${id}`),
     setColour: (id, colour) => apply((doc) => edits.setColour(doc, id, colour), `colour:${id}`),
     renameStack: (id, newId) => apply((doc) => edits.renameStack(doc, id, newId)),

@@ -69,7 +69,7 @@ function isStoredDraft(value: unknown): value is StoredDraft {
     (v.baseVersion === null || typeof v.baseVersion === "number") &&
     typeof doc === "object" &&
     doc !== null &&
-    doc.format === 1 &&
+    (doc.format === 1 || doc.format === 2) &&
     Array.isArray(doc.stacks)
   );
 }

@@ -138,3 +138,28 @@ describe("curves with shared ends", () => {
     expect(xy!.points.slice(2, 6)).not.toEqual(xz!.points.slice(2, 6));
   });
 });
+
+describe("buildScene with an orientifold plane", () => {
+  const withPlane: Configuration = {
+    ...document,
+    format: 2,
+    orientifolds: [{ id: "o", type: "O-", worldvolume: [1, 2, 3, 4], position: { "9": 0.5 } }],
+  };
+  const draw = (doc: Configuration) =>
+    buildScene({ document: doc, result: null, axes: { horizontal: 8, vertical: 9 }, viewport, width: 400, height: 300, selection: [], gridStep: 1 });
+  it("draws the plane and a faint image of every stack off it at the reflected position", () => {
+    const planeScene = draw(withPlane);
+    expect(planeScene.planes[0]?.shape).toEqual({ kind: "point", x: 0, y: 0.5 });
+    const image = planeScene.images.find((entry) => entry.id === "p'");
+    expect(image?.shape).toEqual({ kind: "point", x: 0, y: -1 });
+    // Images are never hit-tested: only the stacks are.
+    expect(planeScene.hitEntries.map((entry) => entry.id)).toEqual(["w", "p", "q"]);
+  });
+  it("keeps the image in step when the stack moves (every drag step rebuilds the scene from the document)", () => {
+    const moved: Configuration = {
+      ...withPlane,
+      stacks: withPlane.stacks.map((stack) => (stack.id === "p" ? { ...stack, position: { "9": 3.5 } } : stack)),
+    };
+    expect(draw(moved).images.find((entry) => entry.id === "p'")?.shape).toEqual({ kind: "point", x: 0, y: -2.5 });
+  });
+});

@@ -2,6 +2,8 @@
  * Builds what the canvas draws (in screen pixels) from the document, the live result and the
  * view. Pure, so the drawing component only maps items to shapes.
  */
+import { dimensionOf } from "@/lib/boundary/check";
+import { stacksUnderPlane } from "@/lib/boundary/orientifold";
 import type { Configuration, SpectrumResult } from "@/lib/boundary/types";
 import { assignLanes, curveAnchors, curveBetween, curveMidpoint, curveToPoints } from "@/lib/canvas/curves";
 import type { ShapeEntry } from "@/lib/canvas/hit-test";
@@ -38,8 +40,21 @@ export interface SceneCurve {
   labelAt: Point;
 }
 
+/** An orientifold plane as drawn: a hatched dashed line, a diamond, or a hatched frame. */
+export interface ScenePlane {
+  id: string;
+  type: "O-" | "O+";
+  shape: ProjectedShape;
+  screen: Point;
+  label: string;
+}
+
 export interface Scene {
   stacks: SceneStack[];
+  /** Orientifold planes (at most one). */
+  planes: ScenePlane[];
+  /** Images of the stacks off the plane, drawn faintly and never hit-tested; they follow every drag. */
+  images: SceneStack[];
   curves: SceneCurve[];
   /** Screen x of vertical grid lines and y of horizontal ones, with the origin lines flagged. */
   verticalLines: Array<{ x: number; origin: boolean }>;
@@ -93,14 +108,7 @@ export function buildScene(input: BuildSceneInput): Scene {
 
   const stacks: SceneStack[] = document.stacks.map((stack, i) => {
     const shape = hitEntries[i]!.shape;
-    const screen =
-      shape.kind === "point"
-        ? toScreen({ x: shape.x, y: shape.y }, viewport)
-        : shape.kind === "horizontal-line"
-          ? toScreen({ x: 0, y: shape.y }, viewport)
-          : shape.kind === "vertical-line"
-            ? toScreen({ x: shape.x, y: 0 }, viewport)
-            : { x: 0, y: 0 };
+    const screen = screenOf(shape, viewport);
     return {
       id: stack.id,
       shape,
@@ -178,7 +186,35 @@ export function buildScene(input: BuildSceneInput): Scene {
     origin: y === 0,
   }));
 
-  return { stacks, curves, verticalLines, horizontalLines, hitEntries };
+  const plane = document.orientifolds?.[0];
+  const planes: ScenePlane[] = plane
+    ? [(() => {
+        const shape = projectStack(plane, axes);
+        return { id: plane.id, type: plane.type, shape, screen: screenOf(shape, viewport), label: `${plane.id} \u00b7 O${plane.worldvolume.length}${plane.type === "O-" ? "\u2212" : "+"}` };
+      })()]
+    : [];
+  const images: SceneStack[] = plane
+    ? stacksUnderPlane(document.stacks, plane, document.theory, dimensionOf(document)).flatMap((entry, i) => {
+        if (!entry.image) return [];
+        const shape = projectStack(entry.image, axes);
+        const screen = screenOf(shape, viewport);
+        const own = stacks[i];
+        return [{ id: entry.image.id, shape, screen, colour: own?.colour ?? defaultStackColour, anti: entry.image.anti && document.theory !== "bosonic", selected: false, count: entry.image.count, label: `${entry.stack.id}\u2032`, labelAt: { x: screen.x + 10, y: screen.y + 8 } }];
+      })
+    : [];
+
+  return { stacks, planes, images, curves, verticalLines, horizontalLines, hitEntries };
+}
+
+/** Screen anchor of a projected shape: the centre of a point, the coordinate of a line. */
+function screenOf(shape: ProjectedShape, viewport: Viewport): Point {
+  return shape.kind === "point"
+    ? toScreen({ x: shape.x, y: shape.y }, viewport)
+    : shape.kind === "horizontal-line"
+      ? toScreen({ x: 0, y: shape.y }, viewport)
+      : shape.kind === "vertical-line"
+        ? toScreen({ x: shape.x, y: 0 }, viewport)
+        : { x: 0, y: 0 };
 }
 
 /**

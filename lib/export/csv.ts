@@ -53,6 +53,8 @@ export interface SpectrumToCsvOptions {
   title?: string;
   /** The configuration's stacks, for the label columns (ids stand in where a stack is missing). */
   stacks?: readonly StackNameSource[];
+  /** Further notes for the conventions cell, after the conventions (the orientifold summary and V(y) of each pair). */
+  commentLines?: readonly string[];
 }
 
 /**
@@ -66,7 +68,10 @@ export interface SpectrumToCsvOptions {
  */
 export function spectrumToCsv(result: SpectrumResult, options: SpectrumToCsvOptions = {}): string {
   const names = sectorNames(options.stacks ?? []);
-  const conventions = `${options.title ? `${options.title}. ` : ""}${conventionsLine(result)} ${exportCaution}`;
+  const conventions = [
+    `${options.title ? `${options.title}. ` : ""}${conventionsLine(result)} ${exportCaution}`,
+    ...(options.commentLines ?? []),
+  ].join(" | ");
   // The theory on a worldvolume goes on the rows of each of its stacks' strings with itself.
   const worldvolumeOf = new Map<string, string>();
   for (const worldvolume of result.worldvolumes) {

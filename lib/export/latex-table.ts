@@ -12,6 +12,8 @@ import { conventionsLine, exportCaution } from "./caution";
 export interface SpectrumToLatexTableOptions {
   /** Caption title (e.g. the configuration title). */
   title?: string;
+  /** Extra comment lines after the header (the orientifold summary and V(y) of each pair). */
+  commentLines?: readonly string[];
   /** Highest alpha' M^2 at zero separation (N + a) to include (default: every level in the result). */
   massCap?: number;
   /** `\label{...}` of the levels table (default "tab:spectrum"; the worldvolume table adds "-worldvolumes"). */
@@ -33,6 +35,7 @@ export function spectrumToLatexTable(result: SpectrumResult, options: SpectrumTo
     `% Mooring spectrum table. ${conventionsLine(result)}`,
     `% ${exportCaution}`,
     "% Requires \\usepackage{booktabs}.",
+    ...(options.commentLines ?? []).map((line) => `% ${line.replace(/[\r\n]+/g, " ")}`),
   ];
   // The notes name a sector's multiplet too (the W bosons of separated stacks).
   for (const sector of result.sectors) {

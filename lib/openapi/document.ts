@@ -127,7 +127,7 @@ const operations: Operation[] = [
     tag: "compute",
     summary: "Compute a spectrum",
     description:
-      "Computes the open-string spectrum of a configuration document (file format 1 or 2) without saving anything. Large results are paged by sectors: sectors from `sectorOffset` carry their level rows and mode expansions until `maxRows` rows; the others are marked `detailOmitted: true`, and `page.nextSectorOffset` names the next page. The compute budget (per address, account or API token) is weighted by the configuration's size.",
+      "Computes the open-string spectrum of a configuration document (file format 1, or 2 with compact axes, Wilson lines and orientifold planes) without saving anything. Large results are paged by sectors: sectors from `sectorOffset` carry their level rows and mode expansions until `maxRows` rows; the others are marked `detailOmitted: true`, and `page.nextSectorOffset` names the next page. The compute budget (per address, account or API token) is weighted by the configuration's size.",
     access: "optional",
     tokenScope: "read",
     query: spectrumQuerySchema,
@@ -572,7 +572,7 @@ const operations: Operation[] = [
 // library's own registry, keyed by the very schema instances the route handlers use (so
 // lib/validations stays free of OpenAPI metadata, and every use of a schema gets the reference).
 const components: Array<[z.ZodType, string, string]> = [
-  [configurationSchema, "ConfigurationDocument", "A configuration document, file format 1 or 2 (also the body of POST /api/spectrum)."],
+  [configurationSchema, "ConfigurationDocument", "A configuration document, file format 1 or 2 (format 2 adds compact axes, Wilson lines and orientifold planes; also the body of POST /api/spectrum)."],
   [spectrumPageResponseSchema, "SpectrumPage", "A computed spectrum with its sectors paged."],
   [configurationResponseSchema, "Configuration", "A saved configuration with its current document."],
   [revisionSummaryResponseSchema, "RevisionSummary", "One row of a configuration's history."],

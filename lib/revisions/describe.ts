@@ -27,6 +27,15 @@ const fieldNames: Record<ConfigurationDiff["fields"][number]["field"], string> =
 export function describeConfigurationDiff(diff: ConfigurationDiff): string[] {
   const lines: string[] = [];
   for (const change of diff.fields) lines.push(`${fieldNames[change.field]}: ${show(change.before)} → ${show(change.after)}`);
+  for (const plane of diff.planes) {
+    lines.push(
+      plane.before === null
+        ? `Added plane ${plane.key}: ${plane.after ?? ""}`
+        : plane.after === null
+          ? `Removed plane ${plane.key}`
+          : `Plane ${plane.key}: ${plane.before} → ${plane.after}`,
+    );
+  }
   for (const stack of diff.added) lines.push(`Added stack ${stack.id} (D${stack.worldvolume.length}, N = ${stack.count})`);
   for (const stack of diff.removed) lines.push(`Removed stack ${stack.id}`);
   for (const change of diff.changed) {

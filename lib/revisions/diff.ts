@@ -6,7 +6,8 @@
  * Stacks are matched by their `id`; a stack whose id changed shows as removed + added.
  */
 import { dimensionOf } from "@/lib/boundary";
-import type { Configuration, SpectrumResult, Stack, Sector, SectorKind } from "@/lib/boundary/types";
+import { interactionCurves, type InteractionCurve } from "@/lib/boundary/interaction";
+import type { Configuration, OrientifoldPlane, SpectrumResult, Stack, Sector, SectorKind } from "@/lib/boundary/types";
 import { formatWorldvolume, lightestLevel, pairKey, parseResultNumber, worldvolumeKey, type StackNameSource } from "@/lib/spectrum";
 import { diffCompactAxes, type CompactDiff } from "./compact-diff";
 
@@ -46,8 +47,17 @@ export interface StackChange {
   positions: PositionChange[];
 }
 
+/** Something described by one line that changed, appeared (before null) or went (after null). */
+export interface LineChange {
+  key: string;
+  before: string | null;
+  after: string | null;
+}
+
 export interface ConfigurationDiff {
   fields: FieldChange[];
+  /** Orientifold planes added, removed or changed (matched by id). */
+  planes: LineChange[];
   added: Stack[];
   removed: Stack[];
   changed: StackChange[];
@@ -83,6 +93,8 @@ export interface WorldvolumeChange {
 }
 
 export interface SpectrumDiff {
+  /** Images and tadpole entries of the orientifold that changed, appeared or went. */
+  orientifold: LineChange[];
   /** Sectors present only in the later result (a stack was added). */
   addedSectors: Array<[string, string]>;
   /** Sectors present only in the earlier result (a stack was removed). */
@@ -139,14 +151,21 @@ export function diffConfigurations(before: Configuration, after: Configuration):
   }
 
   const compact = diffCompactAxes(before, after);
+  const planes = diffLines(
+    new Map((before.orientifolds ?? []).map((plane) => [plane.id, describePlane(plane)])),
+    new Map((after.orientifolds ?? []).map((plane) => [plane.id, describePlane(plane)])),
+  );
+
   return {
     fields,
+    planes,
     added,
     removed,
     changed,
     compact,
     identical:
       fields.length === 0 &&
+      planes.length === 0 &&
       added.length === 0 &&
       removed.length === 0 &&
       changed.length === 0 &&
@@ -199,8 +218,10 @@ export function diffSpectra(before: SpectrumResult, after: SpectrumResult): Spec
   const gaugeGroup =
     before.gaugeGroup === after.gaugeGroup ? null : { before: before.gaugeGroup, after: after.gaugeGroup };
   const worldvolumes = diffWorldvolumes(before, after);
+  const orientifold = diffLines(orientifoldLines(before), orientifoldLines(after));
 
   return {
+    orientifold,
     addedSectors,
     removedSectors,
     changedSectors,
@@ -215,8 +236,65 @@ export function diffSpectra(before: SpectrumResult, after: SpectrumResult): Spec
       !bps &&
       !supercharges &&
       !gaugeGroup &&
-      worldvolumes.length === 0,
+      worldvolumes.length === 0 &&
+      orientifold.length === 0,
   };
+}
+
+/**
+ * How the interaction potential of each pair at its own separation changed between two documents
+ * (computed from the documents with the engine; pairs matched by their ids).
+ *
+ * @param before - The earlier document.
+ * @param after - The later document.
+ * @returns One change per pair whose V at its separation (or whose being defined) differs, appeared or went.
+ * @example
+ * diffInteractions(d3AntiD3At10, d3AntiD3At20)[0]?.key // => "a-b"
+ */
+export function diffInteractions(before: Configuration, after: Configuration): LineChange[] {
+  const lines = (document: Configuration) =>
+    new Map(interactionCurves(document).map((curve) => [`${curve.pair[0]}-${curve.pair[1]}`, describePotential(curve)]));
+  return diffLines(lines(before), lines(after));
+}
+
+function describePotential(curve: InteractionCurve): string {
+  if (curve.undefinedReason) return `not finite (dd = ${curve.dd})`;
+  if (curve.vanishes) return "V = 0 at every separation";
+  const value = curve.atSeparation === null ? "not defined (tachyon)" : `V = ${curve.atSeparation.toPrecision(6)}`;
+  return `y = ${curve.separation.toPrecision(6)}: ${value}`;
+}
+
+function describePlane(plane: OrientifoldPlane): string {
+  const p = plane.worldvolume.length;
+  const at = Object.entries(plane.position)
+    .filter(([, value]) => value !== 0)
+    .map(([axis, value]) => `x${axis} = ${value}`)
+    .join(", ");
+  return `O${p}${plane.type.slice(1)} along ${p === 0 ? "no spatial axis" : `x${plane.worldvolume.join(", x")}`}${at ? ` at ${at}` : " through the origin"}`;
+}
+
+function orientifoldLines(result: SpectrumResult): Map<string, string> {
+  const lines = new Map<string, string>();
+  for (const image of result.orientifold?.images ?? []) {
+    const where = image.onPlane
+      ? "on the plane"
+      : Object.entries(image.position)
+          .map(([axis, value]) => `x${axis} = ${value}`)
+          .join(", ") || "at the origin";
+    lines.set(`image ${image.id}`, `${image.anti ? "antibrane" : "brane"} ${where}`);
+  }
+  for (const entry of result.orientifold?.tadpoles ?? []) lines.set(`tadpole D${entry.p}`, `${entry.status}, net ${entry.net}`);
+  return lines;
+}
+
+function diffLines(was: ReadonlyMap<string, string>, now: ReadonlyMap<string, string>): LineChange[] {
+  const changes: LineChange[] = [];
+  for (const [key, line] of now) {
+    const previous = was.get(key) ?? null;
+    if (previous !== line) changes.push({ key, before: previous, after: line });
+  }
+  for (const [key, line] of was) if (!now.has(key)) changes.push({ key, before: line, after: null });
+  return changes;
 }
 
 function diffWorldvolumes(before: SpectrumResult, after: SpectrumResult): WorldvolumeChange[] {
@@ -224,15 +302,7 @@ function diffWorldvolumes(before: SpectrumResult, after: SpectrumResult): Worldv
   const unrecorded = (result: SpectrumResult) => result.worldvolumes.length === 0 && result.sectors.length > 0;
   if (unrecorded(before) || unrecorded(after)) return [];
   const lines = (result: SpectrumResult) => new Map(result.worldvolumes.map((w) => [worldvolumeKey(w), formatWorldvolume(w)]));
-  const was = lines(before);
-  const now = lines(after);
-  const changes: WorldvolumeChange[] = [];
-  for (const [key, line] of now) {
-    const previous = was.get(key) ?? null;
-    if (previous !== line) changes.push({ key, before: previous, after: line });
-  }
-  for (const [key, line] of was) if (!now.has(key)) changes.push({ key, before: line, after: null });
-  return changes;
+  return diffLines(lines(before), lines(after));
 }
 
 function boundaryOf(stack: Stack, axis: number): Boundary {

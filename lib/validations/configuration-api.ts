@@ -42,7 +42,7 @@ export type UpdateConfigurationBody = z.infer<typeof updateConfigurationBodySche
 
 /** Query of `GET /api/configurations/[configurationId]/export`: the format, and a revision other than the current one. */
 export const exportQuerySchema = z.object({
-  format: z.enum(["json", "csv", "tex"], { error: "Choose json, csv or tex." }),
+  format: z.enum(["json", "csv", "tex", "potential"], { error: "Choose json, csv, tex or potential." }),
   revision: z.uuid({ error: "Not a valid revision id." }).optional(),
 });
 

@@ -64,3 +64,25 @@ describe("configurationSchema", () => {
     expect(configurationSchema.safeParse({ ...valid, levels: 201 }).success).toBe(false);
   });
 });
+
+describe("configurationSchema: orientifold planes (format 2)", () => {
+  const base = {
+    format: 2,
+    title: "plane",
+    theory: "IIB",
+    levels: 1,
+    stacks: [{ id: "a", count: 16, worldvolume: [1, 2, 3, 4, 5, 6, 7, 8, 9] }],
+    orientifolds: [{ id: "o", type: "O-", worldvolume: [1, 2, 3, 4, 5, 6, 7, 8, 9] }],
+  };
+  it("accepts a plane and fills its position", () => {
+    const parsed = configurationSchema.safeParse(base);
+    expect(parsed.success).toBe(true);
+    expect(parsed.data?.orientifolds?.[0]?.position).toEqual({});
+  });
+  it("reports a bad type and a format-1 document with planes at their JSON paths", () => {
+    const badType = configurationSchema.safeParse({ ...base, orientifolds: [{ ...base.orientifolds[0], type: "O" }] });
+    expect(badType.error?.issues.map((issue) => issue.path)).toContainEqual(["orientifolds", 0, "type"]);
+    const formatOne = configurationSchema.safeParse({ ...base, format: 1 });
+    expect(formatOne.error?.issues.map((issue) => issue.path)).toContainEqual(["orientifolds"]);
+  });
+});

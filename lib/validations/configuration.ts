@@ -1,10 +1,11 @@
 import { z } from "./zod";
 import { checkConfiguration } from "@/lib/boundary/check";
-import type { Configuration, Stack } from "@/lib/boundary/types";
+import type { Configuration, OrientifoldPlane, Stack } from "@/lib/boundary/types";
 import { configurationDescriptionMaxLength, configurationTitleMaxLength, stackLabelMaxLength } from "./limits";
 
 /**
- * Shapes of a configuration document (format 1 or 2, product.md "The configuration file"). The
+ * Shapes of a configuration document (format 1, and format 2 with optional `compact`, stacks'
+ * `wilson` and `orientifolds`; product.md "The configuration file"). The
  * schema checks types and text lengths; the physics rules (p parity per theory, axis ranges,
  * limits, unique ids, positions on Dirichlet axes) come from `checkConfiguration`, added as
  * issues at their JSON paths so that there is one source of truth for them.
@@ -45,6 +46,21 @@ export const stackSchema = z.object({
   wilson: wilsonSchema.optional(),
 }) satisfies z.ZodType<Stack>;
 
+/** The shape of one orientifold plane (file format 2). */
+export const orientifoldPlaneSchema = z.object({
+  id: z.string({ error: "A plane id must be text." }),
+  label: z.string({ error: "A label must be text." }).max(120, "Keep the label under 120 characters.").optional(),
+  type: z.enum(["O-", "O+"], { error: 'The plane type must be "O-" or "O+".' }),
+  worldvolume: z.array(z.number({ error: "Worldvolume axes must be numbers." }), {
+    error: "The worldvolume must be a list of axis numbers.",
+  }),
+  position: z
+    .record(z.string(), z.number({ error: "Positions must be finite numbers." }), {
+      error: 'Positions must be an object such as { "9": 0 }.',
+    })
+    .default({}),
+}) satisfies z.ZodType<OrientifoldPlane>;
+
 /**
  * The document's shape alone: types, text lengths and the file format, without the engine's
  * problems. For a caller that runs `checkConfiguration` itself (the designer's live preview checks
@@ -66,6 +82,7 @@ export const configurationShapeSchema = z.object({
     .describe("Mass cap, a whole number 0 to 200: every sector lists its states with alpha' M^2 <= levels at zero separation (N + a <= levels)."),
   stacks: z.array(stackSchema, { error: "Stacks must be a list." }),
   compact: compactSchema.optional(),
+  orientifolds: z.array(orientifoldPlaneSchema, { error: "Orientifolds must be a list of planes." }).optional(),
 });
 
 /**

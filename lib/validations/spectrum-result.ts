@@ -6,6 +6,7 @@ import type {
   LevelRow,
   LightestState,
   MasslessContent,
+  OrientifoldSummary,
   Sector,
   SectorMultiplet,
   SpectrumResult,
@@ -52,6 +53,7 @@ const levelRowSchema = z.object({
   states: z.string().nullable(),
   withChanPaton: z.string(),
   note: z.string().optional(),
+  projected: z.object({ symmetric: countText, antisymmetric: countText }).optional(),
 }) satisfies z.ZodType<LevelRow>;
 
 const compactAxisSchema = z.object({
@@ -125,6 +127,9 @@ export const storedSectorSchema = z.object({
   compactAxes: z.array(compactAxisSchema).optional(),
   tower: z.array(towerStateSchema).superRefine(checkRowTexts).optional(),
   towerTruncated: z.boolean().optional(),
+  orientifold: z
+    .object({ imageOf: z.string().nullable(), projected: z.boolean(), representation: z.string().nullable() })
+    .optional(),
 }) satisfies z.ZodType<StoredSector>;
 
 const lightestSchema = z.object({
@@ -162,6 +167,33 @@ const worldvolumeSchema = z.object({
   summary: z.string(),
 }) satisfies z.ZodType<WorldvolumeTheory>;
 
+// Engines before 1.2.0 had no orientifold planes, so a result without this part has none to lack.
+const orientifoldSummarySchema = z.object({
+  planes: z.array(z.object({ id: z.string(), type: z.enum(["O-", "O+"]), p: z.number().int(), charge: exactText })),
+  images: z.array(
+    z.object({
+      id: z.string(),
+      of: z.string(),
+      plane: z.string(),
+      anti: z.boolean(),
+      position: z.record(z.string(), z.number()),
+      onPlane: z.boolean(),
+    }),
+  ),
+  tadpoles: z.array(
+    z.object({
+      p: z.number().int(),
+      stacks: exactText,
+      planes: exactText,
+      net: exactText,
+      status: z.enum(["cancelled", "tadpole", "net charge", "projected out"]),
+      message: z.string(),
+      toCancel: z.string().nullable(),
+    }),
+  ),
+  notes: z.array(z.string()),
+}) satisfies z.ZodType<OrientifoldSummary>;
+
 /** Result fields a result of an older engine may lack. */
 type UpgradedResultField = "warnings" | "conventions" | "worldvolumes";
 
@@ -182,6 +214,7 @@ export const storedResultShape = z.object({
   sectors: z.array(storedSectorSchema),
   lightest: z.array(lightestSchema).superRefine(checkRowTexts),
   conventions: z.string().optional(),
+  orientifold: orientifoldSummarySchema.optional(),
 }) satisfies z.ZodType<StoredSpectrumResult>;
 
 /**

@@ -19,7 +19,7 @@ import { getResultForRevision } from "@/db/queries/result-reads";
 import { getRevisionByNumber, listRevisions } from "@/db/queries/revisions";
 import { NotFoundError } from "@/lib/errors";
 import { formatDateTime } from "@/lib/format-date";
-import { bothSidesStacks, diffConfigurations, diffSpectra } from "@/lib/revisions/diff";
+import { bothSidesStacks, diffConfigurations, diffInteractions, diffSpectra } from "@/lib/revisions/diff";
 import { requireUser } from "@/lib/server/session";
 
 export const metadata: Metadata = { title: "History" };
@@ -190,5 +190,6 @@ async function compare(
     stacks: bothSidesStacks(before.document, after.document),
     configurationDiff: diffConfigurations(before.document, after.document),
     spectrumDiff: beforeResult && afterResult ? diffSpectra(beforeResult.result, afterResult.result) : null,
+    potentialChanges: diffInteractions(before.document, after.document),
   };
 }

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { getResultHead } from "@/db/queries/result-reads";
-import { listRevisions } from "@/db/queries/revisions";
+import { getRevisionOfConfiguration, listRevisions } from "@/db/queries/revisions";
 import { ConfigurationCollaboration } from "@/components/collaboration/configuration-collaboration";
 import { ResultsView } from "@/components/results/results-view";
 import { EmptyState } from "@/components/ui/empty-state";
@@ -37,7 +37,10 @@ export default async function ConfigurationResultsPage({ params, searchParams }:
     );
   }
   // The head only: further sectors and each sector's levels load on demand.
-  const result = await getResultHead(user, configurationId, revision.id);
+  const [result, revisionDocument] = await Promise.all([
+    getResultHead(user, configurationId, revision.id),
+    getRevisionOfConfiguration(user, configurationId, revision.id),
+  ]);
   return (
     <>
       <ResultsView
@@ -47,6 +50,7 @@ export default async function ConfigurationResultsPage({ params, searchParams }:
         revision={toJson(revision)}
         initialResult={toJson(result)}
         writableGroups={writableGroups}
+        document={revisionDocument.document}
       />
       <div className="mx-auto w-full max-w-7xl px-4 pb-10 sm:px-6">
         <ConfigurationCollaboration

@@ -1,0 +1,137 @@
+/**
+ * The interaction potential V(y) of every pair of distinct stacks (and of stacks with images) of a
+ * configuration, sampled for plots and exports. Computed on demand from the pure engine, not
+ * stored with results: a curve depends only on the pair's shape (nu, nn, orientations), so pairs of
+ * one shape share one set of samples.
+ *
+ * Conventions (see `annulus.ts`): V per unit (p+1)-volume of the common worldvolume, alpha' = 1,
+ * V < 0 attractive; N_a N_b Chan-Paton labels of the covering space (2N for a stack on an
+ * orientifold plane), both orientations of the string. The samples run over y from y_c (or 1 when
+ * there is no tachyon) to 12 string lengths beyond it; the value at the pair's own separation is
+ * given separately.
+ *
+ * Invalid-input policy: expects a configuration that `checkConfiguration` passes.
+ */
+
+import { createAnnulusCache, type AnnulusShape } from "./annulus";
+import { compareStackIds, dimensionOf } from "./check";
+import { classifyPair } from "./classify";
+import { stacksUnderPlane, type StackUnderPlane } from "./orientifold";
+import type { Configuration, Stack } from "./types";
+
+/** How many samples each curve holds. */
+export const interactionSampleCount = 200;
+/** Sampled length beyond the start of a curve, in units of sqrt(alpha'). */
+const sampledSpan = 12;
+
+/** One pair's V(y). */
+export interface InteractionCurve {
+  pair: [string, string];
+  nu: number;
+  nn: number;
+  /** Common Dirichlet axes: V falls as y^-(dd-2) at large y when the pair is not supersymmetric. */
+  dd: number;
+  sameOrientation: boolean;
+  /** Chan-Paton labels N_a N_b multiplying the per-label potential. */
+  labels: number;
+  /** The pair's actual separation. */
+  separation: number;
+  criticalSeparation: number | null;
+  /** V at the actual separation; null below y_c, at y = 0 with a massless exchange, or when undefined. */
+  atSeparation: number | null;
+  /** True when V = 0 at every separation (supersymmetric: nu = 0 same orientation, nu = 4). */
+  vanishes: boolean;
+  /** Why there is no finite V(y), or null. */
+  undefinedReason: string | null;
+  /** (y, V) samples; empty when undefined. */
+  samples: { y: number; v: number }[];
+}
+
+/**
+ * V(y) for every pair of different stacks of a configuration, and (with an orientifold plane) of
+ * every stack with the image of a stack off the plane, that share a Dirichlet axis: the pairs of the
+ * engine's sectors, in the same order (pairs in id order, then stacks with images).
+ *
+ * @param configuration - A configuration that `checkConfiguration` passes (type II; the bosonic
+ *   theory yields [] because its closed-string tachyon makes the annulus diverge).
+ * @returns One curve per separable pair.
+ * @example
+ * interactionCurves(d3AntiD3)[0]?.criticalSeparation // => 4.442882938158366
+ */
+export function interactionCurves(configuration: Configuration): InteractionCurve[] {
+  if (configuration.theory === "bosonic") return [];
+  const dimension = dimensionOf(configuration);
+  const stacks = [...configuration.stacks].sort(compareStackIds);
+  const plane = configuration.orientifolds?.[0];
+  const entries = plane ? stacksUnderPlane(stacks, plane, configuration.theory, dimension) : null;
+  const ends = stacks.map((stack, index) => ({ stack, labels: stack.count * (entries?.[index]?.fixed ? 2 : 1) }));
+  const pairs: { a: Stack; b: Stack; labels: number }[] = [];
+  for (let i = 0; i < ends.length; i += 1) {
+    for (let j = i + 1; j < ends.length; j += 1) {
+      const a = ends[i] as (typeof ends)[number];
+      const b = ends[j] as (typeof ends)[number];
+      pairs.push({ a: a.stack, b: b.stack, labels: a.labels * b.labels });
+    }
+  }
+  if (entries) {
+    for (let i = 0; i < entries.length; i += 1) {
+      for (let j = i; j < entries.length; j += 1) {
+        const a = entries[i] as StackUnderPlane;
+        const image = (entries[j] as StackUnderPlane).image;
+        if (!a.fixed && image) pairs.push({ a: a.stack, b: image, labels: a.stack.count * image.count });
+      }
+    }
+  }
+  const curveOf = createAnnulusCache();
+  const samplesMemo = new Map<string, { y: number; v: number }[]>();
+  const curves: InteractionCurve[] = [];
+  for (const { a, b, labels } of pairs) {
+    const classification = classifyPair(a, b, dimension);
+    if (classification.dd === 0) continue;
+    const shape: AnnulusShape = { nu: classification.nu, nn: classification.nn, sameOrientation: a.anti === b.anti };
+    const curve = curveOf(shape);
+    const key = `${shape.nu}|${shape.nn}|${shape.sameOrientation}`;
+    let perLabel = samplesMemo.get(key);
+    if (!perLabel) {
+      perLabel = [];
+      if (curve.undefinedReason === null) {
+        const start = curve.criticalSeparation ?? 1;
+        for (let k = 0; k < interactionSampleCount; k += 1) {
+          const y = start + (sampledSpan * k) / (interactionSampleCount - 1);
+          const v = curve.potential(y);
+          if (v !== null) perLabel.push({ y, v });
+        }
+      }
+      samplesMemo.set(key, perLabel);
+    }
+    const own = curve.potential(classification.separation);
+    curves.push({
+      pair: [a.id, b.id],
+      nu: shape.nu,
+      nn: shape.nn,
+      dd: classification.dd,
+      sameOrientation: shape.sameOrientation,
+      labels,
+      separation: classification.separation,
+      criticalSeparation: curve.criticalSeparation,
+      atSeparation: own === null ? null : own * labels,
+      vanishes: curve.vanishes,
+      undefinedReason: curve.undefinedReason,
+      samples: perLabel.map(({ y, v }) => ({ y, v: v * labels })),
+    });
+  }
+  return curves;
+}
+
+/**
+ * The sign conventions of V(y), for the interface and exports.
+ *
+ * @example
+ * INTERACTION_CONVENTIONS.includes("V < 0") // => true
+ */
+export const INTERACTION_CONVENTIONS =
+  "V(y) = -(1/2) N_a N_b integral dt/t (8 pi^2 t)^(-(p+1)/2) exp(-t y^2 / 2 pi) Z(t), the one-loop annulus between the two stacks, " +
+  "with Z the GSO-projected open-string trace of (-1)^(spacetime fermion number) q^(N + a), q = e^(-2 pi t), over both orientations; " +
+  "p + 1 counts the common worldvolume directions. Energy per unit worldvolume in string units (alpha' = 1): V < 0 attracts, V > 0 repels. " +
+  "Below the critical separation y_c the open-string tachyon makes the integral diverge (an instability, not a potential). " +
+  "Interactions with an orientifold plane itself (the Moebius strip) are not included. Evaluated numerically (closed and open channels, trapezoidal rule in ln t).";
