@@ -41,6 +41,15 @@ export function checkOrientifolds(config: Configuration, dimension: number, prob
       message: `At most ${maxOrientifolds} orientifold plane is supported: two reflections would generate an endless lattice of images on non-compact axes.`,
     });
   }
+  // A plane transverse to a circle comes with a second fixed plane at pi R, and images reverse
+  // Wilson lines: neither is modelled, so the two features are not combined rather than combined wrongly.
+  const compactAxes = Object.keys(config.compact ?? {});
+  if (planes.length > 0 && compactAxes.length > 0) {
+    problems.push({
+      path: ["orientifolds"],
+      message: `Orientifold planes are computed on non-compact axes only; this configuration makes x${compactAxes.join(", x")} compact. Remove the plane or the compact axes.`,
+    });
+  }
   const stackIds = new Set(config.stacks.map((stack) => stack.id));
   const seen = new Set<string>();
   planes.forEach((plane, index) => {

@@ -152,6 +152,13 @@ describe("orientifold: charges and validation", () => {
     expect(checkConfiguration({ ...base, orientifolds: [{ ...plane("O-", axes(1)), type: "O" as "O-" }] })[0]?.path).toEqual(["orientifolds", 0, "type"]);
     expect(checkConfiguration({ ...base, orientifolds: [plane("O-", axes(1), { "1": 2 })] })[0]?.path).toEqual(["orientifolds", 0, "position", "1"]);
   });
+  it("refuses a plane together with compact axes (a second fixed plane and reversed Wilson lines are not modelled)", () => {
+    const base = config("IIB", [stack("d3", 1, axes(1, 2, 3))], [plane("O-", axes(1, 2, 3))]);
+    expect(checkConfiguration(base)).toEqual([]);
+    const problems = checkConfiguration({ ...base, compact: { "9": 2 } });
+    expect(problems.map((p) => p.path)).toEqual([["orientifolds"]]);
+    expect(problems[0]?.message).toContain("x9");
+  });
   it("a plane preserves the supersymmetry of a brane along it: D3 on an O3 keeps 16 supercharges", () => {
     expect(computeSpectrum(config("IIB", [stack("d3", 1, axes(1, 2, 3))], [plane("O-", axes(1, 2, 3))])).supercharges).toBe(16);
   });
