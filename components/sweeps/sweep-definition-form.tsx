@@ -7,12 +7,12 @@ import { Button } from "@/components/ui/button";
 import { Input } from "@/components/ui/input";
 import { Label } from "@/components/ui/label";
 import { Select } from "@/components/ui/select";
-import { dimensionOf } from "@/lib/boundary";
+import { compactLimits, dimensionOf } from "@/lib/boundary";
 import type { Configuration } from "@/lib/boundary/types";
 import { ApiError } from "@/lib/client/api-client";
 import { useStartSweep, type SuggestedSweepJson } from "@/lib/client/sweeps";
 import { checkSweepDefinition, formatPointCount, sweepLimits, sweepPointCount, type SweepDimensionKind, type SweepProblem } from "@/lib/sweeps";
-import { draftToDefinition, newDimensionDraft, toDimensionDraft, type DimensionDraft, type ValuesDraft } from "@/lib/sweeps/form-draft";
+import { draftToDefinition, firstValues, newDimensionDraft, toDimensionDraft, type DimensionDraft, type ValuesDraft } from "@/lib/sweeps/form-draft";
 import { formatJsonPath } from "@/lib/errors";
 
 export interface SweepDefinitionFormProps {
@@ -29,6 +29,7 @@ const kindLabels: Record<SweepDimensionKind, string> = {
   boundary: "N/D choice on axes",
   count: "Count N",
   orientation: "Brane / antibrane",
+  radius: "Compact radius R",
 };
 
 /** Defines a sweep of the saved revision dimension by dimension, shows its point count, and starts it. */
@@ -143,7 +144,7 @@ export function SweepDefinitionForm({ configurationId, base, isStarter, suggeste
         ) : (
           <>
             <strong className="font-semibold">{formatPointCount(count)}</strong> {count === 1n ? "point" : "points"} (at most {formatPointCount(sweepLimits.maxPoints)}). Each
-            point is the saved revision with these values; α′ = 1, positions in units of √α′.
+            point is the saved revision with these values; α′ = 1, positions and radii in units of √α′.
           </>
         )}
       </p>
@@ -200,6 +201,18 @@ function DimensionEditor({ index, draft, base, onChange, problems }: DimensionEd
       </Select>
     </div>
   );
+  const axisSelect = (label: string, axis: number, onAxis: (next: number) => void) => (
+    <div className="grid gap-1.5">
+      <Label htmlFor={`${id}-axis`}>{label}</Label>
+      <Select id={`${id}-axis`} value={String(axis)} onChange={(event) => onAxis(Number(event.target.value))} className="w-24">
+        {axes.map((item) => (
+          <option key={item} value={item}>
+            x{item}
+          </option>
+        ))}
+      </Select>
+    </div>
+  );
   const own = errorAt();
 
   let body;
@@ -208,16 +221,7 @@ function DimensionEditor({ index, draft, base, onChange, problems }: DimensionEd
       body = (
         <div className="flex flex-wrap items-end gap-3">
           {stackSelect(draft.stack, (stack) => onChange({ ...draft, stack }))}
-          <div className="grid gap-1.5">
-            <Label htmlFor={`${id}-axis`}>Axis</Label>
-            <Select id={`${id}-axis`} value={String(draft.axis)} onChange={(event) => onChange({ ...draft, axis: Number(event.target.value) })} className="w-24">
-              {axes.map((axis) => (
-                <option key={axis} value={axis}>
-                  x{axis}
-                </option>
-              ))}
-            </Select>
-          </div>
+          {axisSelect("Axis", draft.axis, (axis) => onChange({ ...draft, axis }))}
           <ValuesEditor id={id} values={draft.values} onChange={(values) => onChange({ ...draft, values })} unit="√α′" />
         </div>
       );
@@ -238,6 +242,25 @@ function DimensionEditor({ index, draft, base, onChange, problems }: DimensionEd
         </div>
       );
       break;
+    case "radius": {
+      const current = base.compact?.[String(draft.axis)];
+      body = (
+        <div className="grid gap-2">
+          <div className="flex flex-wrap items-end gap-3">
+            {axisSelect("Compact axis", draft.axis, (axis) => onChange({ ...draft, axis }))}
+            <ValuesEditor id={id} values={draft.values} onChange={(values) => onChange({ ...draft, values })} unit="√α′" fresh={firstValues.radius} />
+          </div>
+          <p className="text-xs text-muted-foreground">
+            {current === undefined
+              ? `x${draft.axis} is not compact in the saved revision: each point puts it on a circle of radius R (file format 2).`
+              : `x${draft.axis} is a circle of radius ${current} in the saved revision; each point replaces that radius.`}{" "}
+            Radii from {compactLimits.minRadius} to {compactLimits.maxRadius}.
+            {(base.orientifolds?.length ?? 0) > 0 ? " This configuration has an orientifold plane, which the engine does not combine with compact axes: every point will be invalid." : ""}
+          </p>
+        </div>
+      );
+      break;
+    }
     case "boundary":
       body = (
         <div className="grid gap-3">
@@ -312,7 +335,15 @@ function DimensionEditor({ index, draft, base, onChange, problems }: DimensionEd
   );
 }
 
-function ValuesEditor({ id, values, onChange, unit }: { id: string; values: ValuesDraft; onChange: (values: ValuesDraft) => void; unit: string }) {
+interface ValuesEditorProps {
+  id: string;
+  values: ValuesDraft;
+  onChange: (values: ValuesDraft) => void;
+  unit: string;
+  fresh?: { list: ValuesDraft; range: ValuesDraft };
+}
+
+function ValuesEditor({ id, values, onChange, unit, fresh = firstValues.position }: ValuesEditorProps) {
   return (
     <>
       <div className="grid gap-1.5">
@@ -320,7 +351,7 @@ function ValuesEditor({ id, values, onChange, unit }: { id: string; values: Valu
         <Select
           id={`${id}-mode`}
           value={values.mode}
-          onChange={(event) => onChange(event.target.value === "list" ? { mode: "list", text: "0, 1, 2" } : { mode: "range", from: "0", to: "5", steps: "11" })}
+          onChange={(event) => onChange(event.target.value === "list" ? fresh.list : fresh.range)}
           className="w-32"
         >
           <option value="range">Range</option>

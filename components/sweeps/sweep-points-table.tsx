@@ -17,7 +17,7 @@ import { Input } from "@/components/ui/input";
 import { Label } from "@/components/ui/label";
 import { Select } from "@/components/ui/select";
 import { compareStateCounts, formatMassSquared } from "@/lib/spectrum";
-import { dimensionLabel, formatPointCount, type PointVerdict, type SweepDefinition, type SweepPointRow } from "@/lib/sweeps";
+import { dimensionLabel, formatPointCount, isNumericDimension, type PointVerdict, type SweepDefinition, type SweepPointRow } from "@/lib/sweeps";
 import { cn } from "@/lib/utils";
 import { verdictLabels, verdictTextClass } from "./verdict-style";
 
@@ -56,7 +56,7 @@ export function SweepPointsTable({ definition, rows, totalPoints, selected, onSe
         (dimension, d): ColumnDef<SweepPointRow> => ({
           id: `dimension-${d}`,
           header: dimensionLabel(dimension),
-          accessorFn: (row) => (dimension.kind === "position" || dimension.kind === "count" ? Number(row.labels[d]) : (row.labels[d] ?? "")),
+          accessorFn: (row) => (isNumericDimension(dimension) ? Number(row.labels[d]) : (row.labels[d] ?? "")),
           cell: ({ row }) => row.original.labels[d],
         }),
       ),

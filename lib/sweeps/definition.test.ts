@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { checkSweepDefinition, formatPointCount, sweepLimits, sweepPointCount } from "./definition";
-import { braneAntibraneAtOrigin as base, twoThreeBranes } from "./test-configurations";
+import { braneAntibraneAtOrigin as base, stringAlongNine, twoThreeBranes } from "./test-configurations";
 import type { SweepDefinition } from "./types";
 
 const separation: SweepDefinition["dimensions"][number] = { kind: "position", stack: "b", axis: 9, values: { kind: "range", from: 0, to: 8, steps: 9 } };
@@ -79,7 +79,38 @@ describe("checkSweepDefinition", () => {
     expect(checkSweepDefinition(bosonic, { format: 1, dimensions: [{ kind: "orientation", stack: "a" }] })[0]?.path).toEqual(["dimensions", 0, "kind"]);
   });
 
+  it("checks radius dimensions: a spatial axis, radii within the engine's limits, one dimension per axis", () => {
+    // The engine takes radii from compactLimits.minRadius = 0.001 to 1000 (lib/boundary/compact.ts).
+    const problems = checkSweepDefinition(stringAlongNine, {
+      format: 1,
+      dimensions: [
+        { kind: "radius", axis: 9, values: { kind: "list", values: [1, 0, -2] } },
+        { kind: "radius", axis: 10, values: { kind: "list", values: [1] } },
+        { kind: "radius", axis: 8, values: { kind: "range", from: 0, to: 2, steps: 5 } },
+        { kind: "radius", axis: 9, values: { kind: "list", values: [2] } },
+      ],
+    });
+    expect(problems).toEqual([
+      { path: ["dimensions", 0, "values", "values", 1], message: "Radii must be numbers from 0.001 to 1000, got 0" },
+      { path: ["dimensions", 1, "axis"], message: "Axis 10 is not a spatial axis 1..9" },
+      { path: ["dimensions", 2, "values", "from"], message: "Radii must be numbers from 0.001 to 1000, got 0" },
+      { path: ["dimensions", 3, "axis"], message: "The radius of x9 is already swept by dimension 1" },
+    ]);
+    expect(checkSweepDefinition(stringAlongNine, { format: 1, dimensions: [{ kind: "radius", axis: 9, values: { kind: "list", values: [0.5, 1, 2] } }] })).toEqual([]);
+    expect(sweepPointCount({ format: 1, dimensions: [{ kind: "radius", axis: 9, values: { kind: "range", from: 0.5, to: 2, steps: 7 } }] })).toBe(7n);
+  });
+
   describe("edge cases", () => {
+    it("refuses a negative or non-finite radius at its path", () => {
+      const problems = checkSweepDefinition(stringAlongNine, {
+        format: 1,
+        dimensions: [{ kind: "radius", axis: 9, values: { kind: "range", from: 1, to: -1, steps: 3 } }],
+      });
+      expect(problems).toEqual([{ path: ["dimensions", 0, "values", "to"], message: "Radii must be numbers from 0.001 to 1000, got -1" }]);
+      const infinite = checkSweepDefinition(stringAlongNine, { format: 1, dimensions: [{ kind: "radius", axis: 9, values: { kind: "list", values: [Infinity] } }] });
+      expect(infinite.map((problem) => problem.path)).toEqual([["dimensions", 0, "values", "values", 0]]);
+    });
+
     it("asks for at least one dimension and at most the limit", () => {
       expect(checkSweepDefinition(base, { format: 1, dimensions: [] })).toEqual([{ path: ["dimensions"], message: "Add at least one dimension to sweep over" }]);
       const many = Array.from({ length: sweepLimits.maxDimensions + 1 }, (_u, i) => ({ kind: "position" as const, stack: "a", axis: i + 1, values: { kind: "list" as const, values: [0] } }));

@@ -6,7 +6,7 @@
  * one beside its field. A sweep with more than `sweepLimits.maxPoints` points is a problem too,
  * reported before anything is stored or queued.
  */
-import { configurationLimits, dimensionOf } from "../boundary";
+import { compactLimits, configurationLimits, dimensionOf } from "../boundary";
 import type { Configuration } from "../boundary/types";
 import { dimensionSize, valueAt, valuesLength } from "./dimension";
 import type { SweepDefinition, SweepValues } from "./types";
@@ -128,6 +128,13 @@ export function checkSweepDefinition(base: Configuration, definition: SweepDefin
           problems.push({ path: at("kind"), message: "The bosonic string has no RR charge, so brane and antibrane give the same spectrum" });
         }
         if (ok) claim(`orientation:${dim.stack}`, `Brane/antibrane of "${dim.stack}"`, index, at("stack"));
+        break;
+      }
+      case "radius": {
+        const ok = checkAxis(dim.axis, at("axis"));
+        // The engine's own limits, so that no point is refused for its radius alone.
+        checkValues(dim.values, at("values"), problems, { integer: false, min: compactLimits.minRadius, max: compactLimits.maxRadius, what: "Radii" });
+        if (ok) claim(`radius:${dim.axis}`, `The radius of x${dim.axis}`, index, at("axis"));
         break;
       }
     }

@@ -25,6 +25,7 @@ export function dimensionSize(dimension: SweepDimension): bigint {
     }
     case "position":
     case "count":
+    case "radius":
       return BigInt(valuesLength(dimension.values));
     case "orientation":
       return 2n;
@@ -82,6 +83,8 @@ export function dimensionValue(dimension: SweepDimension, index: number): Dimens
       return { kind: "position", value: valueAt(dimension.values, index) };
     case "count":
       return { kind: "count", value: valueAt(dimension.values, index) };
+    case "radius":
+      return { kind: "radius", value: valueAt(dimension.values, index) };
     case "orientation":
       if (index !== 0 && index !== 1) throw new RangeError(`Orientation ${index} is outside 0..1`);
       return { kind: "orientation", anti: index === 1 };
@@ -99,6 +102,7 @@ export function isNeumannAt(value: Extract<DimensionValue, { kind: "boundary" }>
  * @example
  * dimensionLabel({ kind: "position", stack: "probe", axis: 8, values }) // => "probe x8"
  * dimensionLabel({ kind: "boundary", stacks: ["a", "b"], axes: [4, 5], symmetry: "all" }) // => "N/D of a, b on x4 x5"
+ * dimensionLabel({ kind: "radius", axis: 9, values }) // => "R9"
  */
 export function dimensionLabel(dimension: SweepDimension): string {
   switch (dimension.kind) {
@@ -110,6 +114,8 @@ export function dimensionLabel(dimension: SweepDimension): string {
       return `${dimension.stack} count N`;
     case "orientation":
       return `${dimension.stack} brane/antibrane`;
+    case "radius":
+      return `R${dimension.axis}`;
   }
 }
 
@@ -126,11 +132,25 @@ export function formatDimensionValue(dimension: SweepDimension, value: Dimension
       .join(" · ");
   }
   if (value.kind === "orientation") return value.anti ? "antibrane" : "brane";
-  if (value.kind === "position" || value.kind === "count") return String(value.value);
-  return "";
+  const number = numericValue(value);
+  return number === null ? "" : String(number);
 }
 
+/** The kinds of dimension whose values are numbers. */
+export type NumericDimension = Extract<SweepDimension, { kind: "position" | "count" | "radius" }>;
+
 /** True for a dimension whose values are numbers (a plot axis can be continuous). */
-export function isNumericDimension(dimension: SweepDimension): dimension is Extract<SweepDimension, { kind: "position" | "count" }> {
-  return dimension.kind === "position" || dimension.kind === "count";
+export function isNumericDimension(dimension: SweepDimension): dimension is NumericDimension {
+  return dimension.kind === "position" || dimension.kind === "count" || dimension.kind === "radius";
+}
+
+/**
+ * The number a numeric dimension's value stands for, or null for a boundary choice or orientation.
+ *
+ * @example
+ * numericValue({ kind: "radius", value: 2.5 }) // => 2.5
+ * numericValue({ kind: "orientation", anti: true }) // => null
+ */
+export function numericValue(value: DimensionValue): number | null {
+  return value.kind === "position" || value.kind === "count" || value.kind === "radius" ? value.value : null;
 }

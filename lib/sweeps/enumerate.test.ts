@@ -1,9 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { checkConfiguration } from "../boundary";
-import { dimensionValue, formatDimensionValue, valueAt } from "./dimension";
+import { dimensionLabel, dimensionValue, formatDimensionValue, isNumericDimension, valueAt } from "./dimension";
 import { sweepPointCount } from "./definition";
 import { pointDigits, pointDocument, pointNumbering, pointValues } from "./enumerate";
-import { braneAntibraneAtOrigin as base, twoThreeBranes } from "./test-configurations";
+import { braneAntibraneAtOrigin as base, stringAlongNine, twoThreeBranes } from "./test-configurations";
 import type { SweepDefinition, SweepDimension } from "./types";
 
 /** The N/D table of the chosen stacks on the chosen axes, one string of N/D per axis (a column). */
@@ -119,6 +119,43 @@ describe("pointDocument", () => {
     ]);
     expect(checkConfiguration(document)).toEqual([]);
     expect(JSON.stringify(base)).toBe(before);
+  });
+});
+
+describe("pointDocument with a radius dimension", () => {
+  const radii: SweepDefinition = { format: 1, dimensions: [{ kind: "radius", axis: 9, values: { kind: "range", from: 0.5, to: 2, steps: 4 } }] };
+
+  it("puts a non-compact axis of a format 1 base on a circle, making the document format 2", () => {
+    const before = JSON.stringify(stringAlongNine);
+    const documents = [0, 1, 2, 3].map((i) => pointDocument(stringAlongNine, radii, i));
+    expect(documents.map((document) => [document.format, document.compact])).toEqual([
+      [2, { "9": 0.5 }],
+      [2, { "9": 1 }],
+      [2, { "9": 1.5 }],
+      [2, { "9": 2 }],
+    ]);
+    for (const document of documents) expect(checkConfiguration(document)).toEqual([]);
+    expect(JSON.stringify(stringAlongNine)).toBe(before);
+  });
+
+  it("replaces the swept radius and keeps the base's other circles", () => {
+    const base2 = { ...stringAlongNine, format: 2 as const, compact: { "8": 3, "9": 7 } };
+    expect(pointDocument(base2, radii, 1).compact).toEqual({ "8": 3, "9": 1 });
+    expect(base2.compact).toEqual({ "8": 3, "9": 7 });
+  });
+
+  it("leaves the format and circles alone without a radius dimension", () => {
+    const definition: SweepDefinition = { format: 1, dimensions: [{ kind: "orientation", stack: "w" }] };
+    const document = pointDocument(stringAlongNine, definition, 1);
+    expect(document.format).toBe(1);
+    expect(document.compact).toBeUndefined();
+  });
+
+  it("labels the dimension and its values as numbers", () => {
+    const dimension = radii.dimensions[0] as SweepDimension;
+    expect(dimensionLabel(dimension)).toBe("R9");
+    expect(isNumericDimension(dimension)).toBe(true);
+    expect(formatDimensionValue(dimension, dimensionValue(dimension, 2))).toBe("1.5");
   });
 });
 

@@ -63,6 +63,7 @@ export function pointNumbering(definition: SweepDefinition): { total: number; di
 /**
  * The configuration at a point: the base with every dimension's value applied. A Neumann axis
  * loses its position; a Dirichlet axis keeps the base position unless a position dimension sets it.
+ * A radius dimension makes the document format 2 with its axis compact at that radius.
  *
  * @example
  * pointDocument(base, { format: 1, dimensions: [{ kind: "count", stack: "a", values: { kind: "list", values: [3] } }] }, 0).stacks[0].count // => 3
@@ -95,9 +96,14 @@ export function applyValues(base: Configuration, definition: SweepDefinition, va
       stack.worldvolume = [...neumann].sort((x, y) => x - y);
     });
   });
+  let compact = base.compact;
   definition.dimensions.forEach((dimension, d) => {
     const value = values[d];
-    if (!value || dimension.kind === "boundary") return;
+    if (dimension.kind === "radius" && value?.kind === "radius") compact = { ...compact, [String(dimension.axis)]: value.value };
+  });
+  definition.dimensions.forEach((dimension, d) => {
+    const value = values[d];
+    if (!value || dimension.kind === "boundary" || dimension.kind === "radius") return;
     const stack = stacks.get(dimension.stack);
     if (!stack) return;
     if (dimension.kind === "position" && value.kind === "position") {
@@ -108,5 +114,6 @@ export function applyValues(base: Configuration, definition: SweepDefinition, va
       stack.anti = value.anti;
     }
   });
-  return { ...base, stacks: base.stacks.map((stack) => stacks.get(stack.id) ?? stack) };
+  const document: Configuration = { ...base, stacks: base.stacks.map((stack) => stacks.get(stack.id) ?? stack) };
+  return compact === base.compact ? document : { ...document, format: 2, compact };
 }

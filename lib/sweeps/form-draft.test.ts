@@ -1,12 +1,12 @@
 import { describe, expect, it } from "vitest";
 import { checkSweepDefinition } from "./definition";
-import { draftToDefinition, newDimensionDraft, toDimensionDraft } from "./form-draft";
+import { draftToDefinition, firstValues, newDimensionDraft, toDimensionDraft } from "./form-draft";
 import { braneAntibraneAtOrigin as base } from "./test-configurations";
 import type { SweepDimension } from "./types";
 
 describe("newDimensionDraft", () => {
   it("starts every kind with a definition the configuration accepts", () => {
-    for (const kind of ["position", "count", "orientation", "boundary"] as const) {
+    for (const kind of ["position", "count", "orientation", "boundary", "radius"] as const) {
       const { definition, problems } = draftToDefinition([newDimensionDraft(base, kind)]);
       expect(problems).toEqual([]);
       expect(checkSweepDefinition(base, definition)).toEqual([]);
@@ -15,6 +15,15 @@ describe("newDimensionDraft", () => {
 
   it("moves the last stack along its last Dirichlet axis", () => {
     expect(newDimensionDraft(base, "position")).toMatchObject({ stack: "b", axis: 9 });
+  });
+
+  it("sweeps the radius of the base's first compact axis, else the last axis, with positive radii", () => {
+    expect(newDimensionDraft(base, "radius")).toEqual({ kind: "radius", axis: 9, values: firstValues.radius.range });
+    expect(newDimensionDraft({ ...base, format: 2, compact: { "7": 2, "5": 1 } }, "radius")).toMatchObject({ axis: 5 });
+    for (const mode of ["list", "range"] as const) {
+      const { definition } = draftToDefinition([{ kind: "radius", axis: 9, values: firstValues.radius[mode] }]);
+      expect(checkSweepDefinition(base, definition)).toEqual([]);
+    }
   });
 });
 
@@ -43,6 +52,7 @@ describe("draftToDefinition", () => {
       { kind: "position", stack: "b", axis: 9, values: { kind: "list", values: [0, 1.5] } },
       { kind: "count", stack: "a", values: { kind: "range", from: 1, to: 4, steps: 4 } },
       { kind: "orientation", stack: "b" },
+      { kind: "radius", axis: 8, values: { kind: "range", from: 0.5, to: 2, steps: 4 } },
     ];
     expect(draftToDefinition(dimensions.map(toDimensionDraft)).definition.dimensions).toEqual(dimensions);
   });

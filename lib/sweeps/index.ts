@@ -1,7 +1,7 @@
 /**
  * Sweeps: a saved configuration varied along dimensions (N/D choices, positions, counts,
- * brane/antibrane), each combination one point. Pure TypeScript on top of lib/boundary and
- * lib/spectrum: the browser, the app and the workers share the same definitions and numbering.
+ * brane/antibrane, compact radii), each combination one point. Pure TypeScript on top of
+ * lib/boundary and lib/spectrum: the browser, the app and the workers share the same definitions and numbering.
  */
 export type * from "./types";
 export { binomial, multisetCount, rankMultiset, unrankMultiset } from "./combinatorics";
@@ -12,8 +12,10 @@ export {
   formatDimensionValue,
   isNeumannAt,
   isNumericDimension,
+  numericValue,
   valueAt,
   valuesLength,
+  type NumericDimension,
 } from "./dimension";
 export { checkSweepDefinition, formatPointCount, sweepLimits, sweepPointCount, type SweepProblem } from "./definition";
 export { applyValues, pointDigits, pointDocument, pointNumbering, pointValues } from "./enumerate";
@@ -30,5 +32,5 @@ export {
 } from "./point-rows";
 export { sweepCsvColumns, sweepExportConventions, sweepToCsv, sweepToJson } from "./export";
 export { massPlotAxes, massPlotPoints, verdictMap, type MassPlotAxis, type MassPlotPoint, type VerdictCell, type VerdictMap } from "./plot-data";
-export { draftToDefinition, newDimensionDraft, toDimensionDraft, type DimensionDraft, type ValuesDraft } from "./form-draft";
+export { draftToDefinition, firstValues, newDimensionDraft, toDimensionDraft, type DimensionDraft, type ValuesDraft } from "./form-draft";
 export { formatDuration, formatRate } from "./format";

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { computeSweepPoint } from "./point-summary";
 import { toPointColumns, toPointRows } from "./point-rows";
 import { massPlotAxes, massPlotPoints, verdictMap } from "./plot-data";
-import { braneAntibraneAtOrigin as base } from "./test-configurations";
+import { braneAntibraneAtOrigin as base, stringAlongNine } from "./test-configurations";
 import type { SweepDefinition } from "./types";
 
 const definition: SweepDefinition = {
@@ -34,6 +34,20 @@ describe("massPlotPoints", () => {
 
   it("reads a numeric dimension's own value", () => {
     expect(massPlotPoints(base, definition, rows, { kind: "dimension", dimension: 0 }).map((point) => point.x)).toEqual([0, 0, 0, 0, 3, 3, 3, 3, 6, 6, 6, 6]);
+  });
+});
+
+describe("the mass plot over a radius", () => {
+  it("offers the radius as an axis and puts each point at its radius", () => {
+    const radii: SweepDefinition = { format: 1, dimensions: [{ kind: "radius", axis: 9, values: { kind: "list", values: [0.5, 1, 2] } }] };
+    const radiusRows = toPointRows(radii, toPointColumns([0, 1, 2].map((index) => ({ index, ...computeSweepPoint(stringAlongNine, radii, index) }))));
+    expect(massPlotAxes(stringAlongNine, radii)).toEqual([{ axis: { kind: "dimension", dimension: 0 }, label: "R9" }]);
+    // The massless n = 0 states of the wrapped D1 are the lightest at every radius (common practice).
+    expect(massPlotPoints(stringAlongNine, radii, radiusRows, { kind: "dimension", dimension: 0 }).map((point) => [point.x, point.y])).toEqual([
+      [0.5, 0],
+      [1, 0],
+      [2, 0],
+    ]);
   });
 });
 

@@ -7,7 +7,7 @@
  */
 import { classifyPair, dimensionOf } from "../boundary";
 import type { Configuration } from "../boundary/types";
-import { dimensionLabel, dimensionSize, formatDimensionValue, dimensionValue, isNumericDimension } from "./dimension";
+import { dimensionLabel, dimensionSize, formatDimensionValue, dimensionValue, isNumericDimension, numericValue } from "./dimension";
 import { applyValues } from "./enumerate";
 import type { SweepPointRow } from "./point-rows";
 import type { PointVerdict, SweepDefinition } from "./types";
@@ -52,7 +52,7 @@ export function massPlotPoints(base: Configuration, definition: SweepDefinition,
     let x: number | null = null;
     if (axis.kind === "dimension") {
       const value = row.values[axis.dimension];
-      x = value && (value.kind === "position" || value.kind === "count") ? value.value : null;
+      x = value ? numericValue(value) : null;
     } else {
       const document = applyValues(base, definition, row.values);
       const a = document.stacks.find((stack) => stack.id === axis.a);

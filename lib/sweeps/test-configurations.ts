@@ -28,3 +28,13 @@ export const twoThreeBranes: Configuration = {
     { id: "q", label: "single", count: 1, anti: false, worldvolume: [1, 2, 3], position: { "9": 1.5, "8": 0.5 } },
   ],
 };
+
+/** One D1 (IIB) along x9, format 1: x9 is non-compact until a radius dimension wraps it on a circle. */
+export const stringAlongNine: Configuration = {
+  format: 1,
+  title: "String along x9",
+  theory: "IIB",
+  stringScaleGeV: null,
+  levels: 1,
+  stacks: [{ id: "w", label: "wrapped", count: 1, anti: false, worldvolume: [9], position: {} }],
+};

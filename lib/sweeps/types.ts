@@ -3,9 +3,9 @@
  * of their values being one point. Conventions as in the engine: alpha' = 1, positions in units
  * of sqrt(alpha').
  *
- * Adding a dimension (e.g. a compact radius once compact axes exist) means one more member of
- * `SweepDimension`, its size and its values in `dimension.ts`, how it changes the document in
- * `enumerate.ts`, and its zod schema in `lib/validations/sweep.ts`; points, chunks, storage,
+ * Adding a dimension means one more member of `SweepDimension` and `DimensionValue`, its size,
+ * values and label in `dimension.ts`, how it changes the document in `enumerate.ts`, its checks
+ * in `definition.ts` and its zod schema in `lib/validations/sweep.ts`; points, chunks, storage,
  * the queue and the pages work through those functions and need no change.
  */
 
@@ -45,6 +45,15 @@ export type SweepDimension =
       /** Brane, then antibrane, for one stack. */
       kind: "orientation";
       stack: string;
+    }
+  | {
+      /**
+       * The radius R of compact axis `axis`, in units of sqrt(alpha'): every point is a format 2
+       * document with that axis compact, so a non-compact axis of the base is swept onto a circle.
+       */
+      kind: "radius";
+      axis: number;
+      values: SweepValues;
     };
 
 /** The kinds of dimension. */
@@ -61,7 +70,8 @@ export type DimensionValue =
   | { kind: "boundary"; /** Per chosen axis, the set of chosen stacks (bit i = stacks[i]) that are Neumann on it. */ columns: number[] }
   | { kind: "position"; value: number }
   | { kind: "count"; value: number }
-  | { kind: "orientation"; anti: boolean };
+  | { kind: "orientation"; anti: boolean }
+  | { kind: "radius"; value: number };
 
 /** What one sweep point computes to, as stored per point. */
 export type SweepPointOutcome =

@@ -28,6 +28,7 @@ const dimensionSchema = z.discriminatedUnion("kind", [
   z.object({ kind: z.literal("position"), stack: stackId, axis, values: valuesSchema }),
   z.object({ kind: z.literal("count"), stack: stackId, values: valuesSchema }),
   z.object({ kind: z.literal("orientation"), stack: stackId }),
+  z.object({ kind: z.literal("radius"), axis, values: valuesSchema }),
 ]) satisfies z.ZodType<SweepDimension>;
 
 /** A sweep definition (lib/sweeps/types.ts). */
