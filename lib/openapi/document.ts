@@ -76,7 +76,7 @@ const tags = {
   compute: { name: "Compute", description: "Stateless spectrum computation; open to everyone within a budget." },
   configurations: { name: "Configurations", description: "Saved configurations, their revisions and stored results." },
   collaboration: { name: "Collaboration", description: "Comments, attachments and read-only share links of a configuration." },
-  sweeps: { name: "Sweeps", description: "Sweeps of a saved revision over boundary choices, positions, counts and orientations, computed by workers from a queue." },
+  sweeps: { name: "Sweeps", description: "Sweeps of a saved revision over boundary choices, positions, counts, orientations and compact radii, computed by workers from a queue." },
   groups: { name: "Groups", description: "Research groups and labs, members, invitations and the audit log." },
   service: { name: "Service", description: "Health check, this document, and the sign-in machinery the pages use." },
 } as const;
