@@ -34,8 +34,9 @@ const systems: Configuration[] = [
 
 async function openResults(page: Page, id: string): Promise<void> {
   await page.goto(`/configurations/${id}/results`);
-  // The first visit of a route may compile it on a development server: allow for that.
-  await expect(page.getByTestId("worldvolume-table")).toBeVisible({ timeout: 30_000 });
+  // The first visit of a route may compile it on a development server: allow for that. By role, not
+  // test id: while the page streams, React may hold a hidden copy of the table for a moment.
+  await expect(page.getByRole("table", { name: "Worldvolume theories" })).toBeVisible({ timeout: 30_000 });
 }
 
 test.describe("classic systems", () => {
@@ -50,7 +51,7 @@ test.describe("classic systems", () => {
 
       const lines = page.getByTestId("spectrum-worldvolumes").getByRole("listitem");
       await expect(lines).toHaveCount(expected.worldvolumes.length);
-      const rows = page.getByTestId("worldvolume-table").getByRole("row");
+      const rows = page.getByRole("table", { name: "Worldvolume theories" }).getByRole("row");
       await expect(rows).toHaveCount(expected.worldvolumes.length + 1);
       for (const [i, worldvolume] of expected.worldvolumes.entries()) {
         await expect(lines.nth(i)).toContainText(formatEngineProse(worldvolume.summary));
@@ -82,7 +83,7 @@ test.describe("classic systems", () => {
     await expect(page.getByText("BPS with a stretched string")).toBeVisible();
     const sector = page.getByTestId("sector-d0-d8");
     await expect(sector).toContainText("Without a fundamental string stretched between the stacks they feel a constant force");
-    await expect(page.getByTestId("worldvolume-table")).toContainText("one fundamental fermionic mode in 0+1 dimensions");
+    await expect(page.getByRole("table", { name: "Worldvolume theories" })).toContainText("one fundamental fermionic mode in 0+1 dimensions");
     // The worldsheet fermions and the light-cone axis in the mode expansions.
     await sector.getByText("Mode expansions", { exact: true }).click();
     await expect(sector.getByText("light-cone", { exact: true })).toHaveCount(1);
