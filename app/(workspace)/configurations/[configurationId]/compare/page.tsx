@@ -17,6 +17,7 @@ import type { SpectrumResult } from "@/lib/boundary/types";
 import { ForbiddenError, NotFoundError } from "@/lib/errors";
 import { bothSidesStacks, diffConfigurations, diffSpectra, type ConfigurationDiff } from "@/lib/revisions/diff";
 import { requireUser } from "@/lib/server/session";
+import { BackLink } from "@/components/layout/back-link";
 
 export const metadata: Metadata = { title: "Compare" };
 
@@ -42,9 +43,7 @@ export default async function ComparePage({ params, searchParams }: ComparePageP
   const forks = configuration.canEdit ? (await listForksOfConfiguration(actor, configurationId, { limit: 50 })).items : [];
 
   const back = (
-    <Link href={`/configurations/${configurationId}`} className="text-accent hover:underline">
-      ← {configuration.title}
-    </Link>
+    <BackLink href={`/configurations/${configurationId}`}>{configuration.title}</BackLink>
   );
   const choices = <CompareChoices configuration={configuration} forks={forks} current={other?.id ?? null} />;
 

@@ -21,6 +21,7 @@ import { NotFoundError } from "@/lib/errors";
 import { formatDateTime } from "@/lib/format-date";
 import { bothSidesStacks, diffConfigurations, diffInteractions, diffSpectra } from "@/lib/revisions/diff";
 import { requireUser } from "@/lib/server/session";
+import { BackLink } from "@/components/layout/back-link";
 
 export const metadata: Metadata = { title: "History" };
 
@@ -53,9 +54,7 @@ export default async function HistoryPage({ params, searchParams }: HistoryPageP
     <PageContainer className="grid gap-6">
       <PageHeader
         eyebrow={
-          <Link href={`/configurations/${configurationId}`} className="text-accent hover:underline">
-            ← {configuration.title}
-          </Link>
+          <BackLink href={`/configurations/${configurationId}`}>{configuration.title}</BackLink>
         }
         title="History"
         description="Every save is a revision. Compare any two, or restore an old one as a new revision."

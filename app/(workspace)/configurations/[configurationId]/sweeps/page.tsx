@@ -1,5 +1,4 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { PageContainer } from "@/components/layout/page-container";
 import { SweepDefinitionForm } from "@/components/sweeps/sweep-definition-form";
 import { SweepList } from "@/components/sweeps/sweep-list";
@@ -10,6 +9,7 @@ import { listSweeps } from "@/db/queries/sweeps";
 import { toJson } from "@/lib/client/api-client";
 import { getConfigurationOrNotFound } from "@/lib/server/configuration-pages";
 import { requireUser } from "@/lib/server/session";
+import { BackLink } from "@/components/layout/back-link";
 
 export const metadata: Metadata = { title: "Sweeps" };
 
@@ -22,12 +22,10 @@ export default async function SweepsPage({ params }: { params: Promise<{ configu
     <PageContainer className="grid gap-6">
       <PageHeader
         eyebrow={
-          <Link href={`/configurations/${configurationId}`} className="text-accent hover:underline">
-            ← {configuration.title}
-          </Link>
+          <BackLink href={`/configurations/${configurationId}`}>{configuration.title}</BackLink>
         }
         title="Sweeps"
-        description="Vary the saved revision over boundary choices, positions, counts and orientations; every combination is one point, computed by the workers."
+        description="Vary the saved revision over boundary choices, positions, counts, orientations and compact radii; every combination is one point, computed by the workers."
       />
       <Card aria-labelledby="sweeps-title">
         <CardHeader>

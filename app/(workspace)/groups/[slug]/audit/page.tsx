@@ -13,6 +13,7 @@ import { activitySentence } from "@/lib/activity/sentences";
 import { formatDateTime } from "@/lib/format-date";
 import { requireUser } from "@/lib/server/session";
 import { countOf } from "@/lib/wording";
+import { BackLink } from "@/components/layout/back-link";
 
 export const metadata: Metadata = { title: "Audit log" };
 
@@ -32,9 +33,7 @@ export default async function AuditPage({ params, searchParams }: AuditPageProps
     throw error;
   });
   const back = (
-    <Link href={`/groups/${group.slug}`} className="text-accent hover:underline">
-      ← {group.name}
-    </Link>
+    <BackLink href={`/groups/${group.slug}`}>{group.name}</BackLink>
   );
   if (group.role !== "owner") {
     return (

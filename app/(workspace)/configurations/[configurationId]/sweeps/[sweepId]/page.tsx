@@ -1,5 +1,4 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { notFound } from "next/navigation";
 import { PageContainer } from "@/components/layout/page-container";
 import { SweepView } from "@/components/sweeps/sweep-view";
@@ -10,6 +9,7 @@ import { NotFoundError } from "@/lib/errors";
 import { listWritableGroups } from "@/lib/server/configuration-pages";
 import { requireUser } from "@/lib/server/session";
 import { dimensionLabel } from "@/lib/sweeps";
+import { BackLink } from "@/components/layout/back-link";
 
 export const metadata: Metadata = { title: "Sweep" };
 
@@ -26,9 +26,7 @@ export default async function SweepPage({ params }: { params: Promise<{ configur
     <PageContainer className="grid gap-6">
       <PageHeader
         eyebrow={
-          <Link href={`/configurations/${configurationId}/sweeps`} className="text-accent hover:underline">
-            ← Sweeps of {sweep.configurationTitle}
-          </Link>
+          <BackLink href={`/configurations/${configurationId}/sweeps`}>Sweeps of {sweep.configurationTitle}</BackLink>
         }
         title={sweep.title || `Sweep over ${sweep.definition.dimensions.map(dimensionLabel).join("; ")}`}
       />
