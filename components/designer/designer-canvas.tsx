@@ -10,13 +10,15 @@ import { fitSceneViewport } from "@/lib/designer/scene";
 import { snapValue } from "@/lib/canvas/snap";
 import { toWorld } from "@/lib/canvas/viewport";
 import { selectCanRedo, selectCanUndo, selectDocument, useDesignerStore } from "@/lib/client/designer-store";
+import { useOpenedOnce } from "@/lib/client/use-opened-once";
 import { cn } from "@/lib/utils";
-import { ShortcutHelpDialog } from "./shortcut-help-dialog";
 
 const ConfigurationStage = dynamic(
   () => import("@/components/canvas/configuration-stage").then((module) => module.ConfigurationStage),
   { ssr: false, loading: () => <p className="p-4 text-xs text-muted-foreground">Loading the canvas&hellip;</p> },
 );
+// Loaded when first opened (with ?): no part of the first load.
+const ShortcutHelpDialog = dynamic(() => import("./shortcut-help-dialog").then((module) => module.ShortcutHelpDialog));
 
 export interface DesignerCanvasProps {
   result: SpectrumResult | null;
@@ -51,6 +53,7 @@ export function DesignerCanvas({ result, readOnly = false, onSaveShortcut, onMov
   const frameRef = useRef<HTMLDivElement>(null);
   const [size, setSize] = useState({ width: 0, height: 0 });
   const [helpOpen, setHelpOpen] = useState(false);
+  const helpOpened = useOpenedOnce(helpOpen);
 
   useEffect(() => {
     const element = frameRef.current;
@@ -324,7 +327,7 @@ export function DesignerCanvas({ result, readOnly = false, onSaveShortcut, onMov
         ) : null}
         <CanvasLegend />
       </div>
-      <ShortcutHelpDialog open={helpOpen} onOpenChange={setHelpOpen} />
+      {helpOpened ? <ShortcutHelpDialog open={helpOpen} onOpenChange={setHelpOpen} /> : null}
     </section>
   );
 }

@@ -1,10 +1,11 @@
 "use client";
 
 import { useQuery, useQueryClient } from "@tanstack/react-query";
+import dynamic from "next/dynamic";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useState } from "react";
-import { mergeConfigurations, type MergeResult } from "@/lib/revisions/merge";
+import type { MergeResult } from "@/lib/revisions/merge";
 import { clearDraft, readDraft, writeDraft } from "@/lib/designer/draft-storage";
 import { configurationQueries, useDeleteConfiguration, useForkConfiguration, useUpdateConfiguration, type ConfigurationJson } from "@/lib/client/configurations";
 import { fetchStaleSave, type StaleSave } from "@/lib/client/stale-save";
@@ -17,20 +18,23 @@ import { Alert } from "@/components/ui/alert";
 import { Badge } from "@/components/ui/badge";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { Dialog } from "@/components/ui/dialog";
-import { exportCanvasPngWhenReady, pngFileName } from "@/components/canvas/export-canvas-png";
-import { pngLegend } from "@/lib/designer/png-legend";
 import { ExportMenu } from "@/components/configurations/export-menu";
 import { BoundaryGrid } from "./boundary-grid";
-import { ConflictDialog } from "./conflict-dialog";
 import { DesignerCanvas } from "./designer-canvas";
 import { DocumentSettings } from "./document-settings";
-import { MoveWorldvolumeDialog } from "./move-worldvolume-dialog";
 import { DualityNotice } from "./duality-notice";
-import { ForkDialog, type WritableGroup } from "./fork-dialog";
+import type { WritableGroup } from "./fork-dialog";
 import { ForkedFromNote } from "./forked-from-note";
-import { SaveDialog } from "./save-dialog";
 import { SpectrumPreview } from "./spectrum-preview";
 import { useLivePreview } from "./use-live-preview";
+import { useOpenedOnce } from "@/lib/client/use-opened-once";
+
+// Dialogs, the merge of a stale save and the PNG export load when first used: none of them is on
+// screen when the designer opens, and their code is kept out of its first load.
+const SaveDialog = dynamic(() => import("./save-dialog").then((module) => module.SaveDialog));
+const ConflictDialog = dynamic(() => import("./conflict-dialog").then((module) => module.ConflictDialog));
+const ForkDialog = dynamic(() => import("./fork-dialog").then((module) => module.ForkDialog));
+const MoveWorldvolumeDialog = dynamic(() => import("./move-worldvolume-dialog").then((module) => module.MoveWorldvolumeDialog));
 
 export interface DesignerWorkspaceProps {
   initial: ConfigurationJson;
@@ -72,6 +76,9 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
   const [mergedFrom, setMergedFrom] = useState<number | null>(null);
   const [titleNote, setTitleNote] = useState<string | null>(null);
   const [moveStackId, setMoveStackId] = useState<string | null>(null);
+  const saveOpened = useOpenedOnce(saveOpen);
+  const conflictOpened = useOpenedOnce(conflictOpen);
+  const moveOpened = useOpenedOnce(moveStackId !== null);
   const [forkMode, setForkMode] = useState<ForkMode | null>(null);
   const [forkError, setForkError] = useState<string | null>(null);
   const [forkPending, setForkPending] = useState(false);
@@ -170,7 +177,7 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
     setStaleError(null);
     if (base === null) return;
     try {
-      const read = await fetchStaleSave(queryClient, id, base);
+      const [read, { mergeConfigurations }] = await Promise.all([fetchStaleSave(queryClient, id, base), import("@/lib/revisions/merge")]);
       setStale(read);
       setMerge(read.base ? mergeConfigurations(read.base, useDesignerStore.getState().history.present, read.latest.document) : null);
     } catch (error) {
@@ -284,11 +291,14 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
               setExportingPng(true);
               const findFrame = () => window.document.querySelector<HTMLElement>("[data-designer-canvas]");
               const state = useDesignerStore.getState();
-              const legend = pngLegend(document, state.displayAxes, state.viewport?.scale ?? 0);
-              void exportCanvasPngWhenReady(findFrame, pngFileName(document.title), legend)
+              void Promise.all([import("@/components/canvas/export-canvas-png"), import("@/lib/designer/png-legend")])
+                .then(([png, { pngLegend }]) =>
+                  png.exportCanvasPngWhenReady(findFrame, png.pngFileName(document.title), pngLegend(document, state.displayAxes, state.viewport?.scale ?? 0)),
+                )
                 .then((done) => {
                   if (!done) setExportError("The canvas has not finished drawing, so there was nothing to export. Try again in a moment.");
                 })
+                .catch(() => setExportError("The PNG export could not be loaded. Check the connection and try again."))
                 .finally(() => setExportingPng(false));
             }}
           />
@@ -382,7 +392,7 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
           ) : null}
         </div>
       </div>
-      <MoveWorldvolumeDialog stackId={moveStackId} onClose={() => setMoveStackId(null)} />
+      {moveOpened ? <MoveWorldvolumeDialog stackId={moveStackId} onClose={() => setMoveStackId(null)} /> : null}
 
       <Dialog
         open={deleteOpen}
@@ -413,23 +423,25 @@ export function DesignerWorkspace({ initial, writableGroups }: DesignerWorkspace
       >
         {remove.error ? <p className="text-danger-soft-foreground">{remove.error.message}</p> : null}
       </Dialog>
-      <SaveDialog open={saveOpen} onOpenChange={setSaveOpen} pending={update.isPending} error={saveError} onSave={save} />
-      <ConflictDialog
-        open={conflictOpen}
-        onOpenChange={setConflictOpen}
-        baseVersion={baseVersion}
-        stale={stale}
-        error={staleError}
-        merge={merge}
-        canFork={writableGroups.length > 0}
-        pending={forkPending}
-        onMerge={applyMerge}
-        onReload={() => void reloadLatest()}
-        onFork={() => {
-          setConflictOpen(false);
-          setForkMode("draft");
-        }}
-      />
+      {saveOpened ? <SaveDialog open={saveOpen} onOpenChange={setSaveOpen} pending={update.isPending} error={saveError} onSave={save} /> : null}
+      {conflictOpened ? (
+        <ConflictDialog
+          open={conflictOpen}
+          onOpenChange={setConflictOpen}
+          baseVersion={baseVersion}
+          stale={stale}
+          error={staleError}
+          merge={merge}
+          canFork={writableGroups.length > 0}
+          pending={forkPending}
+          onMerge={applyMerge}
+          onReload={() => void reloadLatest()}
+          onFork={() => {
+            setConflictOpen(false);
+            setForkMode("draft");
+          }}
+        />
+      ) : null}
       {forkMode !== null ? (
         <ForkDialog
           open
