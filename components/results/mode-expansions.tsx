@@ -3,7 +3,7 @@
 import katex from "katex";
 import "katex/dist/katex.min.css";
 import { useMemo } from "react";
-import { fermionExpansionLatex, lightConeAxis } from "@/lib/boundary/expansion";
+import { bosonExpansionLatex, fermionExpansionLatex, lightConeAxis } from "@/lib/boundary/expansion";
 import type { AxisExpansion } from "@/lib/boundary/types";
 import { simplifyExpansionLatex } from "@/lib/spectrum";
 import { Badge } from "@/components/ui/badge";
@@ -23,7 +23,8 @@ export function ModeExpansions({ axes }: ModeExpansionsProps) {
       axes.map((axis) => {
         // Type II axes carry fermion modings; the expansions follow from the axis type alone.
         const latex = axis.fermionModing ? fermionExpansionLatex(axis) : null;
-        return { axis, latex, boson: typeset(simplifyExpansionLatex(axis.latex)), fermions: latex ? { NS: typeset(latex.NS), R: typeset(latex.R) } : null };
+        const source = bosonExpansionLatex(axis);
+        return { axis, source, latex, boson: typeset(simplifyExpansionLatex(source)), fermions: latex ? { NS: typeset(latex.NS), R: typeset(latex.R) } : null };
       }),
     [axes],
   );
@@ -44,7 +45,7 @@ export function ModeExpansions({ axes }: ModeExpansionsProps) {
           </tr>
         </thead>
         <tbody>
-          {rendered.map(({ axis, latex, boson, fermions: psi }) => (
+          {rendered.map(({ axis, source, latex, boson, fermions: psi }) => (
             <tr key={axis.axis} className="border-t border-border align-middle">
               <td className="px-2 py-1 font-mono whitespace-nowrap">
                 x{axis.axis}
@@ -60,7 +61,7 @@ export function ModeExpansions({ axes }: ModeExpansionsProps) {
                 {axis.fermionModing ? `; ${axis.fermionModing.NS} / ${axis.fermionModing.R}` : ""}
               </td>
               <td className="overflow-x-auto px-2 py-1 text-sm">
-                <div title={axis.latex} dangerouslySetInnerHTML={{ __html: boson }} />
+                <div title={source} dangerouslySetInnerHTML={{ __html: boson }} />
                 {psi ? (
                   <div className="mt-0.5 grid gap-0.5 text-xs">
                     <div title={latex?.NS}>

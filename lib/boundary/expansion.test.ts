@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { classifyPair } from "./classify";
-import { bosonModing, expandAxis, expandPair, fermionModing } from "./expansion";
+import { bosonExpansionLatex, bosonModing, expandAxis, expandPair, fermionModing } from "./expansion";
 import { formatDecimal } from "./format";
 
 describe("bosonModing", () => {
@@ -24,21 +24,23 @@ describe("fermionModing", () => {
 describe("expandAxis", () => {
   it("substitutes the endpoints into the DD expansion (physics.md DD form; Polchinski vol. 1, chapter 8, from memory)", () => {
     const expansion = expandAxis({ axis: 5, type: "DD", positionA: 0, positionB: 3.5 }, "bosonic");
-    expect(expansion.latex).toBe(
+    expect(bosonExpansionLatex(expansion)).toBe(
       "X^{5}(\\tau,\\sigma) = 0 + (3.5 - 0)\\frac{\\sigma}{\\pi} + \\sqrt{2\\alpha'}\\sum_{n\\neq0}\\frac{\\alpha_n}{n}e^{-in\\tau}\\sin n\\sigma",
     );
     expect(expansion.zeroModes).toEqual([]);
     expect(expansion.fermionModing).toBeUndefined();
+    // The result stores the positions; the text is written from them when shown.
+    expect(expansion).toEqual({ axis: 5, type: "DD", bosonModing: "integer", zeroModes: [], positionA: 0, positionB: 3.5 });
   });
 
   it("puts a negative subtracted endpoint in parentheses and trims trailing zeros", () => {
-    const latex = expandAxis({ axis: 7, type: "DD", positionA: -2.5, positionB: 1.25 }, "IIA").latex;
+    const latex = bosonExpansionLatex(expandAxis({ axis: 7, type: "DD", positionA: -2.5, positionB: 1.25 }, "IIA"));
     expect(latex).toContain("= -2.5 + (1.25 - (-2.5))\\frac{\\sigma}{\\pi}");
   });
 
   it("gives the NN expansion with momentum and the x, p zero modes", () => {
     const expansion = expandAxis({ axis: 1, type: "NN", positionA: null, positionB: null }, "IIB");
-    expect(expansion.latex).toBe(
+    expect(bosonExpansionLatex(expansion)).toBe(
       "X^{1}(\\tau,\\sigma) = x^{1} + 2\\alpha' p^{1}\\tau + i\\sqrt{2\\alpha'}\\sum_{n\\neq0}\\frac{\\alpha_n}{n}e^{-in\\tau}\\cos n\\sigma",
     );
     expect(expansion.zeroModes).toEqual(["x", "p", "psi_0 (R)"]);
@@ -47,12 +49,12 @@ describe("expandAxis", () => {
 
   it("anchors ND at the Dirichlet end b and DN at the Dirichlet end a, with half-integer modes", () => {
     const nd = expandAxis({ axis: 6, type: "ND", positionA: null, positionB: 4 }, "IIA");
-    expect(nd.latex).toBe(
+    expect(bosonExpansionLatex(nd)).toBe(
       "X^{6}(\\tau,\\sigma) = 4 + i\\sqrt{2\\alpha'}\\sum_{r\\in\\mathbb{Z}+1/2}\\frac{\\alpha_r}{r}e^{-ir\\tau}\\cos r\\sigma",
     );
     expect(nd.zeroModes).toEqual(["psi_0 (NS)"]);
     const dn = expandAxis({ axis: 6, type: "DN", positionA: -1, positionB: null }, "IIA");
-    expect(dn.latex).toBe(
+    expect(bosonExpansionLatex(dn)).toBe(
       "X^{6}(\\tau,\\sigma) = -1 + \\sqrt{2\\alpha'}\\sum_{r\\in\\mathbb{Z}+1/2}\\frac{\\alpha_r}{r}e^{-ir\\tau}\\sin r\\sigma",
     );
     expect(dn.fermionModing).toEqual({ NS: "integer", R: "half-integer" });
@@ -66,7 +68,10 @@ describe("expandPair", () => {
     const axes = expandPair(classifyPair(probe, wall, 10), "IIA");
     expect(axes.map((axis) => axis.axis)).toEqual([1, 2, 3, 4, 5, 6, 7, 8, 9]);
     expect(axes[4]?.type).toBe("DN");
-    expect(axes[8]?.latex).toContain("= 3.5 + (0 - 3.5)");
+    expect(axes[8]).toMatchObject({ positionA: 3.5, positionB: 0 });
+    expect(bosonExpansionLatex(axes[8] as (typeof axes)[number])).toContain("= 3.5 + (0 - 3.5)");
+    // A Neumann end has no position.
+    expect(axes[0]).toMatchObject({ type: "NN", positionA: null, positionB: null });
   });
 });
 

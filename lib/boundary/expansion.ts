@@ -64,12 +64,11 @@ export function fermionModing(type: AxisType): { NS: Moding; R: Moding } {
  * @param theory - Fermion modings and fermion zero modes are given for IIA/IIB only.
  * @returns Axis type, boson moding, fermion moding per sector (type II), the zero modes present
  *   ("x" and "p" on NN axes; for type II also the fermion zero modes "psi_0 (R)" on NN/DD axes or
- *   "psi_0 (NS)" on ND/DN axes), and X^axis(tau, sigma) as LaTeX. Positions print compactly
- *   (12 significant digits, trailing zeros trimmed; negative ones in parentheses when subtracted).
- *   The fermions' LaTeX comes from `fermionExpansionLatex`, which needs only the axis and type.
+ *   "psi_0 (NS)" on ND/DN axes), and the Dirichlet positions of the two ends. The LaTeX of
+ *   X^axis(tau, sigma) comes from `bosonExpansionLatex`, the fermions' from `fermionExpansionLatex`.
  * @example
- * expandAxis({ axis: 5, type: "DD", positionA: 0, positionB: 3.5 }, "bosonic").latex
- * // => "X^{5}(\\tau,\\sigma) = 0 + (3.5 - 0)\\frac{\\sigma}{\\pi} + \\sqrt{2\\alpha'}\\sum_{n\\neq0}\\frac{\\alpha_n}{n}e^{-in\\tau}\\sin n\\sigma"
+ * expandAxis({ axis: 5, type: "DD", positionA: 0, positionB: 3.5 }, "bosonic")
+ * // => { axis: 5, type: "DD", bosonModing: "integer", zeroModes: [], positionA: 0, positionB: 3.5 }
  */
 export function expandAxis(axis: AxisClassification, theory: Theory): AxisExpansion {
   const { type } = axis;
@@ -81,7 +80,8 @@ export function expandAxis(axis: AxisClassification, theory: Theory): AxisExpans
     type,
     bosonModing: bosonModing(type),
     zeroModes,
-    latex: expansionLatex(axis),
+    positionA: axis.positionA,
+    positionB: axis.positionB,
   };
   if (superstring) expansion.fermionModing = fermionModing(type);
   return expansion;
@@ -138,7 +138,20 @@ export function expandPair(classification: Pick<PairClassification, "axes">, the
   return classification.axes.map((axis) => expandAxis(axis, theory));
 }
 
-function expansionLatex(axis: AxisClassification): string {
+/**
+ * The mode expansion X(tau, sigma) of one axis as LaTeX, with the endpoint positions substituted
+ * (12 significant digits, trailing zeros trimmed; a negative one in parentheses when subtracted).
+ * Results store the axis type and positions only (engine 1.3.0 on): the text is written here when
+ * it is shown, as the fermions' is by `fermionExpansionLatex`.
+ *
+ * @param axis - An `AxisExpansion` (or a classified axis): its number, type and Dirichlet positions
+ *   (a missing position reads as 0).
+ * @returns The LaTeX of X^axis(tau, sigma).
+ * @example
+ * bosonExpansionLatex({ axis: 5, type: "DD", positionA: 0, positionB: 3.5 })
+ * // => "X^{5}(\\tau,\\sigma) = 0 + (3.5 - 0)\\frac{\\sigma}{\\pi} + \\sqrt{2\\alpha'}\\sum_{n\\neq0}\\frac{\\alpha_n}{n}e^{-in\\tau}\\sin n\\sigma"
+ */
+export function bosonExpansionLatex(axis: Pick<AxisExpansion, "axis" | "type" | "positionA" | "positionB">): string {
   const lhs = `X^{${axis.axis}}(\\tau,\\sigma)`;
   const xa = formatDecimal(axis.positionA ?? 0);
   const xb = formatDecimal(axis.positionB ?? 0);

@@ -33,7 +33,7 @@ export {
   type PairClassification,
   type SeparationComponent,
 } from "./classify";
-export { expandAxis, expandPair, bosonModing, fermionModing, fermionExpansionLatex, lightConeAxis } from "./expansion";
+export { expandAxis, expandPair, bosonModing, fermionModing, bosonExpansionLatex, fermionExpansionLatex, lightConeAxis } from "./expansion";
 export { formatDecimal, listInWords } from "./format";
 export { resultInputKey } from "./result-key";
 export {

@@ -89,11 +89,11 @@ function physicsOf(sector: Sector) {
   };
 }
 
-/** A result without the LaTeX, which shows the absolute endpoint positions on purpose. */
+/** A result without the mode expansions' endpoint positions, which are absolute on purpose. */
 function withoutLatex(result: SpectrumResult) {
   return {
     ...result,
-    sectors: result.sectors.map((sector) => ({ ...sector, axes: sector.axes.map(({ latex: _latex, ...axis }) => axis) })),
+    sectors: result.sectors.map((sector) => ({ ...sector, axes: sector.axes.map(({ positionA: _a, positionB: _b, ...axis }) => axis) })),
   };
 }
 

@@ -107,12 +107,10 @@ export interface AxisExpansion {
   fermionModing?: { NS: Moding; R: Moding };
   /** Zero modes present: e.g. ["x", "p"] for NN, [] otherwise. */
   zeroModes: string[];
-  /**
-   * The mode expansion X(tau, sigma) as LaTeX, with the endpoint positions substituted. The fermions
-   * psi, psi~ depend only on the axis number and type, so they are not stored: `fermionExpansionLatex`
-   * writes them, and `lightConeAxis` names the axis paired with time.
-   */
-  latex: string;
+  /** Position of stack a (sigma = 0) on this axis when it is Dirichlet there, else null; units of sqrt(alpha'). */
+  positionA: number | null;
+  /** Position of stack b (sigma = pi) on this axis when it is Dirichlet there, else null. */
+  positionB: number | null;
 }
 
 export interface LevelRow {
@@ -305,8 +303,8 @@ export interface WorldvolumeDefect {
 
 /**
  * The theory on one worldvolume: one stack, or a set of coincident stacks of the same orientation
- * whose U(N_a) x U(N_b) is enhanced to U(N_a + N_b). All axes are non-compact, so the groups of
- * higher-dimensional stacks are flavour (global) symmetries here.
+ * whose U(N_a) x U(N_b) is enhanced to U(N_a + N_b) (on circles, also with equal Wilson lines). Along
+ * non-compact axes the groups of higher-dimensional stacks are flavour (global) symmetries here.
  */
 export interface WorldvolumeTheory {
   /** Ids of the stacks on this worldvolume, in id order. */

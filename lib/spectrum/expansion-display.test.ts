@@ -1,12 +1,12 @@
 import { evaluate } from "mathjs";
 import { describe, expect, it } from "vitest";
-import { expandAxis } from "@/lib/boundary/expansion";
-import { simplifyExpansionLatex } from "./expansion-display";
+import { bosonExpansionLatex } from "@/lib/boundary/expansion";
+import { expansionEndPositions, simplifyExpansionLatex } from "./expansion-display";
 
 const oscillatorsDD = String.raw`\sqrt{2\alpha'}\sum_{n\neq0}\frac{\alpha_n}{n}e^{-in\tau}\sin n\sigma`;
 
 function dd(positionA: number, positionB: number): string {
-  return simplifyExpansionLatex(expandAxis({ axis: 9, type: "DD", positionA, positionB }, "IIA").latex);
+  return simplifyExpansionLatex(bosonExpansionLatex({ axis: 9, type: "DD", positionA, positionB }));
 }
 
 /** The classical part of a simplified DD expansion, evaluated with mathjs at sigma. */
@@ -48,12 +48,31 @@ describe("simplifyExpansionLatex", () => {
   });
 
   it("drops a zero position on a mixed axis and leaves everything else alone", () => {
-    const nd = expandAxis({ axis: 4, type: "ND", positionA: null, positionB: 0 }, "IIA").latex;
+    const nd = bosonExpansionLatex({ axis: 4, type: "ND", positionA: null, positionB: 0 });
     expect(simplifyExpansionLatex(nd)).toBe(nd.replace("= 0 + ", "= "));
-    const dn = expandAxis({ axis: 4, type: "DN", positionA: 2, positionB: null }, "IIA").latex;
+    const dn = bosonExpansionLatex({ axis: 4, type: "DN", positionA: 2, positionB: null });
     expect(simplifyExpansionLatex(dn)).toBe(dn);
-    const nn = expandAxis({ axis: 1, type: "NN", positionA: null, positionB: null }, "IIA").latex;
+    const nn = bosonExpansionLatex({ axis: 1, type: "NN", positionA: null, positionB: null });
     expect(simplifyExpansionLatex(nn)).toBe(nn);
     expect(simplifyExpansionLatex("not an expansion")).toBe("not an expansion");
+  });
+});
+
+describe("expansionEndPositions", () => {
+  it("reads the end positions back from the LaTeX engines before 1.3.0 stored, for every axis type", () => {
+    for (const axis of [
+      { axis: 9, type: "DD", positionA: -2.5, positionB: 1.25 },
+      { axis: 9, type: "DD", positionA: 0, positionB: 0 },
+      { axis: 4, type: "ND", positionA: null, positionB: 3 },
+      { axis: 4, type: "DN", positionA: 1e-7, positionB: null },
+      { axis: 1, type: "NN", positionA: null, positionB: null },
+    ] as const) {
+      expect(expansionEndPositions(axis.type, bosonExpansionLatex(axis))).toEqual({ positionA: axis.positionA, positionB: axis.positionB });
+    }
+  });
+
+  it("answers null for text without the engine's shape", () => {
+    expect(expansionEndPositions("DD", "not an expansion")).toBeNull();
+    expect(expansionEndPositions("NN", bosonExpansionLatex({ axis: 9, type: "DD", positionA: 0, positionB: 1 }))).toBeNull();
   });
 });

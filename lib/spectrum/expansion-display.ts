@@ -3,7 +3,7 @@
  * part of a Dirichlet end with the positions substituted as they are ("0 + (0 - 0)\frac{\sigma}{\pi}"),
  * and this reduces it exactly (decimal arithmetic on the written digits), so a string between
  * two ends at the origin reads as its oscillators alone and a stretched one as
- * "1 + 2.5\frac{\sigma}{\pi}". Exports keep the engine's text.
+ * "1 + 2.5\frac{\sigma}{\pi}". The text itself is written by `bosonExpansionLatex` (lib/boundary).
  *
  * Invalid-input policy: LaTeX that does not have the engine's shape is returned unchanged.
  */
@@ -19,7 +19,7 @@ const fixedEnd = new RegExp(`${head}(${number}) \\+ ((?:i)?\\\\sqrt\\{2\\\\alpha
 /**
  * Simplifies the classical part of a boson's mode expansion.
  *
- * @param latex - `AxisExpansion.latex` as the engine writes it.
+ * @param latex - A boson's expansion as `bosonExpansionLatex` writes it.
  * @returns The same expansion with zero terms dropped and x_b - x_a worked out exactly.
  * @example
  * simplifyExpansionLatex(String.raw`X^{9}(\tau,\sigma) = 0 + (0 - 0)\frac{\sigma}{\pi} + \sqrt{2\alpha'}\sum_{n\neq0}\frac{\alpha_n}{n}e^{-in\tau}\sin n\sigma`)
@@ -50,6 +50,33 @@ export function simplifyExpansionLatex(latex: string): string {
     if (position && position.digits === 0n) return `${lhs}${oscillators}`;
   }
   return latex;
+}
+
+/**
+ * The Dirichlet positions of the two ends, read back from a boson's LaTeX as engines before 1.3.0
+ * stored it (the upgrade step of stored results).
+ *
+ * @param type - The axis type the LaTeX was written for.
+ * @param latex - The stored `X^{k}(\tau,\sigma) = ...` text.
+ * @returns `{ positionA, positionB }` (null on a Neumann end), or null when the text does not have
+ *   the engine's shape for that type.
+ * @example
+ * expansionEndPositions("DD", String.raw`X^{9}(\tau,\sigma) = 1 + (3.5 - 1)\frac{\sigma}{\pi} + \sqrt{2\alpha'}...`)
+ * // => { positionA: 1, positionB: 3.5 }
+ */
+export function expansionEndPositions(
+  type: "NN" | "DD" | "ND" | "DN",
+  latex: string,
+): { positionA: number | null; positionB: number | null } | null {
+  if (type === "NN") return /^X\^\{\d+\}\(\\tau,\\sigma\) = x\^/.test(latex) ? { positionA: null, positionB: null } : null;
+  if (type === "DD") {
+    const dd = stretched.exec(latex);
+    return dd ? { positionA: Number(dd[2]), positionB: Number(dd[3]) } : null;
+  }
+  const end = fixedEnd.exec(latex);
+  if (!end) return null;
+  const position = Number(end[2]);
+  return type === "ND" ? { positionA: null, positionB: position } : { positionA: position, positionB: null };
 }
 
 /** digits x 10^-scale, exactly. */

@@ -33,7 +33,7 @@ export {
 } from "./overview";
 export { compareNatural, sectorNames, type SectorName, type SectorNames, type StackNameSource } from "./sector-names";
 export { lightestHeadline, type HeadlineSector, type HeadlineState, type LightestHeadline } from "./headline";
-export { simplifyExpansionLatex } from "./expansion-display";
+export { expansionEndPositions, simplifyExpansionLatex } from "./expansion-display";
 export {
   quantumNumberText,
   quantumNumbers,

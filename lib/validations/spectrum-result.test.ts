@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { computeSpectrum } from "@/lib/boundary";
+import { bosonExpansionLatex, computeSpectrum } from "@/lib/boundary";
 import { CONVENTIONS_TEXT } from "@/lib/boundary/constants";
 import type { Configuration } from "@/lib/boundary/types";
 import { conventionsBeforeMassCap, readStoredResult, StoredResultError } from "./spectrum-result";
@@ -124,6 +124,37 @@ describe("readStoredResult", () => {
       sectors[0] = { ...sectors[0], nu: 0, separation: 1.5 };
       const upgrade = readStoredResult(result).warnings.find((warning) => warning.startsWith("Stored by engine"));
       expect(upgrade).toContain("the W-boson multiplets of separated stacks");
+    });
+  });
+
+  describe("a result of engine 1.2.0 (mode expansions stored as LaTeX)", () => {
+    /** The axes as engines before 1.3.0 wrote them: the boson's LaTeX instead of the end positions. */
+    function withLatexAxes(mangle: (latex: string) => string = (latex) => latex): Record<string, unknown> {
+      const result = stored();
+      for (const sector of result.sectors as Array<{ axes: Array<Record<string, unknown>> }>) {
+        sector.axes = sector.axes.map(({ positionA, positionB, ...axis }) => ({
+          ...axis,
+          latex: mangle(bosonExpansionLatex({ axis: axis.axis as number, type: axis.type as "DD", positionA: positionA as number | null, positionB: positionB as number | null })),
+        }));
+      }
+      return { ...result, engineVersion: "1.2.0" };
+    }
+
+    it("reads the end positions back from the LaTeX, so the expansions show as the current engine's do", () => {
+      const current = computeSpectrum(document);
+      const upgraded = readStoredResult(withLatexAxes());
+      expect(upgraded.sectors.map((sector) => sector.axes)).toEqual(current.sectors.map((sector) => sector.axes));
+      // The point at x9 = 1.5 and the wall at 0: the DD axis of the point-wall string keeps both ends.
+      const pair = upgraded.sectors.find((sector) => sector.pair.join() === "point,point");
+      expect(pair?.axes.find((axis) => axis.axis === 9)).toMatchObject({ type: "DD", positionA: 1.5, positionB: 1.5 });
+      expect(upgraded.warnings.some((warning) => warning.startsWith("Stored by engine"))).toBe(false);
+    });
+
+    it("says so when a stored expansion cannot be read, instead of placing its ends at the origin silently", () => {
+      const upgraded = readStoredResult(withLatexAxes((latex) => latex.replace(" = ", " == ")));
+      const dirichlet = upgraded.sectors.flatMap((sector) => sector.axes).filter((axis) => axis.type === "DD");
+      expect(dirichlet.every((axis) => axis.positionA === null && axis.positionB === null)).toBe(true);
+      expect(upgraded.warnings.find((warning) => warning.startsWith("Stored by engine"))).toContain("the end positions of some mode expansions");
     });
   });
 

@@ -13,7 +13,7 @@ import type {
   WorldvolumeTheory,
   ZeroPoint,
 } from "@/lib/boundary/types";
-import { parseExactRational, parseResultNumber } from "@/lib/spectrum";
+import { expansionEndPositions, parseExactRational, parseResultNumber } from "@/lib/spectrum";
 
 /**
  * Stored spectrum results (the `results.result` jsonb column), read back for any engine
@@ -33,14 +33,21 @@ const countText = z.string().regex(countPattern, countMessage);
 const sectorKind = z.enum(["bosonic", "NS", "R"]);
 const moding = z.enum(["integer", "half-integer"]);
 
+/** An axis as stored: the end positions from engine 1.3.0 on, the boson's LaTeX before. */
+type StoredAxisExpansion = Omit<AxisExpansion, "positionA" | "positionB"> &
+  Partial<Pick<AxisExpansion, "positionA" | "positionB">> & { latex?: string };
+
 const axisSchema = z.object({
   axis: z.number().int(),
   type: z.enum(["NN", "DD", "ND", "DN"]),
   bosonModing: moding,
   fermionModing: z.object({ NS: moding, R: moding }).optional(),
   zeroModes: z.array(z.string()),
-  latex: z.string(),
-}) satisfies z.ZodType<AxisExpansion>;
+  positionA: z.number().nullable().optional(),
+  positionB: z.number().nullable().optional(),
+  // Engines before 1.3.0: X(tau, sigma) as LaTeX, read for its positions by the upgrade step.
+  latex: z.string().optional(),
+}) satisfies z.ZodType<StoredAxisExpansion>;
 
 // The texts of the rows are checked by `checkRowTexts`, once per list: a zod check per field costs
 // about a microsecond, and a large result holds a few hundred thousand such fields.
@@ -104,7 +111,7 @@ const multipletSchema = z.object({
 type UpgradedSectorField = "supersymmetric" | "massless" | "notes" | "multiplet";
 
 /** A sector as stored by any engine version. */
-type StoredSector = Omit<Sector, UpgradedSectorField> & Partial<Pick<Sector, UpgradedSectorField>>;
+type StoredSector = Omit<Sector, UpgradedSectorField | "axes"> & Partial<Pick<Sector, UpgradedSectorField>> & { axes: StoredAxisExpansion[] };
 
 /** A sector as stored by any engine version (also the sector shape of the API reference). */
 export const storedSectorSchema = z.object({
@@ -293,8 +300,11 @@ function upgradeStoredResult(stored: StoredSpectrumResult): SpectrumResult {
     if (sector.massless === undefined) unrecorded.add("the massless content of each sector");
     // Only separated stacks with the same worldvolume can have a multiplet to name.
     if (sector.multiplet === undefined && sector.nu === 0 && sector.separation > 0) unrecorded.add("the W-boson multiplets of separated stacks");
+    const axes = sector.axes.map(upgradeAxis);
+    if (axes.some((axis) => axis === null)) unrecorded.add("the end positions of some mode expansions");
     return {
       ...sector,
+      axes: axes.map((axis, index) => axis ?? { ...withoutStoredLatex(sector.axes[index] as StoredAxisExpansion), positionA: null, positionB: null }),
       // The bosonic string has no supersymmetry, so its default is not a guess.
       supersymmetric: sector.supersymmetric ?? false,
       massless: sector.massless ?? [],
@@ -326,6 +336,22 @@ function upgradeStoredResult(stored: StoredSpectrumResult): SpectrumResult {
     worldvolumes: stored.worldvolumes ?? [],
     conventions: stored.conventions ?? conventionsBeforeMassCap,
   };
+}
+
+/**
+ * An axis in the current shape: as stored from engine 1.3.0 on; before, with the end positions read
+ * back from the boson's LaTeX (`expansionEndPositions`). Null when that text cannot be read.
+ */
+function upgradeAxis(axis: StoredAxisExpansion): AxisExpansion | null {
+  const rest = withoutStoredLatex(axis);
+  if (axis.positionA !== undefined && axis.positionB !== undefined) return { ...rest, positionA: axis.positionA, positionB: axis.positionB };
+  const positions = axis.latex === undefined ? null : expansionEndPositions(axis.type, axis.latex);
+  return positions ? { ...rest, ...positions } : null;
+}
+
+function withoutStoredLatex(axis: StoredAxisExpansion): Omit<AxisExpansion, "positionA" | "positionB"> {
+  const { latex: _latex, positionA: _positionA, positionB: _positionB, ...rest } = axis;
+  return rest;
 }
 
 /** Whether a "major.minor.patch" version is older than `reference`; text of another form is not. */
