@@ -2,6 +2,7 @@ import { getToken } from "next-auth/jwt";
 import { NextResponse, type NextRequest } from "next/server";
 import { getAuthSecret } from "@/lib/server/auth-secret";
 import { checkCrossSiteRequest, crossSiteRejection } from "@/lib/server/csrf";
+import { decodeSessionToken } from "@/lib/server/session-token";
 import { getEnv } from "@/lib/server/env";
 
 /**
@@ -27,7 +28,7 @@ export async function proxy(request: NextRequest) {
     console.warn(`Refused a cross-site ${serverAction ? "server action" : request.method} ${pathname}: ${verdict.reason}`);
     return crossSiteRejection();
   }
-  const token = await getToken({ req: request, secret: getAuthSecret() });
+  const token = await getToken({ req: request, secret: getAuthSecret(), decode: decodeSessionToken });
   if (token) return NextResponse.next();
   const url = new URL("/sign-in", request.url);
   url.searchParams.set("callbackUrl", `${pathname}${request.nextUrl.search}`);

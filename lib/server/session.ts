@@ -1,10 +1,12 @@
 import "server-only";
-import { getServerSession } from "next-auth";
+import { getToken } from "next-auth/jwt";
 import { cookies } from "next/headers";
+import type { NextRequest } from "next/server";
 import { redirect } from "next/navigation";
 import { cache } from "react";
 import { getActorForSession, type Actor } from "@/db/queries/actor";
-import { authOptions } from "@/lib/server/auth";
+import { getAuthSecret } from "@/lib/server/auth-secret";
+import { decodeSessionToken } from "@/lib/server/session-token";
 
 /**
  * The signed-in user as an Actor, or null. The session token only names the account and its
@@ -14,12 +16,18 @@ import { authOptions } from "@/lib/server/auth";
  * were recorded) count as signed out.
  */
 export const getCurrentUser = cache(async (): Promise<Actor | null> => {
+  const store = await cookies();
   // Callers without a session cookie (scripts, the landing page's compute requests) skip next-auth.
-  if (!(await cookies()).getAll().some((cookie) => cookie.name.includes("next-auth.session-token"))) return null;
-  const session = await getServerSession(authOptions);
-  const id = session?.user?.id;
-  const sessionId = session?.user?.sessionId;
-  if (!id || !sessionId) return null;
+  if (!store.getAll().some((cookie) => cookie.name.includes("next-auth.session-token"))) return null;
+  // The token is decrypted and checked (expiry included) as next-auth's getServerSession does, but
+  // without its session route, which also re-encrypts the token into a new cookie on every call:
+  // the browser's SessionProvider keeps the session sliding through /api/auth/session. Only the
+  // cookies are passed, so a JWT in an Authorization header is never taken for a session. The key is
+  // derived once (session-token.ts).
+  const token = await getToken({ req: { cookies: store, headers: {} } as unknown as NextRequest, secret: getAuthSecret(), decode: decodeSessionToken });
+  const id = token?.id;
+  const sessionId = token?.sid;
+  if (typeof id !== "string" || typeof sessionId !== "string") return null;
   return getActorForSession(id, sessionId);
 });
 
