@@ -226,8 +226,9 @@ export interface SectorSeries {
 }
 
 /**
- * Per-call memo of `computeSpectrum`: each distinct (sector kind, nu, orientation relation) is
- * counted once, however many sectors share it, and pair supersymmetry once per shape.
+ * What `computeSpectrum` looks up per sector: the counted series of each (sector kind, nu,
+ * orientation relation) and the supersymmetry of each pair shape, each worked out once however
+ * many sectors share it (see `seriesTable`).
  */
 export interface SectorContext {
   /** Spacetime dimension D. */
@@ -254,15 +255,14 @@ export interface SectorContext {
 export function createSectorContext(configuration: Configuration): SectorContext {
   const dimension = dimensionOf(configuration);
   const cap = rational(configuration.levels);
-  const seriesMemo = new Map<string, SectorSeries>();
-  const susyMemo = new Map<string, boolean>();
   const stackCount = configuration.stacks.length;
   return {
     dimension,
     towerLimit: towerRowLimit((stackCount * (stackCount + 1)) / 2),
     series(kind, nu, sameOrientation) {
-      const key = `${kind}|${nu}|${kind === "bosonic" || sameOrientation}`;
-      let series = seriesMemo.get(key);
+      // Everything the series depends on: D, the mass cap, the kind, nu and the orientation relation.
+      const key = `${dimension}|${configuration.levels}|${kind}|${nu}|${kind === "bosonic" || sameOrientation}`;
+      let series = seriesTable.get(key);
       if (!series) {
         const zeroPoint = zeroPointEnergy(kind, { dimension, nu });
         // Highest N with N + a <= cap, on the half-integer grid: floor(2 (cap - a)) / 2.
@@ -274,20 +274,37 @@ export function createSectorContext(configuration: Configuration): SectorContext
             ? bosonicCounts(dimension, nu, countedLevel)
             : projectedDegeneracies(kind, { nu, sameOrientation, maxLevel: countedLevel });
         series = buildSeries(kind, zeroPoint, counts, cap);
-        seriesMemo.set(key, series);
+        remember(seriesTable, key, series);
       }
       return series;
     },
     pairSupersymmetric(a, b) {
       const key = `${a.worldvolume.join(",")}|${a.anti}|${b.worldvolume.join(",")}|${b.anti}`;
-      let preserved = susyMemo.get(key);
+      let preserved = supersymmetryTable.get(key);
       if (preserved === undefined) {
         preserved = pairPreservesSupersymmetry(a, b);
-        susyMemo.set(key, preserved);
+        remember(supersymmetryTable, key, preserved);
       }
       return preserved;
     },
   };
+}
+
+/**
+ * Tables of pure functions of a few small inputs, kept across calls: the counted series (exact
+ * degeneracies and zero points) of each (D, mass cap, kind, nu, orientation relation), and the
+ * supersymmetry of each pair of worldvolumes and orientations. Neither depends on positions, counts,
+ * labels or anything else of a configuration, so a table entry is what a fresh count would give;
+ * the entries are never mutated (rows are built from them). Each table is emptied when it reaches
+ * `tableLimit` entries, which bounds its memory.
+ */
+const seriesTable = new Map<string, SectorSeries>();
+const supersymmetryTable = new Map<string, boolean>();
+const tableLimit = 2048;
+
+function remember<T>(table: Map<string, T>, key: string, value: T): void {
+  if (table.size >= tableLimit) table.clear();
+  table.set(key, value);
 }
 
 /**
