@@ -19,17 +19,22 @@ import { rateLimitBuckets } from "../schema";
  */
 export async function hitRateLimitBucket(key: string, windowStart: Date, limit: number, weight = 1): Promise<number | null> {
   const hits = Math.min(Math.max(1, Math.floor(weight)), limit);
-  const [row] = await db
-    .insert(rateLimitBuckets)
-    .values({ key, windowStart, count: hits })
-    .onConflictDoUpdate({
-      target: [rateLimitBuckets.key, rateLimitBuckets.windowStart],
-      set: { count: sql`${rateLimitBuckets.count} + ${hits}` },
-      setWhere: lte(sql`${rateLimitBuckets.count} + ${hits}`, limit),
-    })
-    .returning({ count: rateLimitBuckets.count });
+  const [row] = await hitStatement.execute({ key, windowStart, hits, limit });
   return row?.count ?? null;
 }
+
+// Prepared once: rate limits are checked on nearly every compute and sign-in request, and building
+// the statement costs more than running it (PostgreSQL also plans it once per connection).
+const hitStatement = db
+  .insert(rateLimitBuckets)
+  .values({ key: sql.placeholder("key"), windowStart: sql.placeholder("windowStart"), count: sql.placeholder("hits") })
+  .onConflictDoUpdate({
+    target: [rateLimitBuckets.key, rateLimitBuckets.windowStart],
+    set: { count: sql`${rateLimitBuckets.count} + ${sql.placeholder("hits")}::integer` },
+    setWhere: lte(sql`${rateLimitBuckets.count} + ${sql.placeholder("hits")}::integer`, sql`${sql.placeholder("limit")}::integer`),
+  })
+  .returning({ count: rateLimitBuckets.count })
+  .prepare("rate_limit_hit");
 
 /** Takes back one hit (e.g. after a successful sign-in); never goes below zero. */
 export async function refundRateLimitBucket(key: string, windowStart: Date): Promise<void> {
