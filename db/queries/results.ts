@@ -1,11 +1,11 @@
 import "server-only";
 import { createHash } from "node:crypto";
-import { and, eq, sql, type SQL } from "drizzle-orm";
+import { SQL, and, eq, sql } from "drizzle-orm";
 import { ENGINE_VERSION, resultInputKey } from "../../lib/boundary";
 import type { Configuration } from "../../lib/boundary/types";
 import { computeSpectrumJob } from "../../lib/server/compute/pool";
 import { parseResultNumber, type ResultSummary } from "../../lib/spectrum";
-import type { Executor, Transaction } from "../index";
+import { db, type Executor, type Transaction } from "../index";
 import { results } from "../schema";
 
 /*
@@ -58,7 +58,7 @@ export async function resultForDocument(
 ): Promise<RevisionResult> {
   const contentHash = hashDocument(document);
   const stored =
-    (await findStoredResult(executor, eq(results.contentHash, contentHash), document)) ??
+    (await findStoredResult(executor, { contentHash }, document)) ??
     (options.sameAs
       ? await findStoredResult(executor, and(eq(results.revisionId, options.sameAs.revisionId), eq(results.engineVersion, ENGINE_VERSION)), document)
       : null);
@@ -85,6 +85,23 @@ export function hashDocument(document: Configuration): string {
   return createHash("sha256").update(`${ENGINE_VERSION}\n${resultInputKey(document)}`).digest("hex");
 }
 
+/** What the reuse of a stored result reads: its id and the summary columns, never the result itself. */
+function selectStored(executor: Executor, where: SQL | undefined) {
+  return executor
+    .select({
+      id: results.id,
+      lightest: sql<string | null>`${results.result} -> 'lightest' -> 0 ->> 'massSquared'`,
+      supercharges: sql<number | null>`(${results.result} ->> 'supercharges')::int`,
+      tachyonic: sql<boolean>`jsonb_path_exists(${results.result}, '$.sectors[*] ? (@.tachyonic == true)')`,
+    })
+    .from(results)
+    .where(where)
+    .limit(1);
+}
+
+/** The lookup by content hash that every save, create, fork and restore makes, prepared once. */
+const storedByHashStatement = selectStored(db, eq(results.contentHash, sql.placeholder("contentHash"))).prepare("stored_result_by_hash");
+
 /** Stores the result of a new revision inside the revision's transaction. */
 export async function storeResult(tx: Transaction, revisionId: string, result: RevisionResult): Promise<void> {
   if (result.source === "fresh") {
@@ -108,17 +125,17 @@ export async function storeResult(tx: Transaction, revisionId: string, result: R
  * A stored result matching `where`, with the summary columns read inside PostgreSQL so the result
  * itself never travels.
  */
-async function findStoredResult(executor: Executor, where: SQL | undefined, document: Configuration): Promise<StoredResult | null> {
-  const [stored] = await executor
-    .select({
-      id: results.id,
-      lightest: sql<string | null>`${results.result} -> 'lightest' -> 0 ->> 'massSquared'`,
-      supercharges: sql<number | null>`(${results.result} ->> 'supercharges')::int`,
-      tachyonic: sql<boolean>`jsonb_path_exists(${results.result}, '$.sectors[*] ? (@.tachyonic == true)')`,
-    })
-    .from(results)
-    .where(where)
-    .limit(1);
+async function findStoredResult(
+  executor: Executor,
+  where: SQL | { contentHash: string } | undefined,
+  document: Configuration,
+): Promise<StoredResult | null> {
+  const [stored] =
+    where && !(where instanceof SQL)
+      ? executor === db
+        ? await storedByHashStatement.execute(where)
+        : await selectStored(executor, eq(results.contentHash, where.contentHash))
+      : await selectStored(executor, where);
   if (!stored) return null;
   const lightest = stored.lightest === null ? Number.NaN : parseResultNumber(stored.lightest);
   const lightestMassSquared = Number.isFinite(lightest) ? lightest : null;
