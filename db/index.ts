@@ -26,6 +26,10 @@ function connect(): DatabaseCache {
     max: env.DATABASE_POOL_MAX,
     connectionTimeoutMillis: 5_000,
     idleTimeoutMillis: 30_000,
+    // The prepared statements (db/queries/actor.ts, configuration-access.ts, ...) are indexed lookups
+    // by id, for which a plan made once serves every value; left to choose, PostgreSQL keeps
+    // re-planning the access join for each call's values. Unprepared statements are unaffected.
+    options: "-c plan_cache_mode=force_generic_plan",
   });
   // An idle client loses its connection when PostgreSQL restarts; without a listener the
   // 'error' event would crash the process. The pool replaces the client on the next query.
