@@ -2,7 +2,7 @@
 
 import { useMemo, useState } from "react";
 import { CartesianGrid, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
-import { INTERACTION_CONVENTIONS, interactionCurves } from "@/lib/boundary/interaction";
+import { INTERACTION_CONVENTIONS, createInteractionCache, interactionCurve, interactionPairs } from "@/lib/boundary/interaction";
 import type { Configuration } from "@/lib/boundary/types";
 import { formatNumber } from "@/lib/spectrum";
 import { axisStyle, horizontalAxisLabel, tooltipContentStyle, verticalAxisLabel } from "./chart-style";
@@ -15,17 +15,21 @@ export interface InteractionPlotProps {
 /**
  * The annulus interaction potential V(y) of one pair at a time, chosen from a list, with the
  * critical separation y_c and the pair's own separation marked and the sign conventions stated.
+ * Only the chosen pair's curve is computed (a 64-stack configuration has some two thousand pairs).
  */
 export function InteractionPlot({ document }: InteractionPlotProps) {
-  const curves = useMemo(() => interactionCurves(document), [document]);
+  const curves = useMemo(() => interactionPairs(document), [document]);
+  // Pairs of one shape share their samples: one cache per document, kept while pairs are chosen.
+  const cache = useMemo(() => createInteractionCache(), [document]);
   const [selected, setSelected] = useState(0);
+  const chosen = curves[Math.min(selected, curves.length - 1)];
+  const curve = useMemo(() => (chosen ? interactionCurve(chosen, cache) : null), [chosen, cache]);
   if (document.theory === "bosonic") {
     return <p className="text-sm text-muted-foreground">Not computed for the bosonic string: its closed-string tachyon makes the annulus diverge.</p>;
   }
   if (curves.length === 0) {
     return <p className="text-sm text-muted-foreground">No two stacks share a Dirichlet axis, so there is no separation to plot a force against.</p>;
   }
-  const curve = curves[Math.min(selected, curves.length - 1)] ?? curves[0];
   if (!curve) return null;
   const name = (pair: readonly [string, string]) => `${pair[0]} \u2013 ${pair[1]}`;
   return (

@@ -80,4 +80,14 @@ export {
 export { stacksUnderPlane, omegaTwistedCounts, groupName, planeGeometry, type StackUnderPlane } from "./orientifold";
 export { maxOrientifolds } from "./orientifold-check";
 export { planeCharge, tadpoleBalance } from "./tadpole";
-export { interactionCurves, interactionSampleCount, INTERACTION_CONVENTIONS, type InteractionCurve } from "./interaction";
+export {
+  createInteractionCache,
+  interactionCurve,
+  interactionCurves,
+  interactionPairs,
+  interactionSampleCount,
+  INTERACTION_CONVENTIONS,
+  type InteractionCache,
+  type InteractionCurve,
+  type InteractionPair,
+} from "./interaction";

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { braneAntibraneSupergravity } from "./annulus";
 import { computeSpectrum } from "./spectrum";
-import { interactionCurves, interactionSampleCount } from "./interaction";
+import { interactionCurve, interactionCurves, interactionPairs, interactionSampleCount } from "./interaction";
 import type { Configuration } from "./types";
 
 const d3 = (id: string, anti: boolean, y: number, count = 1) => ({ id, label: "", count, anti, worldvolume: [1, 2, 3], position: { "9": y } });
@@ -51,3 +51,28 @@ describe("interactionCurves", () => {
     expect(interactionCurves(configuration)).toEqual([]);
   });
 });
+
+describe("interactionPairs and interactionCurve", () => {
+  const configuration = document(
+    [d3("a", false, 0.5), d3("b", true, 7, 2), d3("c", false, 4), { id: "d", label: "", count: 1, anti: false, worldvolume: [1, 2, 3, 4, 5, 6, 7], position: { "9": 2 } }],
+    [{ id: "o", type: "O-", worldvolume: [1, 2, 3], position: {} }],
+  );
+
+  it("lists the pairs of interactionCurves, in its order, with their shapes and no potential", () => {
+    const pairs = interactionPairs(configuration);
+    const curves = interactionCurves(configuration);
+    expect(pairs.map((pair) => pair.pair)).toEqual(curves.map((curve) => curve.pair));
+    expect(pairs[0]).not.toHaveProperty("samples");
+    expect(pairs.map(({ nu, nn, dd, sameOrientation, labels, separation }) => ({ nu, nn, dd, sameOrientation, labels, separation }))).toEqual(
+      curves.map(({ nu, nn, dd, sameOrientation, labels, separation }) => ({ nu, nn, dd, sameOrientation, labels, separation })),
+    );
+  });
+
+  it("computes any one pair's curve alone exactly as interactionCurves does among all of them", () => {
+    const curves = interactionCurves(configuration);
+    interactionPairs(configuration).forEach((pair, index) => {
+      expect(interactionCurve(pair)).toEqual(curves[index]);
+    });
+  });
+});
+

@@ -47,18 +47,22 @@ export interface InteractionCurve {
   samples: { y: number; v: number }[];
 }
 
+/** A pair whose V(y) can be plotted: its shape and separation, without the potential itself. */
+export type InteractionPair = Pick<InteractionCurve, "pair" | "nu" | "nn" | "dd" | "sameOrientation" | "labels" | "separation">;
+
 /**
- * V(y) for every pair of different stacks of a configuration, and (with an orientifold plane) of
- * every stack with the image of a stack off the plane, that share a Dirichlet axis: the pairs of the
- * engine's sectors, in the same order (pairs in id order, then stacks with images).
+ * Every pair of different stacks of a configuration, and (with an orientifold plane) every stack
+ * with the image of a stack off the plane, that share a Dirichlet axis: the pairs of the engine's
+ * sectors, in the same order (pairs in id order, then stacks with images). Cheap: no potential is
+ * computed (see {@link interactionCurve}).
  *
  * @param configuration - A configuration that `checkConfiguration` passes (type II; the bosonic
  *   theory yields [] because its closed-string tachyon makes the annulus diverge).
- * @returns One curve per separable pair.
+ * @returns One entry per separable pair.
  * @example
- * interactionCurves(d3AntiD3)[0]?.criticalSeparation // => 4.442882938158366
+ * interactionPairs(d3AntiD3)[0]?.nu // => 0
  */
-export function interactionCurves(configuration: Configuration): InteractionCurve[] {
+export function interactionPairs(configuration: Configuration): InteractionPair[] {
   if (configuration.theory === "bosonic") return [];
   const dimension = dimensionOf(configuration);
   const stacks = [...configuration.stacks].sort(compareStackIds);
@@ -82,45 +86,87 @@ export function interactionCurves(configuration: Configuration): InteractionCurv
       }
     }
   }
-  const curveOf = createAnnulusCache();
-  const samplesMemo = new Map<string, { y: number; v: number }[]>();
-  const curves: InteractionCurve[] = [];
+  const separable: InteractionPair[] = [];
   for (const { a, b, labels } of pairs) {
     const classification = classifyPair(a, b, dimension);
     if (classification.dd === 0) continue;
-    const shape: AnnulusShape = { nu: classification.nu, nn: classification.nn, sameOrientation: a.anti === b.anti };
-    const curve = curveOf(shape);
-    const key = `${shape.nu}|${shape.nn}|${shape.sameOrientation}`;
-    let perLabel = samplesMemo.get(key);
-    if (!perLabel) {
-      perLabel = [];
-      if (curve.undefinedReason === null) {
-        const start = curve.criticalSeparation ?? 1;
-        for (let k = 0; k < interactionSampleCount; k += 1) {
-          const y = start + (sampledSpan * k) / (interactionSampleCount - 1);
-          const v = curve.potential(y);
-          if (v !== null) perLabel.push({ y, v });
-        }
-      }
-      samplesMemo.set(key, perLabel);
-    }
-    const own = curve.potential(classification.separation);
-    curves.push({
+    separable.push({
       pair: [a.id, b.id],
-      nu: shape.nu,
-      nn: shape.nn,
+      nu: classification.nu,
+      nn: classification.nn,
       dd: classification.dd,
-      sameOrientation: shape.sameOrientation,
+      sameOrientation: a.anti === b.anti,
       labels,
       separation: classification.separation,
-      criticalSeparation: curve.criticalSeparation,
-      atSeparation: own === null ? null : own * labels,
-      vanishes: curve.vanishes,
-      undefinedReason: curve.undefinedReason,
-      samples: perLabel.map(({ y, v }) => ({ y, v: v * labels })),
     });
   }
-  return curves;
+  return separable;
+}
+
+/** Work shared between the curves of one call: the annulus of each shape and its samples. */
+export interface InteractionCache {
+  annulus: ReturnType<typeof createAnnulusCache>;
+  samples: Map<string, { y: number; v: number }[]>;
+}
+
+/** A fresh {@link InteractionCache}. */
+export function createInteractionCache(): InteractionCache {
+  return { annulus: createAnnulusCache(), samples: new Map() };
+}
+
+/**
+ * V(y) of one pair from {@link interactionPairs}: the samples, the critical separation and the
+ * value at the pair's own separation.
+ *
+ * @param pair - An entry of `interactionPairs(configuration)`.
+ * @param cache - Shared between the curves of one configuration (pairs of one shape share their
+ *   samples); a fresh one by default.
+ * @returns The pair's curve.
+ * @example
+ * interactionCurve(interactionPairs(d3AntiD3)[0]!).criticalSeparation // => 4.442882938158366
+ */
+export function interactionCurve(pair: InteractionPair, cache: InteractionCache = createInteractionCache()): InteractionCurve {
+  const shape: AnnulusShape = { nu: pair.nu, nn: pair.nn, sameOrientation: pair.sameOrientation };
+  const curve = cache.annulus(shape);
+  const key = `${shape.nu}|${shape.nn}|${shape.sameOrientation}`;
+  let perLabel = cache.samples.get(key);
+  if (!perLabel) {
+    perLabel = [];
+    if (curve.undefinedReason === null) {
+      const start = curve.criticalSeparation ?? 1;
+      for (let k = 0; k < interactionSampleCount; k += 1) {
+        const y = start + (sampledSpan * k) / (interactionSampleCount - 1);
+        const v = curve.potential(y);
+        if (v !== null) perLabel.push({ y, v });
+      }
+    }
+    cache.samples.set(key, perLabel);
+  }
+  const own = curve.potential(pair.separation);
+  const { labels } = pair;
+  return {
+    ...pair,
+    pair: [pair.pair[0], pair.pair[1]],
+    criticalSeparation: curve.criticalSeparation,
+    atSeparation: own === null ? null : own * labels,
+    vanishes: curve.vanishes,
+    undefinedReason: curve.undefinedReason,
+    samples: perLabel.map(({ y, v }) => ({ y, v: v * labels })),
+  };
+}
+
+/**
+ * V(y) for every pair of {@link interactionPairs}, in the same order (exports and the revision diff).
+ *
+ * @param configuration - A configuration that `checkConfiguration` passes (type II; the bosonic
+ *   theory yields [] because its closed-string tachyon makes the annulus diverge).
+ * @returns One curve per separable pair.
+ * @example
+ * interactionCurves(d3AntiD3)[0]?.criticalSeparation // => 4.442882938158366
+ */
+export function interactionCurves(configuration: Configuration): InteractionCurve[] {
+  const cache = createInteractionCache();
+  return interactionPairs(configuration).map((pair) => interactionCurve(pair, cache));
 }
 
 /**
