@@ -1,7 +1,7 @@
 "use client";
 
 import { useMemo } from "react";
-import { CartesianGrid, Legend, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import { CartesianGrid, ComposedChart, Legend, Line, ReferenceDot, ReferenceLine, ResponsiveContainer, Scatter, Tooltip, XAxis, YAxis } from "recharts";
 import { massCurvePoints, type MassCurve } from "@/lib/designer/plot-data";
 import { formatNumber } from "@/lib/spectrum";
 import { axisStyle, horizontalAxisLabel, tooltipContentStyle, verticalAxisLabel } from "./chart-style";
@@ -22,7 +22,19 @@ const dashes = ["", "6 3", "2 3", "10 3 2 3", "1 2", "12 4"];
 export function MassPlot({ curves: allCurves }: MassPlotProps) {
   const curves = useMemo(() => allCurves.slice(0, strokes.length * dashes.length), [allCurves]);
   const { rows, yMax } = useMemo(() => massCurvePoints(curves), [curves]);
-  const marks = useMemo(() => curves.flatMap((curve, index) => curve.sectors.map((sector) => ({ curve, index, sector }))), [curves]);
+  // The actual separations as one scatter series: hundreds of separate reference dots would each
+  // register with the chart and cost a re-render of every other one.
+  const marks = useMemo(
+    () =>
+      curves.flatMap((curve, index) =>
+        curve.sectors.map((sector): SeparationMark => ({
+          y: sector.separation,
+          mark: (sector.separation / (2 * Math.PI)) ** 2 + curve.intercept,
+          fill: strokes[index % strokes.length] ?? "currentColor",
+        })),
+      ),
+    [curves],
+  );
   if (curves.length === 0) {
     return <p className="text-sm text-muted-foreground">A single stack has no separations to plot.</p>;
   }
@@ -30,7 +42,7 @@ export function MassPlot({ curves: allCurves }: MassPlotProps) {
     <figure className="grid gap-2">
       <div className="h-72 w-full">
         <ResponsiveContainer width="100%" height="100%">
-          <LineChart data={rows} margin={{ top: 12, right: 24, bottom: 28, left: 8 }}>
+          <ComposedChart data={rows} margin={{ top: 12, right: 24, bottom: 28, left: 8 }}>
             <CartesianGrid strokeDasharray="2 4" stroke="var(--border)" />
             <XAxis
               dataKey="y"
@@ -79,18 +91,8 @@ export function MassPlot({ curves: allCurves }: MassPlotProps) {
                 />
               ) : null,
             )}
-            {marks.map(({ curve, index, sector }) => (
-              <ReferenceDot
-                key={`y-${curve.key}-${sector.key}`}
-                x={sector.separation}
-                y={(sector.separation / (2 * Math.PI)) ** 2 + curve.intercept}
-                r={4}
-                fill={strokes[index % strokes.length]}
-                stroke="var(--surface)"
-                ifOverflow="extendDomain"
-              />
-            ))}
-          </LineChart>
+            <Scatter data={marks} dataKey="mark" shape={SeparationDot} legendType="none" tooltipType="none" isAnimationActive={false} />
+          </ComposedChart>
         </ResponsiveContainer>
       </div>
       <figcaption className="text-xs text-muted-foreground">
@@ -104,4 +106,19 @@ export function MassPlot({ curves: allCurves }: MassPlotProps) {
       </figcaption>
     </figure>
   );
+}
+
+/** A sector's actual separation on its curve, in the plot's coordinates. */
+interface SeparationMark {
+  /** The separation (the x axis reads `y`). */
+  y: number;
+  /** alpha' M^2 of the sector's lightest state there. */
+  mark: number;
+  /** The colour of the sector's curve. */
+  fill: string;
+}
+
+function SeparationDot({ cx, cy, payload }: { cx?: number; cy?: number; payload?: SeparationMark }) {
+  if (cx === undefined || cy === undefined) return null;
+  return <circle cx={cx} cy={cy} r={4} fill={payload?.fill} stroke="var(--surface)" data-mark="separation" />;
 }
