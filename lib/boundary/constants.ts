@@ -26,17 +26,18 @@ import { rational, type Rational } from "./rational";
  *   `fermionExpansionLatex` and `lightConeAxis` (they need only the axis types). Bosonic pairs with every spatial
  *   axis ND are counted covariantly instead of listing no levels. Notes and massless descriptions
  *   for nu = 8 (string creation), D0 and D1 content; a D7 caution; conventions state M_s.
- * - 1.2.0: orientifold planes (file format 2): image stacks and their sectors, the orientifold
- *   projection (`LevelRow.projected`, `Sector.orientifold`), SO and USp groups, the RR tadpole
- *   balance (`SpectrumResult.orientifold`); a plane counts in the supercharges. Results of
- *   configurations without planes are unchanged.
- *
- * - 1.2.0: compact axes and Wilson lines (file format 2): `Sector.compactAxes`, `Sector.tower` (momentum
+ * - 1.2.0 (file format 2), two additions in one version. Orientifold planes: image stacks and their
+ *   sectors, the orientifold projection (`LevelRow.projected`, `Sector.orientifold`), SO and USp
+ *   groups, the RR tadpole balance (`SpectrumResult.orientifold`); a plane counts in the
+ *   supercharges. Results of configurations without planes are unchanged.
+ *   Compact axes and Wilson lines: `Sector.compactAxes`, `Sector.tower` (momentum
  *   and winding states up to the mass cap) and `Sector.towerTruncated`; separations on circles are
  *   those of the nearest image, and Wilson lines shift the lightest momenta. Format 1 results are unchanged.
  * - 1.3.0: `AxisExpansion` stores the Dirichlet positions of the two ends (`positionA`, `positionB`)
  *   instead of the boson's LaTeX, which `bosonExpansionLatex` writes when it is shown: the same
- *   physics in results about a third smaller. Stored results of older engines are upgraded on read.
+ *   physics in results about a sixth smaller. Stored results of older engines are upgraded on read.
+ *   V(y) (not stored) is computed one pair at a time (`interactionPairs`, `interactionCurve`) and,
+ *   on circles, at the separation of the nearest image, as the pair's sector has it.
  *
  * @example
  * ENGINE_VERSION // => "1.3.0"

@@ -76,3 +76,14 @@ describe("interactionPairs and interactionCurve", () => {
   });
 });
 
+describe("interactionPairs on a circle", () => {
+  it("takes the nearest image's separation, as the pair's sector does (compact.ts, describeCompactPair)", () => {
+    // Two D3s on x9 of radius 1 at 0.5 and 2 pi - 0.5: the nearest images are 1 apart, not 2 pi - 1.
+    const configuration: Configuration = { ...document([d3("a", false, 0.5), d3("b", true, 2 * Math.PI - 0.5)]), compact: { "9": 1 } };
+    const [pair] = interactionPairs(configuration);
+    expect(pair?.separation).toBeCloseTo(1, 12);
+    const sector = computeSpectrum(configuration).sectors.find((candidate) => candidate.pair.join() === "a,b");
+    expect(pair?.separation).toBeCloseTo(sector?.separation ?? Number.NaN, 12);
+  });
+});
+

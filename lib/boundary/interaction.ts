@@ -16,6 +16,7 @@
 import { createAnnulusCache, type AnnulusShape } from "./annulus";
 import { compareStackIds, dimensionOf } from "./check";
 import { classifyPair } from "./classify";
+import { describeCompactPair } from "./compact";
 import { stacksUnderPlane, type StackUnderPlane } from "./orientifold";
 import type { Configuration, Stack } from "./types";
 
@@ -88,7 +89,9 @@ export function interactionPairs(configuration: Configuration): InteractionPair[
   }
   const separable: InteractionPair[] = [];
   for (const { a, b, labels } of pairs) {
-    const classification = classifyPair(a, b, dimension);
+    // On circles the separation is that of the nearest image, as in the pair's sector (the
+    // potential of the other images is not added: see CONVENTIONS.md).
+    const { classification } = describeCompactPair(classifyPair(a, b, dimension), a, b, configuration);
     if (classification.dd === 0) continue;
     separable.push({
       pair: [a.id, b.id],
