@@ -7,6 +7,7 @@ import { demoAccounts, newAccount, signIn, signInTimeout } from "./helpers/accou
 import { createInGroup, demoGroupSlug, unique } from "./helpers/configurations";
 import { openDesigner, saveWithMessage } from "./helpers/designer";
 import { waitForMessageTo } from "./helpers/mailbox";
+import { waitForStreamedContent } from "./helpers/streaming";
 
 // Editing in the designer, as a researcher meets it: document settings and masses in GeV, refused
 // values that say why, paired N<->D flips, stale saves with a merge, comparisons of forks, the phone
@@ -296,6 +297,7 @@ test.describe("designer editing", () => {
     const admin = await adminContext.newPage();
     await signIn(admin, demoAccounts.admin);
     await admin.goto(`/admin?q=${encodeURIComponent(demoAccounts.ada.email)}`);
+    await waitForStreamedContent(admin);
     await expect(admin.getByText(`1 account matching “${demoAccounts.ada.email}”`)).toBeVisible({ timeout: signInTimeout });
     await adminContext.close();
   });
