@@ -1,4 +1,4 @@
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test, type Page } from "./helpers/test";
 import { probeNearSevenBrane } from "@/lib/demo-configurations";
 import { newAccount, signUp } from "./helpers/accounts";
 

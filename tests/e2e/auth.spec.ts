@@ -1,4 +1,4 @@
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test, type Page } from "./helpers/test";
 import { confirmSignUpFromMailbox, demoAccounts, newAccount, signIn, signInTimeout, signOut, signUp, submitSignUpForm } from "./helpers/accounts";
 import { extractFirstLink, waitForMessageTo } from "./helpers/mailbox";
 

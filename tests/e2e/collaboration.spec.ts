@@ -1,4 +1,4 @@
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test, type Page } from "./helpers/test";
 import { demoAccounts, newAccount, signIn, signInTimeout } from "./helpers/accounts";
 import { waitForMessageTo } from "./helpers/mailbox";
 

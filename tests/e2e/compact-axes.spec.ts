@@ -1,4 +1,4 @@
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test, type Page } from "./helpers/test";
 import { computeSpectrum, tDualize } from "@/lib/boundary";
 import type { Configuration } from "@/lib/boundary/types";
 import { quantumNumberText } from "@/lib/spectrum";

@@ -1,4 +1,4 @@
-import { expect, test, type Locator, type Page } from "@playwright/test";
+import { expect, test, type Locator, type Page } from "./helpers/test";
 import { computeSpectrum } from "@/lib/boundary";
 import type { Configuration, Stack } from "@/lib/boundary/types";
 import { formatNumber, massInGeV } from "@/lib/spectrum";
@@ -7,7 +7,6 @@ import { demoAccounts, newAccount, signIn, signInTimeout } from "./helpers/accou
 import { createInGroup, demoGroupSlug, unique } from "./helpers/configurations";
 import { openDesigner, saveWithMessage } from "./helpers/designer";
 import { waitForMessageTo } from "./helpers/mailbox";
-import { waitForStreamedContent } from "./helpers/streaming";
 
 // Editing in the designer, as a researcher meets it: document settings and masses in GeV, refused
 // values that say why, paired N<->D flips, stale saves with a merge, comparisons of forks, the phone
@@ -297,7 +296,6 @@ test.describe("designer editing", () => {
     const admin = await adminContext.newPage();
     await signIn(admin, demoAccounts.admin);
     await admin.goto(`/admin?q=${encodeURIComponent(demoAccounts.ada.email)}`);
-    await waitForStreamedContent(admin);
     await expect(admin.getByText(`1 account matching “${demoAccounts.ada.email}”`)).toBeVisible({ timeout: signInTimeout });
     await adminContext.close();
   });

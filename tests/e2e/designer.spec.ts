@@ -1,4 +1,4 @@
-import { expect, test, type Locator } from "@playwright/test";
+import { expect, test, type Locator } from "./helpers/test";
 import { computeSpectrum } from "@/lib/boundary";
 import type { Configuration } from "@/lib/boundary/types";
 import { formatEngineProse, formatMassSquared, parseResultNumber, sectorNames } from "@/lib/spectrum";

@@ -1,4 +1,4 @@
-import { expect, test } from "@playwright/test";
+import { expect, test } from "./helpers/test";
 import type { Configuration } from "@/lib/boundary/types";
 import { demoAccounts, signIn } from "./helpers/accounts";
 import { createInGroup, unique } from "./helpers/configurations";

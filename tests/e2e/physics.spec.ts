@@ -1,5 +1,5 @@
 import Papa from "papaparse";
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test, type Page } from "./helpers/test";
 import { computeSpectrum } from "@/lib/boundary";
 import type { Configuration, Stack } from "@/lib/boundary/types";
 import { formatEngineProse, formatWorldvolume } from "@/lib/spectrum";

@@ -1,4 +1,4 @@
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test, type Page } from "./helpers/test";
 import type { Configuration, Stack } from "@/lib/boundary/types";
 import { demoAccounts, signIn } from "./helpers/accounts";
 import { createInGroup, unique } from "./helpers/configurations";

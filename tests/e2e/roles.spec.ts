@@ -1,4 +1,4 @@
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test, type Page } from "./helpers/test";
 import { demoAccounts, newAccount, signIn, signUp } from "./helpers/accounts";
 
 /** The shape of GET /api/configurations rows this file reads. */

@@ -1,4 +1,4 @@
-import { expect, test, type Locator } from "@playwright/test";
+import { expect, test, type Locator } from "./helpers/test";
 import { landingDemoConfiguration } from "@/lib/demo-configurations";
 import { demoAccounts, signIn } from "./helpers/accounts";
 

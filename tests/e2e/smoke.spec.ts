@@ -1,4 +1,4 @@
-import { expect, test } from "@playwright/test";
+import { expect, test } from "./helpers/test";
 
 test.describe("home page", () => {
   test("loads and shows the product name", async ({ page }) => {

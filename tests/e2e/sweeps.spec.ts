@@ -1,10 +1,9 @@
-import { expect, test } from "@playwright/test";
+import { expect, test } from "./helpers/test";
 import type { Configuration } from "@/lib/boundary/types";
 import { computeSweepPoint, pointDocument, pointVerdict, type SweepDefinition } from "@/lib/sweeps";
 import { braneAntibraneAtOrigin } from "@/lib/sweeps/test-configurations";
 import { demoAccounts, signIn, signInTimeout } from "./helpers/accounts";
 import { createInGroup } from "./helpers/configurations";
-import { waitForStreamedContent } from "./helpers/streaming";
 
 // A sweep end to end: define it on a saved configuration, start it, watch the worker that
 // scripts/test.mjs runs against the e2e database store its points, read the table and the map,
@@ -21,7 +20,6 @@ test.describe("sweeps", () => {
     const id = await createInGroup(page, base);
 
     await page.goto(`/configurations/${id}/sweeps`);
-    await waitForStreamedContent(page);
     await expect(page.getByText("No sweeps yet")).toBeVisible({ timeout: 30_000 });
     // The form starts with the last stack's last Dirichlet axis: b on x9, from 0 to 5.
     await expect(page.getByLabel("Stack")).toHaveValue("b");
@@ -84,7 +82,6 @@ test.describe("sweeps in a lab", () => {
     const forkId = new URL(student.url()).pathname.split("/").pop() ?? "";
 
     await student.goto(`/configurations/${forkId}/sweeps`);
-    await waitForStreamedContent(student);
     // Dimension 1: the right stack's separation along x3, at 0, 1 and 2.
     await expect(student.getByLabel("Stack")).toHaveValue("right", { timeout: 30_000 });
     await student.getByLabel("Axis").selectOption("3");
