@@ -18,16 +18,16 @@ export interface InteractionPlotProps {
  * Only the chosen pair's curve is computed (a 64-stack configuration has some two thousand pairs).
  */
 export function InteractionPlot({ document }: InteractionPlotProps) {
-  const curves = useMemo(() => interactionPairs(document), [document]);
+  const pairs = useMemo(() => interactionPairs(document), [document]);
   // Pairs of one shape share their samples: one cache per document, kept while pairs are chosen.
   const cache = useMemo(() => createInteractionCache(), [document]);
   const [selected, setSelected] = useState(0);
-  const chosen = curves[Math.min(selected, curves.length - 1)];
+  const chosen = pairs[Math.min(selected, pairs.length - 1)];
   const curve = useMemo(() => (chosen ? interactionCurve(chosen, cache) : null), [chosen, cache]);
   if (document.theory === "bosonic") {
     return <p className="text-sm text-muted-foreground">Not computed for the bosonic string: its closed-string tachyon makes the annulus diverge.</p>;
   }
-  if (curves.length === 0) {
+  if (pairs.length === 0) {
     return <p className="text-sm text-muted-foreground">No two stacks share a Dirichlet axis, so there is no separation to plot a force against.</p>;
   }
   if (!curve) return null;
@@ -37,12 +37,12 @@ export function InteractionPlot({ document }: InteractionPlotProps) {
       <label className="flex flex-wrap items-center gap-2 text-xs">
         <span className="text-muted-foreground">Pair</span>
         <select
-          value={Math.min(selected, curves.length - 1)}
+          value={Math.min(selected, pairs.length - 1)}
           onChange={(event) => setSelected(Number(event.target.value))}
           className="h-8 rounded border border-border-strong bg-surface px-1 text-sm"
           aria-label="Pair for the interaction potential"
         >
-          {curves.map((c, index) => (
+          {pairs.map((c, index) => (
             <option key={name(c.pair)} value={index}>
               {name(c.pair)} (nu = {c.nu})
             </option>

@@ -95,7 +95,7 @@ function withAccessJoins<TQuery extends PgSelect>(query: TQuery, configurationId
  * more than running it). A transaction prepares the same statement, under the same name, on its own
  * connection (`prepareAccess`), so the read-back of a save is not planned afresh either.
  */
-const accessStatement = selectAccess(db, sql.placeholder("configurationId"), sql.placeholder("userId")).prepare("configuration_access");
+const accessStatement = prepareAccess(db);
 function prepareAccess(executor: Executor) {
   return selectAccess(executor, sql.placeholder("configurationId"), sql.placeholder("userId")).prepare("configuration_access");
 }

@@ -1,6 +1,6 @@
 import "server-only";
 import { createHash } from "node:crypto";
-import { SQL, and, eq, sql } from "drizzle-orm";
+import { and, eq, sql, type SQL } from "drizzle-orm";
 import { ENGINE_VERSION, resultInputKey } from "../../lib/boundary";
 import type { Configuration } from "../../lib/boundary/types";
 import { computeSpectrumJob } from "../../lib/server/compute/pool";
@@ -58,9 +58,12 @@ export async function resultForDocument(
 ): Promise<RevisionResult> {
   const contentHash = hashDocument(document);
   const stored =
-    (await findStoredResult(executor, { contentHash }, document)) ??
+    (await findStoredResult(
+      executor === db ? storedByHashStatement.execute({ contentHash }) : selectStored(executor, eq(results.contentHash, contentHash)),
+      document,
+    )) ??
     (options.sameAs
-      ? await findStoredResult(executor, and(eq(results.revisionId, options.sameAs.revisionId), eq(results.engineVersion, ENGINE_VERSION)), document)
+      ? await findStoredResult(selectStored(executor, and(eq(results.revisionId, options.sameAs.revisionId), eq(results.engineVersion, ENGINE_VERSION))), document)
       : null);
   if (stored) return stored;
   const outcome = await computeSpectrumJob({ document, overview: true }, { problemsAt: options.problemsAt ?? ["document"] });
@@ -99,6 +102,8 @@ function selectStored(executor: Executor, where: SQL | undefined) {
     .limit(1);
 }
 
+type StoredRow = Awaited<ReturnType<typeof selectStored>>[number];
+
 /** The lookup by content hash that every save, create, fork and restore makes, prepared once. */
 const storedByHashStatement = selectStored(db, eq(results.contentHash, sql.placeholder("contentHash"))).prepare("stored_result_by_hash");
 
@@ -122,20 +127,11 @@ export async function storeResult(tx: Transaction, revisionId: string, result: R
 }
 
 /**
- * A stored result matching `where`, with the summary columns read inside PostgreSQL so the result
- * itself never travels.
+ * The stored result a lookup found (see `selectStored`: the summary columns are read inside
+ * PostgreSQL, so the result itself never travels), or null.
  */
-async function findStoredResult(
-  executor: Executor,
-  where: SQL | { contentHash: string } | undefined,
-  document: Configuration,
-): Promise<StoredResult | null> {
-  const [stored] =
-    where && !(where instanceof SQL)
-      ? executor === db
-        ? await storedByHashStatement.execute(where)
-        : await selectStored(executor, eq(results.contentHash, where.contentHash))
-      : await selectStored(executor, where);
+async function findStoredResult(lookup: PromiseLike<StoredRow[]>, document: Configuration): Promise<StoredResult | null> {
+  const [stored] = await lookup;
   if (!stored) return null;
   const lightest = stored.lightest === null ? Number.NaN : parseResultNumber(stored.lightest);
   const lightestMassSquared = Number.isFinite(lightest) ? lightest : null;

@@ -1,5 +1,4 @@
 import { test as base, type BrowserContext, type Page } from "@playwright/test";
-import { waitForStreamedContent } from "./streaming";
 
 export { expect, type Locator, type Page } from "@playwright/test";
 
@@ -50,4 +49,14 @@ function patchPage(page: Page): Page {
     return response;
   };
   return page;
+}
+
+/**
+ * Waits until the page has revealed every streamed segment. React streams a Suspense boundary's
+ * content into a hidden `div[hidden][id^="S:"]` and reveals it a moment later (reveals are batched);
+ * until then the hidden copy sits beside what is on screen, and a text or label locator matches both
+ * (a strict-mode error).
+ */
+async function waitForStreamedContent(page: Page, timeout: number): Promise<void> {
+  await page.waitForFunction(() => document.querySelectorAll('div[hidden][id^="S:"]').length === 0, undefined, { timeout });
 }
