@@ -4,7 +4,8 @@ import { and, asc, count, eq, ilike, inArray, isNull, sql, type SQL } from "driz
 import type { Configuration } from "../../lib/boundary/types";
 import { parseConfigurationFileBytes } from "../../lib/validations/import";
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from "../../lib/errors";
-import { db, type Executor } from "../index";
+import { db } from "../index";
+import { preparedSql } from "../prepared-sql";
 import { auditLog, configurations, groups, memberships, results, revisions, shareLinks, users, type GroupRole } from "../schema";
 import { assertUuid, requireActor, requireGroupRole, type Actor } from "./actor";
 import { recordAudit } from "./audit";
@@ -154,10 +155,12 @@ async function insertConfiguration(
  * applies when the stored version equals `expectedVersion`; otherwise ConflictError (with the
  * current version) and nothing is written, so concurrent saves never overwrite each other.
  *
- * The write is one statement (see `saveRevisionStatement`): the role and version checks, the new
- * revision, its result, the configuration's new columns and the audit entry land together or not
- * at all, and the configuration is read back in the same transaction. Only when it writes nothing
- * is the reason looked up (404, 403 or 409).
+ * The access check (404, 403) and a stale version (409) are answered before anything is computed.
+ * The write is then one statement (see `saveRevision`), which checks the role and the version
+ * again: the new revision, its result, the configuration's new columns and the audit entry land
+ * together or not at all, and nothing runs after it commits, so an answered error always means
+ * nothing was saved. When it writes nothing (someone saved, deleted or changed the author's role
+ * in between) the reason is looked up afresh.
  */
 export async function updateConfiguration(
   actor: Actor | null,
@@ -167,23 +170,40 @@ export async function updateConfiguration(
   const author = requireActor(actor);
   assertUuid(configurationId, "configuration");
   assertExpectedVersion(input.expectedVersion);
+  const access = await requireConfigurationRole(db, actor, configurationId, "editor");
+  if (access.row.version !== input.expectedVersion) throw new ConflictError(access.row.version);
   const computed = await resultForDocument(db, input.document);
   const columns = documentColumns(input.document, computed.summary);
+  const revisionId = randomUUID();
+  let saved: SavedRevision | undefined;
   try {
-    // The read-back shares the save's transaction: if the database fails after the write, the
-    // caller's error means nothing was saved (never a saved revision answered with a 503).
-    return await db.transaction(async (tx) => {
-      const saved = await saveRevisionStatement(tx, author, configurationId, input, columns, computed);
-      const access = await requireConfigurationRole(tx, actor, configurationId, saved ? "viewer" : "editor");
-      if (!saved) throw new ConflictError(access.row.version);
-      return toConfigurationDto(access.row, access.context, access.role);
+    [saved] = await saveRevision(computed)({
+      revisionId,
+      configurationId,
+      expectedVersion: input.expectedVersion,
+      authorId: author.id,
+      authorIsAdmin: author.siteRole === "admin",
+      message: input.message.trim(),
+      document: JSON.stringify(columns.document),
+      title: columns.title,
+      description: columns.description,
+      theory: columns.theory,
+      stackCount: columns.stackCount,
+      lightestMassSquared: columns.lightestMassSquared,
+      tachyonic: columns.tachyonic,
+      supercharges: columns.supercharges,
+      ...resultValues(computed),
     });
   } catch (error) {
     // Two saves from the same version: the later one meets the earlier one's revision number.
     if (!isUniqueViolation(error)) throw error;
-    const access = await requireConfigurationRole(db, actor, configurationId, "editor");
-    throw new ConflictError(access.row.version);
   }
+  if (!saved) {
+    const current = await requireConfigurationRole(db, actor, configurationId, "editor");
+    throw new ConflictError(current.row.version);
+  }
+  const row = { ...access.row, ...columns, version: saved.version, currentRevisionId: revisionId, updatedAt: saved.updated_at };
+  return toConfigurationDto(row, access.context, access.role);
 }
 
 /** Refuses an `expectedVersion` that is not a positive whole number (422). */
@@ -193,39 +213,49 @@ function assertExpectedVersion(expectedVersion: number): void {
   }
 }
 
+/** What the save statement returns: the configuration's new version and when it was written. */
+interface SavedRevision {
+  version: number;
+  updated_at: Date;
+}
+
+/** The save statement's result inputs: a fresh result's JSON, or the stored result to copy. */
+function resultValues(result: RevisionResult): Record<string, unknown> {
+  return result.source === "fresh"
+    ? {
+        engineVersion: result.engineVersion,
+        contentHash: result.contentHash,
+        resultJson: result.json,
+        overviewJson: result.overviewJson,
+        computeMs: Number.isFinite(result.computeMs) && result.computeMs >= 0 ? result.computeMs : 0,
+      }
+    : { resultId: result.resultId };
+}
+
 /**
- * The save as one statement of data-modifying CTEs: the revision (numbered expected + 1) is
- * inserted only where the configuration is live, in a live group, at the expected version, and the
- * author may edit it (editor, owner or site admin); its result, the configuration's update (which
- * again requires the expected version) and the audit entry follow from it. Returns whether the
- * configuration was updated. A concurrent save from the same version fails on the revision's
- * unique number (23505) and writes nothing.
+ * The save as one statement of data-modifying CTEs, prepared once per result source: the revision
+ * (numbered expected + 1) is inserted only where the configuration is live, in a live group, at the
+ * expected version, and the author may edit it (editor, owner or site admin); its result, the
+ * configuration's update (which again requires the expected version) and the audit entry follow
+ * from it. Returns the new version, or no row when nothing was written. A concurrent save from the
+ * same version fails on the revision's unique number (23505) and writes nothing.
  */
-async function saveRevisionStatement(
-  executor: Executor,
-  author: Actor,
-  configurationId: string,
-  input: UpdateConfigurationInput,
-  columns: ReturnType<typeof documentColumns>,
-  result: RevisionResult,
-): Promise<boolean> {
-  const revisionId = randomUUID();
-  const document = JSON.stringify(columns.document);
-  const mayEdit =
-    author.siteRole === "admin"
-      ? sql`true`
-      : sql`exists (select 1 from ${memberships} m where m.group_id = c.group_id and m.user_id = ${author.id} and m.role in ('editor', 'owner'))`;
-  const storeResult =
-    result.source === "fresh"
-      ? sql`select rev.id, ${result.engineVersion}, ${result.contentHash}, ${result.json}::jsonb, ${result.overviewJson}::jsonb, ${result.computeMs} from rev`
-      : sql`select rev.id, s.engine_version, s.content_hash, s.result, s.overview, s.compute_ms from rev, ${results} s where s.id = ${result.resultId}`;
-  const outcome = await executor.execute<{ version: number }>(sql`
+function saveRevision(result: RevisionResult) {
+  return result.source === "fresh" ? saveFreshRevision : saveReusedRevision;
+}
+
+function saveRevisionStatement(storeResult: SQL): SQL {
+  const p = sql.placeholder;
+  return sql`
     with rev as (
       insert into ${revisions} (id, configuration_id, number, document, author_id, message)
-      select ${revisionId}, c.id, c.version + 1, ${document}::jsonb, ${author.id}, ${input.message.trim()}
+      select ${p("revisionId")}::uuid, c.id, c.version + 1, ${p("document")}::jsonb, ${p("authorId")}::uuid, ${p("message")}::text
       from ${configurations} c
       join ${groups} g on g.id = c.group_id and g.deleted_at is null
-      where c.id = ${configurationId} and c.version = ${input.expectedVersion} and c.deleted_at is null and ${mayEdit}
+      where c.id = ${p("configurationId")}::uuid and c.version = ${p("expectedVersion")}::int and c.deleted_at is null
+        and (${p("authorIsAdmin")}::boolean or exists (
+          select 1 from ${memberships} m
+          where m.group_id = c.group_id and m.user_id = ${p("authorId")}::uuid and m.role in ('editor', 'owner')))
       returning id, configuration_id, number
     ),
     res as (
@@ -234,22 +264,35 @@ async function saveRevisionStatement(
     ),
     upd as (
       update ${configurations} c
-      set title = ${columns.title}, description = ${columns.description}, theory = ${columns.theory},
-          document = ${document}::jsonb, stack_count = ${columns.stackCount},
-          lightest_mass_squared = ${columns.lightestMassSquared}, tachyonic = ${columns.tachyonic},
-          supercharges = ${columns.supercharges}, version = rev.number, current_revision_id = rev.id, updated_at = now()
+      set title = ${p("title")}::text, description = ${p("description")}::text, theory = ${p("theory")},
+          document = ${p("document")}::jsonb, stack_count = ${p("stackCount")}::int,
+          lightest_mass_squared = ${p("lightestMassSquared")}::double precision, tachyonic = ${p("tachyonic")}::boolean,
+          supercharges = ${p("supercharges")}::int, version = rev.number, current_revision_id = rev.id, updated_at = now()
       from rev
-      where c.id = rev.configuration_id and c.version = ${input.expectedVersion}
-      returning c.id, c.group_id, c.version
+      where c.id = rev.configuration_id and c.version = ${p("expectedVersion")}::int
+      returning c.id, c.group_id, c.version, c.updated_at
     ),
     aud as (
       insert into ${auditLog} (actor_id, group_id, action, entity_type, entity_id, details)
-      select ${author.id}, upd.group_id, 'configuration.update', 'configuration', upd.id, jsonb_build_object('version', upd.version)
+      select ${p("authorId")}::uuid, upd.group_id, 'configuration.update', 'configuration', upd.id, jsonb_build_object('version', upd.version)
       from upd
     )
-    select version from upd`);
-  return outcome.rows.length === 1;
+    select version, updated_at from upd`;
 }
+
+const saveFreshRevision = preparedSql<SavedRevision>(
+  "save_revision_fresh",
+  saveRevisionStatement(
+    sql`select rev.id, ${sql.placeholder("engineVersion")}::text, ${sql.placeholder("contentHash")}::text, ${sql.placeholder("resultJson")}::jsonb, ${sql.placeholder("overviewJson")}::jsonb, ${sql.placeholder("computeMs")}::double precision from rev`,
+  ),
+);
+
+const saveReusedRevision = preparedSql<SavedRevision>(
+  "save_revision_reused",
+  saveRevisionStatement(
+    sql`select rev.id, s.engine_version, s.content_hash, s.result, s.overview, s.compute_ms from rev, ${results} s where s.id = ${sql.placeholder("resultId")}::uuid`,
+  ),
+);
 
 /** PostgreSQL's unique_violation (23505). */
 function isUniqueViolation(error: unknown): boolean {

@@ -153,6 +153,34 @@ describe("updateConfiguration", () => {
     expect(current.document.stacks[1]?.position["9"]).toBe(2);
   });
 
+  it("answers the saved configuration as a fresh read shows it", async () => {
+    const { editor, configuration } = await scenario();
+    const saved = await updateConfiguration(editor.actor, configuration.id, {
+      expectedVersion: 1,
+      document: { ...moved(braneAntibranePair, 4), title: "  Closer pair  ", description: "moved in" },
+      message: "Closer",
+    });
+    expect(saved).toMatchObject({ version: 2, title: "Closer pair", description: "moved in", role: "editor", canEdit: true });
+    expect(saved.updatedAt.getTime()).toBeGreaterThan(configuration.updatedAt.getTime());
+    expect(saved).toEqual(await getConfiguration(editor.actor, configuration.id));
+  });
+
+  it("answers a stale save with 409 before it checks the document, and writes nothing for either", async () => {
+    const { editor, configuration } = await scenario();
+    const untitled = { ...moved(braneAntibranePair, 3), title: " " };
+    const before = await countRows(configuration.id);
+    await expect(
+      updateConfiguration(editor.actor, configuration.id, { expectedVersion: 1, document: untitled, message: "No title" }),
+    ).rejects.toMatchObject({ status: 422, issues: [{ path: ["document", "title"] }] });
+    await updateConfiguration(editor.actor, configuration.id, { expectedVersion: 1, document: moved(braneAntibranePair, 2), message: "Moved" });
+    const afterSave = await countRows(configuration.id);
+    await expect(
+      updateConfiguration(editor.actor, configuration.id, { expectedVersion: 1, document: untitled, message: "Stale, no title" }),
+    ).rejects.toMatchObject({ status: 409, currentVersion: 2 });
+    expect(afterSave).toEqual({ revisions: (before.revisions ?? 0) + 1, audit: (before.audit ?? 0) + 1 });
+    expect(await countRows(configuration.id)).toEqual(afterSave);
+  });
+
   it("accepts exactly one of several concurrent saves from the same version", async () => {
     const { editor, configuration } = await scenario();
     const attempts = await Promise.allSettled(
