@@ -5,11 +5,16 @@
  *   1. GET /api/health (the yardstick: routing plus one database round trip),
  *   2. POST /api/spectrum of a four-stack configuration whose body differs on every request,
  *   3. a configuration read with its stored result, GET /api/configurations/:id?include=result,
+ *      and for reference the same read without the result, GET /api/configurations/:id,
  *   4. a save, PUT /api/configurations/:id with If-Match (revision + result) of a document that
  *      differs on every request, so no stored result can be reused.
  * With 16 connections each case's throughput is read as a ratio to health's in the same run
  * (latency there is about 16 / throughput, so absolute figures only measure the cores); with one
- * client the p95 latencies are read. It also times the results page of the largest accepted
+ * client the p95 latencies are read. Health runs before the first case and again after every case,
+ * and each case is read against the mean of the health runs just before and after it, so that a
+ * machine whose other tenants get busier or quieter during the run moves case and yardstick alike.
+ * A read of the configuration without its result is measured for reference (no target): the
+ * session check, access check and routing that every configuration read pays. It also times the results page of the largest accepted
  * configuration (64 stacks) in Chromium and weighs the designer's first-load JavaScript. The report
  * prints each target with PASS or FAIL and writes bench-results/api.json.
  *
@@ -62,6 +67,8 @@ interface CaseReport {
   throughputToYardstick?: number;
   /** Server process CPU time per request (BENCH_SERVER_PID), unaffected by queueing on a busy machine. */
   serverCpuMsPerRequest?: number;
+  /** For health: the requests per second of each of its runs, in order. */
+  runsPerSecond?: number[];
 }
 
 interface TargetReport {
@@ -165,10 +172,22 @@ async function runCases(
   authHeaders: Record<string, string>,
 ): Promise<CaseReport[]> {
   console.log(`\n${clients} connection${clients === 1 ? "" : "s"}:`);
-  const reports: CaseReport[] = [await runCase("health", { method: "GET", path: "/api/health" }, { clients })];
+  const health = () => runCase("health", { method: "GET", path: "/api/health" }, { clients });
+  const healthRuns: CaseReport[] = [await health()];
+  const reports: CaseReport[] = [];
+  /** Runs a case, then health again; the case is read against the health runs around it. */
+  const measure = async (run: () => Promise<CaseReport>): Promise<void> => {
+    const before = healthRuns[healthRuns.length - 1];
+    const report = await run();
+    const after = await health();
+    healthRuns.push(after);
+    const yardstick = ((before?.requestsPerSecond ?? Number.NaN) + (after.requestsPerSecond ?? Number.NaN)) / 2;
+    if (report.requestsPerSecond !== undefined && yardstick > 0) report.throughputToYardstick = report.requestsPerSecond / yardstick;
+    reports.push(report);
+  };
   const spectrumHeaders = { "content-type": "application/json", ...sameOriginHeaders };
-  reports.push(
-    await runCase(
+  await measure(() =>
+    runCase(
       "spectrum",
       {
         method: "POST",
@@ -183,21 +202,50 @@ async function runCases(
   if (!first) {
     reports.push(notMeasured("configuration read", "GET", "/api/configurations/:id?include=result", handles.reason));
     reports.push(notMeasured("save", "PUT", "/api/configurations/:id", handles.reason));
-    return reports;
+  } else {
+    const readPath = `/api/configurations/${encodeURIComponent(first.id)}?include=result`;
+    const plainPath = `/api/configurations/${encodeURIComponent(first.id)}`;
+    // One request first, so that a route compiled on demand is ready before timing starts.
+    await probe("GET", readPath, authHeaders);
+    await measure(() => runCase("configuration read", { method: "GET", path: readPath, headers: authHeaders }, { clients }));
+    await measure(() => runCase(referenceReadName, { method: "GET", path: plainPath, headers: authHeaders }, { clients }));
+    // autocannon's warm-up would abort saves in flight and leave stale versions behind, so the
+    // save case warms up with one sequential save per scratch configuration instead.
+    await warmUpSaves(handles.handles, authHeaders);
+    await measure(() => runCase("save", saveRequest(handles.handles, authHeaders), { warmup: false, clients }));
   }
-  const readPath = `/api/configurations/${encodeURIComponent(first.id)}?include=result`;
-  // One request first, so that a route compiled on demand is ready before timing starts.
-  await probe("GET", readPath, authHeaders);
-  reports.push(await runCase("configuration read", { method: "GET", path: readPath, headers: authHeaders }, { clients }));
-  // autocannon's warm-up would abort saves in flight and leave stale versions behind, so the
-  // save case warms up with one sequential save per scratch configuration instead.
-  await warmUpSaves(handles.handles, authHeaders);
-  reports.push(await runCase("save", saveRequest(handles.handles, authHeaders), { warmup: false, clients }));
-  const yardstick = reports[0];
-  for (const report of reports) {
-    if (yardstick?.requestsPerSecond && report.requestsPerSecond !== undefined) report.throughputToYardstick = report.requestsPerSecond / yardstick.requestsPerSecond;
-  }
-  return reports;
+  // Health itself, as one row: every run summed, against their own mean (1.00x).
+  return [mergeRuns(healthRuns), ...reports];
+}
+
+/** The reference case: a configuration read without its result (no target). */
+const referenceReadName = "configuration read, no result (reference)";
+
+/** One report of several runs of the same case: counts summed, latencies of the runs' worst, throughput averaged. */
+function mergeRuns(runs: CaseReport[]): CaseReport {
+  const [first] = runs;
+  if (!first) throw new Error("no health run");
+  const measured = runs.filter((run) => run.requestsPerSecond !== undefined);
+  const mean = (pick: (run: CaseReport) => number | undefined) =>
+    measured.reduce((sum, run) => sum + (pick(run) ?? 0), 0) / Math.max(1, measured.length);
+  const statusCounts: Record<string, number> = {};
+  for (const run of runs) for (const [code, count] of Object.entries(run.statusCounts ?? {})) statusCounts[code] = (statusCounts[code] ?? 0) + count;
+  return {
+    ...first,
+    requests: runs.reduce((sum, run) => sum + (run.requests ?? 0), 0),
+    p50Ms: mean((run) => run.p50Ms),
+    p95Ms: Math.max(...runs.map((run) => run.p95Ms ?? 0)),
+    p99Ms: Math.max(...runs.map((run) => run.p99Ms ?? 0)),
+    meanMs: mean((run) => run.meanMs),
+    requestsPerSecond: mean((run) => run.requestsPerSecond),
+    bytesPerSecond: mean((run) => run.bytesPerSecond),
+    serverCpuMsPerRequest: measured.every((run) => run.serverCpuMsPerRequest !== undefined) ? mean((run) => run.serverCpuMsPerRequest) : undefined,
+    statusCounts,
+    errors: runs.reduce((sum, run) => sum + (run.errors ?? 0), 0),
+    timeouts: runs.reduce((sum, run) => sum + (run.timeouts ?? 0), 0),
+    throughputToYardstick: 1,
+    runsPerSecond: runs.map((run) => run.requestsPerSecond ?? Number.NaN),
+  };
 }
 
 let step = 0;
@@ -630,6 +678,10 @@ function printReport(mode: string, reports: CaseReport[]): void {
         : [`${r.name} (${r.method} ${r.path})`, "-", "-", "-", "-", "-", "-", "-", `not measured: ${r.reason ?? ""}`],
     ),
   );
+  const healthRuns = reports[0]?.runsPerSecond;
+  if (healthRuns && healthRuns.length > 1) {
+    console.log(`health runs, before the first case and after each: ${healthRuns.map((rate) => rate.toFixed(0)).join(", ")} req/s; each case is read against the two around it`);
+  }
 }
 
 function fixed(value: number | undefined, digits = 1): string {
