@@ -93,7 +93,8 @@ function withAccessJoins<TQuery extends PgSelect>(query: TQuery, configurationId
  * The access query prepared once: it runs on nearly every configuration request, and PostgreSQL
  * plans this join once per connection instead of on every call (planning it costs about 3 ms, far
  * more than running it). A transaction prepares the same statement, under the same name, on its own
- * connection (`prepareAccess`), so the read-back of a save is not planned afresh either.
+ * connection (`prepareAccess`), so the access check inside a write (a delete, a restore, a fork) is
+ * not planned afresh either.
  */
 const accessStatement = prepareAccess(db);
 function prepareAccess(executor: Executor) {

@@ -227,7 +227,7 @@ function resultValues(result: RevisionResult): Record<string, unknown> {
         contentHash: result.contentHash,
         resultJson: result.json,
         overviewJson: result.overviewJson,
-        computeMs: Number.isFinite(result.computeMs) && result.computeMs >= 0 ? result.computeMs : 0,
+        computeMs: result.computeMs,
       }
     : { resultId: result.resultId };
 }

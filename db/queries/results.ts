@@ -23,7 +23,7 @@ export interface FreshResult {
   overviewJson: string;
   summary: ResultSummary;
   engineVersion: string;
-  /** Milliseconds, to the microsecond. */
+  /** Milliseconds, to the microsecond; never negative or NaN (0 then), as the column wants. */
   computeMs: number;
 }
 
@@ -74,7 +74,7 @@ export async function resultForDocument(
     overviewJson: outcome.overviewJson ?? "null",
     summary: outcome.summary,
     engineVersion: outcome.engineVersion,
-    computeMs: outcome.computeMs,
+    computeMs: Number.isFinite(outcome.computeMs) && outcome.computeMs >= 0 ? outcome.computeMs : 0,
   };
 }
 
@@ -117,7 +117,7 @@ export async function storeResult(tx: Transaction, revisionId: string, result: R
       // The JSON text goes to PostgreSQL as it is: no parse and re-serialise on the request thread.
       result: sql`${result.json}::jsonb`,
       overview: sql`${result.overviewJson}::jsonb`,
-      computeMs: Number.isFinite(result.computeMs) && result.computeMs >= 0 ? result.computeMs : 0,
+      computeMs: result.computeMs,
     });
     return;
   }
