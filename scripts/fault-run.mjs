@@ -227,6 +227,10 @@ async function main() {
       mailboxPort: 1199,
       secret: authSecret(),
     });
+    // The load computes a few hundred spectra a minute from one account, past the default compute
+    // budget; the run is about outages, so the budget is raised out of its way (as bench:api does).
+    env.SPECTRUM_BUDGET_ACCOUNT = "100000000";
+    env.SPECTRUM_BUDGET_ANONYMOUS = "100000000";
     const migrated = await runStep("npm", ["run", "-s", "db:migrate"], { env });
     if (migrated.code !== 0) throw new Error("migrating the throwaway database failed");
     const seeded = await runStep(bin("tsx"), ["--conditions=react-server", "scripts/lib/fault-seed.ts", String(plan.workers)], { env });

@@ -44,8 +44,13 @@ function log(message) {
   console.log(`\n[test] ${message}`);
 }
 
-/** Pulls "N passed" / "N failed" out of a vitest or Playwright summary. */
+/** Pulls "N passed" / "N failed" out of a vitest, Playwright or fault-run summary. */
 function countTests(output, runner) {
+  if (runner === "fault") {
+    // scripts/fault-run.mjs ends with one "N passed, N failed" line.
+    const last = [...output.matchAll(/^(\d+) passed, (\d+) failed$/gm)].at(-1);
+    return last ? { passed: Number(last[1]), failed: Number(last[2]) } : null;
+  }
   if (runner === "vitest") {
     const line = output.match(/^\s*Tests\s+(.*)$/m)?.[1];
     if (!line) return null;
@@ -67,6 +72,7 @@ function countTests(output, runner) {
 function failingTests(output, runner) {
   // runStep has already stripped the colour codes.
   const lines = output.split("\n");
+  if (runner === "fault") return lines.filter((line) => line.startsWith("[fault] FAILED")).slice(0, 10).map((line) => line.slice(0, 400));
   const header = runner === "vitest" ? /^\s*FAIL\s+.*>\s/ : /^\s+\d+\) \[.*\] › /;
   const found = [];
   for (let i = 0; i < lines.length && found.length < 10; i += 1) {
@@ -230,7 +236,7 @@ async function main() {
       await step(
         "fault run (database restart under load)",
         () => runStep(process.execPath, ["scripts/fault-run.mjs", "--short"], { env: e2eEnv }),
-        "playwright",
+        "fault",
       );
     }
   }
