@@ -27,6 +27,14 @@ export interface RateLimitOptions {
    * protect work needing no database (e.g. stateless compute).
    */
   whenUnavailable?: "refuse" | "allow";
+  /**
+   * Units this process reserves ahead in PostgreSQL with each counted hit and then spends without a
+   * round trip (default 0: every hit is a round trip). For limits checked on every request of a hot
+   * route. Within one process the count stays exact (a request is refused only when the window
+   * holds less than its weight, reserved units included); across instances a caller may be refused
+   * up to `leaseUnits` early per instance holding unspent units, never let past the limit.
+   */
+  leaseUnits?: number;
 }
 
 /** The outcome of one `consumeRateLimit` call. */
@@ -58,10 +66,54 @@ let lastSweep = 0;
 export async function consumeRateLimit(key: string, options: RateLimitOptions, weight = 1): Promise<RateLimitResult> {
   const now = Date.now();
   const windowStart = windowStartAt(now, options.windowMs);
-  let count: number | null;
+  const limit = Math.max(1, Math.floor(options.limit));
+  // As hitRateLimitBucket counts it: at least one, at most the limit.
+  const hits = Math.min(Math.max(1, Math.floor(weight)), limit);
+  const leaseUnits = Math.max(0, Math.floor(options.leaseUnits ?? 0));
+  const lease = leaseUnits > 0 ? leaseFor(key, windowStart.getTime()) : null;
+  // One reservation per key at a time: requests arriving meanwhile wait for its units, so that
+  // concurrent requests do not each reserve ahead and strand units a later request needs.
+  while (lease?.reserving) await lease.reserving;
+  if (lease && lease.units >= hits) {
+    lease.units -= hits;
+    return { ok: true, remaining: Math.max(0, limit - lease.counted + lease.units), retryAfterSeconds: 0 };
+  }
+  let finishReserving = () => {};
+  if (lease) lease.reserving = new Promise<void>((resolve) => (finishReserving = resolve));
   try {
-    count = await hitRateLimitBucket(key, windowStart, Math.max(1, options.limit), weight);
+    return await countHit(key, options, { now, windowStart, limit, hits, leaseUnits, lease });
+  } finally {
+    if (lease) lease.reserving = null;
+    finishReserving();
+  }
+}
+
+/** The counting part of {@link consumeRateLimit}: one round trip (two near the limit when leasing). */
+async function countHit(
+  key: string,
+  options: RateLimitOptions,
+  { now, windowStart, limit, hits, leaseUnits, lease }: { now: number; windowStart: Date; limit: number; hits: number; leaseUnits: number; lease: Lease | null },
+): Promise<RateLimitResult> {
+  // What this process already holds goes towards the request; only the rest is counted now.
+  const held = lease ? lease.units : 0;
+  if (lease) lease.units = 0;
+  const needed = hits - held;
+  let count: number | null;
+  let reserved = needed;
+  try {
+    if (lease) {
+      reserved = Math.min(needed + leaseUnits, limit);
+      count = await hitRateLimitBucket(key, windowStart, limit, reserved);
+      // Near the limit the extra units may not fit where the request itself does.
+      if (count === null && reserved > needed) {
+        reserved = needed;
+        count = await hitRateLimitBucket(key, windowStart, limit, reserved);
+      }
+    } else {
+      count = await hitRateLimitBucket(key, windowStart, limit, needed);
+    }
   } catch (error) {
+    if (lease) lease.units += held;
     if (options.whenUnavailable === "allow" && isDatabaseUnavailable(error)) {
       console.error(`Rate limit "${key}" not checked: the database is unavailable; letting the request through.`);
       return { ok: true, remaining: 0, retryAfterSeconds: 0 };
@@ -70,10 +122,44 @@ export async function consumeRateLimit(key: string, options: RateLimitOptions, w
   }
   sweepNowAndThen(now);
   if (count === null) {
+    if (lease) lease.units += held;
     const resetAt = windowStart.getTime() + options.windowMs;
     return { ok: false, remaining: 0, retryAfterSeconds: Math.max(1, Math.ceil((resetAt - now) / 1000)) };
   }
-  return { ok: true, remaining: Math.max(0, options.limit - count), retryAfterSeconds: 0 };
+  if (lease) {
+    lease.units += reserved - needed;
+    lease.counted = Math.max(lease.counted, count);
+    return { ok: true, remaining: Math.max(0, limit - lease.counted + lease.units), retryAfterSeconds: 0 };
+  }
+  return { ok: true, remaining: Math.max(0, limit - count), retryAfterSeconds: 0 };
+}
+
+/** Units a process reserved ahead for a key's window and has not spent yet (see `leaseUnits`). */
+interface Lease {
+  windowStart: number;
+  /** Reserved units not spent yet. */
+  units: number;
+  /** The window's count in PostgreSQL as last seen (every instance's hits and reservations). */
+  counted: number;
+  /** The reservation in flight, which other requests for the key wait for. */
+  reserving: Promise<void> | null;
+}
+
+const leases = new Map<string, Lease>();
+/** Keys with a lease kept at most; past it, leases of ended windows go, then all (which is only stricter). */
+const maxLeases = 4096;
+
+/** The key's lease for the window, a fresh empty one when it held none for this window. */
+function leaseFor(key: string, windowStart: number): Lease {
+  const found = leases.get(key);
+  if (found && found.windowStart === windowStart) return found;
+  if (leases.size >= maxLeases) {
+    for (const [other, lease] of leases) if (lease.windowStart < windowStart) leases.delete(other);
+    if (leases.size >= maxLeases) leases.clear();
+  }
+  const lease: Lease = { windowStart, units: 0, counted: 0, reserving: null };
+  leases.set(key, lease);
+  return lease;
 }
 
 /**
@@ -99,6 +185,7 @@ export async function refundRateLimit(key: string, options: RateLimitOptions): P
 
 /** Forgets every window, or those whose key starts with `prefix` (tests start from a clean slate with it). */
 export async function resetRateLimits(prefix = ""): Promise<void> {
+  for (const key of leases.keys()) if (key.startsWith(prefix)) leases.delete(key);
   await deleteRateLimitBuckets(prefix);
 }
 

@@ -84,12 +84,75 @@ describe("consumeRateLimit", () => {
   });
 });
 
+describe("consumeRateLimit with leased units", () => {
+  beforeEach(() => {
+    vi.useFakeTimers({ toFake: ["Date"] });
+    vi.setSystemTime(new Date("2026-01-01T00:00:00Z"));
+  });
+  afterEach(() => {
+    vi.useRealTimers();
+  });
+
+  /** The window's count as PostgreSQL holds it (hits and reserved units). */
+  async function stored(key: string): Promise<number> {
+    const [row] = await db.select({ count: rateLimitBuckets.count }).from(rateLimitBuckets).where(eq(rateLimitBuckets.key, key));
+    return row?.count ?? 0;
+  }
+
+  it("reserves units ahead in PostgreSQL and spends them without counting each request there", async () => {
+    const key = freshKey("lease");
+    const options = { limit: 100, windowMs: 60_000, leaseUnits: 8 };
+    expect(await consumeRateLimit(key, options)).toEqual({ ok: true, remaining: 99, retryAfterSeconds: 0 });
+    // The hit and eight units ahead are counted at once.
+    expect(await stored(key)).toBe(9);
+    for (let i = 0; i < 8; i += 1) expect((await consumeRateLimit(key, options)).ok).toBe(true);
+    expect(await stored(key)).toBe(9);
+    expect(await consumeRateLimit(key, options)).toEqual({ ok: true, remaining: 90, retryAfterSeconds: 0 });
+    expect(await stored(key)).toBe(18);
+  });
+
+  it("stays exact in one process: the limit is met, never passed, sequentially, concurrently and by weight", async () => {
+    const sequential = freshKey("lease-seq");
+    const options = { limit: 25, windowMs: 60_000, leaseUnits: 4 };
+    const outcomes = [];
+    for (let i = 0; i < 30; i += 1) outcomes.push(await consumeRateLimit(sequential, options));
+    expect(outcomes.map((o) => o.ok)).toEqual([...Array<boolean>(25).fill(true), ...Array<boolean>(5).fill(false)]);
+    expect(outcomes[29]).toEqual({ ok: false, remaining: 0, retryAfterSeconds: 60 });
+
+    const concurrent = freshKey("lease-concurrent");
+    const together = await Promise.all(Array.from({ length: 60 }, () => consumeRateLimit(concurrent, options)));
+    expect(together.filter((o) => o.ok)).toHaveLength(25);
+
+    // Weighted hits: 7 + 7 fit in 20, another 7 does not (6 are left) and counts nothing, 6 fits.
+    const weighted = freshKey("lease-weight");
+    const weightedOptions = { limit: 20, windowMs: 60_000, leaseUnits: 4 };
+    const verdicts = [];
+    for (const weight of [7, 7, 7, 6, 1]) verdicts.push((await consumeRateLimit(weighted, weightedOptions, weight)).ok);
+    expect(verdicts).toEqual([true, true, false, true, false]);
+    expect(await stored(weighted)).toBe(20);
+  });
+
+  it("starts afresh in the next window and after a reset", async () => {
+    const key = freshKey("lease-window");
+    const options = { limit: 3, windowMs: 10_000, leaseUnits: 2 };
+    for (let i = 0; i < 3; i += 1) expect((await consumeRateLimit(key, options)).ok).toBe(true);
+    expect((await consumeRateLimit(key, options)).ok).toBe(false);
+    vi.setSystemTime(new Date("2026-01-01T00:00:10Z"));
+    expect((await consumeRateLimit(key, options)).ok).toBe(true);
+    // The reset forgets this process's unspent units too: they were reserved in the deleted window.
+    await resetRateLimits(key);
+    expect(await stored(key)).toBe(0);
+    expect((await consumeRateLimit(key, options)).ok).toBe(true);
+    expect(await stored(key)).toBe(3);
+  });
+});
+
 describe("several app instances", () => {
   /** Runs `hits` simultaneous requests in a separate Node process (own modules, own pg pool). */
-  async function instance(key: string, limit: number, hits: number): Promise<{ ok: number; refused: number }> {
+  async function instance(key: string, limit: number, hits: number, leaseUnits = 0): Promise<{ ok: number; refused: number }> {
     const { stdout } = await run(
       path.join(root, "node_modules", ".bin", "tsx"),
-      ["--conditions=react-server", "tests/support/rate-limit-instance.ts", key, String(limit), "600000", String(hits)],
+      ["--conditions=react-server", "tests/support/rate-limit-instance.ts", key, String(limit), "600000", String(hits), String(leaseUnits)],
       { cwd: root, env: process.env },
     );
     return JSON.parse(stdout.trim().split("\n").at(-1) ?? "{}") as { ok: number; refused: number };
@@ -101,6 +164,14 @@ describe("several app instances", () => {
     expect(first.ok + second.ok).toBe(40);
     expect(first.refused + second.refused).toBe(20);
     // This process (a third instance) sees the same full window.
+    expect((await peekRateLimit(key, { limit: 40, windowMs: 600_000 })).ok).toBe(false);
+  });
+
+  it("with leased units, never accept past the limit between them, and refuse at most their unspent units early", async () => {
+    const key = freshKey("instances-lease");
+    const [first, second] = await Promise.all([instance(key, 40, 30, 5), instance(key, 40, 30, 5)]);
+    expect(first.ok + second.ok).toBeLessThanOrEqual(40);
+    expect(first.ok + second.ok).toBeGreaterThanOrEqual(40 - 2 * 5);
     expect((await peekRateLimit(key, { limit: 40, windowMs: 600_000 })).ok).toBe(false);
   });
 
