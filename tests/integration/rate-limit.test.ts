@@ -15,15 +15,19 @@ const root = path.resolve(import.meta.dirname, "..", "..");
 /** A fresh key per test, so tests never see each other's windows. */
 const freshKey = (label: string) => `test:${label}:${randomUUID()}`;
 
-describe("consumeRateLimit", () => {
+/** Pins the clock to the start of a window for each test of the block (only Date: the pg driver keeps its real timers). */
+function pinClock(): void {
   beforeEach(() => {
-    // Only Date is faked: the pg driver keeps its real timers.
     vi.useFakeTimers({ toFake: ["Date"] });
     vi.setSystemTime(new Date("2026-01-01T00:00:00Z"));
   });
   afterEach(() => {
     vi.useRealTimers();
   });
+}
+
+describe("consumeRateLimit", () => {
+  pinClock();
 
   it("allows `limit` requests per window, then refuses with the seconds left", async () => {
     const key = freshKey("limit");
@@ -85,13 +89,7 @@ describe("consumeRateLimit", () => {
 });
 
 describe("consumeRateLimit with leased units", () => {
-  beforeEach(() => {
-    vi.useFakeTimers({ toFake: ["Date"] });
-    vi.setSystemTime(new Date("2026-01-01T00:00:00Z"));
-  });
-  afterEach(() => {
-    vi.useRealTimers();
-  });
+  pinClock();
 
   /** The window's count as PostgreSQL holds it (hits and reserved units). */
   async function stored(key: string): Promise<number> {
