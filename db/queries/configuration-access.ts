@@ -5,6 +5,7 @@ import { NotFoundError, ForbiddenError } from "../../lib/errors";
 import { db, type Executor } from "../index";
 import { configurations, groups, memberships, results, revisions, users, type ConfigurationRow, type GroupRole } from "../schema";
 import { assertUuid, requireActor, roleAtLeast, type Actor } from "./actor";
+import { storedResultByHash, type StoredRow } from "./results";
 
 /** Where a fork came from, as far as the reader may see it. */
 export interface ForkSource {
@@ -124,6 +125,37 @@ export async function requireConfigurationRole(
   assertUuid(configurationId, "configuration");
   const [found] = await (executor === db ? accessStatement : prepareAccess(executor)).execute({ configurationId, userId: signedIn.id });
   return resolveAccess(found, signedIn, minimum);
+}
+
+/**
+ * The save's access statement: {@link selectAccess} with the lookup of a stored result by the new
+ * document's content hash (the reuse check of db/queries/results.ts), one round trip for both.
+ */
+const accessForSaveStatement = (() => {
+  const stored = storedResultByHash(db, sql.placeholder("contentHash"));
+  const query = db
+    .select({ ...accessColumns, stored: { id: stored.id, lightest: stored.lightest, supercharges: stored.supercharges, tachyonic: stored.tachyonic } })
+    .from(configurations)
+    .leftJoin(stored, sql`true`)
+    .$dynamic();
+  return withAccessJoins(query, sql.placeholder("configurationId"), sql.placeholder("userId")).prepare("configuration_access_for_save");
+})();
+
+/**
+ * {@link requireConfigurationRole} with the stored result of `contentHash`, if any, found in the
+ * same statement (`stored` is null when no result has that hash).
+ */
+export async function requireConfigurationRoleWithStored(
+  actor: Actor | null,
+  configurationId: string,
+  minimum: GroupRole,
+  contentHash: string,
+): Promise<ConfigurationAccess & { stored: StoredRow | null }> {
+  const signedIn = requireActor(actor);
+  assertUuid(configurationId, "configuration");
+  const [found] = await accessForSaveStatement.execute({ configurationId, userId: signedIn.id, contentHash });
+  const access = resolveAccess(found, signedIn, minimum);
+  return { ...access, stored: found?.stored ?? null };
 }
 
 /** The current revision's stored result as JSON text, with when and by which engine it was computed. */

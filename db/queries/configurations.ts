@@ -10,7 +10,7 @@ import { auditLog, configurations, groups, memberships, results, revisions, shar
 import { assertUuid, requireActor, requireGroupRole, type Actor } from "./actor";
 import { recordAudit } from "./audit";
 import { getPersonalGroup } from "./groups";
-import { requireConfigurationRole } from "./configuration-access";
+import { requireConfigurationRole, requireConfigurationRoleWithStored } from "./configuration-access";
 import {
   toConfigurationDto,
   toSummary,
@@ -18,7 +18,7 @@ import {
   type ConfigurationPage,
   type ListConfigurationsOptions,
 } from "./configuration-dtos";
-import { resultForDocument, type RevisionResult } from "./results";
+import { hashDocument, resultForDocument, type RevisionResult } from "./results";
 import { addRevision, documentColumns } from "./revision-writes";
 
 /** Options of `createConfiguration`. */
@@ -170,9 +170,11 @@ export async function updateConfiguration(
   const author = requireActor(actor);
   assertUuid(configurationId, "configuration");
   assertExpectedVersion(input.expectedVersion);
-  const access = await requireConfigurationRole(db, actor, configurationId, "editor");
+  // The access check and the lookup of a stored result with the same content, in one statement.
+  const contentHash = hashDocument(input.document);
+  const { stored, ...access } = await requireConfigurationRoleWithStored(actor, configurationId, "editor", contentHash);
   if (access.row.version !== input.expectedVersion) throw new ConflictError(access.row.version);
-  const computed = await resultForDocument(db, input.document);
+  const computed = await resultForDocument(db, input.document, { byHash: { contentHash, stored } });
   const columns = documentColumns(input.document, computed.summary);
   const revisionId = randomUUID();
   let saved: SavedRevision | undefined;

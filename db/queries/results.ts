@@ -1,6 +1,6 @@
 import "server-only";
 import { createHash } from "node:crypto";
-import { and, eq, sql, type SQL } from "drizzle-orm";
+import { and, eq, sql, type Placeholder, type SQL } from "drizzle-orm";
 import { ENGINE_VERSION, resultInputKey } from "../../lib/boundary";
 import type { Configuration } from "../../lib/boundary/types";
 import { computeSpectrumJob } from "../../lib/server/compute/pool";
@@ -43,6 +43,11 @@ export interface ResultForDocumentOptions {
   problemsAt?: (string | number)[];
   /** A revision with the same document whose result may be reused even if it predates content hashes. */
   sameAs?: { revisionId: string };
+  /**
+   * The lookup by content hash, already made by the caller in a statement of its own
+   * ({@link storedResultByHash}): `stored` is what it found for `contentHash` (null for nothing).
+   */
+  byHash?: { contentHash: string; stored: StoredRow | null };
 }
 
 /**
@@ -56,12 +61,14 @@ export async function resultForDocument(
   document: Configuration,
   options: ResultForDocumentOptions = {},
 ): Promise<RevisionResult> {
-  const contentHash = hashDocument(document);
+  const contentHash = options.byHash?.contentHash ?? hashDocument(document);
+  const byHash = options.byHash
+    ? [options.byHash.stored].filter((row) => row !== null)
+    : executor === db
+      ? storedByHashStatement.execute({ contentHash })
+      : selectStored(executor, eq(results.contentHash, contentHash));
   const stored =
-    (await findStoredResult(
-      executor === db ? storedByHashStatement.execute({ contentHash }) : selectStored(executor, eq(results.contentHash, contentHash)),
-      document,
-    )) ??
+    (await findStoredResult(byHash, document)) ??
     (options.sameAs
       ? await findStoredResult(selectStored(executor, and(eq(results.revisionId, options.sameAs.revisionId), eq(results.engineVersion, ENGINE_VERSION))), document)
       : null);
@@ -93,16 +100,25 @@ function selectStored(executor: Executor, where: SQL | undefined) {
   return executor
     .select({
       id: results.id,
-      lightest: sql<string | null>`${results.result} -> 'lightest' -> 0 ->> 'massSquared'`,
-      supercharges: sql<number | null>`(${results.result} ->> 'supercharges')::int`,
-      tachyonic: sql<boolean>`jsonb_path_exists(${results.result}, '$.sectors[*] ? (@.tachyonic == true)')`,
+      lightest: sql<string | null>`${results.result} -> 'lightest' -> 0 ->> 'massSquared'`.as("stored_lightest"),
+      supercharges: sql<number | null>`(${results.result} ->> 'supercharges')::int`.as("stored_supercharges"),
+      tachyonic: sql<boolean>`jsonb_path_exists(${results.result}, '$.sectors[*] ? (@.tachyonic == true)')`.as("stored_tachyonic"),
     })
     .from(results)
     .where(where)
     .limit(1);
 }
 
-type StoredRow = Awaited<ReturnType<typeof selectStored>>[number];
+/** What a lookup of a stored result finds (see {@link selectStored}). */
+export type StoredRow = Awaited<ReturnType<typeof selectStored>>[number];
+
+/**
+ * The lookup by content hash as a subquery, for a statement that makes it along with something
+ * else (the save's access check, db/queries/configuration-access.ts).
+ */
+export function storedResultByHash(executor: Executor, contentHash: string | Placeholder) {
+  return selectStored(executor, eq(results.contentHash, contentHash)).as("stored_by_hash");
+}
 
 /** The lookup by content hash that every save, create, fork and restore makes, prepared once. */
 const storedByHashStatement = selectStored(db, eq(results.contentHash, sql.placeholder("contentHash"))).prepare("stored_result_by_hash");
@@ -130,7 +146,7 @@ export async function storeResult(tx: Transaction, revisionId: string, result: R
  * The stored result a lookup found (see `selectStored`: the summary columns are read inside
  * PostgreSQL, so the result itself never travels), or null.
  */
-async function findStoredResult(lookup: PromiseLike<StoredRow[]>, document: Configuration): Promise<StoredResult | null> {
+async function findStoredResult(lookup: StoredRow[] | PromiseLike<StoredRow[]>, document: Configuration): Promise<StoredResult | null> {
   const [stored] = await lookup;
   if (!stored) return null;
   const lightest = stored.lightest === null ? Number.NaN : parseResultNumber(stored.lightest);

@@ -62,6 +62,10 @@ describe("content-addressed results", () => {
     const renamed = { ...document, title: "Renamed", stacks: [...document.stacks].reverse() };
     const saved = await updateConfiguration(owner.actor, created.id, { expectedVersion: 1, document: renamed, message: "rename" });
     expect(computed.count).toBe(1);
+    // The list summary of the reused result, read from the stored row, is the computed one's.
+    const summary = ({ lightestMassSquared, tachyonic, supercharges }: typeof saved) => ({ lightestMassSquared, tachyonic, supercharges });
+    expect(summary(saved)).toEqual(summary(created));
+    expect(summary(saved).tachyonic).toBe(true);
 
     const moved = { ...document, stacks: document.stacks.map((stack) => (stack.id === "anti" ? { ...stack, position: { ...stack.position, "9": 4 } } : stack)) };
     await updateConfiguration(owner.actor, created.id, { expectedVersion: saved.version, document: moved, message: "moved" });
