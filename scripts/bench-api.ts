@@ -29,6 +29,7 @@
  * ada@mooring.test), BENCH_SERVER_PID (optional: the server's pid(s), to report its CPU time
  * per request). Start the production server first, e.g. `npm run build && npm run serve`.
  */
+import { randomInt } from "node:crypto";
 import { mkdirSync, readFileSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
@@ -256,15 +257,23 @@ function nextStep(): number {
 }
 
 /**
+ * A shift of less than a thousandth of sqrt(alpha') drawn once per run: stored results are
+ * content-addressed and outlive a run, so without it a later run against the same database would
+ * send the documents an earlier one saved and the save case would reuse their results.
+ */
+const runShift = randomInt(1, 1_000_000) / 1e9;
+
+/**
  * The document with its last stack moved along its last Dirichlet axis by `stepIndex` thousandths
- * of sqrt(alpha'): a different body, and different numbers, on every request.
+ * of sqrt(alpha') (plus this run's `runShift`): a different body, and different numbers, on every
+ * request of every run.
  */
 function variedDocument<T extends { stacks: Array<{ position: Record<string, number>; worldvolume: number[] }> }>(document: T, stepIndex: number): T {
   const stacks = document.stacks.map((stack, index) => {
     if (index !== document.stacks.length - 1) return stack;
     const axis = [9, 8, 7, 6, 5, 4, 3, 2, 1].find((candidate) => !stack.worldvolume.includes(candidate)) ?? 9;
     const key = String(axis);
-    return { ...stack, position: { ...stack.position, [key]: (stack.position[key] ?? 0) + (stepIndex % 100_000) / 1000 } };
+    return { ...stack, position: { ...stack.position, [key]: (stack.position[key] ?? 0) + (stepIndex % 100_000) / 1000 + runShift } };
   });
   return { ...document, stacks };
 }
