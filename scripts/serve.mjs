@@ -49,6 +49,13 @@ const server = createServer(
   }, trustedProxyCount),
 );
 
+// Idle keep-alive connections are closed after 65 s rather than Node's 5 s: a client (a browser, a
+// script, a load balancer with the usual 60 s idle timeout) that reuses a connection just as the server
+// closes it meets ECONNRESET, and the longer wait makes that race rare. Headers must come sooner than
+// that wait ends, as Node requires.
+server.keepAliveTimeout = 65_000;
+server.headersTimeout = 66_000;
+
 server.listen(port, values.hostname, () => {
   const proxies = trustedProxyCount === 0 ? "no trusted proxies" : `${trustedProxyCount} trusted ${trustedProxyCount === 1 ? "proxy" : "proxies"}`;
   console.log(`[serve] Mooring on http://${values.hostname}:${port} (${proxies})`);
