@@ -117,7 +117,8 @@ test.describe("results polish", () => {
     await page.goto(`/configurations/${id}/results`);
     const sector = page.locator('[data-testid="sector-s1-s1"]');
     await sector.locator("summary").first().click();
-    await sector.getByText("Mode expansions").click();
+    // The summary itself: once the detail has loaded, the (closed) table's caption "Mode expansions per axis" matches a looser text too.
+    await sector.locator("summary", { hasText: /^Mode expansions$/ }).click();
     const table = sector.getByRole("table", { name: "Mode expansions per axis" });
     await expect(table).toBeVisible({ timeout: 30_000 });
     const x9 = (await table.getByRole("row").filter({ hasText: /^x9/ }).textContent()) ?? "";
