@@ -63,7 +63,7 @@ export async function resultForDocument(
 ): Promise<RevisionResult> {
   const contentHash = options.byHash?.contentHash ?? hashDocument(document);
   const byHash = options.byHash
-    ? [options.byHash.stored].filter((row) => row !== null)
+    ? options.byHash.stored ? [options.byHash.stored] : []
     : executor === db
       ? storedByHashStatement.execute({ contentHash })
       : selectStored(executor, eq(results.contentHash, contentHash));
