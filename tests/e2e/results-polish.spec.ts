@@ -211,7 +211,7 @@ test.describe("results polish", () => {
     await expect(page.getByText(/antibrane/).first()).toBeVisible();
   });
 
-  test("missing configurations answer 404 and hidden ones 403, each with a page that says so", async ({ page }) => {
+  test("missing configurations answer 404 and hidden ones 403, each with a page that says so", async ({ page, browser }) => {
     await signIn(page, demoAccounts.ada);
     const hidden = await createInGroup(page, elevenAndAnAntibrane(unique("Hidden")));
     const missing = await page.goto("/configurations/00000000-0000-4000-8000-000000000000");
@@ -219,13 +219,17 @@ test.describe("results polish", () => {
     await expect(page.getByText("No such configuration")).toBeVisible();
     expect((await page.goto("/configurations/not-an-id/results"))?.status()).toBe(404);
 
-    await page.context().clearCookies();
-    await signIn(page, demoAccounts.sam);
+    // Sam in a browser of his own: clearing Ada's cookies instead raced the session refresh the page
+    // had in flight, whose answer set her cookie again, so the sign-in page sent Sam to her dashboard.
+    const samContext = await browser.newContext();
+    const sam = await samContext.newPage();
+    await signIn(sam, demoAccounts.sam);
     for (const path of ["", "/results", "/history", "/compare"]) {
-      const response = await page.goto(`/configurations/${hidden}${path}`);
+      const response = await sam.goto(`/configurations/${hidden}${path}`);
       expect(response?.status(), path).toBe(403);
     }
-    await expect(page.getByText("You cannot open this configuration")).toBeVisible();
+    await expect(sam.getByText("You cannot open this configuration")).toBeVisible();
+    await samContext.close();
   });
 
   test("an author sees who forked her configuration, in its history and in her recent activity", async ({ browser }) => {
