@@ -285,7 +285,7 @@ function saveRevisionStatement(storeResult: SQL): SQL {
 const saveFreshRevision = preparedSql<SavedRevision>(
   "save_revision_fresh",
   saveRevisionStatement(
-    sql`select rev.id, ${sql.placeholder("engineVersion")}::text, ${sql.placeholder("contentHash")}::text, ${sql.placeholder("resultJson")}::jsonb, ${sql.placeholder("overviewJson")}::jsonb, ${sql.placeholder("computeMs")}::double precision from rev`,
+    sql`select rev.id, ${sql.placeholder("engineVersion")}::text, ${sql.placeholder("contentHash")}::text, ${sql.placeholder("resultJson")}::json, ${sql.placeholder("overviewJson")}::json, ${sql.placeholder("computeMs")}::double precision from rev`,
   ),
 );
 

@@ -102,7 +102,7 @@ function selectStored(executor: Executor, where: SQL | undefined) {
       id: results.id,
       lightest: sql<string | null>`${results.result} -> 'lightest' -> 0 ->> 'massSquared'`.as("stored_lightest"),
       supercharges: sql<number | null>`(${results.result} ->> 'supercharges')::int`.as("stored_supercharges"),
-      tachyonic: sql<boolean>`jsonb_path_exists(${results.result}, '$.sectors[*] ? (@.tachyonic == true)')`.as("stored_tachyonic"),
+      tachyonic: sql<boolean>`jsonb_path_exists(${results.result}::jsonb, '$.sectors[*] ? (@.tachyonic == true)')`.as("stored_tachyonic"),
     })
     .from(results)
     .where(where)
@@ -131,8 +131,8 @@ export async function storeResult(tx: Transaction, revisionId: string, result: R
       engineVersion: result.engineVersion,
       contentHash: result.contentHash,
       // The JSON text goes to PostgreSQL as it is: no parse and re-serialise on the request thread.
-      result: sql`${result.json}::jsonb`,
-      overview: sql`${result.overviewJson}::jsonb`,
+      result: sql`${result.json}::json`,
+      overview: sql`${result.overviewJson}::json`,
       computeMs: result.computeMs,
     });
     return;

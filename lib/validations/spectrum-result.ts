@@ -16,7 +16,7 @@ import type {
 import { expansionEndPositions, parseExactRational, parseResultNumber } from "@/lib/spectrum";
 
 /**
- * Stored spectrum results (the `results.result` jsonb column), read back for any engine
+ * Stored spectrum results (the `results.result` json column), read back for any engine
  * version. Every stored result carries the `engineVersion` that computed it. A result of an
  * older engine may lack fields added since; the schema accepts it and `upgradeStoredResult`
  * fills each missing field with the value it stands for, and says so in `warnings` where the

@@ -319,7 +319,7 @@ describe("restoreRevision", () => {
     await db
       .update(results)
       // As a row stored by an older engine, before results carried content hashes.
-      .set({ engineVersion: "0.9.0", contentHash: null, result: sql`jsonb_set(${results.result}, '{engineVersion}', '"0.9.0"')` })
+      .set({ engineVersion: "0.9.0", contentHash: null, result: sql`jsonb_set(${results.result}::jsonb, '{engineVersion}', '"0.9.0"')::json` })
       .where(eq(results.revisionId, first));
     const restored = await restoreRevision(editor.actor, configuration.id, first, { expectedVersion: 1 });
     const stored = await getResultForRevision(editor.actor, restored.currentRevision?.id ?? "");

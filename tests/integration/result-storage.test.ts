@@ -140,7 +140,7 @@ describe("reading stored results", () => {
     const { owner, configuration, document, revisionId } = await saved();
     await db
       .update(results)
-      .set({ engineVersion: "1.0.0", overview: null, contentHash: null, result: sql`jsonb_set(${results.result} #- '{conventions}', '{engineVersion}', '"1.0.0"')` })
+      .set({ engineVersion: "1.0.0", overview: null, contentHash: null, result: sql`jsonb_set(${results.result}::jsonb #- '{conventions}', '{engineVersion}', '"1.0.0"')::json` })
       .where(eq(results.revisionId, revisionId));
     const head = await getResultHead(owner.actor, configuration.id, revisionId);
     expect(head.engineVersion).toBe("1.0.0");
