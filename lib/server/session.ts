@@ -1,12 +1,10 @@
 import "server-only";
-import { getToken } from "next-auth/jwt";
-import { cookies } from "next/headers";
-import type { NextRequest } from "next/server";
+import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import { cache } from "react";
 import { getActorForSession, type Actor } from "@/db/queries/actor";
 import { getAuthSecret } from "@/lib/server/auth-secret";
-import { decodeSessionToken } from "@/lib/server/session-token";
+import { decodeSessionToken, sessionCookieName, sessionTokenFromCookieHeader } from "@/lib/server/session-token";
 
 /**
  * The signed-in user as an Actor, or null. The session token only names the account and its
@@ -16,17 +14,18 @@ import { decodeSessionToken } from "@/lib/server/session-token";
  * were recorded) count as signed out.
  */
 export const getCurrentUser = cache(async (): Promise<Actor | null> => {
-  const store = await cookies();
-  // Callers without a session cookie (scripts, the landing page's compute requests) skip next-auth.
-  if (!store.getAll().some((cookie) => cookie.name.includes("next-auth.session-token"))) return null;
-  // The token is decrypted and checked (expiry included) as next-auth's getServerSession does, but
-  // without its session route, which also re-encrypts the token into a new cookie on every call:
-  // the browser's SessionProvider keeps the session sliding through /api/auth/session. Only the
-  // cookies are passed, so a JWT in an Authorization header is never taken for a session. The key is
-  // derived once (session-token.ts).
-  const token = await getToken({ req: { cookies: store, headers: {} } as unknown as NextRequest, secret: getAuthSecret(), decode: decodeSessionToken });
-  const id = token?.id;
-  const sessionId = token?.sid;
+  // The token is read from the request's Cookie header and decrypted and checked (expiry
+  // included) as next-auth's getToken and getServerSession do (session-token.ts), without
+  // getServerSession's re-encryption of a new cookie on every call (the browser's SessionProvider
+  // keeps the session sliding through /api/auth/session) and without building Next's mutable
+  // cookie store. Only the cookies are read, so a JWT in an Authorization header is never taken
+  // for a session. Callers without a session cookie (scripts, the landing page's compute
+  // requests) stop at the header.
+  const token = sessionTokenFromCookieHeader((await headers()).get("cookie"), sessionCookieName(process.env.NEXTAUTH_URL));
+  if (!token) return null;
+  const claims = await decodeSessionToken({ token, secret: getAuthSecret() }).catch(() => null);
+  const id = claims?.id;
+  const sessionId = claims?.sid;
   if (typeof id !== "string" || typeof sessionId !== "string") return null;
   return getActorForSession(id, sessionId);
 });

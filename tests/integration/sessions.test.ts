@@ -14,9 +14,7 @@ import { signInCookies, signOutWith, type SetCookie } from "@/tests/support/next
 
 const browser = vi.hoisted(() => ({ sessionToken: null as string | null }));
 vi.mock("next/headers", () => ({
-  cookies: async () => ({
-    getAll: () => (browser.sessionToken ? [{ name: "next-auth.session-token", value: browser.sessionToken }] : []),
-  }),
+  headers: async () => new Headers(browser.sessionToken ? { cookie: `next-auth.session-token=${encodeURIComponent(browser.sessionToken)}` } : {}),
 }));
 const { getCurrentUser } = await import("@/lib/server/session");
 
