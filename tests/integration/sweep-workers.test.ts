@@ -68,20 +68,23 @@ describe("sweep workers", () => {
     expect(sweep.totalPoints).toBe(600);
     expect(sweep.chunkCount).toBeGreaterThanOrEqual(5);
 
+    // The first worker runs alone until it has stored a chunk of this sweep and holds the next one,
+    // and is killed then; the second starts after that and must finish the sweep, the chunk the
+    // first one died holding included. (Started together, the second could take every chunk left
+    // while the first was busy with other tests' sweeps, which share the queue, and the first was
+    // never seen holding one.)
     const first = startWorker("first");
-    const second = startWorker("second");
-    const logs = () => [...first.log, ...second.log];
+    let secondLog: string[] = [];
+    const logs = () => [...first.log, ...secondLog];
     const progress = () => getSweep(owner.actor, sweep.id);
-
-    // Kill the first worker as soon as it takes a chunk, once some chunks are stored.
-    await until("the first chunks", progress, (value) => value.donePoints >= sweep.chunkSize, logs);
-    // Other tests' sweeps share the queue, so only lines naming this sweep count; a line may
-    // arrive split over two reads.
+    // Only lines naming this sweep count; a line may arrive split over two reads.
     const took = new RegExp(`took chunk (\\d+) of sweep ${sweep.id}`);
     const storedLine = new RegExp(`stored chunk (\\d+) of sweep ${sweep.id}`);
-    const taken = await new Promise<number>((resolve) => {
+    const taken = await new Promise<number>((resolve, reject) => {
       let holding: number | null = null;
+      let storedOne = false;
       let partial = "";
+      const timer = setTimeout(() => reject(new Error(`the first worker never held a chunk after storing one\n${logs().join("")}`)), 45_000);
       const check = (data: Buffer) => {
         const lines = (partial + data.toString()).split("\n");
         partial = lines.pop() ?? "";
@@ -89,9 +92,13 @@ describe("sweep workers", () => {
           const tookMatch = took.exec(line);
           const storedMatch = storedLine.exec(line);
           if (tookMatch) holding = Number(tookMatch[1]);
-          if (storedMatch && Number(storedMatch[1]) === holding) holding = null;
+          if (storedMatch) {
+            storedOne = true;
+            if (Number(storedMatch[1]) === holding) holding = null;
+          }
         }
-        if (holding === null) return;
+        if (holding === null || !storedOne) return;
+        clearTimeout(timer);
         first.child.kill("SIGKILL");
         first.child.stdout?.off("data", check);
         resolve(holding);
@@ -101,6 +108,8 @@ describe("sweep workers", () => {
     await new Promise((resolve) => first.child.once("exit", resolve));
     // It died holding the chunk: it never stored it.
     expect(first.log.join("")).not.toMatch(new RegExp(`stored chunk ${taken} of sweep ${sweep.id}`));
+    const second = startWorker("second");
+    secondLog = second.log;
 
     const finished = await until("the sweep to complete", progress, (value) => value.status === "completed", logs);
     expect(finished.donePoints).toBe(600);
