@@ -2,6 +2,7 @@ import "server-only";
 import { and, eq, isNull, sql, type Placeholder } from "drizzle-orm";
 import { ForbiddenError, NotFoundError, UnauthenticatedError } from "../../lib/errors";
 import { db, type Executor } from "../index";
+import { checkTicket, rememberActor, rememberedActor } from "../session-cache";
 import { groups, memberships, sessions, users, type GroupRole, type SiteRole } from "../schema";
 
 /** The signed-in user acting on the data, as carried by the session. */
@@ -88,12 +89,17 @@ export async function requireGroupRole(
 /**
  * Loads the Actor of a session token's user and session id, or null when the session was revoked
  * (signed out, a password change or reset) or the account is gone. This is how every request
- * obtains its actor; one prepared query.
+ * obtains its actor: one prepared query, or the answer this process remembers from a check a few
+ * seconds ago while it hears every change to sessions and accounts (db/session-cache.ts). The
+ * actor is frozen, since requests may share it.
  */
 export async function getActorForSession(userId: string, sessionId: string): Promise<Actor | null> {
   if (!isUuid(userId) || !isUuid(sessionId)) return null;
+  const remembered = rememberedActor(userId, sessionId);
+  if (remembered) return remembered;
+  const ticket = checkTicket();
   const [row] = await actorBySessionStatement.execute({ userId, sessionId });
-  return row ? { ...row, sessionId } : null;
+  return row ? rememberActor(ticket, userId, sessionId, { ...row, sessionId }) : null;
 }
 
 // Prepared statements for the lookups made on nearly every request: PostgreSQL parses and plans

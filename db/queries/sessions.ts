@@ -2,6 +2,7 @@ import "server-only";
 import { and, eq, isNull, ne } from "drizzle-orm";
 import { db, type Executor } from "../index";
 import { sessions } from "../schema";
+import { forgetSessionsOf } from "../session-cache";
 import { isUuid, requireActor, type Actor } from "./actor";
 import { recordAudit } from "./audit";
 
@@ -27,12 +28,13 @@ export async function endSession(userId: string, sessionId: string): Promise<voi
     .update(sessions)
     .set({ revokedAt: new Date() })
     .where(and(eq(sessions.id, sessionId), eq(sessions.userId, userId), isNull(sessions.revokedAt)));
+  forgetSessionsOf(userId);
 }
 
 /** Ends every session of the signed-in user, this one included ("sign out of all devices"). */
 export async function signOutEverywhere(actor: Actor | null): Promise<{ ended: number }> {
   const signedIn = requireActor(actor);
-  return db.transaction(async (tx) => {
+  const result = await db.transaction(async (tx) => {
     const ended = await revokeSessions(tx, signedIn.id);
     await recordAudit(tx, {
       actorId: signedIn.id,
@@ -44,11 +46,14 @@ export async function signOutEverywhere(actor: Actor | null): Promise<{ ended: n
     });
     return { ended };
   });
+  forgetSessionsOf(signedIn.id);
+  return result;
 }
 
 /**
  * Revokes the user's open sessions, all of them or all but `except` (the one making a password
- * change), and returns how many were open.
+ * change), and returns how many were open. The caller calls `forgetSessionsOf` (db/session-cache.ts)
+ * once its transaction has committed.
  */
 export async function revokeSessions(executor: Executor, userId: string, options: { except?: string } = {}): Promise<number> {
   const revoked = await executor

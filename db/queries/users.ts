@@ -7,6 +7,7 @@ import { createSecureToken, hashSecureToken } from "../../lib/server/secure-toke
 import { isStorableText } from "../../lib/storable-text";
 import { db, type Executor, type Transaction } from "../index";
 import { authTokens, pendingSignUps, users, type AuthTokenKind, type SiteRole } from "../schema";
+import { forgetSessionsOf } from "../session-cache";
 import { assertUuid, requireActor, requireSiteAdmin, type Actor } from "./actor";
 import { recordAudit } from "./audit";
 import { createPersonalGroup } from "./groups";
@@ -232,7 +233,7 @@ export async function issuePasswordResetToken(
  * Unknown, expired and reused tokens give a ValidationError on ["token"] saying which.
  */
 export async function consumeSignInLinkToken(_actor: Actor | null, token: string): Promise<Actor> {
-  return db.transaction(async (tx) => {
+  const result = await db.transaction(async (tx) => {
     const userId = await consumeToken(tx, token, "sign_in_link");
     const [before] = await tx
       .select({ emailVerifiedAt: users.emailVerifiedAt, passwordHash: users.passwordHash })
@@ -267,6 +268,8 @@ export async function consumeSignInLinkToken(_actor: Actor | null, token: string
     });
     return { id: user.id, email: user.email, name: user.name, siteRole: user.siteRole };
   });
+  forgetSessionsOf(result.id);
+  return result;
 }
 
 /**
@@ -282,7 +285,7 @@ export async function resetPasswordWithToken(
   const problem = passwordProblem(newPassword);
   if (problem) throw ValidationError.at(["password"], problem);
   const passwordHash = await hashPassword(newPassword, bcryptCost);
-  return db.transaction(async (tx) => {
+  const result = await db.transaction(async (tx) => {
     const userId = await consumeToken(tx, token, "password_reset");
     const [user] = await tx
       .update(users)
@@ -308,6 +311,8 @@ export async function resetPasswordWithToken(
     });
     return { id: user.id, email: user.email, name: user.name, siteRole: user.siteRole };
   });
+  forgetSessionsOf(result.id);
+  return result;
 }
 
 /** The signed-in user's account. */
@@ -344,7 +349,7 @@ export async function updateAccount(
   }
   if (Object.keys(changes).length === 0) return toAccountDto(user);
 
-  return db.transaction(async (tx) => {
+  const result = await db.transaction(async (tx) => {
     const [updated] = await tx.update(users).set(changes).where(eq(users.id, user.id)).returning();
     if (!updated) throw new UnauthenticatedError("Your account no longer exists.");
     // A new password ends every other session: whoever knew the old one is signed out elsewhere.
@@ -362,6 +367,8 @@ export async function updateAccount(
     });
     return toAccountDto(updated);
   });
+  forgetSessionsOf(user.id);
+  return result;
 }
 
 /** All accounts (site admins only), optionally filtered by a search over e-mail and name. */
@@ -406,7 +413,7 @@ export async function setSiteRole(
 ): Promise<UserSummaryDto> {
   const admin = requireSiteAdmin(actor);
   assertUuid(userId, "user");
-  return db.transaction(async (tx) => {
+  const result = await db.transaction(async (tx) => {
     // Serialise role changes so two admins demoting each other cannot leave no admin.
     await tx.execute(sql`select pg_advisory_xact_lock(72616202)`);
     const [target] = await tx
@@ -443,6 +450,8 @@ export async function setSiteRole(
       createdAt: updated.createdAt,
     };
   });
+  forgetSessionsOf(userId);
+  return result;
 }
 
 // A valid bcrypt hash of a random string, compared against when the account does not exist;
