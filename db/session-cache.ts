@@ -65,6 +65,7 @@ export function rememberedActor(userId: string, sessionId: string): Readonly<Act
   if (!entry) return undefined;
   if (Date.now() - entry.at > rememberMs) {
     sessions?.delete(sessionId);
+    if (sessions?.size === 0) current.accounts.delete(userId);
     return undefined;
   }
   return entry.actor;

@@ -30,7 +30,7 @@ const clockToleranceSeconds = 15;
 /** Tokens already decrypted, per key, most recent last; bounded. */
 const decrypted = new Map<Uint8Array, Map<string, Readonly<JWT>>>();
 /** Decrypted tokens kept per key (a few kilobytes each at most). */
-export const decryptedTokensKept = 2048;
+const decryptedTokensKept = 2048;
 
 /**
  * The payload of a session token, or null without one. Throws, as next-auth's decode does, for a
